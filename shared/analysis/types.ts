@@ -1,0 +1,83 @@
+/** The report of the load-path check. Every number is US customary: lbf, in, in·lbf, psi, degrees. */
+import { z } from "zod";
+
+export const SEVERITIES = ["hazard", "caution", "advisory"] as const;
+export type Severity = (typeof SEVERITIES)[number];
+
+/** Where a source tag points: a published text, a rule of the trade, or a value recalled from memory. */
+export type SourceTag = { kind: "published" | "commonPractice" | "fromMemory"; text: string };
+
+export type Subject = { type: "node" | "joint" | "linkage"; id: string };
+
+export type FindingNumber = { label: string; value: number; unit: string };
+
+export type Finding = {
+  /** Stable code of our own naming, e.g. "jam-nut-missing". */
+  code: string;
+  severity: Severity;
+  subject: Subject;
+  /** Plain-language reason a builder understands. */
+  message: string;
+  numbers: FindingNumber[];
+  source: SourceTag;
+};
+
+export type PushrodResult = {
+  nodeId: string;
+  limitAxial: number; // lbf, the largest magnitude under the design force (push or pull)
+  ultimateAxial: number; // lbf
+  columnAllowable: number; // lbf, Euler or Johnson
+  columnMode: "euler" | "johnson";
+  tensionAllowable: number; // lbf
+  marginCompression: number;
+  marginTension: number;
+};
+
+export type JointResult = {
+  jointId: string;
+  radialLimit: number; // lbf
+  radialUltimate: number; // lbf, including the special factors in use
+  rodEndRating: number | null; // lbf
+  rodEndMargin: number | null;
+  boltShearAllowable: number | null; // lbf
+  boltMargin: number | null;
+};
+
+export type Summary = {
+  hazard: number;
+  caution: number;
+  advisory: number;
+  lowestMargin: { value: number; subject: Subject; what: string } | null;
+};
+
+export type Report = {
+  engineVersion: string;
+  findings: Finding[];
+  pushrods: PushrodResult[];
+  joints: JointResult[];
+  summary: Summary;
+  /** The settings the numbers were computed with (shown next to every result). */
+  settings: AnalysisSettings;
+};
+
+/** Design pilot forces and factors (domain.md §1), one set per build, with the published defaults. */
+export const settingsSchema = z.object({
+  pilotForce: z
+    .object({
+      pitchStick: z.number().positive().default(167), // 14 CFR 23.397(b)
+      rollStick: z.number().positive().default(67), // 14 CFR 23.397(b)
+      yawPedal: z.number().positive().default(200), // 14 CFR 23.397(b)
+      /** Used for flap, trim and other inputs. */
+      other: z.number().positive().default(100),
+    })
+    .default({ pitchStick: 167, rollStick: 67, yawPedal: 200, other: 100 }),
+  ultimateFactor: z.number().min(1).max(5).default(1.5), // 14 CFR 23.303
+  fittingFactor: z.number().min(1).max(5).default(1.15), // 14 CFR 23.625
+  /** Special factor on plain bearings in push-pull joints with angular motion. */
+  bearingFactor: z.number().min(1).max(10).default(3.33), // 14 CFR 23.693
+  /** Apply the bearing factor to spherical rod ends too (a matter of interpretation). */
+  bearingFactorOnRodEnds: z.boolean().default(false),
+  dualControls: z.boolean().default(false),
+});
+export type AnalysisSettings = z.infer<typeof settingsSchema>;
+export const DEFAULT_SETTINGS: AnalysisSettings = settingsSchema.parse({});

@@ -1,0 +1,222 @@
+/**
+ * The linkage format, version 1: one control run as a graph of parts (nodes) and joints (edges).
+ * US customary units throughout: lengths in inches, forces in lbf, torque in in·lbf, angles in degrees.
+ * The same document is stored with every revision and is the import/export file of a linkage.
+ * See README.md beside this file for the fields and an example.
+ */
+import { z } from "zod";
+
+export const FORMAT_VERSION = 1 as const;
+
+const id = z.string().min(1, "id is empty").max(64, "id is longer than 64 characters");
+const inches = (what: string) =>
+  z.number({ error: `${what} must be a number (in)` }).positive(`${what} must be greater than 0 in`).max(1000, `${what} over 1000 in is not a control part`);
+const degrees = (what: string) =>
+  z.number({ error: `${what} must be a number (°)` }).min(-360, `${what} below −360°`).max(360, `${what} above 360°`);
+const force = (what: string) =>
+  z.number({ error: `${what} must be a number (lbf)` }).positive(`${what} must be greater than 0 lbf`).max(1_000_000, `${what} is out of range`);
+
+export const SYSTEMS = ["pitch", "roll", "yaw", "flap", "trim", "other"] as const;
+export const systemSchema = z.enum(SYSTEMS);
+export type ControlSystem = z.infer<typeof systemSchema>;
+
+export const TUBE_MATERIALS = ["4130N", "6061-T6", "2024-T3"] as const;
+export const tubeMaterialSchema = z.enum(TUBE_MATERIALS);
+
+/** Props of each part kind. Arms are measured pivot centre to attach-hole centre. */
+export const stickProps = z.object({
+  gripArm: inches("grip arm"),
+  attachArm: inches("attach arm"),
+  axis: z.enum(["pitch", "roll"]).default("pitch"),
+  /** Override of the design pilot force at the grip; absent = the build's setting for the axis. */
+  designForce: force("design force").optional(),
+  travelFwd: degrees("forward travel").default(15),
+  travelAft: degrees("aft travel").default(15),
+});
+export const pedalProps = z.object({
+  pedalArm: inches("pedal arm"),
+  attachArm: inches("attach arm"),
+  designForce: force("design force").optional(),
+  travel: degrees("travel").default(20),
+});
+export const torqueTubeProps = z.object({
+  inputArm: inches("input arm"),
+  outputArm: inches("output arm"),
+});
+export const bellcrankProps = z.object({
+  inputArm: inches("input arm"),
+  outputArm: inches("output arm"),
+  /** Angle between the two arms at the pivot. */
+  armAngle: degrees("arm angle").default(90),
+});
+export const idlerArmProps = z.object({
+  inputArm: inches("input arm"),
+  outputArm: inches("output arm"),
+});
+export const pushrodProps = z.object({
+  material: tubeMaterialSchema.default("4130N"),
+  outsideDiameter: inches("outside diameter"),
+  wall: inches("wall thickness"),
+  /** Centre to centre of the rod-end balls. */
+  length: inches("length"),
+});
+export const controlHornProps = z.object({
+  hornArm: inches("horn arm"),
+  /** Angle between the pushrod and the horn arm at neutral; 90 = perpendicular. */
+  linkAngle: degrees("link angle").default(90),
+});
+export const controlSurfaceProps = z.object({
+  travelUp: degrees("up travel").default(25),
+  travelDown: degrees("down travel").default(20),
+  /** Hinge moment at design condition, in·lbf, if the designer gives one. */
+  hingeMoment: z.number().positive().optional(),
+});
+export const structureMountProps = z.object({ note: z.string().max(200).default("") });
+export const travelStopProps = z.object({
+  /** The deflection at which the stop contacts, degrees of the part it stops. */
+  stopAt: degrees("stop angle").default(15),
+});
+
+const position = z.object({ x: z.number().finite(), y: z.number().finite() });
+const label = z.string().max(80, "label is longer than 80 characters").default("");
+
+const node = <K extends string, P extends z.ZodTypeAny>(kind: K, props: P) =>
+  z.object({ id, kind: z.literal(kind), label, position, props });
+
+export const nodeSchema = z.discriminatedUnion("kind", [
+  node("stick", stickProps),
+  node("pedal", pedalProps),
+  node("torqueTube", torqueTubeProps),
+  node("bellcrank", bellcrankProps),
+  node("idlerArm", idlerArmProps),
+  node("pushrod", pushrodProps),
+  node("controlHorn", controlHornProps),
+  node("controlSurface", controlSurfaceProps),
+  node("structureMount", structureMountProps),
+  node("travelStop", travelStopProps),
+]);
+export type LinkageNode = z.infer<typeof nodeSchema>;
+export type NodeKind = LinkageNode["kind"];
+export const NODE_KINDS = nodeSchema.options.map((o) => o.shape.kind.value) as NodeKind[];
+
+/** Where joints attach on each kind. `pivot` joins a part to its mount; others carry links. */
+export const PORTS: Record<NodeKind, readonly string[]> = {
+  stick: ["attach", "pivot"],
+  pedal: ["attach", "pivot"],
+  torqueTube: ["in", "out", "pivot"],
+  bellcrank: ["in", "out", "pivot"],
+  idlerArm: ["in", "out", "pivot"],
+  pushrod: ["a", "b"],
+  controlHorn: ["attach", "surface"],
+  controlSurface: ["horn", "hinge"],
+  structureMount: ["mount"],
+  travelStop: ["contact"],
+};
+
+export const THREADS = ["10-32", "1/4-28", "5/16-24", "3/8-24", "7/16-20", "1/2-20"] as const;
+export const threadSchema = z.enum(THREADS);
+export const AN_BOLTS = ["AN3", "AN4", "AN5", "AN6", "AN7", "AN8"] as const;
+
+export const rodEndSchema = z.object({
+  shank: z.enum(["male", "female"]).default("male"),
+  thread: threadSchema,
+  hand: z.enum(["RH", "LH"]).default("RH"),
+  ballBore: inches("ball bore"),
+  ballDiameter: inches("ball diameter").optional(),
+  /** Bore of the housing (eye) the ball sits in; a retaining washer must be larger. */
+  housingBore: inches("housing bore").optional(),
+  /** Rated ultimate radial static load, lbf. */
+  ratedUltimate: force("rated ultimate radial load").optional(),
+  /** Rated misalignment, ± degrees. */
+  ratedMisalignment: z.number().min(0).max(45).optional(),
+  hasWitnessHole: z.boolean().default(true),
+  partNumber: z.string().max(60).optional(),
+});
+
+export const boltSchema = z.object({
+  size: z.enum([...AN_BOLTS, "custom"]),
+  /** Shank diameter, in; filled from the AN size when not custom. */
+  diameter: inches("bolt diameter").optional(),
+  material: z.enum(["steel", "aluminium"]).default("steel"),
+  /** Grip length (unthreaded shank), in. */
+  grip: inches("grip").optional(),
+  /** Thickness of everything clamped between head and nut, in. */
+  stack: inches("stack").optional(),
+  /** Whole threads showing past the nut. */
+  threadsProtruding: z.number().min(0).max(50).optional(),
+});
+
+export const NUT_TYPES = ["selfLockingMetal", "selfLockingInsert", "castellatedCotter", "plainSafetyWire", "plain", "none"] as const;
+export const nutSchema = z.object({
+  type: z.enum(NUT_TYPES),
+  /** Tension or shear (thin) nut, for the torque table. */
+  pattern: z.enum(["tension", "shear"]).default("tension"),
+  cotterPinNew: z.boolean().optional(),
+});
+
+const washer = z.object({ outsideDiameter: inches("washer outside diameter"), thickness: inches("washer thickness").optional() });
+
+export const hardwareSchema = z.object({
+  /** Rod-end bearing at this joint (the end of a pushrod), if any. */
+  rodEnd: rodEndSchema.optional(),
+  jamNut: z.object({ fitted: z.boolean().default(false), tightened: z.boolean().default(false) }).optional(),
+  engagement: z
+    .object({ witnessHoleVerified: z.boolean().default(false), engagedLength: inches("engaged length").optional() })
+    .optional(),
+  bolt: boltSchema.optional(),
+  nut: nutSchema.optional(),
+  washerUnderHead: washer.optional(),
+  washerUnderNut: washer.optional(),
+  /** Bolt clamped tight on the inner race, or set loose so it can turn. */
+  fit: z.enum(["clamped", "freeToRotate"]).default("clamped"),
+  shear: z.enum(["single", "double"]).default("double"),
+  /** For pivots: what the part turns on. */
+  bearing: z.enum(["rodEnd", "ballBearing", "plainBushing", "clevisPin", "none"]).optional(),
+  /** Applied torque, in·lbf, including the nut's drag torque. */
+  torque: z.number().min(0).max(10_000).optional(),
+  torqueStripe: z.boolean().default(false),
+  /** Ids of uploaded photos that show this joint. */
+  photos: z.array(z.string().max(64)).max(50).default([]),
+  note: z.string().max(2000).default(""),
+});
+export type JointHardware = z.infer<typeof hardwareSchema>;
+
+const endpoint = z.object({ node: id, port: z.string().min(1).max(32) });
+export const jointSchema = z.object({ id, from: endpoint, to: endpoint, hardware: hardwareSchema.default({} as never) });
+export type Joint = z.infer<typeof jointSchema>;
+
+export const graphSchema = z
+  .object({
+    formatVersion: z.literal(FORMAT_VERSION, { error: "formatVersion must be 1" }),
+    name: z.string().max(120).default(""),
+    system: systemSchema.default("other"),
+    nodes: z.array(nodeSchema).max(20_000),
+    joints: z.array(jointSchema).max(40_000),
+  })
+  .superRefine((g, ctx) => {
+    const ids = new Map<string, LinkageNode>();
+    g.nodes.forEach((n, i) => {
+      if (ids.has(n.id)) ctx.addIssue({ code: "custom", path: ["nodes", i, "id"], message: `duplicate node id "${n.id}"` });
+      ids.set(n.id, n);
+    });
+    const jointIds = new Set<string>();
+    g.joints.forEach((j, i) => {
+      if (jointIds.has(j.id)) ctx.addIssue({ code: "custom", path: ["joints", i, "id"], message: `duplicate joint id "${j.id}"` });
+      jointIds.add(j.id);
+      for (const end of ["from", "to"] as const) {
+        const n = ids.get(j[end].node);
+        if (!n) ctx.addIssue({ code: "custom", path: ["joints", i, end, "node"], message: `joint ${j.id} refers to missing node "${j[end].node}"` });
+        else if (!PORTS[n.kind].includes(j[end].port))
+          ctx.addIssue({ code: "custom", path: ["joints", i, end, "port"], message: `a ${n.kind} has no port "${j[end].port}" (ports: ${PORTS[n.kind].join(", ")})` });
+      }
+      if (j.from.node === j.to.node) ctx.addIssue({ code: "custom", path: ["joints", i], message: `joint ${j.id} joins a part to itself` });
+    });
+  });
+
+export type LinkageGraph = z.infer<typeof graphSchema>;
+/** The shape before defaults are applied (what a file on disk may omit). */
+export type LinkageGraphInput = z.input<typeof graphSchema>;
+
+export function emptyGraph(name = "", system: ControlSystem = "other"): LinkageGraph {
+  return { formatVersion: FORMAT_VERSION, name, system, nodes: [], joints: [] };
+}
