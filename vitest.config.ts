@@ -1,12 +1,17 @@
+import path from "node:path";
 import { defineConfig } from "vitest/config";
 
 export default defineConfig({
-  resolve: { tsconfigPaths: true },
+  resolve: {
+    tsconfigPaths: true,
+    // db/ and lib/ modules guard against reaching the browser; tests run them in Node on purpose.
+    alias: { "server-only": path.resolve(__dirname, "tests/support/empty.ts") },
+  },
   test: {
     include: ["tests/**/*.test.ts"],
     environment: "node",
-    testTimeout: 30_000,
-    hookTimeout: 120_000,
+    testTimeout: 60_000,
+    hookTimeout: 180_000,
     fileParallelism: false,
     globalSetup: ["tests/global-setup.ts"],
   },

@@ -1,0 +1,117 @@
+"use client";
+import Link from "next/link";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useState } from "react";
+import { api, ApiFailure } from "@/components/api-client";
+import { Badge, Button, Card, EmptyState, Input, Select } from "@/components/ui";
+import { SYSTEMS, type ControlSystem } from "@/shared/linkage/schema";
+
+type Linkage = {
+  id: string;
+  name: string;
+  system: ControlSystem;
+  revision: number;
+  updatedAt: string;
+  lastAuthor: string | null;
+  summary: { hazard: number; caution: number; advisory: number } | null;
+};
+
+export const SYSTEM_LABEL: Record<ControlSystem, string> = { pitch: "Pitch", roll: "Roll", yaw: "Yaw", flap: "Flaps", trim: "Trim", other: "Other" };
+
+export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; initial: Linkage[]; canEdit: boolean }) {
+  const qc = useQueryClient();
+  const key = ["linkages", buildId];
+  const { data: linkages = initial } = useQuery({ queryKey: key, queryFn: async () => (await api<{ linkages: Linkage[] }>(`/api/builds/${buildId}/linkages`)).linkages, initialData: initial });
+  const [adding, setAdding] = useState(false);
+  const [renaming, setRenaming] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const invalidate = () => qc.invalidateQueries({ queryKey: key });
+  const onError = (e: unknown) => setError(e instanceof ApiFailure ? Object.values(e.fields ?? {})[0] ?? e.message : String(e));
+
+  const create = useMutation({
+    mutationFn: (v: { name: string; system: ControlSystem }) => api<{ linkage: Linkage }>(`/api/builds/${buildId}/linkages`, { body: v }),
+    onSuccess: () => { setAdding(false); setError(null); invalidate(); },
+    onError,
+  });
+  const rename = useMutation({
+    mutationFn: (v: { id: string; name: string }) => api(`/api/builds/${buildId}/linkages/${v.id}`, { method: "PATCH", body: { name: v.name } }),
+    onSuccess: () => { setRenaming(null); setError(null); invalidate(); },
+    onError,
+  });
+  const remove = useMutation({
+    mutationFn: (id: string) => api(`/api/builds/${buildId}/linkages/${id}`, { method: "DELETE" }),
+    onSuccess: () => invalidate(),
+    onError,
+  });
+
+  return (
+    <Card title="Linkages" actions={canEdit && !adding ? <Button size="sm" onClick={() => setAdding(true)} data-testid="new-linkage">New linkage</Button> : null}>
+      {adding ? (
+        <form
+          className="mb-4 flex flex-wrap items-end gap-2"
+          onSubmit={(e) => {
+            e.preventDefault();
+            const f = new FormData(e.currentTarget);
+            create.mutate({ name: String(f.get("name") ?? ""), system: f.get("system") as ControlSystem });
+          }}
+        >
+          <label className="grow text-xs">Name<Input name="name" autoFocus placeholder="e.g. Pitch — stick to elevator" data-testid="linkage-name" /></label>
+          <label className="text-xs">System
+            <Select name="system" defaultValue="pitch" data-testid="linkage-system">{SYSTEMS.map((s) => <option key={s} value={s}>{SYSTEM_LABEL[s]}</option>)}</Select>
+          </label>
+          <Button type="submit" disabled={create.isPending} data-testid="create-linkage">{create.isPending ? "Creating…" : "Create"}</Button>
+          <Button type="button" tone="ghost" onClick={() => setAdding(false)}>Cancel</Button>
+        </form>
+      ) : null}
+      {error ? <p role="alert" className="mb-3 text-xs text-hazard">{error}</p> : null}
+      {linkages.length === 0 ? (
+        <EmptyState title="No linkages yet">
+          One linkage per control run: pitch, roll, yaw, flaps, trim. Draw it from the pilot&apos;s input to the surface,
+          then fill in the hardware at each joint to see loads and findings.
+        </EmptyState>
+      ) : (
+        <table className="w-full text-left">
+          <thead className="text-xs uppercase tracking-wide text-ink-soft">
+            <tr><th className="py-1">Name</th><th>System</th><th>Findings</th><th>Last change</th><th className="sr-only">Actions</th></tr>
+          </thead>
+          <tbody>
+            {linkages.map((l) => (
+              <tr key={l.id} className="border-t border-ink/10" data-testid="linkage-row">
+                <td className="py-2">
+                  {renaming === l.id ? (
+                    <form className="flex gap-1" onSubmit={(e) => { e.preventDefault(); rename.mutate({ id: l.id, name: String(new FormData(e.currentTarget).get("name")) }); }}>
+                      <Input name="name" defaultValue={l.name} autoFocus aria-label="New name" />
+                      <Button size="sm" type="submit">Save</Button>
+                      <Button size="sm" tone="ghost" type="button" onClick={() => setRenaming(null)}>Cancel</Button>
+                    </form>
+                  ) : (
+                    <Link href={`/builds/${buildId}/linkages/${l.id}`} className="font-medium text-advisory hover:underline">{l.name}</Link>
+                  )}
+                </td>
+                <td>{SYSTEM_LABEL[l.system]}</td>
+                <td className="space-x-1">
+                  {l.summary ? (
+                    <>
+                      {l.summary.hazard ? <Badge tone="hazard">{l.summary.hazard} hazard{l.summary.hazard > 1 ? "s" : ""}</Badge> : null}
+                      {l.summary.caution ? <Badge tone="caution">{l.summary.caution} caution{l.summary.caution > 1 ? "s" : ""}</Badge> : null}
+                      {!l.summary.hazard && !l.summary.caution ? <Badge tone="ok">none open</Badge> : null}
+                    </>
+                  ) : <span className="text-xs text-ink-soft">not checked</span>}
+                </td>
+                <td className="text-xs text-ink-soft">rev {l.revision} · {new Date(l.updatedAt).toLocaleString("en-CA")}{l.lastAuthor ? ` · ${l.lastAuthor}` : ""}</td>
+                <td className="text-right">
+                  {canEdit && renaming !== l.id ? (
+                    <span className="space-x-1">
+                      <Button size="sm" tone="ghost" onClick={() => setRenaming(l.id)}>Rename</Button>
+                      <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Delete "${l.name}" and all its revisions? This cannot be undone.`)) remove.mutate(l.id); }}>Delete</Button>
+                    </span>
+                  ) : null}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      )}
+    </Card>
+  );
+}

@@ -1,0 +1,33 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { requirePageBuild } from "@/lib/page-access";
+import { getLinkage, getRevision } from "@/db/linkages";
+import { can } from "@/shared/roles";
+import { settingsSchema } from "@/shared/analysis/types";
+import { EditorScreen } from "./EditorScreen";
+
+export const metadata: Metadata = { title: "Linkage" };
+
+export default async function LinkagePage({ params }: { params: Promise<{ buildId: string; linkageId: string }> }) {
+  const { buildId, linkageId } = await params;
+  const { build, role, user } = await requirePageBuild(buildId, `/builds/${buildId}/linkages/${linkageId}`);
+  if (!/^[0-9a-f-]{36}$/i.test(linkageId)) notFound();
+  const linkage = await getLinkage(build.id, linkageId);
+  if (!linkage) notFound();
+  const rev = await getRevision(linkage.id);
+  if (!rev) notFound();
+  return (
+    <EditorScreen
+      buildId={build.id}
+      buildName={build.name}
+      linkageId={linkage.id}
+      linkageName={linkage.name}
+      system={linkage.system}
+      initial={{ revision: rev.revision, graph: rev.graph, authorName: rev.author.name, createdAt: rev.createdAt }}
+      canEdit={can(role, "edit")}
+      canComment={can(role, "comment")}
+      unitSystem={user.unitSystem}
+      settings={settingsSchema.parse(build.analysisSettings ?? {})}
+    />
+  );
+}

@@ -1,0 +1,114 @@
+"use client";
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useForm } from "react-hook-form";
+import { useState } from "react";
+import type { z } from "zod";
+import { api, ApiFailure } from "@/components/api-client";
+import { Button, Card, Field, Input, Select } from "@/components/ui";
+import { memberAdd } from "@/shared/api";
+import { ROLES, ROLE_LABEL, type Role } from "@/shared/roles";
+
+type Member = { userId: string; name: string; email: string; role: Role; since: string };
+type Invitation = { id: string; email: string; role: Role; expiresAt: string; acceptedAt: string | null };
+
+const ROLE_HELP: Record<Role, string> = {
+  owner: "everything, including members and deleting the build",
+  builder: "edits linkages, hardware, the log and uploads",
+  reviewer: "reads, comments, acknowledges findings and signs off",
+  viewer: "reads only",
+};
+
+export function MembersManager(p: { buildId: string; me: string; canManage: boolean; initialMembers: Member[]; initialInvitations: Invitation[] }) {
+  const qc = useQueryClient();
+  const base = `/api/builds/${p.buildId}`;
+  const members = useQuery({ queryKey: ["members", p.buildId], queryFn: async () => (await api<{ members: Member[] }>(`${base}/members`)).members, initialData: p.initialMembers });
+  const invitations = useQuery({
+    queryKey: ["invitations", p.buildId],
+    queryFn: async () => (await api<{ invitations: Invitation[] }>(`${base}/invitations`)).invitations,
+    initialData: p.initialInvitations,
+    enabled: p.canManage,
+  });
+  const [link, setLink] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const refresh = () => { qc.invalidateQueries({ queryKey: ["members", p.buildId] }); qc.invalidateQueries({ queryKey: ["invitations", p.buildId] }); };
+  const fail = (e: unknown) => setError(e instanceof Error ? e.message : String(e));
+
+  const form = useForm<z.input<typeof memberAdd>>({ resolver: zodResolver(memberAdd), defaultValues: { email: "", role: "builder" } });
+  const add = useMutation({
+    mutationFn: (v: z.input<typeof memberAdd>) => api<{ link?: string }>(`${base}/members`, { body: v }),
+    onSuccess: (r) => { setLink(r.link ?? null); setError(null); form.reset({ email: "", role: form.getValues("role") }); refresh(); },
+    onError: (e) => { if (e instanceof ApiFailure && e.fields?.email) form.setError("email", { message: e.fields.email }); fail(e); },
+  });
+  const setRole = useMutation({ mutationFn: (v: { userId: string; role: Role }) => api(`${base}/members/${v.userId}`, { method: "PATCH", body: { role: v.role } }), onSuccess: refresh, onError: fail });
+  const remove = useMutation({ mutationFn: (userId: string) => api(`${base}/members/${userId}`, { method: "DELETE" }), onSuccess: refresh, onError: fail });
+  const revoke = useMutation({ mutationFn: (id: string) => api(`${base}/invitations/${id}`, { method: "DELETE" }), onSuccess: refresh, onError: fail });
+
+  return (
+    <div className="space-y-6">
+      {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
+      <Card title="Members">
+        <table className="w-full text-left">
+          <thead className="text-xs uppercase tracking-wide text-ink-soft"><tr><th className="py-1">Name</th><th>E-mail</th><th>Role</th><th className="sr-only">Actions</th></tr></thead>
+          <tbody>
+            {members.data.map((m) => (
+              <tr key={m.userId} className="border-t border-ink/10" data-testid="member-row">
+                <td className="py-2 font-medium">{m.name}{m.userId === p.me ? <span className="text-ink-soft"> (you)</span> : null}</td>
+                <td className="text-ink-soft">{m.email}</td>
+                <td>
+                  {p.canManage ? (
+                    <Select aria-label={`Role of ${m.name}`} value={m.role} onChange={(e) => setRole.mutate({ userId: m.userId, role: e.target.value as Role })} className="w-32">
+                      {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
+                    </Select>
+                  ) : ROLE_LABEL[m.role]}
+                </td>
+                <td className="text-right">
+                  {p.canManage && m.userId !== p.me ? (
+                    <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Remove ${m.name} from this build?`)) remove.mutate(m.userId); }}>Remove</Button>
+                  ) : null}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </Card>
+      {p.canManage ? (
+        <Card title="Add someone">
+          <form className="grid gap-3 sm:grid-cols-[1fr_10rem_auto] sm:items-end" onSubmit={form.handleSubmit((v) => add.mutate(v))} noValidate>
+            <Field label="E-mail" htmlFor="invite-email" error={form.formState.errors.email?.message}>
+              <Input id="invite-email" type="email" aria-invalid={!!form.formState.errors.email} {...form.register("email")} />
+            </Field>
+            <Field label="Role" htmlFor="invite-role">
+              <Select id="invite-role" {...form.register("role")}>{ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}</Select>
+            </Field>
+            <Button type="submit" disabled={add.isPending}>{add.isPending ? "Adding…" : "Add"}</Button>
+          </form>
+          <ul className="mt-3 grid gap-1 text-xs text-ink-soft sm:grid-cols-2">
+            {ROLES.map((r) => <li key={r}><span className="font-semibold text-ink">{ROLE_LABEL[r]}</span> — {ROLE_HELP[r]}</li>)}
+          </ul>
+          <p className="mt-2 text-xs text-ink-soft">Someone with an account joins at once. Anyone else gets an invitation link that works once, for 14 days.</p>
+          {link ? (
+            <div className="mt-3 rounded border border-advisory/30 bg-advisory/5 p-2 text-xs" data-testid="invite-link">
+              Invitation link (send it to them): <code className="select-all break-all">{link}</code>
+            </div>
+          ) : null}
+        </Card>
+      ) : null}
+      {p.canManage && invitations.data.length > 0 ? (
+        <Card title="Invitations">
+          <ul className="divide-y divide-ink/10">
+            {invitations.data.map((i) => (
+              <li key={i.id} className="flex items-center justify-between py-2">
+                <span>{i.email} · {ROLE_LABEL[i.role]}</span>
+                <span className="flex items-center gap-2 text-xs text-ink-soft">
+                  {i.acceptedAt ? `accepted ${new Date(i.acceptedAt).toLocaleDateString("en-CA")}` : `open until ${new Date(i.expiresAt).toLocaleDateString("en-CA")}`}
+                  {!i.acceptedAt ? <Button size="sm" tone="ghost" onClick={() => revoke.mutate(i.id)}>Withdraw</Button> : null}
+                </span>
+              </li>
+            ))}
+          </ul>
+        </Card>
+      ) : null}
+    </div>
+  );
+}

@@ -1,0 +1,23 @@
+import type { Metadata } from "next";
+import { requirePageBuild } from "@/lib/page-access";
+import { listInvitations, listMembers } from "@/db/builds";
+import { BuildNav } from "@/components/BuildNav";
+import { can } from "@/shared/roles";
+import { MembersManager } from "./MembersManager";
+
+export const metadata: Metadata = { title: "Members" };
+
+export default async function MembersPage({ params }: { params: Promise<{ buildId: string }> }) {
+  const { buildId } = await params;
+  const { build, role, user } = await requirePageBuild(buildId, `/builds/${buildId}/members`);
+  const manage = can(role, "manage");
+  const [members, invitations] = await Promise.all([listMembers(build.id), manage ? listInvitations(build.id) : Promise.resolve([])]);
+  return (
+    <>
+      <BuildNav buildId={build.id} buildName={build.name} current="/members" />
+      <main className="mx-auto max-w-4xl p-6">
+        <MembersManager buildId={build.id} me={user.id} canManage={manage} initialMembers={members} initialInvitations={invitations} />
+      </main>
+    </>
+  );
+}

@@ -1,0 +1,72 @@
+import type { Metadata } from "next";
+import { requirePageBuild } from "@/lib/page-access";
+import { listLinkages } from "@/db/linkages";
+import { listMembers } from "@/db/builds";
+import { recentActivity } from "@/db/activity";
+import { BuildNav } from "@/components/BuildNav";
+import { Badge, Card, Caution } from "@/components/ui";
+import { can, ROLE_LABEL } from "@/shared/roles";
+import { LinkagesPanel } from "./LinkagesPanel";
+
+export const metadata: Metadata = { title: "Build overview" };
+
+const ACTION_TEXT: Record<string, string> = {
+  "build.create": "created the build",
+  "build.update": "changed the build details",
+  "linkage.create": "added a linkage",
+  "linkage.update": "renamed a linkage",
+  "linkage.delete": "deleted a linkage",
+  "member.add": "added a member",
+  "member.role": "changed a member's role",
+  "member.remove": "removed a member",
+  "invitation.create": "sent an invitation",
+  "invitation.accept": "joined through an invitation",
+  "demo.seed": "set up the demo build",
+};
+
+export default async function BuildOverview({ params }: { params: Promise<{ buildId: string }> }) {
+  const { buildId } = await params;
+  const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}`);
+  const [linkages, members, activity] = await Promise.all([listLinkages(build.id), listMembers(build.id), recentActivity(build.id)]);
+  const open = linkages.reduce((acc, l) => ({ hazard: acc.hazard + (l.summary?.hazard ?? 0), caution: acc.caution + (l.summary?.caution ?? 0) }), { hazard: 0, caution: 0 });
+  return (
+    <>
+      <BuildNav buildId={build.id} buildName={build.name} current="" extra={<Badge>{ROLE_LABEL[role]}</Badge>} />
+      <main className="mx-auto grid max-w-6xl gap-6 p-6 lg:grid-cols-3">
+        <div className="space-y-6 lg:col-span-2">
+          <p className="text-ink-soft">{build.model || "Model not set"}{build.registration ? ` · ${build.registration}` : ""}</p>
+          <LinkagesPanel buildId={build.id} initial={linkages} canEdit={can(role, "edit")} />
+          <Caution />
+        </div>
+        <aside className="space-y-6">
+          <Card title="Open findings">
+            {linkages.length === 0 ? (
+              <p className="text-ink-soft">Findings appear here once a linkage has parts and joints.</p>
+            ) : (
+              <div className="flex gap-4" data-testid="open-findings">
+                <div><p className="text-2xl font-semibold text-hazard">{open.hazard}</p><p className="text-xs text-ink-soft">hazards</p></div>
+                <div><p className="text-2xl font-semibold text-caution">{open.caution}</p><p className="text-xs text-ink-soft">cautions</p></div>
+              </div>
+            )}
+          </Card>
+          <Card title="Members">
+            <ul className="space-y-1">
+              {members.map((m) => (
+                <li key={m.userId} className="flex justify-between"><span>{m.name}</span><span className="text-ink-soft">{ROLE_LABEL[m.role]}</span></li>
+              ))}
+            </ul>
+          </Card>
+          <Card title="Recent activity">
+            {activity.length === 0 ? <p className="text-ink-soft">Nothing yet.</p> : (
+              <ul className="space-y-2 text-xs">
+                {activity.map((a) => (
+                  <li key={a.id}><span className="font-medium">{a.who}</span> {ACTION_TEXT[a.action] ?? a.action}<br /><span className="text-ink-soft">{new Date(a.at).toLocaleString("en-CA")}</span></li>
+                ))}
+              </ul>
+            )}
+          </Card>
+        </aside>
+      </main>
+    </>
+  );
+}

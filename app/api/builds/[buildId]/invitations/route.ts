@@ -1,0 +1,12 @@
+import { withBuild, parseBody, json } from "@/lib/http";
+import { invitationCreate } from "@/shared/api";
+import { createInvitation, listInvitations } from "@/db/builds";
+import { inviteUrl } from "@/lib/urls";
+
+export const GET = withBuild("manage", async ({ build }) => json({ invitations: await listInvitations(build.id) }));
+
+export const POST = withBuild("manage", async ({ req, user, build }) => {
+  const body = await parseBody(req, invitationCreate);
+  const { token, invitation } = await createInvitation(build.id, body.email, body.role, user.id);
+  return json({ invitation, link: inviteUrl(token) }, 201);
+});

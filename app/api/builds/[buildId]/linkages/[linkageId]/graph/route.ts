@@ -1,0 +1,34 @@
+import { z } from "zod";
+import { withBuild, parseBody, parseParams, json } from "@/lib/http";
+import { ApiError, notFound } from "@/lib/errors";
+import { graphPut, uuidParam } from "@/shared/api";
+import { getLinkage, getRevision, saveRevision } from "@/db/linkages";
+import { analyze } from "@/shared/analysis";
+
+type P = { buildId: string; linkageId: string };
+const revisionQuery = z.coerce.number().int().min(1);
+
+/** The current revision of the graph (or `?revision=N`), with the analysis stored beside it. */
+export const GET = withBuild<P>("read", async ({ req, build, params }) => {
+  const id = parseParams(params.linkageId, uuidParam);
+  if (!(await getLinkage(build.id, id))) throw notFound("linkage");
+  const q = req.nextUrl.searchParams.get("revision");
+  const revision = q === null ? undefined : parseParams(q, revisionQuery);
+  const rev = await getRevision(id, revision);
+  if (!rev) throw notFound("revision");
+  return json(rev);
+});
+
+/** Save the next revision, only if `baseRevision` is still the current one (409 otherwise). */
+export const PUT = withBuild<P>("edit", async ({ req, user, build, params }) => {
+  const id = parseParams(params.linkageId, uuidParam);
+  const { baseRevision, graph } = await parseBody(req, graphPut);
+  const analysis = analyze(graph, build.analysisSettings);
+  const saved = await saveRevision(build.id, id, baseRevision, graph, analysis, user.id);
+  if (saved === "missing") throw notFound("linkage");
+  if (saved === "stale") {
+    const current = await getRevision(id);
+    throw new ApiError(409, "stale_revision", `Someone saved revision ${current?.revision} while you were editing revision ${baseRevision}.`, undefined, { current });
+  }
+  return json({ ...saved, analysis });
+});

@@ -1,0 +1,35 @@
+import Link from "next/link";
+import type { Metadata } from "next";
+import { getSessionUser } from "@/lib/auth";
+import { findInvitation } from "@/db/builds";
+import { ROLE_LABEL } from "@/shared/roles";
+import { AcceptInvitation } from "./AcceptInvitation";
+
+export const metadata: Metadata = { title: "Invitation" };
+
+export default async function InvitePage({ params }: { params: Promise<{ token: string }> }) {
+  const { token } = await params;
+  const [user, inv] = await Promise.all([getSessionUser(), /^[A-Za-z0-9_-]{20,64}$/.test(token) ? findInvitation(token) : null]);
+  const open = inv && !inv.accepted_at && inv.expires_at > new Date();
+  const here = `/invite/${token}`;
+  return (
+    <main className="mx-auto mt-16 max-w-md rounded-lg border border-ink/10 bg-white p-6">
+      <p className="text-lg font-semibold">Linkwright invitation</p>
+      {!open ? (
+        <p className="mt-2 text-ink-soft">This invitation link has been used, has expired or was withdrawn. Ask the build&apos;s owner for a new one.</p>
+      ) : (
+        <>
+          <p className="mt-2">You are invited to <strong>{inv.build_name}</strong> as <strong>{ROLE_LABEL[inv.role]}</strong>.</p>
+          {user ? (
+            <AcceptInvitation token={token} signedInAs={user.email} />
+          ) : (
+            <p className="mt-4 space-x-3">
+              <Link className="rounded bg-ink px-3 py-1.5 text-white" href={`/sign-in?next=${encodeURIComponent(here)}`}>Sign in to accept</Link>
+              <Link className="text-advisory underline" href={`/sign-up?next=${encodeURIComponent(here)}`}>Create an account</Link>
+            </p>
+          )}
+        </>
+      )}
+    </main>
+  );
+}

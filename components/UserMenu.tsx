@@ -1,0 +1,37 @@
+"use client";
+import { signOut } from "next-auth/react";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { api } from "./api-client";
+
+export function UserMenu({ name, email, unitSystem }: { name: string; email: string; unitSystem: "US" | "SI" }) {
+  const router = useRouter();
+  const [units, setUnits] = useState(unitSystem);
+  async function switchUnits(next: "US" | "SI") {
+    setUnits(next);
+    await api("/api/me", { method: "PATCH", body: { unitSystem: next } });
+    router.refresh();
+  }
+  return (
+    <div className="flex items-center gap-3 text-xs">
+      <div role="group" aria-label="Units" className="flex overflow-hidden rounded border border-ink/20">
+        {(["US", "SI"] as const).map((u) => (
+          <button
+            key={u}
+            type="button"
+            aria-pressed={units === u}
+            onClick={() => switchUnits(u)}
+            className={`px-2 py-1 ${units === u ? "bg-ink text-white" : "bg-white text-ink hover:bg-ink/5"}`}
+            title={u === "US" ? "US customary: lbf, in, in·lbf" : "SI: N, mm, N·m"}
+          >
+            {u}
+          </button>
+        ))}
+      </div>
+      <span className="hidden text-ink-soft sm:inline" title={email}>{name}</span>
+      <button type="button" className="rounded px-2 py-1 hover:bg-ink/5" onClick={() => signOut({ callbackUrl: "/sign-in" })}>
+        Sign out
+      </button>
+    </div>
+  );
+}

@@ -1,0 +1,149 @@
+import "server-only";
+import { db } from "./index";
+import { audit } from "./audit";
+import { emptyGraph, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
+import type { Report } from "@/shared/analysis/types";
+
+type LinkageRow = {
+  id: string;
+  build_id: string;
+  name: string;
+  system: ControlSystem;
+  current_revision: number;
+  created_at: Date;
+  updated_at: Date;
+};
+
+const toLinkage = (r: LinkageRow & { author_name?: string | null; summary?: Report["summary"] | null }) => ({
+  id: r.id,
+  buildId: r.build_id,
+  name: r.name,
+  system: r.system,
+  revision: r.current_revision,
+  createdAt: r.created_at.toISOString(),
+  updatedAt: r.updated_at.toISOString(),
+  lastAuthor: r.author_name ?? null,
+  summary: r.summary ?? null,
+});
+export type Linkage = ReturnType<typeof toLinkage>;
+
+export async function listLinkages(buildId: string) {
+  const rows = await db("linkages as l")
+    .leftJoin("linkage_revisions as r", function () {
+      this.on("r.linkage_id", "l.id").andOn("r.revision", "l.current_revision");
+    })
+    .leftJoin("users as u", "u.id", "r.author_id")
+    .where("l.build_id", buildId)
+    .select("l.*", "u.name as author_name", db.raw("r.analysis -> 'summary' as summary"))
+    .orderByRaw("array_position(array['pitch','roll','yaw','flap','trim','other']::text[], l.system::text), l.name");
+  return rows.map(toLinkage);
+}
+
+export async function getLinkage(buildId: string, linkageId: string) {
+  const row = await db<LinkageRow>("linkages").where({ id: linkageId, build_id: buildId }).first();
+  return row ? toLinkage(row) : null;
+}
+
+export async function createLinkage(
+  buildId: string,
+  userId: string,
+  l: { name: string; system: ControlSystem; graph?: LinkageGraph; analysis?: Report | null },
+) {
+  return db.transaction(async (trx) => {
+    const [row] = await trx<LinkageRow>("linkages")
+      .insert({ build_id: buildId, name: l.name, system: l.system, current_revision: 1 })
+      .returning("*");
+    const graph = { ...(l.graph ?? emptyGraph(l.name, l.system)), name: l.name, system: l.system };
+    await trx("linkage_revisions").insert({
+      linkage_id: row.id,
+      revision: 1,
+      graph: JSON.stringify(graph),
+      analysis: l.analysis ? JSON.stringify(l.analysis) : null,
+      author_id: userId,
+    });
+    await trx("builds").where({ id: buildId }).update({ updated_at: trx.fn.now() });
+    await audit({ buildId, userId, action: "linkage.create", detail: { linkageId: row.id, name: l.name } }, trx);
+    return toLinkage(row);
+  });
+}
+
+export async function updateLinkage(buildId: string, linkageId: string, userId: string, patch: { name?: string; system?: ControlSystem }) {
+  const [row] = await db<LinkageRow>("linkages")
+    .where({ id: linkageId, build_id: buildId })
+    .update({ ...patch, updated_at: db.fn.now() })
+    .returning("*");
+  if (row) await audit({ buildId, userId, action: "linkage.update", detail: { linkageId, ...patch } });
+  return row ? toLinkage(row) : null;
+}
+
+export async function deleteLinkage(buildId: string, linkageId: string, userId: string) {
+  const n = await db("linkages").where({ id: linkageId, build_id: buildId }).del();
+  if (n) await audit({ buildId, userId, action: "linkage.delete", detail: { linkageId } });
+  return n > 0;
+}
+
+export type RevisionView = {
+  revision: number;
+  graph: LinkageGraph;
+  analysis: Report | null;
+  author: { id: string | null; name: string };
+  createdAt: string;
+};
+
+export async function getRevision(linkageId: string, revision?: number): Promise<RevisionView | null> {
+  const q = db("linkage_revisions as r")
+    .join("linkages as l", "l.id", "r.linkage_id")
+    .leftJoin("users as u", "u.id", "r.author_id")
+    .where("r.linkage_id", linkageId);
+  if (revision === undefined) q.whereRaw("r.revision = l.current_revision");
+  else q.where("r.revision", revision);
+  const row = await q.first("r.revision", "r.graph", "r.analysis", "r.author_id", "u.name as author_name", "r.created_at");
+  if (!row) return null;
+  return {
+    revision: row.revision,
+    graph: row.graph,
+    analysis: row.analysis,
+    author: { id: row.author_id, name: row.author_name ?? "former member" },
+    createdAt: row.created_at.toISOString(),
+  };
+}
+
+/**
+ * Optimistic concurrency: the next revision is written only if `baseRevision` is still current.
+ * Returns the new revision, "stale" (someone saved first) or "missing".
+ */
+export async function saveRevision(
+  buildId: string,
+  linkageId: string,
+  baseRevision: number,
+  graph: LinkageGraph,
+  analysis: Report,
+  userId: string,
+): Promise<{ revision: number; createdAt: string } | "stale" | "missing"> {
+  return db.transaction(async (trx) => {
+    const [row] = await trx("linkages")
+      .where({ id: linkageId, build_id: buildId, current_revision: baseRevision })
+      .update({ current_revision: baseRevision + 1, updated_at: trx.fn.now() })
+      .returning(["current_revision"]);
+    if (!row) {
+      const exists = await trx("linkages").where({ id: linkageId, build_id: buildId }).first("id");
+      return exists ? "stale" : "missing";
+    }
+    const [rev] = await trx("linkage_revisions")
+      .insert({
+        linkage_id: linkageId,
+        revision: row.current_revision,
+        graph: JSON.stringify(graph),
+        analysis: JSON.stringify(analysis),
+        author_id: userId,
+      })
+      .returning(["revision", "created_at"]);
+    await trx("builds").where({ id: buildId }).update({ updated_at: trx.fn.now() });
+    return { revision: rev.revision as number, createdAt: (rev.created_at as Date).toISOString() };
+  });
+}
+
+export async function countRevisions(linkageId: string) {
+  const [{ count }] = await db("linkage_revisions").where({ linkage_id: linkageId }).count<{ count: string }[]>("* as count");
+  return Number(count);
+}

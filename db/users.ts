@@ -1,0 +1,48 @@
+import "server-only";
+import { db } from "./index";
+
+export type UserRow = {
+  id: string;
+  email: string;
+  name: string;
+  password_hash: string;
+  is_site_admin: boolean;
+  unit_system: "US" | "SI";
+  created_at: Date;
+};
+export type PublicUser = { id: string; email: string; name: string; isSiteAdmin: boolean; unitSystem: "US" | "SI" };
+
+export const toPublicUser = (u: UserRow): PublicUser => ({
+  id: u.id,
+  email: u.email,
+  name: u.name,
+  isSiteAdmin: u.is_site_admin,
+  unitSystem: u.unit_system,
+});
+
+export const findUserByEmail = (email: string) =>
+  db<UserRow>("users").whereRaw("lower(email) = lower(?)", [email]).first();
+export const findUserById = (id: string) => db<UserRow>("users").where({ id }).first();
+
+export async function createUser(u: { email: string; name: string; passwordHash: string }) {
+  const [row] = await db<UserRow>("users")
+    .insert({ email: u.email.trim(), name: u.name.trim(), password_hash: u.passwordHash })
+    .returning("*");
+  return row;
+}
+
+export const setUnitSystem = (id: string, unit: "US" | "SI") => db("users").where({ id }).update({ unit_system: unit });
+
+const WINDOW_MIN = 15;
+export const MAX_FAILS_PER_EMAIL = 5;
+export const MAX_FAILS_PER_IP = 30;
+
+/** Failed sign-ins in the last window, per e-mail and per IP. */
+export async function recentFailures(email: string, ip: string) {
+  const since = db.raw(`now() - interval '${WINDOW_MIN} minutes'`);
+  const [byEmail] = await db("sign_in_attempts").whereRaw("lower(email) = lower(?)", [email]).where("created_at", ">", since).count<{ count: string }[]>("* as count");
+  const [byIp] = await db("sign_in_attempts").where({ ip }).where("created_at", ">", since).count<{ count: string }[]>("* as count");
+  return { email: Number(byEmail.count), ip: Number(byIp.count) };
+}
+export const recordFailure = (email: string, ip: string) => db("sign_in_attempts").insert({ email: email.slice(0, 254), ip: ip.slice(0, 64) });
+export const clearFailures = (email: string) => db("sign_in_attempts").whereRaw("lower(email) = lower(?)", [email]).del();

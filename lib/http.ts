@@ -1,0 +1,99 @@
+import "server-only";
+import { NextResponse, type NextRequest } from "next/server";
+import type { z } from "zod";
+import { ApiError, invalid, notFound, unauthorized, forbidden } from "./errors";
+import { getSessionUser, type SessionUser } from "./auth";
+import { getMembership, type Build } from "@/db/builds";
+import { can, type Capability, type Role, CAPABILITIES } from "@/shared/roles";
+
+export const MAX_BODY_BYTES = 5 * 1024 * 1024;
+
+/** Read a JSON body and parse it with a zod schema: 400 with field errors when it does not fit. */
+export async function parseBody<S extends z.ZodTypeAny>(req: Request, schema: S): Promise<z.infer<S>> {
+  const text = await req.text();
+  if (text.length > MAX_BODY_BYTES) throw new ApiError(413, "too_large", "The request body is larger than 5 MB.");
+  let json: unknown;
+  try {
+    json = text.length ? JSON.parse(text) : undefined;
+  } catch {
+    throw new ApiError(400, "invalid_json", "The request body is not valid JSON.");
+  }
+  const r = schema.safeParse(json);
+  if (!r.success) throw invalid(r.error);
+  return r.data;
+}
+
+export function parseParams<S extends z.ZodTypeAny>(params: unknown, schema: S): z.infer<S> {
+  const r = schema.safeParse(params);
+  // A malformed id names nothing we have: the same 404 as a build the user cannot see.
+  if (!r.success) throw notFound("item");
+  return r.data;
+}
+
+function errorResponse(e: unknown) {
+  if (e instanceof ApiError) return e.toResponse();
+  console.error(e);
+  return NextResponse.json({ error: { code: "server_error", message: "Something went wrong on the server. Nothing was changed." } }, { status: 500 });
+}
+
+type RouteCtx<P> = { params: Promise<P> };
+
+/** A route for any signed-in user. */
+export function withUser<P = Record<string, string>>(
+  handler: (a: { req: NextRequest; user: SessionUser; params: P }) => Promise<Response>,
+) {
+  return async (req: NextRequest, ctx: RouteCtx<P>) => {
+    try {
+      const user = await getSessionUser();
+      if (!user) throw unauthorized();
+      return await handler({ req, user, params: (await ctx?.params) ?? ({} as P) });
+    } catch (e) {
+      return errorResponse(e);
+    }
+  };
+}
+
+/** A public route (sign-up): errors still come back in the one shape. */
+export function withErrors<P = Record<string, string>>(handler: (a: { req: NextRequest; params: P }) => Promise<Response>) {
+  return async (req: NextRequest, ctx: RouteCtx<P>) => {
+    try {
+      return await handler({ req, params: (await ctx?.params) ?? ({} as P) });
+    } catch (e) {
+      return errorResponse(e);
+    }
+  };
+}
+
+const WHY: Record<Capability, string> = {
+  read: "You are not a member of this build.",
+  edit: "Only the build's owner and builders can change this.",
+  comment: "Viewers can read but not comment.",
+  acknowledge: "Only a reviewer or the owner can acknowledge a finding.",
+  signOff: "Only a reviewer can sign off a revision.",
+  manage: "Only the build's owner can do this.",
+};
+
+export async function requireBuild(user: SessionUser, buildId: string, capability: Capability) {
+  if (!/^[0-9a-f-]{36}$/i.test(buildId)) throw notFound();
+  const m = await getMembership(buildId, user.id);
+  if (!m) throw notFound(); // non-members never learn the build exists
+  if (!can(m.role, capability)) throw forbidden(WHY[capability]);
+  return m;
+}
+
+/**
+ * Every build route goes through this: session (401), membership (404), role (403), then the body.
+ *   export const GET = withBuild("read", async ({ build, role, user, params }) => …)
+ */
+export function withBuild<P extends { buildId: string } = { buildId: string }>(
+  capability: Capability,
+  handler: (a: { req: NextRequest; user: SessionUser; build: Build; role: Role; params: P }) => Promise<Response>,
+) {
+  return withUser<P>(async ({ req, user, params }) => {
+    const { build, role } = await requireBuild(user, params.buildId, capability);
+    return handler({ req, user, build, role, params });
+  });
+}
+
+export const json = (data: unknown, status = 200) => NextResponse.json(data, { status });
+export { CAPABILITIES };

@@ -1,0 +1,20 @@
+import "server-only";
+import { notFound, redirect } from "next/navigation";
+import { getSessionUser } from "./auth";
+import { getMembership } from "@/db/builds";
+
+/** For server pages: the signed-in user or a redirect to sign-in. */
+export async function requirePageUser(next?: string) {
+  const user = await getSessionUser();
+  if (!user) redirect(next ? `/sign-in?next=${encodeURIComponent(next)}` : "/sign-in");
+  return user;
+}
+
+/** For build pages: the user, the build and the role, or 404 for non-members. */
+export async function requirePageBuild(buildId: string, next?: string) {
+  const user = await requirePageUser(next);
+  if (!/^[0-9a-f-]{36}$/i.test(buildId)) notFound();
+  const m = await getMembership(buildId, user.id);
+  if (!m) notFound();
+  return { user, ...m };
+}

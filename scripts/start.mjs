@@ -1,0 +1,47 @@
+// `npm start`: everything a fresh clone needs, then the app on http://127.0.0.1:3000.
+import { spawn } from "node:child_process";
+import { ROOT, authSecret, dbUrl, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
+
+const PORT = Number(process.env.PORT || 3000);
+const URL = `http://127.0.0.1:${PORT}`;
+
+ensurePackages();
+startPostgres();
+migrate(process.env.LW_APP_DB || "linkwright");
+
+const env = {
+  ...process.env,
+  NEXT_TELEMETRY_DISABLED: "1",
+  NODE_ENV: "production",
+  DATABASE_URL: process.env.DATABASE_URL || dbUrl(process.env.LW_APP_DB || "linkwright"),
+  NEXTAUTH_URL: process.env.NEXTAUTH_URL || URL,
+  NEXTAUTH_SECRET: authSecret(),
+};
+
+const { startLocalServices } = await import("./services.mjs");
+const services = await startLocalServices(env);
+
+if (process.env.LW_SKIP_BUILD !== "1") {
+  step("Building the app (next build)");
+  run(process.execPath, ["node_modules/next/dist/bin/next", "build"], { env });
+}
+
+step(`Serving on ${URL}`);
+const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { cwd: ROOT, env, stdio: ["ignore", "pipe", "inherit"] });
+let printed = false;
+server.stdout.on("data", async (chunk) => {
+  process.stdout.write(chunk);
+  if (!printed && /ready|started|Local:/i.test(String(chunk))) {
+    printed = true;
+    const { tsImport } = await import("tsx/esm/api");
+    const { DEMO_USERS } = await tsImport("../db/demo-accounts.ts", import.meta.url);
+    console.log(`\nLinkwright is running at ${URL}\n\nDemo sign-ins (invented demo data, for this machine only):`);
+    for (const u of DEMO_USERS) console.log(`  ${u.name.padEnd(11)} ${(u.role ?? "site admin").padEnd(9)} ${u.email.padEnd(28)} ${u.password}`);
+    if (services.summary) console.log(`\n${services.summary}`);
+    console.log("\nCaution: Linkwright's numbers aid your own engineering; follow the designer's instructions, the regulations and a qualified inspector.\nPress Ctrl+C to stop.");
+  }
+});
+const stop = () => { server.kill("SIGTERM"); services.stop?.(); };
+process.on("SIGINT", stop);
+process.on("SIGTERM", stop);
+server.on("exit", (code) => { services.stop?.(); process.exit(code ?? 0); });

@@ -1,0 +1,46 @@
+// `npm test`: the same set-up as `npm start` against a separate, fresh test database, then every test.
+import { spawnSync } from "node:child_process";
+import { existsSync, mkdirSync, readFileSync } from "node:fs";
+import path from "node:path";
+import { ROOT, authSecret, dbUrl, ensureDebianPackage, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
+
+const TEST_DB = process.env.LW_TEST_DB || "linkwright_test";
+const started = Date.now();
+
+ensurePackages();
+ensureDebianPackage("/usr/bin/chromium", "chromium");
+startPostgres();
+
+step(`Recreating the test database ${TEST_DB}`);
+run(process.execPath, ["--import", "tsx", "scripts/reset-db.ts", TEST_DB]);
+migrate(TEST_DB);
+
+const env = {
+  NODE_ENV: "production",
+  NEXT_DIST_DIR: ".next-test",
+  DATABASE_URL: dbUrl(TEST_DB),
+  NEXTAUTH_SECRET: authSecret(),
+};
+step("Building the app for the browser and route tests (.next-test)");
+run(process.execPath, ["node_modules/next/dist/bin/next", "build"], { env });
+
+step("Running the tests (vitest)");
+mkdirSync(path.join(ROOT, "tests/artifacts"), { recursive: true });
+const report = path.join(ROOT, "tests/artifacts/vitest-report.json");
+const r = spawnSync(
+  process.execPath,
+  ["node_modules/vitest/vitest.mjs", "run", "--reporter=default", "--reporter=json", `--outputFile.json=${report}`, ...process.argv.slice(2)],
+  { cwd: ROOT, stdio: "inherit", env: { ...process.env, ...env, NODE_ENV: "test", LW_BUILT: "1", NEXT_TELEMETRY_DISABLED: "1" } },
+);
+
+let passed = 0, failed = 0, skipped = 0;
+if (existsSync(report)) {
+  const j = JSON.parse(readFileSync(report, "utf8"));
+  passed = j.numPassedTests ?? 0;
+  failed = (j.numFailedTests ?? 0) + (j.numFailedTestSuites && !j.numFailedTests ? j.numFailedTestSuites : 0);
+  skipped = (j.numPendingTests ?? 0) + (j.numTodoTests ?? 0);
+}
+const minutes = ((Date.now() - started) / 60000).toFixed(1);
+console.log(`\nnpm test took ${minutes} min`);
+console.log(`${passed} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ""}`);
+process.exit(r.status === 0 && failed === 0 && passed > 0 ? 0 : 1);
