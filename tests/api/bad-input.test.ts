@@ -1,0 +1,73 @@
+/** Every write route, given a malformed body by a caller who may write: 400 with field errors, and no row changed. */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { makeBuild, makeUser, snapshot, testDb } from "../support/db";
+import { signIn, type Client } from "../support/http";
+import { apiRoutes } from "../support/routes";
+
+type Ctx = { buildId: string; linkageId: string; extraId: string };
+const B = (c: Ctx) => `/api/builds/${c.buildId}`;
+const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
+const nodeWithoutArms = { id: "s1", kind: "stick", label: "", position: { x: 0, y: 0 }, props: {} };
+
+// route → path and a list of malformed bodies, each with a field the error must name
+// prettier-ignore
+const CASES: Record<string, { path: (c: Ctx) => string; bodies: [unknown, string][] }> = {
+  "POST /api/sign-up": { path: () => "/api/sign-up", bodies: [[{ name: "", email: "not-an-email", password: "short" }, "email"], [{ name: 7 }, "name"]] },
+  "PATCH /api/me": { path: () => "/api/me", bodies: [[{ unitSystem: "imperial" }, "unitSystem"]] },
+  "POST /api/analyze": { path: () => "/api/analyze", bodies: [[{ graph: { formatVersion: 2, nodes: [], joints: [] } }, "graph.formatVersion"], [{ graph: { formatVersion: 1, nodes: [nodeWithoutArms], joints: [] } }, "graph.nodes.0.props.gripArm"]] },
+  "POST /api/builds": { path: () => "/api/builds", bodies: [[{ name: "" }, "name"], [{ name: "ok", registration: "no spaces!" }, "registration"]] },
+  "PATCH /api/builds/[buildId]": { path: B, bodies: [[{ name: 12 }, "name"], [{ analysisSettings: { ultimateFactor: -1 } }, "analysisSettings.ultimateFactor"]] },
+  "POST /api/builds/[buildId]/members": { path: (c) => `${B(c)}/members`, bodies: [[{ email: "x", role: "viewer" }, "email"], [{ email: "a@b.test", role: "pilot" }, "role"]] },
+  "PATCH /api/builds/[buildId]/members/[userId]": { path: (c) => `${B(c)}/members/${c.extraId}`, bodies: [[{ role: "captain" }, "role"]] },
+  "POST /api/builds/[buildId]/invitations": { path: (c) => `${B(c)}/invitations`, bodies: [[{ email: "", role: "viewer" }, "email"]] },
+  "POST /api/builds/[buildId]/linkages": { path: (c) => `${B(c)}/linkages`, bodies: [[{ name: "Roll", system: "spin" }, "system"], [{ system: "roll" }, "name"]] },
+  "PATCH /api/builds/[buildId]/linkages/[linkageId]": { path: L, bodies: [[{ name: "" }, "name"], [{ system: 3 }, "system"]] },
+  "PUT /api/builds/[buildId]/linkages/[linkageId]/graph": {
+    path: (c) => `${L(c)}/graph`,
+    bodies: [
+      [{ graph: { formatVersion: 1, nodes: [], joints: [] } }, "baseRevision"],
+      [{ baseRevision: 1, graph: { formatVersion: 1, nodes: [], joints: [{ id: "j", from: { node: "a", port: "x" }, to: { node: "b", port: "y" } }] } }, "graph.joints.0.from.node"],
+      [{ baseRevision: 1, graph: { formatVersion: 1, nodes: [nodeWithoutArms], joints: [] } }, "graph.nodes.0.props.gripArm"],
+    ],
+  },
+};
+/** Write routes that take no body (or only a path parameter) are exempt here. */
+const NO_BODY = new Set(["POST /api/auth/[...nextauth]", "POST /api/invitations/[token]"]);
+export const EXTRA_CASES: typeof CASES = {};
+
+let owner: Client;
+let ctx: Ctx;
+beforeAll(async () => {
+  const u = await makeUser("writer");
+  const extra = await makeUser("extra");
+  owner = await signIn(u.email);
+  ctx = { ...(await makeBuild({ owner: u, extra })), extraId: extra.id };
+});
+afterAll(() => testDb.destroy());
+
+describe("malformed input", () => {
+  it("covers every write route that takes a body", () => {
+    const writes = apiRoutes().filter((r) => /^(POST|PUT|PATCH) /.test(r) && !NO_BODY.has(r));
+    const all = { ...CASES, ...EXTRA_CASES };
+    expect(writes.filter((r) => !all[r])).toEqual([]);
+  });
+
+  for (const [route, c] of Object.entries(CASES)) {
+    const method = route.split(" ")[0];
+    it(`${route} → 400 with field errors, nothing changed`, async () => {
+      for (const [body, field] of c.bodies) {
+        const before = await snapshot();
+        const res = await owner.request(method, c.path(ctx), body);
+        expect(res.status, JSON.stringify(res.body)).toBe(400);
+        expect(res.body.error.code).toBe("invalid_input");
+        expect(Object.keys(res.body.error.fields)).toContain(field);
+        expect(await snapshot()).toEqual(before);
+      }
+      const before = await snapshot();
+      const broken = await owner.request(method, c.path(ctx), undefined, "{not json");
+      expect(broken.status).toBe(400);
+      expect(broken.body.error.code).toBe("invalid_json");
+      expect(await snapshot()).toEqual(before);
+    });
+  }
+});

@@ -1,0 +1,46 @@
+import knex from "knex";
+import bcrypt from "bcryptjs";
+import { randomUUID } from "node:crypto";
+import { TEST_DB_URL } from "./env";
+import type { Role } from "@/shared/roles";
+import { emptyGraph } from "@/shared/linkage/schema";
+
+/** Direct access to the test database for fixtures and for checking what a request changed. */
+export const testDb = knex({ client: "pg", connection: TEST_DB_URL, pool: { min: 0, max: 5 } });
+
+export const TEST_PASSWORD = "correct horse battery staple";
+let hash: string | null = null;
+
+export async function makeUser(label: string) {
+  hash ??= await bcrypt.hash(TEST_PASSWORD, 4);
+  const email = `${label}-${randomUUID().slice(0, 8)}@tests.linkwright.test`;
+  const [row] = await testDb("users").insert({ email, name: `Test ${label}`, password_hash: hash }).returning(["id", "email", "name"]);
+  return row as { id: string; email: string; name: string };
+}
+
+/** A build with one member per role (and an extra builder to act on), a linkage at revision 1 and an open invitation. */
+export async function makeBuild(members: Partial<Record<Role, { id: string }>> & { extra?: { id: string } }) {
+  const [build] = await testDb("builds").insert({ name: `Build ${randomUUID().slice(0, 6)}`, model: "test model" }).returning("id");
+  for (const role of ["owner", "builder", "reviewer", "viewer"] as const) {
+    const u = members[role];
+    if (u) await testDb("memberships").insert({ build_id: build.id, user_id: u.id, role });
+  }
+  if (members.extra) await testDb("memberships").insert({ build_id: build.id, user_id: members.extra.id, role: "builder" });
+  const [linkage] = await testDb("linkages").insert({ build_id: build.id, name: "Pitch run", system: "pitch", current_revision: 1 }).returning("id");
+  await testDb("linkage_revisions").insert({ linkage_id: linkage.id, revision: 1, graph: JSON.stringify(emptyGraph("Pitch run", "pitch")), author_id: members.owner?.id ?? null });
+  const [inv] = await testDb("invitations")
+    .insert({ build_id: build.id, email: "invitee@tests.linkwright.test", role: "viewer", token_hash: randomUUID().replace(/-/g, ""), expires_at: testDb.raw("now() + interval '1 day'") })
+    .returning("id");
+  return { buildId: build.id as string, linkageId: linkage.id as string, invitationId: inv.id as string };
+}
+
+/** A fingerprint of every application table: equal fingerprints mean no row changed. */
+export async function snapshot() {
+  const tables = (await testDb.raw("select tablename from pg_tables where schemaname = 'public' and tablename not like 'knex_%' and tablename not in ('sign_in_attempts', 'audit_events') order by 1")).rows as { tablename: string }[];
+  const out: Record<string, string> = {};
+  for (const { tablename } of tables) {
+    const r = await testDb.raw(`select count(*)::int as n, coalesce(md5(string_agg(t::text, '|' order by t::text)), '') as h from "${tablename}" t`);
+    out[tablename] = `${r.rows[0].n}:${r.rows[0].h}`;
+  }
+  return out;
+}

@@ -1,0 +1,43 @@
+import { APP_URL } from "./env";
+import { TEST_PASSWORD } from "./db";
+
+export type Client = {
+  cookie: string;
+  request(method: string, path: string, body?: unknown, raw?: string): Promise<{ status: number; body: any }>;
+};
+
+/** Signs in through next-auth's credentials provider, the way the sign-in page does. */
+export async function signIn(email: string, password = TEST_PASSWORD): Promise<Client> {
+  const csrfRes = await fetch(`${APP_URL}/api/auth/csrf`);
+  const csrfCookie = (csrfRes.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).join("; ");
+  const { csrfToken } = await csrfRes.json();
+  const res = await fetch(`${APP_URL}/api/auth/callback/credentials`, {
+    method: "POST",
+    redirect: "manual",
+    headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookie },
+    body: new URLSearchParams({ csrfToken, email, password, json: "true" }),
+  });
+  const session = (res.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).find((c) => c.startsWith("next-auth.session-token="));
+  if (!session) throw new Error(`sign-in failed for ${email}: HTTP ${res.status}`);
+  return client(session);
+}
+
+export function client(cookie = ""): Client {
+  return {
+    cookie,
+    async request(method, path, body, raw) {
+      const res = await fetch(`${APP_URL}${path}`, {
+        method,
+        redirect: "manual",
+        headers: { ...(cookie ? { cookie } : {}), ...(body !== undefined || raw !== undefined ? { "content-type": "application/json" } : {}) },
+        body: raw ?? (body === undefined ? undefined : JSON.stringify(body)),
+      });
+      const text = await res.text();
+      let parsed: unknown = text;
+      try { parsed = JSON.parse(text); } catch {}
+      return { status: res.status, body: parsed };
+    },
+  };
+}
+
+export const anonymous = () => client("");
