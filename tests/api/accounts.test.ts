@@ -1,0 +1,78 @@
+import { randomUUID } from "node:crypto";
+import { afterAll, describe, expect, it } from "vitest";
+import { makeBuild, makeUser, testDb } from "../support/db";
+import { anonymous, signIn } from "../support/http";
+import { APP_URL } from "../support/env";
+
+afterAll(() => testDb.destroy());
+
+async function attempt(email: string, password: string) {
+  try {
+    await signIn(email, password);
+    return "signed in";
+  } catch {
+    return "refused";
+  }
+}
+
+describe("accounts and sign-in", () => {
+  it("sign-up creates an account that can sign in; the same e-mail twice is refused", async () => {
+    const email = `Fresh-${randomUUID().slice(0, 6)}@tests.linkwright.test`;
+    const r = await anonymous().request("POST", "/api/sign-up", { name: "Fresh Builder", email, password: "a long password" });
+    expect(r.status).toBe(201);
+    const stored = await testDb("users").whereRaw("lower(email) = lower(?)", [email]).first();
+    expect(stored.password_hash).not.toContain("a long password");
+    expect(stored.password_hash).toMatch(/^\$2[aby]\$/);
+    expect(await attempt(email.toLowerCase(), "a long password")).toBe("signed in");
+    const again = await anonymous().request("POST", "/api/sign-up", { name: "Someone", email: email.toUpperCase(), password: "another password" });
+    expect(again.status).toBe(409);
+    expect(again.body.error.fields.email).toBeTruthy();
+  });
+
+  it("five failed sign-ins lock that e-mail for a while, even with the right password; others are not affected", async () => {
+    const victim = await makeUser("victim");
+    const bystander = await makeUser("bystander");
+    for (let i = 0; i < 5; i++) expect(await attempt(victim.email, "wrong password")).toBe("refused");
+    expect(await attempt(victim.email, "correct horse battery staple")).toBe("refused");
+    expect(await attempt(bystander.email, "correct horse battery staple")).toBe("signed in");
+    expect(Number((await testDb("sign_in_attempts").where({ email: victim.email }).count("* as n"))[0].n)).toBe(5);
+  });
+
+  it("an invitation link brings a new person into the build with the invited role, once", async () => {
+    const owner = await makeUser("inviter");
+    const ids = await makeBuild({ owner });
+    const ownerClient = await signIn(owner.email);
+    const email = `invitee-${randomUUID().slice(0, 6)}@tests.linkwright.test`;
+    const inv = await ownerClient.request("POST", `/api/builds/${ids.buildId}/members`, { email, role: "reviewer" });
+    expect(inv.status).toBe(201);
+    expect(inv.body.link).toMatch(new RegExp(`^${APP_URL}/invite/[A-Za-z0-9_-]{20,}$`));
+    const token = inv.body.link.split("/").pop();
+    // the token itself is not stored, only its hash
+    expect(await testDb("invitations").where({ token_hash: token }).first()).toBeUndefined();
+
+    await anonymous().request("POST", "/api/sign-up", { name: "Invited Reviewer", email, password: "reviewer password" });
+    const invitee = await signIn(email, "reviewer password");
+    expect((await invitee.request("GET", `/api/builds/${ids.buildId}`)).status).toBe(404);
+    const accepted = await invitee.request("POST", `/api/invitations/${token}`);
+    expect(accepted.status).toBe(200);
+    expect(accepted.body).toEqual({ buildId: ids.buildId, role: "reviewer" });
+    const build = await invitee.request("GET", `/api/builds/${ids.buildId}`);
+    expect(build.status).toBe(200);
+    expect(build.body.role).toBe("reviewer");
+
+    const someoneElse = await signIn((await makeUser("latecomer")).email);
+    const reused = await someoneElse.request("POST", `/api/invitations/${token}`);
+    expect(reused.status).toBe(410);
+    expect((await someoneElse.request("GET", `/api/builds/${ids.buildId}`)).status).toBe(404);
+  });
+
+  it("the last owner cannot be demoted or removed", async () => {
+    const owner = await makeUser("sole-owner");
+    const ids = await makeBuild({ owner });
+    const c = await signIn(owner.email);
+    expect((await c.request("PATCH", `/api/builds/${ids.buildId}/members/${owner.id}`, { role: "builder" })).status).toBe(409);
+    expect((await c.request("DELETE", `/api/builds/${ids.buildId}/members/${owner.id}`)).status).toBe(409);
+    const role = await testDb("memberships").where({ build_id: ids.buildId, user_id: owner.id }).first();
+    expect(role.role).toBe("owner");
+  });
+});
