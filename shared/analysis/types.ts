@@ -31,6 +31,11 @@ export type PushrodResult = {
   tensionAllowable: number; // lbf
   marginCompression: number;
   marginTension: number;
+  /** Added fields (engine v1): the section and slenderness the allowables were computed from. */
+  area: number; // in²
+  slenderness: number; // KL/r, K = 1
+  /** True when no input drives this pushrod (its loads are 0, not computed). */
+  driven: boolean;
 };
 
 export type JointResult = {
@@ -41,6 +46,19 @@ export type JointResult = {
   rodEndMargin: number | null;
   boltShearAllowable: number | null; // lbf
   boltMargin: number | null;
+  /** Added fields (engine v1). What the joint does in the run. */
+  role: JointRole;
+  /** The one special factor applied to the ultimate (14 CFR 23.619: only the highest applies). */
+  specialFactor: number;
+};
+
+export type JointRole = "link" | "pivot" | "hornMount" | "hinge" | "stop" | "other";
+
+export type SurfaceResult = {
+  nodeId: string;
+  /** Hinge moment put in by the control run at the design force, limit, in·lbf. */
+  hingeMomentLimit: number;
+  driven: boolean;
 };
 
 export type Summary = {
@@ -58,6 +76,12 @@ export type Report = {
   summary: Summary;
   /** The settings the numbers were computed with (shown next to every result). */
   settings: AnalysisSettings;
+  /** Added fields (engine v1). */
+  surfaces: SurfaceResult[];
+  /** Simplifying assumptions behind the numbers, in plain words (shown with the results). */
+  assumptions: string[];
+  /** The standing caution that goes with every result. */
+  notice: string;
 };
 
 /** Design pilot forces and factors (domain.md §1), one set per build, with the published defaults. */

@@ -1,0 +1,92 @@
+/**
+ * The indexed view of a graph every check works from: node index by id, joints by node and port.
+ * Built once per analysis in one pass over nodes and one over joints (no quadratic lookups).
+ * Tolerant of graphs that did not pass the schema: a joint whose end names a missing node gets -1.
+ */
+import type { Joint, LinkageGraph, LinkageNode } from "../linkage/schema";
+import type { JointRole } from "./types";
+
+export type PortMap = Record<string, number[]>;
+
+export type Ctx = {
+  graph: LinkageGraph;
+  nodes: LinkageNode[];
+  joints: Joint[];
+  nodeIndex: Map<string, number>;
+  /** Per node: joint indices by port name (undefined when the node has no joints). */
+  ports: (PortMap | undefined)[];
+  /** Node index of each joint's from/to end, -1 when the node is missing. */
+  jFrom: Int32Array;
+  jTo: Int32Array;
+  roles: JointRole[];
+  /** Per node: number of joints touching it. */
+  degree: Int32Array;
+};
+
+const EMPTY: number[] = [];
+
+export function buildContext(graph: LinkageGraph): Ctx {
+  const nodes = Array.isArray(graph.nodes) ? graph.nodes : [];
+  const joints = Array.isArray(graph.joints) ? graph.joints : [];
+  const nodeIndex = new Map<string, number>();
+  for (let i = 0; i < nodes.length; i++) if (!nodeIndex.has(nodes[i].id)) nodeIndex.set(nodes[i].id, i);
+  const ports: (PortMap | undefined)[] = new Array(nodes.length);
+  const jFrom = new Int32Array(joints.length);
+  const jTo = new Int32Array(joints.length);
+  const degree = new Int32Array(nodes.length);
+  const roles: JointRole[] = new Array(joints.length);
+  for (let j = 0; j < joints.length; j++) {
+    const jt = joints[j];
+    const f = nodeIndex.get(jt.from?.node) ?? -1;
+    const t = nodeIndex.get(jt.to?.node) ?? -1;
+    jFrom[j] = f;
+    jTo[j] = t;
+    if (f >= 0) addPort(ports, degree, f, jt.from.port, j);
+    if (t >= 0 && t !== f) addPort(ports, degree, t, jt.to.port, j);
+    roles[j] = f >= 0 && t >= 0 ? roleOf(nodes[f], jt.from.port, nodes[t], jt.to.port) : "other";
+  }
+  return { graph, nodes, joints, nodeIndex, ports, jFrom, jTo, roles, degree };
+}
+
+function addPort(ports: (PortMap | undefined)[], degree: Int32Array, n: number, port: string, j: number) {
+  let m = ports[n];
+  if (!m) ports[n] = m = {};
+  const list = m[port];
+  if (list) list.push(j);
+  else m[port] = [j];
+  degree[n]++;
+}
+
+export function jointsAt(ctx: Ctx, n: number, port: string): number[] {
+  const m = ctx.ports[n];
+  return (m && m[port]) || EMPTY;
+}
+
+/** The far end of joint j seen from node n: [node index, port], or null when it is missing. */
+export function otherEnd(ctx: Ctx, j: number, n: number): [number, string] | null {
+  const jt = ctx.joints[j];
+  if (ctx.jFrom[j] === n) return ctx.jTo[j] >= 0 ? [ctx.jTo[j], jt.to.port] : null;
+  return ctx.jFrom[j] >= 0 ? [ctx.jFrom[j], jt.from.port] : null;
+}
+
+/** The pushrod end (node index and port) on joint j, if one end is a pushrod. */
+export function pushrodEndOf(ctx: Ctx, j: number): [number, string] | null {
+  const f = ctx.jFrom[j];
+  const t = ctx.jTo[j];
+  if (f >= 0 && ctx.nodes[f].kind === "pushrod") return [f, ctx.joints[j].from.port];
+  if (t >= 0 && ctx.nodes[t].kind === "pushrod") return [t, ctx.joints[j].to.port];
+  return null;
+}
+
+function roleOf(a: LinkageNode, pa: string, b: LinkageNode, pb: string): JointRole {
+  if (a.kind === "travelStop" || b.kind === "travelStop") return "stop";
+  if (pa === "pivot" || pb === "pivot") return "pivot";
+  if ((a.kind === "controlSurface" && pa === "hinge") || (b.kind === "controlSurface" && pb === "hinge")) return "hinge";
+  if ((a.kind === "controlHorn" && pa === "surface") || (b.kind === "controlHorn" && pb === "surface")) return "hornMount";
+  if (a.kind === "structureMount" || b.kind === "structureMount") return "other";
+  return "link";
+}
+
+export function nodeLabel(n: LinkageNode): string {
+  return n.label ? `${n.label} (${n.id})` : n.id;
+}

@@ -1,0 +1,86 @@
+/**
+ * The load-path check: analyze(graph, settings) → Report. Pure: no I/O, imports only from shared/.
+ * Runs in the browser (live) and on the server (on save and POST /api/analyze) with the same numbers.
+ * One indexed pass builds the adjacency; each check then runs in a single pass over nodes or joints.
+ */
+import type { LinkageGraph } from "../linkage/schema";
+import { DEFAULT_SETTINGS, settingsSchema, type AnalysisSettings, type Finding, type JointResult, type PushrodResult, type Report, type SurfaceResult } from "./types";
+import { buildContext } from "./context";
+import { propagate } from "./loads";
+import { jointResult, pushrodResult, strengthFindings } from "./allowables";
+import { retentionFindings } from "./retention";
+import { structureFindings } from "./structure";
+import { sortFindings, summarize } from "./report";
+import { finding, linkageSubject } from "./format";
+
+export * from "./types";
+export { solveFourBar, sweepFourBar, fourBarFindings, transmissionAngle, TRANSMISSION_MIN, TRANSMISSION_MAX } from "./kinematics";
+export type { FourBar, FourBarPosition, SweepResult, Branch } from "./kinematics";
+export { columnAllowable, eulerLoad, johnsonLoad, tubeSection, transitionSlenderness, marginOfSafety, specialFactor, boltDiameter, MARGIN_CAP } from "./allowables";
+export { designForce, bellcrankPivotLoad, DUAL_CONTROL_SHARE } from "./loads";
+
+export const ENGINE_VERSION = "1.0.0";
+
+export const NOTICE =
+  "Linkwright's numbers are an aid to the builder's own engineering and the designer's data, not a substitute. " +
+  "Follow the kit or plans designer's instructions, the applicable airworthiness regulations and the judgement of a qualified inspector; defer to local rules and licensed practice.";
+
+export const ASSUMPTIONS: readonly string[] = [
+  "Loads are limit loads from the design pilot force at the grip or pedal (14 CFR 23.397(b)); hinge moments are not used to lower them (14 CFR 23.395 would allow it).",
+  "Crank arms are taken perpendicular to their links (F_out = F_in · L_in / L_out); a horn's effective arm is its length × sin(link angle).",
+  "A bellcrank pivot carries the vector sum of its two arm loads at the arm angle; idler arms, torque tubes, sticks and pedals are taken with their arms opposite, the largest resultant.",
+  "Where a port carries several joints, each is taken to carry the full force; every pivot and hinge joint of a part carries the whole pivot or hinge load.",
+  "Ultimate = limit × ultimate factor; joints also × the highest one special factor (fitting factor, or the bearing factor on plain bushings and clevis pins) (14 CFR 23.619). The bearing factor is applied to the joint's whole ultimate load, bolt included — conservative.",
+  "Pushrods are pinned-pinned columns (K = 1), Euler or Johnson; the design force pushes and pulls, so each pushrod is checked both ways at the same load.",
+  "With dual controls each pilot's force is 75 % and the inputs' loads are added (both pilots pushing the same way); otherwise the largest single input governs.",
+  "The drawing is planar and has no airframe coordinates: rod-end misalignment and the four-bar transmission angle are not measured from it.",
+];
+
+function resolveSettings(settings: Partial<AnalysisSettings> | undefined, out: Finding[]): AnalysisSettings {
+  if (!settings) return DEFAULT_SETTINGS;
+  const r = settingsSchema.safeParse(settings);
+  if (r.success) return r.data;
+  out.push(finding("settings-invalid", "caution", linkageSubject("settings"),
+    `The build's analysis settings are not valid (${r.error.issues.map((i) => `${i.path.join(".") || "settings"}: ${i.message}`).join("; ")}); the published defaults are used instead.`,
+    { kind: "commonPractice", text: "engine: invalid settings fall back to the defaults" }));
+  return DEFAULT_SETTINGS;
+}
+
+export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings>): Report {
+  const findings: Finding[] = [];
+  const s = resolveSettings(settings, findings);
+  const ctx = buildContext(graph);
+  const loads = propagate(ctx, s);
+
+  const pushrods: PushrodResult[] = [];
+  const surfaces: SurfaceResult[] = [];
+  const pushrodNodes: number[] = [];
+  for (let n = 0; n < ctx.nodes.length; n++) {
+    const node = ctx.nodes[n];
+    if (node.kind === "pushrod") {
+      pushrods.push(pushrodResult(node, loads.pushrodAxial[n], loads.driven[n] === 1, s));
+      pushrodNodes.push(n);
+    } else if (node.kind === "controlSurface") {
+      surfaces.push({ nodeId: node.id, hingeMomentLimit: loads.surfaceMoment[n], driven: loads.driven[n] === 1 });
+    }
+  }
+  const joints: JointResult[] = new Array(ctx.joints.length);
+  for (let j = 0; j < ctx.joints.length; j++) joints[j] = jointResult(ctx, j, loads, s);
+
+  structureFindings(ctx, loads, findings);
+  strengthFindings(ctx, pushrodNodes, pushrods, joints, s, findings);
+  retentionFindings(ctx, findings);
+
+  const sorted = sortFindings(findings);
+  return {
+    engineVersion: ENGINE_VERSION,
+    findings: sorted,
+    pushrods,
+    joints,
+    summary: summarize(sorted, pushrods, joints),
+    settings: s,
+    surfaces,
+    assumptions: [...ASSUMPTIONS],
+    notice: NOTICE,
+  };
+}

@@ -1,0 +1,217 @@
+/**
+ * Load propagation (domain.md §1–§2): from every input (stick, pedal) the design pilot force is carried
+ * through the arm ratios to every pushrod (axial) and every joint (radial), limit loads in lbf.
+ *
+ * Model, and the assumptions a careful engineer would state (they are also listed in the report):
+ * - Arms are taken perpendicular to their links: F_out = F_in · L_in / L_out [from memory; statics].
+ *   A control horn's effective arm is hornArm · sin(linkAngle).
+ * - A force arriving at a crank's "out" port leaves through "in" with the ratio reversed.
+ * - Where a port carries more than one joint (a shared bolt, a branch), every joint on it is taken to
+ *   carry the full force — conservative, since the split depends on the stiffness of each branch.
+ * - A pivot (crank to structure) carries the vector sum of the two arm loads. For a bellcrank with its
+ *   arms at armAngle α and the link forces perpendicular to the arms, |R|² = Fi² + Fo² − 2·Fi·Fo·cos α.
+ *   Idler arms, torque tubes, sticks and pedals have no arm angle in the format: the arms are taken as
+ *   opposite (R = Fi + Fo), the largest the resultant can be. Every pivot joint of a part carries the whole R.
+ * - A surface's hinges and the horn's attachment are each taken to carry the full link force at the horn.
+ * - Another input reached along the run is held by its pilot and reacts the load; the force also goes on
+ *   through the other joints on the same port.
+ * - Each input is propagated alone. Without dual controls the largest single-input load governs each part;
+ *   with dual controls each pilot's force is 75 % of the design force and the contributions of all inputs
+ *   are added (both pilots pushing the same way), which is conservative for the interconnect.
+ * Each joint is traversed at most once per input, so loops end (and are reported by structure.ts).
+ */
+import type { LinkageGraph, LinkageNode } from "../linkage/schema";
+import type { AnalysisSettings } from "./types";
+import { type Ctx, jointsAt, otherEnd } from "./context";
+
+export type InputLoad = { node: number; gripForce: number; linkForce: number; reachesSurface: boolean };
+
+export type Loads = {
+  /** Limit axial load per node index (pushrods only; 0 elsewhere), lbf. */
+  pushrodAxial: Float64Array;
+  /** Limit radial load per joint index, lbf. */
+  jointRadial: Float64Array;
+  /** Limit hinge moment per node index (surfaces only), in·lbf. */
+  surfaceMoment: Float64Array;
+  /** 1 where some input's force reaches the node. */
+  driven: Uint8Array;
+  inputs: InputLoad[];
+};
+
+export const DUAL_CONTROL_SHARE = 0.75; // Part 23 appendix A
+
+/** The design pilot force at an input's grip or pedal, limit, lbf. */
+export function designForce(node: LinkageNode, graph: LinkageGraph, settings: AnalysisSettings): number {
+  let f: number;
+  if (node.kind === "stick") {
+    const p = node.props;
+    if (p.designForce) f = p.designForce;
+    else if (graph.system === "flap" || graph.system === "trim") f = settings.pilotForce.other;
+    else if (graph.system === "roll" || (graph.system !== "pitch" && p.axis === "roll")) f = settings.pilotForce.rollStick;
+    else f = settings.pilotForce.pitchStick;
+  } else if (node.kind === "pedal") {
+    const p = node.props;
+    if (p.designForce) f = p.designForce;
+    else if (graph.system === "flap" || graph.system === "trim") f = settings.pilotForce.other;
+    else f = settings.pilotForce.yawPedal;
+  } else return 0;
+  return settings.dualControls ? f * DUAL_CONTROL_SHARE : f;
+}
+
+export function isInput(n: LinkageNode): boolean {
+  return n.kind === "stick" || n.kind === "pedal";
+}
+
+function ratio(num: number, den: number): number {
+  const r = num / den;
+  return Number.isFinite(r) && r >= 0 ? r : 0;
+}
+
+/** Resultant on a bellcrank pivot of two arm loads, arms at alpha degrees. */
+export function bellcrankPivotLoad(fi: number, fo: number, alphaDeg: number): number {
+  const c = Math.cos((alphaDeg * Math.PI) / 180);
+  return Math.sqrt(Math.max(0, fi * fi + fo * fo - 2 * fi * fo * c));
+}
+
+function inputArms(n: LinkageNode): [number, number] {
+  if (n.kind === "stick") return [n.props.gripArm, n.props.attachArm];
+  if (n.kind === "pedal") return [n.props.pedalArm, n.props.attachArm];
+  return [0, 0];
+}
+
+export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
+  const { nodes, joints } = ctx;
+  const N = nodes.length;
+  const J = joints.length;
+  const pushrodAxial = new Float64Array(N);
+  const surfaceMoment = new Float64Array(N);
+  const jointRadial = new Float64Array(J);
+  const driven = new Uint8Array(N);
+  const inputs: InputLoad[] = [];
+  const sum = settings.dualControls;
+
+  // Per-walk values, combined into the totals after each input (max or sum), through touched lists.
+  const wJ = new Float64Array(J);
+  const wA = new Float64Array(N);
+  const wM = new Float64Array(N);
+  const touchedJ: number[] = [];
+  const touchedN: number[] = [];
+  const visited = new Int32Array(J);
+  // Explicit stack (no recursion: a 10,000-part chain must not overflow): joint, node it leaves, force, moment.
+  let sJ = new Int32Array(64), sN = new Int32Array(64), sF = new Float64Array(64), sM = new Float64Array(64);
+  let sp = 0;
+  const push = (j: number, from: number, f: number, m: number) => {
+    if (sp === sJ.length) {
+      const grow = <T extends Int32Array | Float64Array>(a: T): T => {
+        const b = new (a.constructor as new (n: number) => T)(a.length * 2);
+        b.set(a);
+        return b;
+      };
+      sJ = grow(sJ); sN = grow(sN); sF = grow(sF); sM = grow(sM);
+    }
+    sJ[sp] = j; sN[sp] = from; sF[sp] = f; sM[sp] = m; sp++;
+  };
+  const recJ = (j: number, f: number) => {
+    if (wJ[j] === 0 && f > 0) touchedJ.push(j);
+    if (f > wJ[j]) wJ[j] = f;
+  };
+  const recPivot = (n: number, r: number) => {
+    for (const k of jointsAt(ctx, n, "pivot")) recJ(k, r);
+  };
+
+  let stamp = 0;
+  for (let i = 0; i < N; i++) {
+    const inp = nodes[i];
+    if (!isInput(inp)) continue;
+    stamp++;
+    const fg = designForce(inp, ctx.graph, settings);
+    const [grip, attach] = inputArms(inp);
+    const fp = fg * ratio(grip, attach);
+    let reaches = false;
+    driven[i] = 1;
+    recPivot(i, fg + fp);
+    for (const k of jointsAt(ctx, i, "attach")) push(k, i, fp, 0);
+
+    while (sp > 0) {
+      sp--;
+      const j = sJ[sp], from = sN[sp], f = sF[sp], moment = sM[sp];
+      if (visited[j] === stamp) continue;
+      visited[j] = stamp;
+      recJ(j, f);
+      const far = otherEnd(ctx, j, from);
+      if (!far) continue;
+      const [n, port] = far;
+      const node = nodes[n];
+      if (!driven[n]) driven[n] = 1;
+      switch (node.kind) {
+        case "pushrod": {
+          if (wA[n] === 0 && f > 0) touchedN.push(n);
+          if (f > wA[n]) wA[n] = f;
+          forwardSamePort(j, n, port, f);
+          const exit = port === "a" ? "b" : port === "b" ? "a" : null;
+          if (exit) for (const k of jointsAt(ctx, n, exit)) push(k, n, f, 0);
+          break;
+        }
+        case "bellcrank":
+        case "idlerArm":
+        case "torqueTube": {
+          if (port !== "in" && port !== "out") break; // a link on the pivot port: reacted there
+          forwardSamePort(j, n, port, f);
+          const p = node.props;
+          const fo = port === "in" ? f * ratio(p.inputArm, p.outputArm) : f * ratio(p.outputArm, p.inputArm);
+          const r = node.kind === "bellcrank" ? bellcrankPivotLoad(f, fo, node.props.armAngle ?? 90) : f + fo;
+          recPivot(n, r);
+          for (const k of jointsAt(ctx, n, port === "in" ? "out" : "in")) push(k, n, fo, 0);
+          break;
+        }
+        case "stick":
+        case "pedal": {
+          if (port !== "attach") break;
+          // Held by its pilot: the grip reacts F·attach/grip; the pivot carries both.
+          const [g, a] = inputArms(node);
+          recPivot(n, f + f * ratio(a, g));
+          forwardSamePort(j, n, port, f);
+          break;
+        }
+        case "controlHorn": {
+          if (port !== "attach") break;
+          forwardSamePort(j, n, port, f);
+          const p = node.props;
+          const m = f * p.hornArm * Math.abs(Math.sin(((p.linkAngle ?? 90) * Math.PI) / 180));
+          for (const k of jointsAt(ctx, n, "surface")) push(k, n, f, m);
+          break;
+        }
+        case "controlSurface": {
+          reaches = true;
+          if (wM[n] === 0 && moment > 0) touchedN.push(n);
+          if (moment > wM[n]) wM[n] = moment;
+          for (const k of jointsAt(ctx, n, "hinge")) recJ(k, f);
+          break;
+        }
+        default:
+          break; // structure mount, travel stop: the load is reacted here
+      }
+    }
+    inputs.push({ node: i, gripForce: fg, linkForce: fp, reachesSurface: reaches });
+
+    // Combine this input's loads into the totals and clear the walk arrays.
+    for (const j of touchedJ) {
+      jointRadial[j] = sum ? jointRadial[j] + wJ[j] : Math.max(jointRadial[j], wJ[j]);
+      wJ[j] = 0;
+    }
+    for (const n of touchedN) {
+      if (wA[n] > 0) pushrodAxial[n] = sum ? pushrodAxial[n] + wA[n] : Math.max(pushrodAxial[n], wA[n]);
+      if (wM[n] > 0) surfaceMoment[n] = sum ? surfaceMoment[n] + wM[n] : Math.max(surfaceMoment[n], wM[n]);
+      wA[n] = 0;
+      wM[n] = 0;
+    }
+    touchedJ.length = 0;
+    touchedN.length = 0;
+  }
+  return { pushrodAxial, jointRadial, surfaceMoment, driven, inputs };
+
+  function forwardSamePort(via: number, n: number, port: string, f: number) {
+    const list = jointsAt(ctx, n, port);
+    if (list.length > 1) for (const k of list) if (k !== via) push(k, n, f, 0);
+  }
+}

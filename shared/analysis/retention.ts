@@ -1,0 +1,236 @@
+/**
+ * Retention and installation rules, domain.md §4 rules 1–10, plus nut locking (14 CFR 23.607, which
+ * domain.md does not list but a careful engineer checks). Each rule reads only the joint card and, for
+ * thread engagement and handedness, the pushrod on the joint. Unrecorded facts that a rule needs give a
+ * caution or advisory asking for them; recorded facts that break a rule give the rule's finding.
+ */
+import { AN_BOLTS_BY_SIZE, MIN_BOLT_DIAMETER, SRC, THREADS_BY_NAME, TUBE_MATERIALS_BY_NAME, torqueRange } from "../hardware";
+import type { Joint } from "../linkage/schema";
+import type { Finding } from "./types";
+import { type Ctx, jointsAt, nodeLabel, pushrodEndOf } from "./context";
+import { boltDiameter } from "./allowables";
+import { finding, fmt, jointSubject, nodeSubject, num } from "./format";
+
+/** Tolerance on grip vs stack, in: a measurement tolerance of 1/64 in. [engineering judgement] */
+export const GRIP_TOLERANCE = 1 / 64;
+
+/** Engagement multiple of the thread diameter: 1×D in steel, 2×D in aluminium (rule 2). */
+export function engagementMultiple(family: "steel" | "aluminium"): number {
+  return family === "steel" ? 1 : 2;
+}
+
+export function boltSubjectToRotation(hw: Joint["hardware"]): boolean {
+  return hw.fit === "freeToRotate" || hw.bearing === "plainBushing" || hw.bearing === "clevisPin";
+}
+
+export function retentionFindings(ctx: Ctx, out: Finding[]) {
+  const { joints, nodes } = ctx;
+  for (let j = 0; j < joints.length; j++) {
+    const jt = joints[j];
+    const hw = jt.hardware;
+    if (!hw) continue;
+    const s = jointSubject(jt.id);
+    const at = `joint ${jt.id}`;
+    const re = hw.rodEnd;
+
+    if (re) {
+      // Rule 1: jam nut fitted and tightened.
+      if (!hw.jamNut || !hw.jamNut.fitted) {
+        out.push(finding("jam-nut-missing", "hazard", s,
+          `The threaded rod end at ${at} has no jam nut. Without a jam nut tightened against the fitting, the reversing push-pull load works on the threads alone and the rod end can turn and unscrew. Fit a jam nut and tighten it.`,
+          SRC.jamNut));
+      } else if (!hw.jamNut.tightened) {
+        out.push(finding("jam-nut-loose", "hazard", s,
+          `The jam nut at ${at} is fitted but not recorded as tightened. A loose jam nut does not lock the rod end; tighten it against the fitting (and torque-stripe it).`,
+          SRC.jamNut));
+      }
+
+      // Rule 2: thread engagement.
+      const th = THREADS_BY_NAME[re.thread];
+      if (th) {
+        let family: "steel" | "aluminium" | null = null;
+        let why = "";
+        if (re.shank === "female") { family = "steel"; why = "the rod end's own (steel) internal thread"; }
+        else {
+          const pe = pushrodEndOf(ctx, j);
+          const pn = pe ? nodes[pe[0]] : null;
+          if (pn && pn.kind === "pushrod") {
+            family = TUBE_MATERIALS_BY_NAME[pn.props.material]?.family ?? null;
+            why = `the ${pn.props.material} pushrod's internal thread`;
+          }
+          if (!family) { family = "aluminium"; why = "an internal thread of unknown material (taken as aluminium, the longer rule)"; }
+        }
+        const k = engagementMultiple(family);
+        const required = k * th.majorDiameter;
+        const eng = hw.engagement;
+        const len = eng?.engagedLength;
+        const verified = re.hasWitnessHole !== false && eng?.witnessHoleVerified === true;
+        if (!verified) {
+          if (len !== undefined && len < required) {
+            out.push(finding("thread-engagement-short", "hazard", s,
+              `The rod end at ${at} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${why}). Screw it in further and re-adjust the other end.`,
+              SRC.engagement, [num("engaged length", len, "in"), num("required", required, "in")]));
+          } else if (len === undefined) {
+            out.push(finding("thread-engagement-unverified", "caution", s,
+              re.hasWitnessHole !== false
+                ? `The thread engagement at ${at} is not verified: check that a wire will not pass through the witness hole, or record the engaged length (at least ${fmt(required, 3)} in, ${k}×D).`
+                : `The rod end at ${at} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${why}).`,
+              SRC.engagement, [num("required", required, "in")]));
+          }
+        }
+      }
+
+      // Rule 3a: the bolt clamps the ball; it must not turn in it.
+      if (hw.fit === "freeToRotate") {
+        out.push(finding("bolt-turns-in-ball", "hazard", s,
+          `The bolt at ${at} is set loose so it turns in the rod-end ball. Clamp the ball's inner race tight between the fitting and washers so the bearing does the moving; a bolt turning in the ball wears the bore and can loosen the nut.`,
+          SRC.boltClamped));
+      }
+
+      // Rule 4: retaining washer on a single-shear rod end.
+      if (hw.shear === "single") {
+        const bore = re.housingBore ?? re.ballDiameter;
+        const w = hw.washerUnderHead;
+        if (!w) {
+          out.push(finding("retaining-washer-missing", "hazard", s,
+            `The rod end at ${at} is in single shear with no retaining washer under the bolt head. If the ball comes out of its housing nothing holds the eye on the bolt: fit a washer whose outside diameter is larger than the housing bore${bore ? ` (over ${fmt(bore, 3)} in)` : ""}.`,
+            SRC.retainingWasher, bore ? [num("housing bore", bore, "in")] : []));
+        } else if (bore === undefined) {
+          out.push(finding("retaining-washer-unverifiable", "caution", s,
+            `The rod end at ${at} is in single shear, but neither its housing bore nor its ball diameter is recorded, so the ${fmt(w.outsideDiameter, 3)} in retaining washer cannot be checked. Record the housing bore.`,
+            SRC.retainingWasher, [num("washer outside diameter", w.outsideDiameter, "in")]));
+        } else if (!(w.outsideDiameter > bore)) {
+          out.push(finding("retaining-washer-small", "hazard", s,
+            `The washer under the bolt head at ${at} is ${fmt(w.outsideDiameter, 3)} in across, no larger than the ${fmt(bore, 3)} in ${re.housingBore !== undefined ? "housing bore" : "ball (no housing bore recorded)"} of the rod end. If the ball falls out the eye slides off over it. Fit a larger-diameter washer.`,
+            SRC.retainingWasher, [num("washer outside diameter", w.outsideDiameter, "in"), num("housing bore", bore, "in")]));
+        }
+      }
+
+      // Rule 10: misalignment rating.
+      if (re.ratedMisalignment === undefined) {
+        out.push(finding("misalignment-rating-unknown", "caution", s,
+          `The rod end at ${at} has no rated misalignment on its card. Record the maker's rating and check at full travel, both ways, that the ball does not reach it (typical ratings ±6° to ±14°). The drawing is planar, so the check cannot measure this for you.`,
+          SRC.misalignment));
+      }
+    }
+
+    // Rule 3b: self-locking nut on a bolt subject to rotation.
+    const nut = hw.nut;
+    const rotating = boltSubjectToRotation(hw);
+    if (nut && (nut.type === "selfLockingMetal" || nut.type === "selfLockingInsert") && rotating) {
+      const why = hw.fit === "freeToRotate" ? "the bolt is set free to rotate" : `the part turns on the bolt (${hw.bearing === "clevisPin" ? "clevis pin" : "plain bushing"})`;
+      out.push(finding("self-locking-nut-on-turning-bolt", "hazard", s,
+        `A self-locking nut is used at ${at}, where ${why}. Rotation can back a self-locking nut off; use a castellated nut with a new cotter pin, or clamp the bolt so it cannot turn.`,
+        SRC.selfLockingRotation));
+    }
+
+    // Rule 7: castellated nut with a new cotter pin.
+    if (nut?.type === "castellatedCotter") {
+      if (nut.cotterPinNew === false) {
+        out.push(finding("cotter-pin-reused", "hazard", s,
+          `The cotter pin at ${at} is not new. A cotter pin is bent once and never reused; fit a new one.`, SRC.cotter));
+      } else if (nut.cotterPinNew === undefined) {
+        out.push(finding("cotter-pin-unrecorded", "caution", s,
+          `The castellated nut at ${at} does not record a new cotter pin. Fit a new cotter pin (never reuse one) and tick it on the joint card.`, SRC.cotter));
+      }
+    }
+
+    const bolt = hw.bolt;
+    if (!bolt) continue;
+    const d = boltDiameter(bolt);
+
+    // Nut present and locked (14 CFR 23.607, beyond the ten rules).
+    if (!nut) {
+      out.push(finding("nut-missing", "caution", s,
+        `The bolt at ${at} has no nut recorded. Record the nut and how it is locked.`, SRC.nutLocking));
+    } else if (nut.type === "none") {
+      out.push(finding("nut-missing", "hazard", s,
+        `The bolt at ${at} has no nut: nothing holds it in the joint. Fit a locked nut.`, SRC.nutLocking));
+    } else if (nut.type === "plain") {
+      out.push(finding("nut-not-locked", "hazard", s,
+        `The plain nut at ${at} has no locking device. In a control run every nut must be locked: use a self-locking nut where the bolt is clamped, or a castellated nut with a cotter pin, or safety wire.`,
+        SRC.nutLocking));
+    }
+
+    // Rule 8: no bolt under 10-32.
+    if (d !== null && d < MIN_BOLT_DIAMETER - 1e-9) {
+      out.push(finding("bolt-too-small", "hazard", s,
+        `The bolt at ${at} is ${fmt(d, 3)} in in diameter; nothing smaller than a 10-32 (AN3, 0.190 in) belongs in a control run. Use an AN3 or larger.`,
+        SRC.minBolt, [num("bolt diameter", d, "in"), num("minimum", MIN_BOLT_DIAMETER, "in")]));
+    }
+
+    const hasNut = nut && nut.type !== "none";
+    // Rule 5: thread protrusion, grip vs stack.
+    if (hasNut) {
+      if (bolt.threadsProtruding === undefined) {
+        out.push(finding("bolt-protrusion-unrecorded", "advisory", s,
+          `Record how many threads of the bolt at ${at} show past the nut: at least one full thread must.`, SRC.protrusion));
+      } else if (bolt.threadsProtruding < 1) {
+        out.push(finding("bolt-thread-short", "hazard", s,
+          `The bolt at ${at} does not show a full thread past the nut (${fmt(bolt.threadsProtruding, 1)}), so the nut's locking does not fully engage. Use the next longer bolt.`,
+          SRC.protrusion, [num("threads protruding", bolt.threadsProtruding, "threads"), num("minimum", 1, "threads")]));
+      }
+    }
+    if (bolt.grip !== undefined && bolt.stack !== undefined) {
+      const underNut = hw.washerUnderNut?.thickness ?? 0;
+      if (bolt.grip > bolt.stack + GRIP_TOLERANCE) {
+        out.push(finding("bolt-grip-long", "caution", s,
+          `The grip of the bolt at ${at} (${fmt(bolt.grip, 3)} in) is longer than the stack it clamps (${fmt(bolt.stack, 3)} in): the nut can run out of thread and stop on the shank before it clamps. Use a shorter grip or add a washer under the nut.`,
+          SRC.grip, [num("grip", bolt.grip, "in"), num("stack", bolt.stack, "in")]));
+      } else if (bolt.grip < bolt.stack - underNut - GRIP_TOLERANCE) {
+        out.push(finding("bolt-threads-in-bearing", "caution", s,
+          `The grip of the bolt at ${at} (${fmt(bolt.grip, 3)} in) is shorter than the stack it clamps (${fmt(bolt.stack, 3)} in${underNut ? `, less ${fmt(underNut, 3)} in of washer under the nut` : ""}), so threads bear in the joint. Use the next longer grip.`,
+          SRC.grip, [num("grip", bolt.grip, "in"), num("stack", bolt.stack, "in")]));
+      }
+    }
+
+    // Rule 6: torque within AC 43.13-1B table 7-1.
+    if (hasNut && bolt.size !== "custom") {
+      const row = AN_BOLTS_BY_SIZE[bolt.size];
+      if (nut.type === "castellatedCotter" && rotating) {
+        // A castellated nut on a bolt that turns is snugged to line up the cotter, not torqued to the table.
+      } else if (row) {
+        const range = torqueRange(row.thread, nut.pattern ?? "tension");
+        if (range) {
+          const tq = hw.torque;
+          const nums = (v: number) => [num("applied torque", v, "in·lbf"), num("table minimum", range.min, "in·lbf"), num("table maximum", range.max, "in·lbf")];
+          const selfLocking = nut.type === "selfLockingMetal" || nut.type === "selfLockingInsert";
+          if (tq === undefined) {
+            out.push(finding("torque-unrecorded", "advisory", s,
+              `Record the torque applied at ${at}: ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${nut.pattern ?? "tension"} nut, plus the nut's drag torque.`, range.source));
+          } else if (tq < range.min) {
+            out.push(finding("torque-low", "caution", s,
+              `The nut at ${at} is torqued to ${fmt(tq, 0)} in·lbf, below the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${nut.pattern ?? "tension"} nut (plus drag torque). Re-torque it.`, range.source, nums(tq)));
+          } else if (tq > range.max) {
+            if (selfLocking)
+              out.push(finding("torque-check-drag", "advisory", s,
+                `The nut at ${at} is torqued to ${fmt(tq, 0)} in·lbf, above the table's ${fmt(range.max, 0)} in·lbf for a ${row.thread} ${nut.pattern ?? "tension"} nut. That is right only if the excess is the self-locking nut's drag torque: measure the drag and confirm.`, range.source, nums(tq)));
+            else
+              out.push(finding("torque-high", "caution", s,
+                `The nut at ${at} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${nut.pattern ?? "tension"} nut. Over-torque stretches the bolt; replace the bolt and nut and torque within the range.`, range.source, nums(tq)));
+          }
+        }
+      }
+    }
+  }
+
+  // Rule 9: one RH and one LH end per pushrod (advisory).
+  for (let n = 0; n < nodes.length; n++) {
+    const node = nodes[n];
+    if (node.kind !== "pushrod") continue;
+    const ha = handAt(ctx, n, "a"), hb = handAt(ctx, n, "b");
+    if (ha && hb && ha === hb) {
+      out.push(finding("pushrod-ends-same-hand", "advisory", nodeSubject(node.id),
+        `Both rod ends of pushrod ${nodeLabel(node)} are ${ha}-threaded, so its length can only be adjusted by disconnecting an end. With one RH and one LH end, turning the tube changes the length (2 × pitch per turn) in place.`,
+        SRC.handedEnds));
+    }
+  }
+}
+
+function handAt(ctx: Ctx, n: number, port: string): "RH" | "LH" | null {
+  for (const j of jointsAt(ctx, n, port)) {
+    const re = ctx.joints[j].hardware?.rodEnd;
+    if (re) return re.hand ?? "RH";
+  }
+  return null;
+}

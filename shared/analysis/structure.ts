@@ -1,0 +1,115 @@
+/**
+ * Structure of the graph (domain.md §2): a control run should be a tree of pushrods between mounted
+ * cranks, driven from an input and ending at a surface. Anything else is a finding, never an exception.
+ * Structure mounts are ground: they are left out of the loop check, since every crank pivoting on the
+ * airframe closes a "loop" through it (that is how a linkage works, not a fault).
+ */
+import { PORTS } from "../linkage/schema";
+import { SRC } from "../hardware";
+import type { Finding } from "./types";
+import { type Ctx, jointsAt, nodeLabel, otherEnd } from "./context";
+import type { Loads } from "./loads";
+import { finding, jointSubject, linkageSubject, nodeSubject } from "./format";
+
+const PIVOTED = new Set(["stick", "pedal", "bellcrank", "idlerArm", "torqueTube"]);
+const LOAD_PATH = new Set(["pushrod", "bellcrank", "idlerArm", "torqueTube", "controlHorn", "controlSurface"]);
+
+function hasHardware(hw: Ctx["joints"][number]["hardware"] | undefined): boolean {
+  return !!hw && !!(hw.rodEnd || hw.bolt || hw.nut || hw.bearing || hw.jamNut || hw.washerUnderHead || hw.washerUnderNut);
+}
+
+export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
+  const { nodes, joints } = ctx;
+  const linkageId = ctx.graph.name || "linkage";
+
+  // Joints: ends that do not resolve (only in graphs that skipped the schema), ports, hardware.
+  for (let j = 0; j < joints.length; j++) {
+    const jt = joints[j];
+    const s = jointSubject(jt.id);
+    const f = ctx.jFrom[j], t = ctx.jTo[j];
+    if (f < 0 || t < 0) {
+      out.push(finding("joint-end-missing", "caution", s, `Joint ${jt.id} refers to a part that is not in the drawing; it is left out of the check.`, SRC.structure));
+      continue;
+    }
+    if (f === t) {
+      out.push(finding("joint-to-itself", "caution", s, `Joint ${jt.id} joins a part to itself; it is left out of the check.`, SRC.structure));
+      continue;
+    }
+    for (const [n, port] of [[f, jt.from.port], [t, jt.to.port]] as const) {
+      const ports = PORTS[nodes[n].kind];
+      if (ports && !ports.includes(port))
+        out.push(finding("joint-port-unknown", "caution", s, `Joint ${jt.id} attaches to "${port}" of ${nodeLabel(nodes[n])}, which a ${nodes[n].kind} does not have; that end carries no load in the check.`, SRC.structure));
+    }
+    if (!hasHardware(jt.hardware)) {
+      out.push(finding("joint-hardware-missing", "caution", s,
+        `Joint ${jt.id} has no hardware recorded (no bolt, nut, rod end or bearing), so nothing about it can be checked. Fill in its joint card.`, SRC.structure));
+    }
+  }
+
+  let inputCount = 0;
+  for (let n = 0; n < nodes.length; n++) {
+    const node = nodes[n];
+    const subj = nodeSubject(node.id);
+    if (node.kind === "stick" || node.kind === "pedal") inputCount++;
+    if (ctx.degree[n] === 0) {
+      out.push(finding("part-unconnected", "caution", subj, `${nodeLabel(node)} is not joined to anything. Connect it or remove it.`, SRC.structure));
+      continue;
+    }
+    if (node.kind === "pushrod") {
+      for (const end of ["a", "b"]) {
+        if (jointsAt(ctx, n, end).length === 0)
+          out.push(finding("pushrod-end-open", "caution", subj,
+            `Pushrod ${nodeLabel(node)} has nothing on its ${end} end. A pushrod carries load only between two joints; connect both ends.`, SRC.structure));
+      }
+    }
+    if (PIVOTED.has(node.kind)) {
+      let mounted = false;
+      for (const k of jointsAt(ctx, n, "pivot")) {
+        const far = otherEnd(ctx, k, n);
+        if (far && nodes[far[0]].kind === "structureMount") { mounted = true; break; }
+      }
+      if (!mounted)
+        out.push(finding("pivot-unmounted", "caution", subj,
+          `${nodeLabel(node)} has no pivot joint to a structure mount, so nothing reacts its pivot load. Join its pivot to the structure it turns on.`, SRC.structure));
+    }
+  }
+
+  if (nodes.length > 0 && inputCount === 0)
+    out.push(finding("no-input", "caution", linkageSubject(linkageId),
+      `The drawing has no stick or pedal, so no load can be put into it and no loads are computed. Add the input the pilot moves.`, SRC.structure));
+
+  for (const inp of loads.inputs) {
+    if (!inp.reachesSurface) {
+      const node = nodes[inp.node];
+      out.push(finding("input-reaches-no-surface", "caution", nodeSubject(node.id),
+        `Following the run from ${nodeLabel(node)} never reaches a control surface, so the run is incomplete or broken and the loads past the break are not known. Connect the run through to its surface.`, SRC.structure));
+    }
+  }
+
+  if (inputCount > 0) {
+    for (let n = 0; n < nodes.length; n++) {
+      const node = nodes[n];
+      if (!loads.driven[n] && ctx.degree[n] > 0 && LOAD_PATH.has(node.kind))
+        out.push(finding("part-not-driven", "advisory", nodeSubject(node.id),
+          `No input drives ${nodeLabel(node)}, so its loads are shown as zero, not computed. Connect it to the run or check the joints leading to it.`, SRC.structure));
+    }
+  }
+
+  // Loops: union-find over the parts that are not ground. A joint closing a cycle is reported.
+  const parent = new Int32Array(nodes.length);
+  for (let i = 0; i < parent.length; i++) parent[i] = i;
+  const find = (x: number) => {
+    while (parent[x] !== x) { parent[x] = parent[parent[x]]; x = parent[x]; }
+    return x;
+  };
+  for (let j = 0; j < joints.length; j++) {
+    const f = ctx.jFrom[j], t = ctx.jTo[j];
+    if (f < 0 || t < 0 || f === t) continue;
+    if (nodes[f].kind === "structureMount" || nodes[t].kind === "structureMount") continue;
+    const a = find(f), b = find(t);
+    if (a === b)
+      out.push(finding("linkage-loop", "caution", jointSubject(joints[j].id),
+        `Joint ${joints[j].id} closes a loop in the run. Loads in a closed loop share out by stiffness, which this check does not model: each path is taken to carry the full force, and the result should be checked by hand.`, SRC.structure));
+    else parent[a] = b;
+  }
+}
