@@ -1,8 +1,12 @@
 import Link from "next/link";
 
-/** Tabs of a build. Sections from later issues add themselves here. */
+/** Tabs of a build. */
 export const BUILD_SECTIONS: { href: string; label: string }[] = [
   { href: "", label: "Overview" },
+  { href: "/log", label: "Build log" },
+  { href: "/hardware", label: "Hardware list" },
+  { href: "/parts", label: "Parts library" },
+  { href: "/checklist", label: "Checklist" },
   { href: "/members", label: "Members" },
 ];
 

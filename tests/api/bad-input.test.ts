@@ -3,8 +3,9 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { makeBuild, makeUser, snapshot, testDb } from "../support/db";
 import { signIn, type Client } from "../support/http";
 import { apiRoutes } from "../support/routes";
+import { BAD_INPUT } from "./matrix";
+import type { Ctx } from "./matrix/types";
 
-type Ctx = { buildId: string; linkageId: string; extraId: string };
 const B = (c: Ctx) => `/api/builds/${c.buildId}`;
 const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
 const nodeWithoutArms = { id: "s1", kind: "stick", label: "", position: { x: 0, y: 0 }, props: {} };
@@ -12,6 +13,7 @@ const nodeWithoutArms = { id: "s1", kind: "stick", label: "", position: { x: 0, 
 // route → path and a list of malformed bodies, each with a field the error must name
 // prettier-ignore
 const CASES: Record<string, { path: (c: Ctx) => string; bodies: [unknown, string][] }> = {
+  ...BAD_INPUT,
   "POST /api/sign-up": { path: () => "/api/sign-up", bodies: [[{ name: "", email: "not-an-email", password: "short" }, "email"], [{ name: 7 }, "name"]] },
   "PATCH /api/me": { path: () => "/api/me", bodies: [[{ unitSystem: "imperial" }, "unitSystem"]] },
   "POST /api/analyze": { path: () => "/api/analyze", bodies: [[{ graph: { formatVersion: 2, nodes: [], joints: [] } }, "graph.formatVersion"], [{ graph: { formatVersion: 1, nodes: [nodeWithoutArms], joints: [] } }, "graph.nodes.0.props.gripArm"]] },
@@ -33,7 +35,6 @@ const CASES: Record<string, { path: (c: Ctx) => string; bodies: [unknown, string
 };
 /** Write routes that take no body (or only a path parameter) are exempt here. */
 const NO_BODY = new Set(["POST /api/auth/[...nextauth]", "POST /api/invitations/[token]"]);
-export const EXTRA_CASES: typeof CASES = {};
 
 let owner: Client;
 let ctx: Ctx;
@@ -41,14 +42,14 @@ beforeAll(async () => {
   const u = await makeUser("writer");
   const extra = await makeUser("extra");
   owner = await signIn(u.email);
-  ctx = { ...(await makeBuild({ owner: u, extra })), extraId: extra.id };
+  ctx = { ...(await makeBuild({ owner: u, extra })), extraId: extra.id, token: "", users: {} as Ctx["users"], x: {} };
 });
 afterAll(() => testDb.destroy());
 
 describe("malformed input", () => {
   it("covers every write route that takes a body", () => {
     const writes = apiRoutes().filter((r) => /^(POST|PUT|PATCH) /.test(r) && !NO_BODY.has(r));
-    const all = { ...CASES, ...EXTRA_CASES };
+    const all = CASES;
     expect(writes.filter((r) => !all[r])).toEqual([]);
   });
 

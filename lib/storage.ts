@@ -1,0 +1,40 @@
+import "server-only";
+import { S3Client, PutObjectCommand, GetObjectCommand, DeleteObjectCommand } from "@aws-sdk/client-s3";
+
+/**
+ * File storage through the S3 API. S3_ENDPOINT, S3_BUCKET, S3_REGION, S3_ACCESS_KEY_ID and
+ * S3_SECRET_ACCESS_KEY configure it; in dev and test they point at the local S3-compatible fake.
+ */
+const g = globalThis as unknown as { __lwS3?: S3Client };
+
+function client() {
+  g.__lwS3 ??= new S3Client({
+    endpoint: process.env.S3_ENDPOINT,
+    region: process.env.S3_REGION || "us-east-1",
+    forcePathStyle: true,
+    credentials: { accessKeyId: process.env.S3_ACCESS_KEY_ID || "", secretAccessKey: process.env.S3_SECRET_ACCESS_KEY || "" },
+  });
+  return g.__lwS3;
+}
+const bucket = () => {
+  if (!process.env.S3_BUCKET) throw new Error("S3_BUCKET is not set");
+  return process.env.S3_BUCKET;
+};
+
+export async function putObject(key: string, body: Buffer, contentType: string) {
+  await client().send(new PutObjectCommand({ Bucket: bucket(), Key: key, Body: body, ContentType: contentType }));
+}
+
+export async function getObject(key: string): Promise<Buffer | null> {
+  try {
+    const r = await client().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
+    return Buffer.from(await r.Body!.transformToByteArray());
+  } catch (e) {
+    if ((e as { name?: string }).name === "NoSuchKey") return null;
+    throw e;
+  }
+}
+
+export async function deleteObject(key: string) {
+  await client().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
+}

@@ -1,0 +1,38 @@
+import { randomUUID } from "node:crypto";
+import { emptyGraph } from "@/shared/linkage/schema";
+import { anyone, edit, manage, read, signedIn, type Ctx, type Row } from "./types";
+
+const unique = () => `new-${randomUUID().slice(0, 8)}@tests.linkwright.test`;
+const B = (c: Ctx) => `/api/builds/${c.buildId}`;
+const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
+
+// prettier-ignore
+export const rows: Record<string, Row> = {
+  "GET /api/auth/[...nextauth]":                        { expect: anyone(200), path: () => "/api/auth/csrf" },
+  "POST /api/auth/[...nextauth]":                       { expect: anyone(200), path: () => "/api/auth/_log", body: () => ({}) },
+  "POST /api/sign-up":                                  { expect: anyone(201), path: () => "/api/sign-up", body: () => ({ name: "New Person", email: unique(), password: "long enough password" }) },
+  "GET /api/me":                                        { expect: signedIn(200), path: () => "/api/me" },
+  "PATCH /api/me":                                      { expect: signedIn(200), path: () => "/api/me", body: () => ({ unitSystem: "US" }) },
+  "POST /api/analyze":                                  { expect: signedIn(200), path: () => "/api/analyze", body: () => ({ graph: emptyGraph() }) },
+  "GET /api/builds":                                    { expect: signedIn(200), path: () => "/api/builds" },
+  "POST /api/builds":                                   { expect: signedIn(201), path: () => "/api/builds", body: () => ({ name: "Another build" }) },
+  "GET /api/builds/[buildId]":                          { expect: read, path: B },
+  "PATCH /api/builds/[buildId]":                        { expect: manage(200), path: B, body: () => ({ name: "Renamed" }) },
+  "DELETE /api/builds/[buildId]":                       { expect: manage(200), path: B },
+  "GET /api/builds/[buildId]/members":                  { expect: read, path: (c) => `${B(c)}/members` },
+  "POST /api/builds/[buildId]/members":                 { expect: manage(201), path: (c) => `${B(c)}/members`, body: () => ({ email: unique(), role: "viewer" }) },
+  "PATCH /api/builds/[buildId]/members/[userId]":       { expect: manage(200), path: (c) => `${B(c)}/members/${c.extraId}`, body: () => ({ role: "viewer" }) },
+  "DELETE /api/builds/[buildId]/members/[userId]":      { expect: manage(200), path: (c) => `${B(c)}/members/${c.extraId}` },
+  "GET /api/builds/[buildId]/invitations":              { expect: manage(200), path: (c) => `${B(c)}/invitations` },
+  "POST /api/builds/[buildId]/invitations":             { expect: manage(201), path: (c) => `${B(c)}/invitations`, body: () => ({ email: unique(), role: "reviewer" }) },
+  "DELETE /api/builds/[buildId]/invitations/[invitationId]": { expect: manage(200), path: (c) => `${B(c)}/invitations/${c.invitationId}` },
+  "POST /api/invitations/[token]":                      { expect: signedIn(200), path: (c) => `/api/invitations/${c.token}` },
+  "GET /api/builds/[buildId]/linkages":                 { expect: read, path: (c) => `${B(c)}/linkages` },
+  "POST /api/builds/[buildId]/linkages":                { expect: edit(201), path: (c) => `${B(c)}/linkages`, body: () => ({ name: "Roll run", system: "roll" }) },
+  "GET /api/builds/[buildId]/linkages/[linkageId]":     { expect: read, path: L },
+  "PATCH /api/builds/[buildId]/linkages/[linkageId]":   { expect: edit(200), path: L, body: () => ({ name: "Pitch run, renamed" }) },
+  "DELETE /api/builds/[buildId]/linkages/[linkageId]":  { expect: edit(200), path: L },
+  "GET /api/builds/[buildId]/linkages/[linkageId]/graph": { expect: read, path: (c) => `${L(c)}/graph` },
+  "PUT /api/builds/[buildId]/linkages/[linkageId]/graph": { expect: edit(200), path: (c) => `${L(c)}/graph`, body: () => ({ baseRevision: 1, graph: emptyGraph("Pitch run", "pitch") }) },
+};
+

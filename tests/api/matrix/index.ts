@@ -1,0 +1,6 @@
+/** Every feature's rows of the authorization matrix and its malformed-input cases, in one place. */
+import { rows as foundation } from "./foundation";
+import type { BadInput, Row } from "./types";
+
+export const MATRIX: Record<string, Row> = { ...foundation };
+export const BAD_INPUT: BadInput = {};
