@@ -4,6 +4,17 @@ import { existsSync, mkdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { ROOT, authSecret, dbUrl, ensureDebianPackage, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
 
+// Two `npm test` runs in one checkout would share the test database, port and build folder:
+// the second waits for the first (flock from util-linux).
+if (!process.env.LW_TEST_LOCKED && existsSync("/usr/bin/flock")) {
+  mkdirSync(path.join(ROOT, ".data"), { recursive: true });
+  const r = spawnSync("/usr/bin/flock", [path.join(ROOT, ".data", "npm-test.lock"), process.execPath, ...process.argv.slice(1)], {
+    stdio: "inherit",
+    env: { ...process.env, LW_TEST_LOCKED: "1" },
+  });
+  process.exit(r.status ?? 1);
+}
+
 const TEST_DB = process.env.LW_TEST_DB || "linkwright_test";
 const started = Date.now();
 
@@ -17,7 +28,7 @@ migrate(TEST_DB);
 
 const env = {
   NODE_ENV: "production",
-  NEXT_DIST_DIR: ".next-test",
+  NEXT_DIST_DIR: process.env.NEXT_DIST_DIR || ".next-test",
   DATABASE_URL: dbUrl(TEST_DB),
   NEXTAUTH_SECRET: authSecret(),
 };
