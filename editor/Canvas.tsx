@@ -1,0 +1,236 @@
+"use client";
+/** The React Flow canvas, rendered from the editor store; every change goes back through store actions. */
+import { useCallback, useMemo, useRef } from "react";
+import {
+  Background,
+  BackgroundVariant,
+  ConnectionMode,
+  Controls,
+  MiniMap,
+  ReactFlow,
+  useReactFlow,
+  type Connection,
+  type EdgeChange,
+  type IsValidConnection,
+  type NodeChange,
+  type Viewport,
+} from "@xyflow/react";
+import type { NodeKind } from "@/shared/linkage/schema";
+import { useEditorConfig, useEditorStore, useEditorStoreApi } from "./context";
+import { nodeTypes, type PartFlowNode } from "./nodes";
+import { edgeTypes, SEVERITY_HEX, type JointFlowEdge } from "./joints/JointEdge";
+import type { EditorState, SubjectRef } from "./store";
+
+export const KIND_MIME = "application/x-linkwright-kind";
+export const GRID = 10;
+
+type NodeCacheEntry = { src: EditorState["nodes"][number]; sel: boolean; m: EditorState["measured"][string] | undefined; ro: boolean; rf: PartFlowNode };
+type EdgeCacheEntry = { src: EditorState["joints"][number]; sel: boolean; rf: JointFlowEdge };
+
+/** React Flow nodes from the store, reusing the same object for every part that did not change. */
+function useFlowNodes(readOnly: boolean): PartFlowNode[] {
+  const { nodes, selected, measured } = useEditorStore((s) => ({ nodes: s.nodes, selected: s.selection.nodes, measured: s.measured }));
+  const cache = useRef(new Map<string, NodeCacheEntry>());
+  return useMemo(() => {
+    const sel = new Set(selected);
+    const next = new Map<string, NodeCacheEntry>();
+    const out = nodes.map((n) => {
+      const isSel = sel.has(n.id);
+      const m = measured[n.id];
+      const c = cache.current.get(n.id);
+      if (c && c.src === n && c.sel === isSel && c.m === m && c.ro === readOnly) {
+        next.set(n.id, c);
+        return c.rf;
+      }
+      const rf: PartFlowNode = { id: n.id, type: n.kind, position: n.position, data: { node: n }, selected: isSel, measured: m, draggable: !readOnly };
+      next.set(n.id, { src: n, sel: isSel, m, ro: readOnly, rf });
+      return rf;
+    });
+    cache.current = next;
+    return out;
+  }, [nodes, selected, measured, readOnly]);
+}
+
+function useFlowEdges(): JointFlowEdge[] {
+  const { joints, selected } = useEditorStore((s) => ({ joints: s.joints, selected: s.selection.joints }));
+  const cache = useRef(new Map<string, EdgeCacheEntry>());
+  return useMemo(() => {
+    const sel = new Set(selected);
+    const next = new Map<string, EdgeCacheEntry>();
+    const out = joints.map((j) => {
+      const isSel = sel.has(j.id);
+      const c = cache.current.get(j.id);
+      if (c && c.src === j && c.sel === isSel) {
+        next.set(j.id, c);
+        return c.rf;
+      }
+      const rf: JointFlowEdge = {
+        id: j.id,
+        type: "joint",
+        source: j.from.node,
+        sourceHandle: j.from.port,
+        target: j.to.node,
+        targetHandle: j.to.port,
+        data: { joint: j },
+        selected: isSel,
+      };
+      next.set(j.id, { src: j, sel: isSel, rf });
+      return rf;
+    });
+    cache.current = next;
+    return out;
+  }, [joints, selected]);
+}
+
+/** Select a subject and bring it to the middle of the canvas. */
+export function useFocusSubject() {
+  const api = useEditorStoreApi();
+  const rf = useReactFlow();
+  return useCallback(
+    (subject: SubjectRef) => {
+      const s = api.getState();
+      s.select(subject);
+      const centre = (id: string) => {
+        const n = s.nodes.find((x) => x.id === id);
+        if (!n) return null;
+        const m = s.measured[id] ?? { width: 168, height: 60 };
+        return { x: n.position.x + m.width / 2, y: n.position.y + m.height / 2 };
+      };
+      let p: { x: number; y: number } | null = null;
+      if (subject.type === "node") p = centre(subject.id);
+      if (subject.type === "joint") {
+        const j = s.joints.find((x) => x.id === subject.id);
+        const a = j && centre(j.from.node);
+        const b = j && centre(j.to.node);
+        if (a && b) p = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+      }
+      if (p) rf.setCenter(p.x, p.y, { zoom: Math.max(rf.getZoom(), 1), duration: 250 });
+    },
+    [api, rf],
+  );
+}
+
+export default function Canvas() {
+  const api = useEditorStoreApi();
+  const { readOnly } = useEditorConfig();
+  const nodes = useFlowNodes(readOnly);
+  const edges = useFlowEdges();
+  const rf = useReactFlow();
+
+  const onNodesChange = useCallback(
+    (changes: NodeChange<PartFlowNode>[]) => {
+      const s = api.getState();
+      const moves: { id: string; position: { x: number; y: number } }[] = [];
+      const sizes: { id: string; width: number; height: number }[] = [];
+      let sel: Set<string> | null = null;
+      for (const c of changes) {
+        if (c.type === "position" && c.position) moves.push({ id: c.id, position: c.position });
+        else if (c.type === "dimensions" && c.dimensions) sizes.push({ id: c.id, width: c.dimensions.width, height: c.dimensions.height });
+        else if (c.type === "select") {
+          sel ??= new Set(s.selection.nodes);
+          if (c.selected) sel.add(c.id);
+          else sel.delete(c.id);
+        }
+      }
+      if (sizes.length) s.setMeasured(sizes);
+      if (moves.length) s.moveNodes(moves, { transient: true });
+      if (sel) s.setSelection({ nodes: s.nodes.filter((n) => sel!.has(n.id)).map((n) => n.id) });
+    },
+    [api],
+  );
+
+  const onEdgesChange = useCallback(
+    (changes: EdgeChange<JointFlowEdge>[]) => {
+      const s = api.getState();
+      let sel: Set<string> | null = null;
+      for (const c of changes) {
+        if (c.type === "select") {
+          sel ??= new Set(s.selection.joints);
+          if (c.selected) sel.add(c.id);
+          else sel.delete(c.id);
+        }
+      }
+      if (sel) s.setSelection({ joints: s.joints.filter((j) => sel!.has(j.id)).map((j) => j.id) });
+    },
+    [api],
+  );
+
+  const onConnect = useCallback(
+    (c: Connection) => {
+      if (!c.sourceHandle || !c.targetHandle) return;
+      api.getState().connect({ node: c.source, port: c.sourceHandle }, { node: c.target, port: c.targetHandle });
+    },
+    [api],
+  );
+
+  const isValidConnection: IsValidConnection<JointFlowEdge> = useCallback(
+    (c) => {
+      if (!c.sourceHandle || !c.targetHandle) return false;
+      return api.getState().canConnect({ node: c.source, port: c.sourceHandle }, { node: c.target, port: c.targetHandle }).ok;
+    },
+    [api],
+  );
+
+  const onDragOver = useCallback((e: React.DragEvent) => {
+    if (e.dataTransfer.types.includes(KIND_MIME)) {
+      e.preventDefault();
+      e.dataTransfer.dropEffect = "copy";
+    }
+  }, []);
+
+  const onDrop = useCallback(
+    (e: React.DragEvent) => {
+      const kind = e.dataTransfer.getData(KIND_MIME) as NodeKind;
+      if (!kind || readOnly) return;
+      e.preventDefault();
+      const p = rf.screenToFlowPosition({ x: e.clientX, y: e.clientY });
+      // Drop centres the card on the pointer, snapped to the grid.
+      api.getState().addNode(kind, { x: Math.round((p.x - 84) / GRID) * GRID, y: Math.round((p.y - 25) / GRID) * GRID });
+    },
+    [api, rf, readOnly],
+  );
+
+  const onMoveEnd = useCallback((_: unknown, v: Viewport) => api.getState().setViewport(v), [api]);
+  const onNodeDragStart = useCallback(() => api.getState().beginGesture(), [api]);
+  const onNodeDragStop = useCallback(() => api.getState().endGesture(), [api]);
+  const minimapColor = useCallback((n: PartFlowNode) => {
+    const w = api.getState().worstByNode[n.id];
+    return w ? SEVERITY_HEX[w] : "#c9cfd6";
+  }, [api]);
+
+  return (
+    <div className="h-full w-full" onDragOver={onDragOver} onDrop={onDrop} data-testid="canvas">
+      <ReactFlow<PartFlowNode, JointFlowEdge>
+        nodes={nodes}
+        edges={edges}
+        nodeTypes={nodeTypes}
+        edgeTypes={edgeTypes}
+        onNodesChange={onNodesChange}
+        onEdgesChange={onEdgesChange}
+        onConnect={onConnect}
+        isValidConnection={isValidConnection}
+        onNodeDragStart={onNodeDragStart}
+        onNodeDragStop={onNodeDragStop}
+        onMoveEnd={onMoveEnd}
+        connectionMode={ConnectionMode.Loose}
+        nodesDraggable={!readOnly}
+        nodesConnectable={!readOnly}
+        elementsSelectable
+        deleteKeyCode={null}
+        disableKeyboardA11y
+        snapToGrid
+        snapGrid={[GRID, GRID]}
+        fitView
+        fitViewOptions={{ padding: 0.2, maxZoom: 1.2 }}
+        minZoom={0.05}
+        maxZoom={3}
+        connectionRadius={28}
+        defaultEdgeOptions={{ type: "joint" }}
+      >
+        <Background variant={BackgroundVariant.Dots} gap={GRID * 2} size={1} color="#cfd4da" />
+        <MiniMap<PartFlowNode> pannable zoomable nodeColor={minimapColor} className="!bg-white/90" />
+        <Controls showInteractive={false} />
+      </ReactFlow>
+    </div>
+  );
+}

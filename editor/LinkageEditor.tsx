@@ -1,0 +1,364 @@
+"use client";
+/**
+ * The linkage editor screen: parts tray | canvas | inspector + findings, with a toolbar, the
+ * summary strip, autosave with revisions, import/export and picture export for the build log.
+ */
+import "@xyflow/react/dist/style.css";
+import { useCallback, useEffect, useRef, useState } from "react";
+import { ReactFlowProvider, useReactFlow, type Node } from "@xyflow/react";
+import { useStore } from "zustand";
+import { useShallow } from "zustand/react/shallow";
+import { graphSchema, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
+import type { AnalysisSettings } from "@/shared/analysis/types";
+import { analyze } from "@/shared/analysis";
+import { EditorConfigContext, EditorStoreContext } from "./context";
+import { createEditorStore, toGraph, type EditorStore } from "./store";
+import Canvas, { GRID } from "./Canvas";
+import PartsTray from "./panels/PartsTray";
+import Inspector, { type ReviewSlot } from "./panels/Inspector";
+import { CAUTION, FindingsList, subjectName, SummaryStrip } from "./panels/Findings";
+import { useAutosave, type SaveStatus } from "./useAutosave";
+import { downloadBlob, exportLinkagePng, fileSafe } from "./export";
+import { ConflictDialog } from "./panels/ConflictDialog";
+import { ShortcutsSheet } from "./panels/ShortcutsSheet";
+
+export type LinkageEditorProps = {
+  buildId: string;
+  buildName: string;
+  linkageId: string;
+  linkageName: string;
+  system: ControlSystem;
+  initial: { revision: number; graph: LinkageGraph; authorName: string; createdAt: string };
+  canEdit: boolean;
+  canComment: boolean;
+  unitSystem: "US" | "SI";
+  settings: AnalysisSettings;
+  /** Rendered under the joint card: the review thread of the selection. */
+  reviewSlot?: ReviewSlot;
+};
+
+const STATUS_TEXT: Record<SaveStatus, string> = {
+  saved: "All changes saved",
+  saving: "Saving…",
+  unsaved: "Unsaved changes",
+  offline: "Offline — will retry",
+  conflict: "Someone else saved",
+  error: "Not saved",
+  readonly: "Read-only",
+};
+const STATUS_TONE: Record<SaveStatus, string> = {
+  saved: "bg-ok/10 text-ok",
+  saving: "bg-advisory/10 text-advisory",
+  unsaved: "bg-caution/10 text-caution",
+  offline: "bg-caution/15 text-caution",
+  conflict: "bg-hazard/10 text-hazard",
+  error: "bg-hazard/10 text-hazard",
+  readonly: "bg-ink/5 text-ink-soft",
+};
+
+function isTyping(t: EventTarget | null) {
+  const el = t as HTMLElement | null;
+  if (!el || !el.tagName) return false;
+  return el.tagName === "INPUT" || el.tagName === "TEXTAREA" || el.tagName === "SELECT" || el.isContentEditable;
+}
+
+function fmtDate(iso: string) {
+  const d = new Date(iso);
+  if (Number.isNaN(d.getTime())) return iso;
+  return d.toISOString().slice(0, 16).replace("T", " ") + " UTC";
+}
+
+function ToolButton(props: React.ButtonHTMLAttributes<HTMLButtonElement> & { kbd?: string }) {
+  const { kbd, className, children, ...rest } = props;
+  return (
+    <button
+      type="button"
+      {...rest}
+      title={rest.title ? `${rest.title}${kbd ? ` (${kbd})` : ""}` : undefined}
+      className={`rounded px-2 py-1 text-[12px] font-medium text-ink hover:bg-ink/5 disabled:cursor-not-allowed disabled:opacity-40 ${className ?? ""}`}
+    >
+      {children}
+    </button>
+  );
+}
+
+function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
+  const { store, canEdit, buildName, linkageName, system } = props;
+  const rf = useReactFlow();
+  const rootRef = useRef<HTMLDivElement>(null);
+  const fileRef = useRef<HTMLInputElement>(null);
+  const [sheet, setSheet] = useState(false);
+  const [importErrors, setImportErrors] = useState<string[] | null>(null);
+  const [exporting, setExporting] = useState(false);
+  const autosave = useAutosave({ store, buildId: props.buildId, linkageId: props.linkageId, enabled: canEdit });
+  const { canUndo, canRedo, hasSel, notice, revision } = useStore(
+    store,
+    useShallow((s) => ({
+      canUndo: s.past.length > 0,
+      canRedo: s.future.length > 0,
+      hasSel: s.selection.nodes.length + s.selection.joints.length > 0,
+      notice: s.notice,
+      revision: s.revision,
+    })),
+  );
+
+  useEffect(() => store.getState().setSettings(props.settings), [store, props.settings]);
+
+  // A notice (e.g. a refused joint) fades after a few seconds.
+  useEffect(() => {
+    if (!notice) return;
+    const t = setTimeout(() => store.getState().setNotice(null), 4000);
+    return () => clearTimeout(t);
+  }, [notice, store]);
+
+  const exportJson = useCallback(() => {
+    const g = toGraph(store.getState());
+    downloadBlob(new Blob([JSON.stringify(g, null, 2) + "\n"], { type: "application/json" }), `${fileSafe(linkageName)}.linkage.json`);
+  }, [store, linkageName]);
+
+  const importFile = useCallback(
+    async (file: File) => {
+      let data: unknown;
+      try {
+        data = JSON.parse(await file.text());
+      } catch (e) {
+        setImportErrors([`${file.name} is not JSON: ${e instanceof Error ? e.message : String(e)}`]);
+        return;
+      }
+      const r = graphSchema.safeParse(data);
+      if (!r.success) {
+        setImportErrors(r.error.issues.slice(0, 20).map((i) => (i.path.length ? `${i.path.join(".")}: ${i.message}` : i.message)));
+        return;
+      }
+      setImportErrors(null);
+      store.getState().replaceGraph(r.data);
+      store.getState().setNotice(`Imported ${r.data.nodes.length} parts and ${r.data.joints.length} joints from ${file.name} (undo to go back).`);
+      setTimeout(() => rf.fitView({ padding: 0.2, maxZoom: 1.2 }), 50);
+    },
+    [store, rf],
+  );
+
+  const exportPng = useCallback(async () => {
+    const el = rootRef.current?.querySelector<HTMLElement>(".react-flow__viewport");
+    if (!el) return;
+    setExporting(true);
+    try {
+      const s = store.getState();
+      const lm = s.report?.summary.lowestMargin;
+      const blob = await exportLinkagePng({
+        viewportEl: el,
+        nodes: rf.getNodes() as Node[],
+        title: {
+          buildName,
+          linkageName,
+          system,
+          revision: s.revision,
+          dirty: s.dirty,
+          date: fmtDate(autosave.lastSavedAt ?? props.initial.createdAt),
+          summary: s.report?.summary ?? null,
+          lowestMarginText: lm ? `${lm.value.toFixed(2)} (${lm.what}) at ${subjectName(s, lm.subject)}` : undefined,
+          caution: CAUTION,
+        },
+      });
+      downloadBlob(blob, `${fileSafe(buildName)}-${fileSafe(linkageName)}-r${s.revision}.png`);
+    } catch (e) {
+      store.getState().setNotice(`The picture could not be made: ${e instanceof Error ? e.message : String(e)}`);
+    } finally {
+      setExporting(false);
+    }
+  }, [store, rf, buildName, linkageName, system, autosave.lastSavedAt, props.initial.createdAt]);
+
+  // Keyboard: editing keys only when not typing in a field; Ctrl/Cmd+S everywhere.
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => {
+      const mod = e.ctrlKey || e.metaKey;
+      const k = e.key.toLowerCase();
+      if (mod && k === "s") {
+        e.preventDefault();
+        autosave.saveNow();
+        return;
+      }
+      if (isTyping(e.target)) return;
+      if (e.key === "Escape") {
+        if (sheet) setSheet(false);
+        else store.getState().select(null);
+        return;
+      }
+      if (e.key === "?" || (e.shiftKey && e.key === "/")) {
+        e.preventDefault();
+        setSheet((v) => !v);
+        return;
+      }
+      const s = store.getState();
+      if (mod && k === "a") {
+        e.preventDefault();
+        s.selectAll();
+        return;
+      }
+      if (mod && k === "c") return s.copy();
+      if (!mod && k === "f") return void rf.fitView({ padding: 0.2, duration: 200, maxZoom: 1.2 });
+      if (e.key === "]" || e.key === "[") {
+        e.preventDefault();
+        if (s.nodes.length === 0) return;
+        const cur = s.nodes.findIndex((n) => n.id === s.selection.nodes[0]);
+        const next = (cur + (e.key === "]" ? 1 : -1) + s.nodes.length) % s.nodes.length;
+        s.select({ type: "node", id: s.nodes[next < 0 ? 0 : next].id });
+        return;
+      }
+      if (!canEdit) return;
+      if (mod && k === "z") {
+        e.preventDefault();
+        return e.shiftKey ? s.redo() : s.undo();
+      }
+      if (mod && k === "y") {
+        e.preventDefault();
+        return s.redo();
+      }
+      if (mod && k === "v") return s.paste();
+      if (mod && k === "d") {
+        e.preventDefault();
+        return s.duplicate();
+      }
+      if (e.key === "Delete" || e.key === "Backspace") {
+        e.preventDefault();
+        return s.deleteSelection();
+      }
+      const step = e.shiftKey ? GRID * 5 : GRID;
+      const arrows: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, -step], ArrowDown: [0, step] };
+      if (arrows[e.key] && s.selection.nodes.length > 0) {
+        e.preventDefault();
+        s.nudge(...arrows[e.key]);
+      }
+    };
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [store, rf, canEdit, autosave, sheet]);
+
+  const s = store.getState;
+  return (
+    <div ref={rootRef} className="flex h-full min-h-0 flex-col bg-paper text-ink" data-testid="linkage-editor">
+      <div className="flex flex-wrap items-center gap-1 border-b border-ink/10 bg-white px-2 py-1" role="toolbar" aria-label="Linkage tools">
+        <div className="mr-2 min-w-0">
+          <div className="truncate text-[13px] font-semibold leading-4" data-testid="editor-title">
+            {linkageName} <span className="font-normal text-ink-soft">· {system}</span>
+          </div>
+          <div className="text-[10px] leading-3 text-ink-soft">
+            {buildName} · revision <span data-testid="editor-revision">{revision}</span>
+          </div>
+        </div>
+        <span data-testid="save-status" data-status={autosave.status} className={`rounded-full px-2 py-0.5 text-[11px] font-medium ${STATUS_TONE[autosave.status]}`} aria-live="polite">
+          {STATUS_TEXT[autosave.status]}
+        </span>
+        {autosave.error && autosave.status === "error" && (
+          <span className="max-w-[28rem] truncate text-[11px] text-hazard" title={autosave.error.message} data-testid="save-error">
+            {autosave.error.message}
+          </span>
+        )}
+        <span className="mx-1 h-5 w-px bg-ink/10" aria-hidden="true" />
+        <ToolButton onClick={() => s().undo()} disabled={!canEdit || !canUndo} title="Undo" kbd="Ctrl/⌘ Z" data-testid="btn-undo">
+          Undo
+        </ToolButton>
+        <ToolButton onClick={() => s().redo()} disabled={!canEdit || !canRedo} title="Redo" kbd="Ctrl/⌘ Shift Z" data-testid="btn-redo">
+          Redo
+        </ToolButton>
+        <ToolButton onClick={() => s().duplicate()} disabled={!canEdit || !hasSel} title="Duplicate the selected parts" kbd="Ctrl/⌘ D">
+          Duplicate
+        </ToolButton>
+        <ToolButton onClick={() => s().deleteSelection()} disabled={!canEdit || !hasSel} title="Delete the selection" kbd="Del" data-testid="btn-delete">
+          Delete
+        </ToolButton>
+        <ToolButton onClick={() => rf.fitView({ padding: 0.2, duration: 200, maxZoom: 1.2 })} title="Fit the whole linkage in view" kbd="F">
+          Fit
+        </ToolButton>
+        <span className="mx-1 h-5 w-px bg-ink/10" aria-hidden="true" />
+        <ToolButton onClick={() => autosave.saveNow()} disabled={!canEdit} title="Save now" kbd="Ctrl/⌘ S" data-testid="btn-save">
+          Save
+        </ToolButton>
+        <ToolButton onClick={() => fileRef.current?.click()} disabled={!canEdit} title="Replace this linkage with a .json linkage file" data-testid="btn-import">
+          Import…
+        </ToolButton>
+        <input
+          ref={fileRef}
+          type="file"
+          accept=".json,application/json"
+          className="hidden"
+          data-testid="import-input"
+          onChange={(e) => {
+            const f = e.target.files?.[0];
+            if (f) void importFile(f);
+            e.target.value = "";
+          }}
+        />
+        <ToolButton onClick={exportJson} title="Download the linkage file (.json)" data-testid="btn-export-json">
+          Export file
+        </ToolButton>
+        <ToolButton onClick={() => void exportPng()} disabled={exporting} title="Download a picture of the whole linkage with its title block" data-testid="btn-export-png">
+          {exporting ? "Drawing…" : "Picture (PNG)"}
+        </ToolButton>
+        <ToolButton onClick={() => setSheet(true)} className="ml-auto" title="Keyboard shortcuts" kbd="?" data-testid="btn-shortcuts">
+          Keys ?
+        </ToolButton>
+      </div>
+      <SummaryStrip system={system} settings={props.settings} />
+      {importErrors && (
+        <div role="alert" data-testid="import-errors" className="border-b border-hazard/30 bg-hazard/5 px-3 py-1.5 text-[12px] text-hazard">
+          <div className="flex items-center justify-between">
+            <b>The file was not imported — nothing changed:</b>
+            <button type="button" className="text-[11px] underline" onClick={() => setImportErrors(null)}>
+              dismiss
+            </button>
+          </div>
+          <ul className="list-disc pl-5">
+            {importErrors.map((m, i) => (
+              <li key={i}>{m}</li>
+            ))}
+          </ul>
+        </div>
+      )}
+      <div className="flex min-h-0 flex-1">
+        <PartsTray />
+        <main className="relative min-w-0 flex-1" aria-label="Linkage canvas">
+          <Canvas />
+          {notice && (
+            <div role="status" data-testid="notice" className="pointer-events-none absolute bottom-4 left-1/2 z-10 max-w-lg -translate-x-1/2 rounded bg-ink px-3 py-1.5 text-[12px] text-white shadow-lg">
+              {notice.text}
+            </div>
+          )}
+        </main>
+        <aside className="flex w-[360px] shrink-0 flex-col border-l border-ink/10 bg-paper" aria-label="Inspector and findings">
+          <div className="min-h-0 flex-[3] overflow-y-auto">
+            <Inspector linkageId={props.linkageId} linkageName={linkageName} reviewSlot={props.reviewSlot} />
+          </div>
+          <div className="flex min-h-0 flex-[2] flex-col border-t border-ink/10 bg-white">
+            <FindingsList />
+          </div>
+          <p className="border-t border-ink/10 bg-paper px-3 py-1.5 text-[10px] leading-3 text-ink-soft" data-testid="caution">
+            {CAUTION}
+          </p>
+        </aside>
+      </div>
+      {sheet && <ShortcutsSheet onClose={() => setSheet(false)} readOnly={!canEdit} />}
+      {autosave.conflict && autosave.difference && (
+        <ConflictDialog current={autosave.conflict} difference={autosave.difference} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} />
+      )}
+    </div>
+  );
+}
+
+export default function LinkageEditor(props: LinkageEditorProps) {
+  const [store] = useState(() =>
+    createEditorStore(
+      { ...props.initial.graph, name: props.initial.graph.name || props.linkageName, system: props.initial.graph.system ?? props.system },
+      { revision: props.initial.revision, readOnly: !props.canEdit, settings: props.settings, analyze, analysisDelay: 120 },
+    ),
+  );
+  return (
+    <EditorStoreContext.Provider value={store}>
+      <EditorConfigContext.Provider value={{ unitSystem: props.unitSystem, readOnly: !props.canEdit }}>
+        <ReactFlowProvider>
+          <EditorInner {...props} store={store} />
+        </ReactFlowProvider>
+      </EditorConfigContext.Provider>
+    </EditorStoreContext.Provider>
+  );
+}

@@ -1,0 +1,27 @@
+"use client";
+/** The per-mount editor store, handed down through React context. */
+import { createContext, useContext } from "react";
+import { useStore } from "zustand";
+import { useShallow } from "zustand/react/shallow";
+import type { EditorState, EditorStore } from "./store";
+
+export const EditorStoreContext = createContext<EditorStore | null>(null);
+
+export function useEditorStoreApi(): EditorStore {
+  const store = useContext(EditorStoreContext);
+  if (!store) throw new Error("useEditorStore must be used inside the linkage editor");
+  return store;
+}
+
+/** Subscribe to a slice of the editor state; the slice is compared shallowly. */
+export function useEditorStore<T>(selector: (s: EditorState) => T): T {
+  const store = useEditorStoreApi();
+  return useStore(store, useShallow(selector));
+}
+
+export type EditorConfig = {
+  unitSystem: "US" | "SI";
+  readOnly: boolean;
+};
+export const EditorConfigContext = createContext<EditorConfig>({ unitSystem: "US", readOnly: false });
+export const useEditorConfig = () => useContext(EditorConfigContext);

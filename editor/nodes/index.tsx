@@ -1,0 +1,151 @@
+"use client";
+/**
+ * One memoised node component per part kind. Each draws the same card frame with the kind's
+ * ports (React Flow handles, id = port name) and a line or two of the numbers that matter.
+ */
+import { memo } from "react";
+import { Handle, Position, type Node, type NodeProps } from "@xyflow/react";
+import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
+import type { Severity } from "@/shared/analysis/types";
+import { useEditorConfig, useEditorStore } from "../context";
+import { KIND_NAMES } from "../store";
+import { fmt, type UnitSystem } from "../units";
+import { KindGlyph } from "./glyphs";
+
+export type PartNodeData = { node: LinkageNode };
+export type PartFlowNode = Node<PartNodeData, NodeKind>;
+
+type Side = "left" | "right" | "top" | "bottom";
+/** Where each port sits on the card. */
+export const PORT_SIDES: Record<NodeKind, Record<string, Side>> = {
+  stick: { attach: "right", pivot: "bottom" },
+  pedal: { attach: "right", pivot: "bottom" },
+  torqueTube: { in: "left", out: "right", pivot: "bottom" },
+  bellcrank: { in: "left", out: "right", pivot: "bottom" },
+  idlerArm: { in: "left", out: "right", pivot: "bottom" },
+  pushrod: { a: "left", b: "right" },
+  controlHorn: { attach: "left", surface: "right" },
+  controlSurface: { horn: "left", hinge: "bottom" },
+  structureMount: { mount: "top" },
+  travelStop: { contact: "top" },
+};
+const POS: Record<Side, Position> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
+
+export const SEVERITY_BORDER: Record<Severity, string> = {
+  hazard: "border-hazard",
+  caution: "border-caution",
+  advisory: "border-advisory",
+};
+export const SEVERITY_BG: Record<Severity, string> = { hazard: "bg-hazard", caution: "bg-caution", advisory: "bg-advisory" };
+export const SEVERITY_TEXT: Record<Severity, string> = { hazard: "text-hazard", caution: "text-caution", advisory: "text-advisory" };
+
+function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: NodeKind; label: string; lines: string[]; selected: boolean }) {
+  const { readOnly } = useEditorConfig();
+  const worst = useEditorStore((s) => s.worstByNode[id]);
+  const count = useEditorStore((s) => s.findingsBySubject[`node:${id}`]?.length ?? 0);
+  const sides = PORT_SIDES[kind];
+  const ports = Object.keys(sides);
+  return (
+    <div
+      data-testid={`node-${id}`}
+      data-kind={kind}
+      data-severity={worst ?? "none"}
+      className={[
+        "relative w-[168px] rounded-md border-2 bg-white px-2 py-1.5 text-ink shadow-sm",
+        worst ? SEVERITY_BORDER[worst] : "border-ink/25",
+        selected ? "ring-2 ring-ink ring-offset-1" : "",
+      ].join(" ")}
+    >
+      <div className="flex items-center gap-1.5">
+        <KindGlyph kind={kind} className="h-4 w-4 shrink-0 text-ink-soft" />
+        <div className="min-w-0 flex-1 truncate text-[12px] font-semibold leading-4" title={label}>
+          {label || KIND_NAMES[kind]}
+        </div>
+        {worst && (
+          <span className={`rounded px-1 text-[10px] font-bold leading-4 text-white ${SEVERITY_BG[worst]}`} title={`${count} finding(s), worst: ${worst}`}>
+            {count}
+          </span>
+        )}
+      </div>
+      {lines.map((l, i) => (
+        <div key={i} className="truncate pl-[22px] text-[11px] leading-4 tabular-nums text-ink-soft">
+          {l}
+        </div>
+      ))}
+      {ports.map((port) => {
+        const side = sides[port];
+        const same = ports.filter((p) => sides[p] === side);
+        const idx = same.indexOf(port);
+        const pct = `${((idx + 1) / (same.length + 1)) * 100}%`;
+        const style = side === "left" || side === "right" ? { top: pct } : { left: pct };
+        return (
+          <Handle
+            key={port}
+            id={port}
+            type="source"
+            position={POS[side]}
+            isConnectable={!readOnly}
+            style={style}
+            data-testid={`port-${id}-${port}`}
+            title={`${port} port`}
+            className="!h-3 !w-3 !rounded-sm !border-2 !border-ink !bg-paper hover:!bg-ink"
+          >
+            <span
+              className={[
+                "pointer-events-none absolute whitespace-nowrap text-[9px] font-medium uppercase tracking-wide text-ink-soft",
+                side === "left" ? "left-3.5 top-1/2 -translate-y-1/2" : "",
+                side === "right" ? "right-3.5 top-1/2 -translate-y-1/2" : "",
+                side === "top" ? "left-1/2 top-3 -translate-x-1/2" : "",
+                side === "bottom" ? "bottom-3 left-1/2 -translate-x-1/2" : "",
+              ].join(" ")}
+            >
+              {port}
+            </span>
+          </Handle>
+        );
+      })}
+    </div>
+  );
+}
+
+const L = (v: number, u: UnitSystem) => fmt(v, "length", u, u === "SI" ? 0 : 2);
+
+function makeNode<K extends NodeKind>(kind: K, lines: (props: Extract<LinkageNode, { kind: K }>["props"], u: UnitSystem) => string[]) {
+  const C = memo(function PartNode({ id, data, selected }: NodeProps<PartFlowNode>) {
+    const { unitSystem } = useEditorConfig();
+    const n = data.node as Extract<LinkageNode, { kind: K }>;
+    return <PartFrame id={id} kind={kind} label={n.label} lines={lines(n.props as never, unitSystem)} selected={!!selected} />;
+  });
+  C.displayName = `${kind}Node`;
+  return C;
+}
+
+const ratio = (a: number, b: number) => (a > 0 ? `×${(b / a).toFixed(2)}` : "");
+
+export const StickNode = makeNode("stick", (p, u) => [`grip ${L(p.gripArm, u)} · link ${L(p.attachArm, u)}`, `${p.axis} axis · ${p.travelFwd}°/${p.travelAft}°`]);
+export const PedalNode = makeNode("pedal", (p, u) => [`pedal ${L(p.pedalArm, u)} · link ${L(p.attachArm, u)}`, `travel ${p.travel}°`]);
+export const TorqueTubeNode = makeNode("torqueTube", (p, u) => [`in ${L(p.inputArm, u)} · out ${L(p.outputArm, u)}`, `ratio ${ratio(p.inputArm, p.outputArm)}`]);
+export const BellcrankNode = makeNode("bellcrank", (p, u) => [`in ${L(p.inputArm, u)} · out ${L(p.outputArm, u)}`, `${p.armAngle}° between arms · ${ratio(p.inputArm, p.outputArm)}`]);
+export const IdlerArmNode = makeNode("idlerArm", (p, u) => [`in ${L(p.inputArm, u)} · out ${L(p.outputArm, u)}`, `ratio ${ratio(p.inputArm, p.outputArm)}`]);
+export const PushrodNode = makeNode("pushrod", (p, u) => [
+  `Ø ${fmt(p.outsideDiameter, "length", u, u === "SI" ? 1 : 3)} × ${fmt(p.wall, "length", u, u === "SI" ? 2 : 3)}`,
+  `${L(p.length, u)} c–c · ${p.material}`,
+]);
+export const ControlHornNode = makeNode("controlHorn", (p, u) => [`arm ${L(p.hornArm, u)} · link ${p.linkAngle}°`]);
+export const ControlSurfaceNode = makeNode("controlSurface", (p) => [`up ${p.travelUp}° · down ${p.travelDown}°`]);
+export const StructureMountNode = makeNode("structureMount", (p) => (p.note ? [p.note] : ["fixed to structure"]));
+export const TravelStopNode = makeNode("travelStop", (p) => [`contacts at ${p.stopAt}°`]);
+
+/** Module-level, so React Flow never sees a new object. */
+export const nodeTypes = {
+  stick: StickNode,
+  pedal: PedalNode,
+  torqueTube: TorqueTubeNode,
+  bellcrank: BellcrankNode,
+  idlerArm: IdlerArmNode,
+  pushrod: PushrodNode,
+  controlHorn: ControlHornNode,
+  controlSurface: ControlSurfaceNode,
+  structureMount: StructureMountNode,
+  travelStop: TravelStopNode,
+};

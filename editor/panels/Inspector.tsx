@@ -1,0 +1,168 @@
+"use client";
+/** The right-hand inspector: the node properties form or the joint card of the selection, with its findings. */
+import { useCallback, useMemo, useState } from "react";
+import { z } from "zod";
+import { hardwareSchema, nodeSchema, type NodeKind } from "@/shared/linkage/schema";
+import { AN_BOLTS_BY_SIZE } from "@/shared/hardware";
+import { useEditorConfig, useEditorStore, useEditorStoreApi } from "../context";
+import { KIND_NAMES, jointName } from "../store";
+import { inputText } from "../units";
+import { KindGlyph } from "../nodes/glyphs";
+import { SchemaForm } from "./SchemaForm";
+import { HARDWARE_SECTIONS, nodeSections } from "./specs";
+import { FindingItem, LinkageFindings } from "./Findings";
+
+export type ReviewSlot = (sel: { type: "node" | "joint" | "linkage"; id: string }) => React.ReactNode;
+
+const formSchemas = new Map<NodeKind, z.ZodType>();
+function nodeFormSchema(kind: NodeKind) {
+  let s = formSchemas.get(kind);
+  if (!s) {
+    const opt = nodeSchema.options.find((o) => o.shape.kind.value === kind)!;
+    s = z.object({ label: opt.shape.label, props: opt.shape.props });
+    formSchemas.set(kind, s);
+  }
+  return s;
+}
+
+function SubjectFindings({ subjectKey }: { subjectKey: string }) {
+  const findings = useEditorStore((s) => s.findingsBySubject[subjectKey] ?? []);
+  if (findings.length === 0)
+    return (
+      <p data-testid="subject-findings-none" className="rounded bg-ok/10 px-2 py-1 text-[11px] text-ok">
+        No findings here from the live check.
+      </p>
+    );
+  return (
+    <ul data-testid="subject-findings" className="space-y-1">
+      {findings.map((f, i) => (
+        <FindingItem key={`${f.code}-${i}`} f={f} compact />
+      ))}
+    </ul>
+  );
+}
+
+function NodeInspector({ id }: { id: string }) {
+  const api = useEditorStoreApi();
+  const { unitSystem, readOnly } = useEditorConfig();
+  const node = useEditorStore((s) => s.nodes.find((n) => n.id === id));
+  const epoch = useEditorStore((s) => s.epoch);
+  const [pending, setPending] = useState(0);
+  const onValid = useCallback(
+    (v: { label: string; props: unknown }) => {
+      setPending(0);
+      api.getState().updateNode(id, v, { coalesce: `node:${id}` });
+    },
+    [api, id],
+  );
+  // The form's starting values only change when the node changes from outside the form.
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  const value = useMemo(() => (node ? { label: node.label, props: node.props } : null), [id, epoch, unitSystem]);
+  if (!node || !value) return null;
+  return (
+    <div className="space-y-2" data-testid="node-form-panel">
+      <h3 className="flex items-center gap-1.5 text-sm font-semibold text-ink">
+        <KindGlyph kind={node.kind} /> {KIND_NAMES[node.kind]}
+        <span className="ml-auto font-mono text-[10px] font-normal text-ink-soft">{node.id}</span>
+      </h3>
+      <SubjectFindings subjectKey={`node:${id}`} />
+      <SchemaForm
+        key={`${id}:${epoch}:${unitSystem}`}
+        testId="node-form"
+        schema={nodeFormSchema(node.kind)}
+        sections={nodeSections(node.kind)}
+        value={value as Record<string, unknown>}
+        unitSystem={unitSystem}
+        disabled={readOnly}
+        onValid={onValid as never}
+        onInvalid={setPending}
+      />
+      {pending > 0 && <span className="sr-only">{pending} fields need attention</span>}
+    </div>
+  );
+}
+
+function JointInspector({ id }: { id: string }) {
+  const api = useEditorStoreApi();
+  const { unitSystem, readOnly } = useEditorConfig();
+  const joint = useEditorStore((s) => s.joints.find((j) => j.id === id));
+  const name = useEditorStore((s) => {
+    const j = s.joints.find((x) => x.id === id);
+    return j ? jointName(j, s.nodes) : "";
+  });
+  const epoch = useEditorStore((s) => s.epoch);
+  const onValid = useCallback((v: unknown) => api.getState().updateJointHardware(id, v, { coalesce: `joint:${id}` }), [api, id]);
+  // eslint-disable-next-line react-hooks/exhaustive-deps
+  const value = useMemo(() => joint?.hardware ?? null, [id, epoch, unitSystem]);
+  const onFieldChange = useCallback(
+    (path: string, v: string | boolean, set: (p: string, val: string) => void) => {
+      // Picking an AN size fills the shank diameter (and the rod-end thread is left to the builder).
+      if (path === "bolt.size" && typeof v === "string" && v in AN_BOLTS_BY_SIZE) {
+        set("bolt.diameter", inputText(AN_BOLTS_BY_SIZE[v as keyof typeof AN_BOLTS_BY_SIZE].diameter, "length", unitSystem));
+      }
+    },
+    [unitSystem],
+  );
+  if (!joint || !value) return null;
+  return (
+    <div className="space-y-2" data-testid="joint-card">
+      <h3 className="text-sm font-semibold text-ink">
+        Joint card
+        <span className="block text-[11px] font-normal text-ink-soft">{name}</span>
+      </h3>
+      <SubjectFindings subjectKey={`joint:${id}`} />
+      <SchemaForm
+        key={`${id}:${epoch}:${unitSystem}`}
+        testId="joint-form"
+        schema={hardwareSchema}
+        sections={HARDWARE_SECTIONS}
+        value={value as Record<string, unknown>}
+        unitSystem={unitSystem}
+        disabled={readOnly}
+        onValid={onValid}
+        onFieldChange={onFieldChange}
+      />
+      <p className="text-[10px] text-ink-soft">
+        Photos: {joint.hardware.photos.length === 0 ? "none attached" : `${joint.hardware.photos.length} attached`}
+      </p>
+    </div>
+  );
+}
+
+function LinkageOverview({ linkageName }: { linkageName: string }) {
+  const { nodes, joints, sel } = useEditorStore((s) => ({ nodes: s.nodes.length, joints: s.joints.length, sel: s.selection.nodes.length + s.selection.joints.length }));
+  return (
+    <div className="space-y-2 text-[12px] text-ink" data-testid="linkage-overview">
+      <h3 className="text-sm font-semibold">{linkageName}</h3>
+      <p className="text-ink-soft">
+        {nodes} part{nodes === 1 ? "" : "s"}, {joints} joint{joints === 1 ? "" : "s"}
+        {sel > 1 ? ` · ${sel} selected` : ""}.
+      </p>
+      <p className="text-ink-soft">Select a part to edit its dimensions, or a joint to fill in its hardware card.</p>
+      <LinkageFindings />
+    </div>
+  );
+}
+
+export default function Inspector({ linkageId, linkageName, reviewSlot }: { linkageId: string; linkageName: string; reviewSlot?: ReviewSlot }) {
+  const sel = useEditorStore((s) => s.selection);
+  const single =
+    sel.nodes.length + sel.joints.length === 1
+      ? sel.nodes.length === 1
+        ? ({ type: "node", id: sel.nodes[0] } as const)
+        : ({ type: "joint", id: sel.joints[0] } as const)
+      : null;
+  const subject = single ?? ({ type: "linkage", id: linkageId } as const);
+  return (
+    <div className="space-y-3 p-3" data-testid="inspector">
+      {single?.type === "node" && <NodeInspector id={single.id} />}
+      {single?.type === "joint" && <JointInspector id={single.id} />}
+      {!single && <LinkageOverview linkageName={linkageName} />}
+      {reviewSlot && (
+        <div data-testid="review-slot" className="border-t border-ink/10 pt-2">
+          {reviewSlot(subject)}
+        </div>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,84 @@
+/**
+ * Display units for the editor. The format stores US customary values (in, lbf, in·lbf, °);
+ * the user may view and type SI. Conversion factors are exact or the standard definitions.
+ */
+export type UnitSystem = "US" | "SI";
+export type Quantity = "length" | "force" | "torque" | "angle" | "stress" | "count" | "ratio";
+
+type Conv = { us: string; si: string; toSI: number; siDigits: number; usDigits: number };
+const CONV: Record<Exclude<Quantity, "count" | "ratio" | "angle">, Conv> = {
+  length: { us: "in", si: "mm", toSI: 25.4, usDigits: 3, siDigits: 1 },
+  force: { us: "lbf", si: "N", toSI: 4.4482216152605, usDigits: 0, siDigits: 0 },
+  torque: { us: "in·lbf", si: "N·m", toSI: 0.112984829027617, usDigits: 0, siDigits: 1 },
+  stress: { us: "psi", si: "MPa", toSI: 0.00689475729, usDigits: 0, siDigits: 1 },
+};
+
+export function unitLabel(q: Quantity, sys: UnitSystem): string {
+  if (q === "angle") return "°";
+  if (q === "count" || q === "ratio") return "";
+  return sys === "SI" ? CONV[q].si : CONV[q].us;
+}
+
+/** Canonical (US) value → display value. */
+export function toDisplay(v: number, q: Quantity, sys: UnitSystem): number {
+  if (sys === "US" || q === "angle" || q === "count" || q === "ratio") return v;
+  return v * CONV[q].toSI;
+}
+/** Display value → canonical (US) value. */
+export function fromDisplay(v: number, q: Quantity, sys: UnitSystem): number {
+  if (sys === "US" || q === "angle" || q === "count" || q === "ratio") return v;
+  return v / CONV[q].toSI;
+}
+
+function trim(n: number, digits: number): string {
+  const s = n.toFixed(digits);
+  return s.includes(".") ? s.replace(/0+$/, "").replace(/\.$/, "") : s;
+}
+
+/** A number for an input box (no unit), rounded sensibly for the unit system. */
+export function inputText(v: number | undefined, q: Quantity, sys: UnitSystem): string {
+  if (v === undefined || v === null || Number.isNaN(v)) return "";
+  const d = toDisplay(v, q, sys);
+  if (q === "angle" || q === "count" || q === "ratio") return trim(d, 3);
+  return trim(d, sys === "SI" ? Math.max(CONV[q].siDigits, 3) : Math.max(CONV[q].usDigits, 4));
+}
+
+/** "0.250 in" / "6.4 mm" */
+export function fmt(v: number | undefined | null, q: Quantity, sys: UnitSystem, digits?: number): string {
+  if (v === undefined || v === null || !Number.isFinite(v)) return "—";
+  if (q === "angle") return `${trim(v, digits ?? 1)}°`;
+  if (q === "count") return String(Math.round(v));
+  if (q === "ratio") return v.toFixed(digits ?? 2);
+  const c = CONV[q];
+  const d = toDisplay(v, q, sys);
+  const dd = digits ?? (sys === "SI" ? c.siDigits : c.usDigits);
+  return `${d.toFixed(dd)} ${sys === "SI" ? c.si : c.us}`;
+}
+
+/** A number from a finding, whose unit is given as text by the engine. */
+export function fmtUnit(v: number, unit: string, sys: UnitSystem): string {
+  const u = unit.trim();
+  const q: Quantity | null =
+    u === "in" ? "length" : u === "lbf" ? "force" : u === "in·lbf" || u === "in-lbf" || u === "in lbf" ? "torque" : u === "psi" ? "stress" : u === "°" || u === "deg" ? "angle" : null;
+  if (q) {
+    const digits = q === "length" ? (sys === "SI" ? 1 : 3) : undefined;
+    return fmt(v, q, sys, digits);
+  }
+  const s = Math.abs(v) >= 100 ? v.toFixed(0) : Math.abs(v) >= 10 ? v.toFixed(1) : v.toFixed(2);
+  return u ? `${s} ${u}` : s;
+}
+
+/** Parse what the user typed: "", a number, or an error message. */
+export function parseTyped(text: string): { value: number | undefined } | { error: string } {
+  const t = text.trim().replace(",", ".");
+  if (t === "") return { value: undefined };
+  // Accept simple fractions like 3/16 — builders measure in them.
+  const frac = /^(\d+)\s*\/\s*(\d+)$/.exec(t);
+  if (frac) {
+    const den = Number(frac[2]);
+    if (den === 0) return { error: "Division by zero" };
+    return { value: Number(frac[1]) / den };
+  }
+  if (!/^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return { error: `"${text}" is not a number` };
+  return { value: Number(t) };
+}

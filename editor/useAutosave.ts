@@ -1,0 +1,222 @@
+"use client";
+/**
+ * Autosave: reads the editor store and PUTs the graph through a react-query mutation ~1.5 s after
+ * the last change (or at once on Ctrl/Cmd+S). Tracks saved / saving / unsaved / offline / conflict,
+ * and on a 409 keeps the newer revision so the user can load it or keep theirs as a new revision.
+ */
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { useMutation } from "@tanstack/react-query";
+import { useStore } from "zustand";
+import type { LinkageGraph } from "@/shared/linkage/schema";
+import type { Report } from "@/shared/analysis/types";
+import { jointName, KIND_NAMES, toGraph, type EditorStore, type Snapshot } from "./store";
+
+export const AUTOSAVE_DELAY = 1500;
+
+export type SaveStatus = "saved" | "saving" | "unsaved" | "offline" | "conflict" | "error" | "readonly";
+
+export type RemoteRevision = { revision: number; graph: LinkageGraph; author: { id: string; name: string }; createdAt: string };
+
+export class SaveError extends Error {
+  constructor(
+    public status: number,
+    public code: string,
+    message: string,
+    public body: unknown,
+  ) {
+    super(message);
+  }
+}
+
+type PutResult = { revision: number; analysis?: Report; createdAt: string };
+
+export function graphUrl(buildId: string, linkageId: string) {
+  return `/api/builds/${encodeURIComponent(buildId)}/linkages/${encodeURIComponent(linkageId)}/graph`;
+}
+
+async function putGraph(url: string, body: { baseRevision: number; graph: LinkageGraph }): Promise<PutResult> {
+  const res = await fetch(url, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+  const json = (await res.json().catch(() => null)) as { error?: { code?: string; message?: string } } | null;
+  if (!res.ok) {
+    throw new SaveError(res.status, json?.error?.code ?? "http_error", json?.error?.message ?? `The server answered ${res.status}`, json);
+  }
+  return json as unknown as PutResult;
+}
+
+export type Difference = {
+  parts: { onlyTheirs: string[]; onlyMine: string[]; changed: string[] };
+  joints: { onlyTheirs: string[]; onlyMine: string[]; changed: string[] };
+};
+
+/** What differs between my graph and theirs, by name. */
+export function diffGraphs(mine: Snapshot, theirs: Snapshot): Difference {
+  const nodeName = (s: Snapshot, id: string) => {
+    const n = s.nodes.find((x) => x.id === id);
+    return n ? n.label || KIND_NAMES[n.kind] : id;
+  };
+  const side = <T extends { id: string }>(a: T[], b: T[], name: (side: "mine" | "theirs", x: T) => string) => {
+    const ma = new Map(a.map((x) => [x.id, x]));
+    const mb = new Map(b.map((x) => [x.id, x]));
+    return {
+      onlyMine: a.filter((x) => !mb.has(x.id)).map((x) => name("mine", x)),
+      onlyTheirs: b.filter((x) => !ma.has(x.id)).map((x) => name("theirs", x)),
+      changed: a.filter((x) => mb.has(x.id) && JSON.stringify(x) !== JSON.stringify(mb.get(x.id))).map((x) => name("mine", x)),
+    };
+  };
+  return {
+    parts: side(mine.nodes, theirs.nodes, (_s, n) => n.label || KIND_NAMES[n.kind]),
+    joints: side(mine.joints, theirs.joints, (s, j) => jointName(j, s === "mine" ? mine.nodes : theirs.nodes) || `${nodeName(mine, j.from.node)}`),
+  };
+}
+
+export function useAutosave(opts: { store: EditorStore; buildId: string; linkageId: string; enabled: boolean }) {
+  const { store, enabled } = opts;
+  const url = graphUrl(opts.buildId, opts.linkageId);
+  const dirty = useStore(store, (s) => s.dirty);
+  const [inFlight, setInFlight] = useState(false);
+  const [offline, setOffline] = useState(false);
+  const [error, setError] = useState<{ message: string; fields?: unknown } | null>(null);
+  const [conflict, setConflict] = useState<RemoteRevision | null>(null);
+  const [lastSavedAt, setLastSavedAt] = useState<string | null>(null);
+  const timer = useRef<ReturnType<typeof setTimeout> | null>(null);
+  const busy = useRef(false);
+  const conflictRef = useRef<RemoteRevision | null>(null);
+  conflictRef.current = conflict;
+
+  const mutation = useMutation({ mutationFn: (body: { baseRevision: number; graph: LinkageGraph }) => putGraph(url, body) });
+  const mutate = mutation.mutateAsync;
+
+  const saveRef = useRef<() => Promise<void>>(async () => {});
+  const schedule = useCallback((ms = AUTOSAVE_DELAY) => {
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = setTimeout(() => {
+      timer.current = null;
+      void saveRef.current();
+    }, ms);
+  }, []);
+
+  const save = useCallback(async () => {
+    if (!enabled || busy.current || conflictRef.current) return;
+    const s = store.getState();
+    if (!s.dirty) return;
+    const snapshot: Snapshot = { nodes: s.nodes, joints: s.joints };
+    busy.current = true;
+    setInFlight(true);
+    try {
+      const res = await mutate({ baseRevision: s.revision, graph: toGraph(s, snapshot) });
+      store.getState().markSaved(res.revision, snapshot);
+      setOffline(false);
+      setError(null);
+      setLastSavedAt(res.createdAt ?? new Date().toISOString());
+      if (store.getState().dirty) schedule();
+    } catch (e) {
+      if (e instanceof SaveError) {
+        setOffline(false);
+        if (e.status === 409 && e.code === "stale_revision") {
+          const cur = (e.body as { error?: { current?: RemoteRevision } })?.error?.current;
+          if (cur) setConflict(cur);
+          else setError({ message: e.message });
+        } else if (e.status === 403) {
+          setError({ message: "You no longer have permission to edit this linkage; your changes are not saved." });
+        } else if (e.status === 400) {
+          const fields = (e.body as { error?: { fields?: unknown } })?.error?.fields;
+          setError({ message: `The server refused the linkage: ${e.message}`, fields });
+        } else {
+          setError({ message: e.message });
+          schedule(10_000);
+        }
+      } else {
+        // fetch itself failed: no connection. Try again when the browser says it is back, and every 10 s.
+        setOffline(true);
+        schedule(10_000);
+      }
+    } finally {
+      busy.current = false;
+      setInFlight(false);
+    }
+  }, [enabled, store, mutate, schedule]);
+  saveRef.current = save;
+
+  // Every change while dirty restarts the quiet-period timer.
+  useEffect(() => {
+    if (!enabled) return;
+    return store.subscribe((s, prev) => {
+      if (s.dirty && (s.nodes !== prev.nodes || s.joints !== prev.joints)) schedule();
+    });
+  }, [enabled, store, schedule]);
+
+  useEffect(() => {
+    const online = () => {
+      setOffline(false);
+      if (store.getState().dirty) schedule(200);
+    };
+    const offlineEv = () => setOffline(true);
+    window.addEventListener("online", online);
+    window.addEventListener("offline", offlineEv);
+    return () => {
+      window.removeEventListener("online", online);
+      window.removeEventListener("offline", offlineEv);
+    };
+  }, [store, schedule]);
+
+  // Leaving with unsaved work asks first.
+  useEffect(() => {
+    const onBeforeUnload = (e: BeforeUnloadEvent) => {
+      if (store.getState().dirty || busy.current) {
+        e.preventDefault();
+        e.returnValue = "";
+      }
+    };
+    window.addEventListener("beforeunload", onBeforeUnload);
+    return () => window.removeEventListener("beforeunload", onBeforeUnload);
+  }, [store]);
+
+  useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
+
+  const saveNow = useCallback(() => {
+    if (timer.current) clearTimeout(timer.current);
+    timer.current = null;
+    void save();
+  }, [save]);
+
+  const loadTheirs = useCallback(() => {
+    const c = conflictRef.current;
+    if (!c) return;
+    store.getState().replaceGraph(c.graph, { revision: c.revision });
+    setConflict(null);
+    setError(null);
+    setLastSavedAt(c.createdAt);
+  }, [store]);
+
+  const keepMine = useCallback(() => {
+    const c = conflictRef.current;
+    if (!c) return;
+    store.getState().rebase(c.revision);
+    conflictRef.current = null;
+    setConflict(null);
+    setError(null);
+    void save();
+  }, [store, save]);
+
+  const difference = useMemo(() => {
+    if (!conflict) return null;
+    const s = store.getState();
+    return diffGraphs({ nodes: s.nodes, joints: s.joints }, { nodes: conflict.graph.nodes, joints: conflict.graph.joints });
+  }, [conflict, store]);
+
+  const status: SaveStatus = !enabled
+    ? "readonly"
+    : conflict
+      ? "conflict"
+      : inFlight
+        ? "saving"
+        : offline
+          ? "offline"
+          : error
+            ? "error"
+            : dirty
+              ? "unsaved"
+              : "saved";
+
+  return { status, error, conflict, difference, lastSavedAt, saveNow, loadTheirs, keepMine };
+}
