@@ -33,7 +33,7 @@ describe("sign-in in a real browser", () => {
     await page.getByLabel("E-mail").fill(DEMO_USERS[2].email);
     await page.getByLabel("Password").fill("not the password");
     await page.getByRole("button", { name: "Sign in" }).click();
-    await expect(page.getByRole("alert").textContent()).resolves.toMatch(/do not match/);
+    await expect(page.getByTestId("sign-in-error").textContent()).resolves.toMatch(/do not match/);
     const session = await (await page.request.get(`${APP_URL}/api/auth/session`)).json();
     expect(session?.user).toBeUndefined();
   });

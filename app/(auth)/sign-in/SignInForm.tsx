@@ -26,7 +26,7 @@ export function SignInForm({ next }: { next: string }) {
       <Field label="Password" htmlFor="password">
         <Input id="password" name="password" type="password" autoComplete="current-password" required />
       </Field>
-      {error ? <p role="alert" className="rounded bg-hazard/10 px-2 py-1 text-xs text-hazard">{error}</p> : null}
+      {error ? <p role="alert" data-testid="sign-in-error" className="rounded bg-hazard/10 px-2 py-1 text-xs text-hazard">{error}</p> : null}
       <Button type="submit" className="w-full justify-center" disabled={busy}>{busy ? "Signing in…" : "Sign in"}</Button>
       <p className="text-center text-xs text-ink-soft">
         New here? <Link className="text-advisory underline" href={`/sign-up?next=${encodeURIComponent(next)}`}>Create an account</Link>
