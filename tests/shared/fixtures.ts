@@ -1,0 +1,113 @@
+/**
+ * Fixture builders for the engine tests. goodRun() is a complete, correct short pitch run (stick →
+ * pushrod → horn → elevator, mounted pivots and hinge) that must produce no findings at all; each
+ * retention test changes one thing on one joint with withHardware().
+ */
+import type { Joint, JointHardware, LinkageGraph, LinkageNode } from "../../shared/linkage/schema";
+import { graphSchema } from "../../shared/linkage/schema";
+
+export type RodEnd = NonNullable<JointHardware["rodEnd"]>;
+
+export function rodEnd(over: Partial<RodEnd> = {}): RodEnd {
+  return {
+    shank: "male", thread: "1/4-28", hand: "RH", ballBore: 0.25, ballDiameter: 0.531, housingBore: 0.5,
+    ratedUltimate: 5000, ratedMisalignment: 12, hasWitnessHole: true, ...over,
+  };
+}
+
+export function hardware(over: Partial<JointHardware> = {}): JointHardware {
+  return { fit: "clamped", shear: "double", torqueStripe: true, photos: [], note: "", ...over };
+}
+
+/** A complete, correct rod-end joint: AN4 in double shear, jam nut tight, witness hole checked. */
+export function goodRodEndJoint(over: Partial<JointHardware> = {}, re: Partial<RodEnd> = {}): JointHardware {
+  return hardware({
+    rodEnd: rodEnd(re),
+    jamNut: { fitted: true, tightened: true },
+    engagement: { witnessHoleVerified: true },
+    bolt: { size: "AN4", material: "steel", grip: 0.75, stack: 0.75, threadsProtruding: 2 },
+    nut: { type: "selfLockingMetal", pattern: "tension" },
+    washerUnderHead: { outsideDiameter: 0.625, thickness: 0.063 },
+    washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
+    torque: 60, // AC 43.13-1B table 7-1: 1/4-28 tension nut 50–70 in·lbf
+    ...over,
+  });
+}
+
+export function goodBallPivot(over: Partial<JointHardware> = {}): JointHardware {
+  return hardware({
+    bearing: "ballBearing",
+    bolt: { size: "AN5", material: "steel", grip: 1.25, stack: 1.25, threadsProtruding: 2 },
+    nut: { type: "selfLockingMetal", pattern: "tension" },
+    washerUnderHead: { outsideDiameter: 0.75, thickness: 0.063 },
+    washerUnderNut: { outsideDiameter: 0.75, thickness: 0.063 },
+    torque: 120, // AC 43.13-1B table 7-1: 5/16-24 tension nut 100–140 in·lbf
+    ...over,
+  });
+}
+
+export function goodClamp(over: Partial<JointHardware> = {}): JointHardware {
+  return hardware({
+    bolt: { size: "AN3", material: "steel", grip: 0.5, stack: 0.5, threadsProtruding: 2 },
+    nut: { type: "selfLockingMetal", pattern: "tension" },
+    washerUnderHead: { outsideDiameter: 0.438, thickness: 0.032 },
+    washerUnderNut: { outsideDiameter: 0.438, thickness: 0.032 },
+    torque: 22, // AC 43.13-1B table 7-1: 10-32 tension nut 20–25 in·lbf
+    ...over,
+  });
+}
+
+export function j(id: string, from: [string, string], to: [string, string], hw: JointHardware): Joint {
+  return { id, from: { node: from[0], port: from[1] }, to: { node: to[0], port: to[1] }, hardware: hw };
+}
+
+let x = 0;
+const at = () => ({ x: (x += 220), y: 200 });
+
+export const stick = (id: string, gripArm: number, attachArm: number, extra: Partial<Extract<LinkageNode, { kind: "stick" }>["props"]> = {}): LinkageNode =>
+  ({ id, kind: "stick", label: "", position: at(), props: { gripArm, attachArm, axis: "pitch", travelFwd: 15, travelAft: 15, ...extra } });
+export const mount = (id: string): LinkageNode => ({ id, kind: "structureMount", label: "", position: at(), props: { note: "" } });
+export const pushrod = (id: string, material: "4130N" | "6061-T6" | "2024-T3", outsideDiameter: number, wall: number, length: number): LinkageNode =>
+  ({ id, kind: "pushrod", label: "", position: at(), props: { material, outsideDiameter, wall, length } });
+export const bellcrank = (id: string, inputArm: number, outputArm: number, armAngle = 90): LinkageNode =>
+  ({ id, kind: "bellcrank", label: "", position: at(), props: { inputArm, outputArm, armAngle } });
+export const horn = (id: string, hornArm: number, linkAngle = 90): LinkageNode =>
+  ({ id, kind: "controlHorn", label: "", position: at(), props: { hornArm, linkAngle } });
+export const surface = (id: string): LinkageNode => ({ id, kind: "controlSurface", label: "", position: at(), props: { travelUp: 25, travelDown: 20 } });
+
+export function graph(nodes: LinkageNode[], joints: Joint[], system: LinkageGraph["system"] = "pitch"): LinkageGraph {
+  return { formatVersion: 1, name: "fixture", system, nodes, joints };
+}
+
+/**
+ * Stick (grip 20 in, attach 5 in) → pushrod 4130N 1.000 × 0.049 × 24 in → horn 2 in → elevator.
+ * Joint ids: "pivot", "rodA" (stick–pushrod a, RH), "rodB" (pushrod b–horn, LH), "horn", "hinge".
+ */
+export function goodRun(): LinkageGraph {
+  return graph(
+    [stick("stick", 20, 5), mount("m1"), pushrod("rod", "4130N", 1, 0.049, 24), horn("hornpart", 2), surface("elev"), mount("m2")],
+    [
+      j("pivot", ["stick", "pivot"], ["m1", "mount"], goodBallPivot()),
+      j("rodA", ["stick", "attach"], ["rod", "a"], goodRodEndJoint({}, { hand: "RH" })),
+      j("rodB", ["rod", "b"], ["hornpart", "attach"], goodRodEndJoint({}, { hand: "LH" })),
+      j("horn", ["hornpart", "surface"], ["elev", "horn"], goodClamp()),
+      j("hinge", ["elev", "hinge"], ["m2", "mount"], goodBallPivot({ bolt: { size: "AN4", material: "steel", grip: 1.25, stack: 1.25, threadsProtruding: 2 }, torque: 60 })),
+    ],
+  );
+}
+
+/** A deep copy of g with joint `id`'s hardware replaced by patch(old). */
+export function withHardware(g: LinkageGraph, id: string, patch: (hw: JointHardware) => JointHardware): LinkageGraph {
+  const copy: LinkageGraph = structuredClone(g);
+  const jt = copy.joints.find((k) => k.id === id);
+  if (!jt) throw new Error(`fixture has no joint ${id}`);
+  jt.hardware = patch(jt.hardware);
+  return copy;
+}
+
+/** Parse through the schema (as every real caller does) and fail loudly if a fixture is invalid. */
+export function valid(g: LinkageGraph): LinkageGraph {
+  const r = graphSchema.safeParse(g);
+  if (!r.success) throw new Error(`invalid fixture: ${JSON.stringify(r.error.issues)}`);
+  return r.data;
+}
