@@ -1,11 +1,14 @@
 import path from "node:path";
+import { fileURLToPath } from "node:url";
 import { defineConfig } from "vitest/config";
+
+const here = path.dirname(fileURLToPath(import.meta.url));
 
 export default defineConfig({
   resolve: {
     tsconfigPaths: true,
     // db/ and lib/ modules guard against reaching the browser; tests run them in Node on purpose.
-    alias: { "server-only": path.resolve(__dirname, "tests/support/empty.ts") },
+    alias: { "server-only": path.resolve(here, "tests/support/empty.ts") },
   },
   test: {
     include: ["tests/**/*.test.ts"],
