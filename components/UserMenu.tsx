@@ -1,5 +1,5 @@
 "use client";
-import { signOut } from "next-auth/react";
+import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { api } from "./api-client";
@@ -29,9 +29,7 @@ export function UserMenu({ name, email, unitSystem }: { name: string; email: str
         ))}
       </div>
       <span className="hidden text-ink-soft sm:inline" title={email}>{name}</span>
-      <button type="button" className="rounded px-2 py-1 hover:bg-ink/5" onClick={() => signOut({ callbackUrl: "/sign-in" })}>
-        Sign out
-      </button>
+      <Link href="/sign-out" className="rounded px-2 py-1 hover:bg-ink/5">Sign out</Link>
     </div>
   );
 }
