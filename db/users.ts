@@ -46,3 +46,28 @@ export async function recentFailures(email: string, ip: string) {
 }
 export const recordFailure = (email: string, ip: string) => db("sign_in_attempts").insert({ email: email.slice(0, 254), ip: ip.slice(0, 64) });
 export const clearFailures = (email: string) => db("sign_in_attempts").whereRaw("lower(email) = lower(?)", [email]).del();
+
+export async function listUsersForAdmin() {
+  const rows = await db("users as u")
+    .select("u.id", "u.email", "u.name", "u.is_site_admin", "u.created_at", db.raw("(select count(*)::int from memberships m where m.user_id = u.id) as builds"))
+    .orderBy("u.created_at", "asc");
+  return rows.map((r: { id: string; email: string; name: string; is_site_admin: boolean; created_at: Date; builds: number }) => ({
+    id: r.id,
+    email: r.email,
+    name: r.name,
+    isSiteAdmin: r.is_site_admin,
+    createdAt: r.created_at.toISOString(),
+    builds: r.builds,
+  }));
+}
+
+export async function setSiteAdmin(id: string, isSiteAdmin: boolean) {
+  return db.transaction(async (trx) => {
+    if (!isSiteAdmin) {
+      const [{ count }] = await trx("users").where({ is_site_admin: true }).whereNot({ id }).count<{ count: string }[]>("* as count");
+      if (Number(count) === 0) return "last_admin" as const;
+    }
+    const n = await trx("users").where({ id }).update({ is_site_admin: isSiteAdmin });
+    return n ? ("ok" as const) : ("missing" as const);
+  });
+}

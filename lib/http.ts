@@ -53,6 +53,14 @@ export function withUser<P = Record<string, string>>(
   };
 }
 
+/** A route for site admins (user management only; they are not members of builds by default). */
+export function withSiteAdmin<P = Record<string, string>>(handler: (a: { req: NextRequest; user: SessionUser; params: P }) => Promise<Response>) {
+  return withUser<P>(async (a) => {
+    if (!a.user.isSiteAdmin) throw forbidden("Only a site admin can do this.");
+    return handler(a);
+  });
+}
+
 /** A public route (sign-up): errors still come back in the one shape. */
 export function withErrors<P = Record<string, string>>(handler: (a: { req: NextRequest; params: P }) => Promise<Response>) {
   return async (req: NextRequest, ctx: RouteCtx<P>) => {

@@ -48,3 +48,5 @@ export const analyzeInput = z.object({ graph: graphSchema, settings: settingsSch
 export const mePatch = z.object({ unitSystem: z.enum(["US", "SI"]) });
 
 export const uuidParam = z.string().uuid();
+
+export const adminUserPatch = z.object({ isSiteAdmin: z.boolean({ error: "isSiteAdmin must be true or false" }) });

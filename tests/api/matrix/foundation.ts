@@ -2,6 +2,9 @@ import { randomUUID } from "node:crypto";
 import { emptyGraph } from "@/shared/linkage/schema";
 import { anyone, edit, manage, read, signedIn, type Ctx, type Row } from "./types";
 
+/** Site-admin routes: no member of a build is a site admin, so every signed-in caller here gets 403 (admins: tests/api/admin.test.ts). */
+const adminOnly = { owner: 403, builder: 403, reviewer: 403, viewer: 403, outsider: 403, anon: 401 };
+
 const unique = () => `new-${randomUUID().slice(0, 8)}@tests.linkwright.test`;
 const B = (c: Ctx) => `/api/builds/${c.buildId}`;
 const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
@@ -14,6 +17,8 @@ export const rows: Record<string, Row> = {
   "GET /api/me":                                        { expect: signedIn(200), path: () => "/api/me" },
   "PATCH /api/me":                                      { expect: signedIn(200), path: () => "/api/me", body: () => ({ unitSystem: "US" }) },
   "POST /api/analyze":                                  { expect: signedIn(200), path: () => "/api/analyze", body: () => ({ graph: emptyGraph() }) },
+  "GET /api/admin/users":                              { expect: adminOnly, path: () => "/api/admin/users" },
+  "PATCH /api/admin/users/[userId]":                    { expect: adminOnly, path: (c) => `/api/admin/users/${c.extraId}`, body: () => ({ isSiteAdmin: true }) },
   "GET /api/builds":                                    { expect: signedIn(200), path: () => "/api/builds" },
   "POST /api/builds":                                   { expect: signedIn(201), path: () => "/api/builds", body: () => ({ name: "Another build" }) },
   "GET /api/builds/[buildId]":                          { expect: read, path: B },
