@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { api } from "./api-client";
 
-export function UserMenu({ name, email, unitSystem }: { name: string; email: string; unitSystem: "US" | "SI" }) {
+export function UserMenu({ name, email, unitSystem, isSiteAdmin = false }: { name: string; email: string; unitSystem: "US" | "SI"; isSiteAdmin?: boolean }) {
   const router = useRouter();
   const [units, setUnits] = useState(unitSystem);
   async function switchUnits(next: "US" | "SI") {
@@ -28,6 +28,7 @@ export function UserMenu({ name, email, unitSystem }: { name: string; email: str
           </button>
         ))}
       </div>
+      {isSiteAdmin ? <Link href="/admin/users" className="rounded px-2 py-1 hover:bg-ink/5">Users</Link> : null}
       <span className="hidden text-ink-soft sm:inline" title={email}>{name}</span>
       <Link href="/sign-out" className="rounded px-2 py-1 hover:bg-ink/5">Sign out</Link>
     </div>

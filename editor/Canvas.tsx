@@ -1,6 +1,6 @@
 "use client";
 /** The React Flow canvas, rendered from the editor store; every change goes back through store actions. */
-import { useCallback, useMemo, useRef } from "react";
+import { useCallback, useMemo, useRef, useState } from "react";
 import {
   Background,
   BackgroundVariant,
@@ -93,7 +93,7 @@ export function useFocusSubject() {
       const centre = (id: string) => {
         const n = s.nodes.find((x) => x.id === id);
         if (!n) return null;
-        const m = s.measured[id] ?? { width: 168, height: 60 };
+        const m = s.measured[id] ?? { width: 148, height: 50 };
         return { x: n.position.x + m.width / 2, y: n.position.y + m.height / 2 };
       };
       let p: { x: number; y: number } | null = null;
@@ -116,6 +116,8 @@ export default function Canvas() {
   const nodes = useFlowNodes(readOnly);
   const edges = useFlowEdges();
   const rf = useReactFlow();
+  // Fit the view to a linkage that opens with parts; an empty one keeps 1:1 so drops land where aimed.
+  const [fitOnOpen] = useState(() => api.getState().nodes.length > 0);
 
   const onNodesChange = useCallback(
     (changes: NodeChange<PartFlowNode>[]) => {
@@ -185,7 +187,7 @@ export default function Canvas() {
       e.preventDefault();
       const p = rf.screenToFlowPosition({ x: e.clientX, y: e.clientY });
       // Drop centres the card on the pointer, snapped to the grid.
-      api.getState().addNode(kind, { x: Math.round((p.x - 84) / GRID) * GRID, y: Math.round((p.y - 25) / GRID) * GRID });
+      api.getState().addNode(kind, { x: Math.round((p.x - 74) / GRID) * GRID, y: Math.round((p.y - 25) / GRID) * GRID });
     },
     [api, rf, readOnly],
   );
@@ -220,7 +222,7 @@ export default function Canvas() {
         disableKeyboardA11y
         snapToGrid
         snapGrid={[GRID, GRID]}
-        fitView
+        fitView={fitOnOpen}
         fitViewOptions={{ padding: 0.2, maxZoom: 1.2 }}
         minZoom={0.05}
         maxZoom={3}

@@ -8,7 +8,8 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import { ReactFlowProvider, useReactFlow, type Node } from "@xyflow/react";
 import { useStore } from "zustand";
 import { useShallow } from "zustand/react/shallow";
-import { graphSchema, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
+import type { ControlSystem, LinkageGraph } from "@/shared/linkage/schema";
+import { parseLinkageFile, serializeLinkage } from "@/shared/linkage/io";
 import type { AnalysisSettings } from "@/shared/analysis/types";
 import { analyze } from "@/shared/analysis";
 import { EditorConfigContext, EditorStoreContext } from "./context";
@@ -113,26 +114,21 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
 
   const exportJson = useCallback(() => {
     const g = toGraph(store.getState());
-    downloadBlob(new Blob([JSON.stringify(g, null, 2) + "\n"], { type: "application/json" }), `${fileSafe(linkageName)}.linkage.json`);
+    downloadBlob(new Blob([serializeLinkage(g)], { type: "application/json" }), `${fileSafe(linkageName)}.linkage.json`);
   }, [store, linkageName]);
 
   const importFile = useCallback(
     async (file: File) => {
-      let data: unknown;
-      try {
-        data = JSON.parse(await file.text());
-      } catch (e) {
-        setImportErrors([`${file.name} is not JSON: ${e instanceof Error ? e.message : String(e)}`]);
-        return;
-      }
-      const r = graphSchema.safeParse(data);
-      if (!r.success) {
-        setImportErrors(r.error.issues.slice(0, 20).map((i) => (i.path.length ? `${i.path.join(".")}: ${i.message}` : i.message)));
+      const r = parseLinkageFile(await file.text());
+      if (!r.ok) {
+        const shown = r.errors.slice(0, 20).map((i) => (i.path ? `${i.path}: ${i.message}` : i.message));
+        if (r.errors.length > 20) shown.push(`…and ${r.errors.length - 20} more`);
+        setImportErrors([`${file.name}:`, ...shown]);
         return;
       }
       setImportErrors(null);
-      store.getState().replaceGraph(r.data);
-      store.getState().setNotice(`Imported ${r.data.nodes.length} parts and ${r.data.joints.length} joints from ${file.name} (undo to go back).`);
+      store.getState().replaceGraph(r.graph);
+      store.getState().setNotice(`Imported ${r.graph.nodes.length} parts and ${r.graph.joints.length} joints from ${file.name} (undo to go back).`);
       setTimeout(() => rf.fitView({ padding: 0.2, maxZoom: 1.2 }), 50);
     },
     [store, rf],
@@ -236,7 +232,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
 
   const s = store.getState;
   return (
-    <div ref={rootRef} className="flex h-full min-h-0 flex-col bg-paper text-ink" data-testid="linkage-editor">
+    <div ref={rootRef} className="flex h-[calc(100vh-3.5rem)] min-h-0 flex-col overflow-hidden bg-paper text-ink" data-testid="linkage-editor">
       <div className="flex flex-wrap items-center gap-1 border-b border-ink/10 bg-white px-2 py-1" role="toolbar" aria-label="Linkage tools">
         <div className="mr-2 min-w-0">
           <div className="truncate text-[13px] font-semibold leading-4" data-testid="editor-title">

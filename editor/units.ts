@@ -1,16 +1,27 @@
 /**
  * Display units for the editor. The format stores US customary values (in, lbf, in·lbf, °);
- * the user may view and type SI. Conversion factors are exact or the standard definitions.
+ * the user may view and type SI. The factors come from the shared units library (shared/units),
+ * taken once, since every conversion here is linear.
  */
+import { convert, unitLabel as sharedLabel, type QuantityKind } from "@/shared/units";
+
+const factor = (k: QuantityKind) => convert(1, k, "US", "SI");
 export type UnitSystem = "US" | "SI";
 export type Quantity = "length" | "force" | "torque" | "angle" | "stress" | "count" | "ratio";
 
 type Conv = { us: string; si: string; toSI: number; siDigits: number; usDigits: number };
+const conv = (k: "length" | "force" | "torque" | "stress", usDigits: number, siDigits: number): Conv => ({
+  us: sharedLabel(k, "US"),
+  si: sharedLabel(k, "SI"),
+  toSI: factor(k),
+  usDigits,
+  siDigits,
+});
 const CONV: Record<Exclude<Quantity, "count" | "ratio" | "angle">, Conv> = {
-  length: { us: "in", si: "mm", toSI: 25.4, usDigits: 3, siDigits: 1 },
-  force: { us: "lbf", si: "N", toSI: 4.4482216152605, usDigits: 0, siDigits: 0 },
-  torque: { us: "in·lbf", si: "N·m", toSI: 0.112984829027617, usDigits: 0, siDigits: 1 },
-  stress: { us: "psi", si: "MPa", toSI: 0.00689475729, usDigits: 0, siDigits: 1 },
+  length: conv("length", 3, 1),
+  force: conv("force", 0, 0),
+  torque: conv("torque", 0, 1),
+  stress: conv("stress", 0, 1),
 };
 
 export function unitLabel(q: Quantity, sys: UnitSystem): string {

@@ -38,3 +38,14 @@ export async function getObject(key: string): Promise<Buffer | null> {
 export async function deleteObject(key: string) {
   await client().send(new DeleteObjectCommand({ Bucket: bucket(), Key: key }));
 }
+
+/** The object as a web stream (for streaming it to the browser without holding it in memory). */
+export async function getObjectStream(key: string): Promise<{ body: ReadableStream; length: number | undefined } | null> {
+  try {
+    const r = await client().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
+    return { body: r.Body!.transformToWebStream() as ReadableStream, length: r.ContentLength };
+  } catch (e) {
+    if ((e as { name?: string }).name === "NoSuchKey") return null;
+    throw e;
+  }
+}

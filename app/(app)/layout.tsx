@@ -16,7 +16,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
           </svg>
           Linkwright
         </Link>
-        <UserMenu name={user.name} email={user.email} unitSystem={user.unitSystem} />
+        <UserMenu name={user.name} email={user.email} unitSystem={user.unitSystem} isSiteAdmin={user.isSiteAdmin} />
       </header>
       {children}
     </Providers>

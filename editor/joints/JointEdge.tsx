@@ -96,7 +96,7 @@ export const JointEdge = memo(function JointEdge(props: EdgeProps<JointFlowEdge>
         <div
           data-testid={`joint-${id}`}
           data-severity={worst ?? "none"}
-          className="nodrag nopan pointer-events-auto absolute flex cursor-pointer items-center gap-0.5 rounded-full border-2 bg-white px-1 py-0.5 shadow-sm"
+          className="nodrag nopan pointer-events-auto absolute z-10 flex cursor-pointer items-center rounded-full border-[1.5px] bg-white px-0.5 py-px shadow-sm"
           style={{ transform: `translate(-50%, -50%) translate(${lx}px, ${ly}px)`, borderColor: tone, outline: selected ? `2px solid ${INK}` : undefined, outlineOffset: 1 }}
           title={chips.map((c) => c.title).join("\n")}
           onClick={(e) => {

@@ -51,7 +51,7 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
       data-kind={kind}
       data-severity={worst ?? "none"}
       className={[
-        "relative w-[168px] rounded-md border-2 bg-white px-2 py-1.5 text-ink shadow-sm",
+        "group relative w-[148px] rounded-md border-2 bg-white px-2 py-1.5 text-ink shadow-sm",
         worst ? SEVERITY_BORDER[worst] : "border-ink/25",
         selected ? "ring-2 ring-ink ring-offset-1" : "",
       ].join(" ")}
@@ -92,7 +92,8 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
           >
             <span
               className={[
-                "pointer-events-none absolute whitespace-nowrap text-[9px] font-medium uppercase tracking-wide text-ink-soft",
+                "pointer-events-none absolute hidden whitespace-nowrap rounded bg-white/90 px-0.5 text-[9px] font-medium uppercase tracking-wide text-ink-soft group-hover:block",
+                selected ? "!block" : "",
                 side === "left" ? "left-3.5 top-1/2 -translate-y-1/2" : "",
                 side === "right" ? "right-3.5 top-1/2 -translate-y-1/2" : "",
                 side === "top" ? "left-1/2 top-3 -translate-x-1/2" : "",

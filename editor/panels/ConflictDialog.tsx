@@ -8,7 +8,7 @@ function Line({ label, names }: { label: string; names: string[] }) {
   const shown = names.slice(0, 4).join(", ") + (names.length > 4 ? ` and ${names.length - 4} more` : "");
   return (
     <li>
-      <b className="tabular-nums">{names.length}</b> {label}: <span className="text-ink-soft">{shown}</span>
+      <b className="tabular-nums">{names.length}</b> {names.length === 1 ? label.replace(/^parts/, "part").replace(/^joints/, "joint") : label}: <span className="text-ink-soft">{shown}</span>
     </li>
   );
 }

@@ -4,6 +4,7 @@ import { memberAdd } from "@/shared/api";
 import { addMember, createInvitation, listMembers } from "@/db/builds";
 import { findUserByEmail } from "@/db/users";
 import { inviteUrl } from "@/lib/urls";
+import { sendInvitationMail } from "@/lib/review-mail";
 
 export const GET = withBuild("read", async ({ build }) => json({ members: await listMembers(build.id) }));
 
@@ -22,5 +23,6 @@ export const POST = withBuild("manage", async ({ req, user, build }) => {
     return json({ added: { userId: existing.id, name: existing.name, role: body.role } }, 201);
   }
   const { token, invitation } = await createInvitation(build.id, body.email, body.role, user.id);
-  return json({ invitation, link: inviteUrl(token) }, 201);
+  const mailed = await sendInvitationMail({ to: invitation.email, buildName: build.name, role: invitation.role, inviterName: user.name, link: inviteUrl(token), expiresAt: invitation.expiresAt });
+  return json({ invitation, link: inviteUrl(token), mailed }, 201);
 });

@@ -4,6 +4,7 @@ import { ApiError, notFound } from "@/lib/errors";
 import { graphPut, uuidParam } from "@/shared/api";
 import { getLinkage, getRevision, saveRevision } from "@/db/linkages";
 import { analyze } from "@/shared/analysis";
+import { afterRevisionSaved } from "@/lib/review";
 
 type P = { buildId: string; linkageId: string };
 const revisionQuery = z.coerce.number().int().min(1);
@@ -30,5 +31,6 @@ export const PUT = withBuild<P>("edit", async ({ req, user, build, params }) => 
     const current = await getRevision(id);
     throw new ApiError(409, "stale_revision", `Someone saved revision ${current?.revision} while you were editing revision ${baseRevision}.`, undefined, { current });
   }
+  await afterRevisionSaved(build, user, id, saved.revision); // earlier sign-offs are now stale
   return json({ ...saved, analysis });
 });
