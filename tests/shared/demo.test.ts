@@ -1,0 +1,59 @@
+import { describe, expect, it } from "vitest";
+import { analyze } from "../../shared/analysis";
+import { DEMO_WRONG_JOINT, demoPitchLinkage, generateLinkage } from "../../shared/demo";
+import { graphSchema } from "../../shared/linkage/schema";
+
+describe("demo: Larkspur LX-2 pitch run", () => {
+  const g = demoPitchLinkage();
+  const r = analyze(g);
+
+  it("is a valid linkage file and the schema leaves it unchanged", () => {
+    const p = graphSchema.safeParse(g);
+    expect(p.success).toBe(true);
+    expect(p.data).toEqual(g);
+  });
+  it("is stick → forward pushrod → bellcrank → aft pushrod → horn → elevator, laid out left to right", () => {
+    const main = g.nodes.filter((n) => n.kind !== "structureMount");
+    expect(main.map((n) => n.kind)).toEqual(["stick", "pushrod", "bellcrank", "pushrod", "controlHorn", "controlSurface"]);
+    expect(main.map((n) => n.position.x)).toEqual([0, 220, 440, 660, 880, 1100]);
+  });
+  it("shows exactly the deliberate mistakes on the one wrong joint: no jam nut, washer smaller than the housing", () => {
+    const hazards = r.findings.filter((f) => f.severity === "hazard");
+    expect(hazards.map((f) => f.code).sort()).toEqual(["jam-nut-missing", "retaining-washer-small"]);
+    expect(new Set(r.findings.map((f) => f.subject.id))).toEqual(new Set([DEMO_WRONG_JOINT]));
+    // The wrong joint is single shear (that is why its washer matters), which domain.md §3 always flags as a caution.
+    expect(r.findings.filter((f) => f.severity !== "hazard").map((f) => f.code)).toEqual(["rod-end-single-shear"]);
+  });
+  it("has no structural findings", () => {
+    const structural = ["input-reaches-no-surface", "pushrod-end-open", "pivot-unmounted", "linkage-loop", "joint-hardware-missing", "part-unconnected", "part-not-driven", "no-input"];
+    expect(r.findings.filter((f) => structural.includes(f.code))).toEqual([]);
+  });
+  it("the washer finding carries its numbers: 0.438 in washer on a 0.500 in housing bore", () => {
+    const f = r.findings.find((x) => x.code === "retaining-washer-small")!;
+    expect(f.numbers).toEqual([
+      { label: "washer outside diameter", value: 0.438, unit: "in" },
+      { label: "housing bore", value: 0.5, unit: "in" },
+    ]);
+    expect(f.source.kind).toBe("commonPractice");
+  });
+  it("every margin is positive (the mistakes are retention, not strength)", () => {
+    // 167 lbf (14 CFR 23.397(b)) × 20/6 = 556.7 lbf forward; × 3/4 = 417.5 lbf aft
+    expect(r.pushrods.map((p) => Math.round(p.limitAxial * 10) / 10)).toEqual([556.7, 417.5]);
+    expect(r.summary.lowestMargin!.value).toBeGreaterThan(0);
+  });
+});
+
+describe("generateLinkage", () => {
+  it.each([6, 7, 8, 60, 61, 62, 1000, 2503])("makes exactly %s valid parts with no findings", (n) => {
+    const g = generateLinkage(n);
+    expect(g.nodes).toHaveLength(n);
+    expect(graphSchema.safeParse(g).success).toBe(true);
+    const r = analyze(g);
+    expect(r.findings).toEqual([]);
+    expect(r.pushrods.every((p) => p.driven && p.limitAxial > 0)).toBe(true);
+  });
+  it("branches into a tree for larger counts (more than one surface)", () => {
+    const g = generateLinkage(1000);
+    expect(g.nodes.filter((n) => n.kind === "controlSurface").length).toBeGreaterThan(1);
+  });
+});
