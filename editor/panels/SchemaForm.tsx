@@ -13,7 +13,7 @@ import { fromDisplay, inputText, parseTyped, unitLabel, type Quantity, type Unit
 
 export type FieldSpec =
   | { type: "number"; path: string; label: string; q: Quantity; required?: boolean; hint?: string; placeholder?: string }
-  | { type: "enum"; path: string; label: string; options: readonly (readonly [string, string])[]; required?: boolean; hint?: string }
+  | { type: "enum"; path: string; label: string; options: readonly (readonly [string, string])[]; required?: boolean; hint?: string; default?: string }
   | { type: "bool"; path: string; label: string; default?: boolean; hint?: string }
   | { type: "text"; path: string; label: string; multiline?: boolean; hint?: string; placeholder?: string };
 
@@ -50,6 +50,7 @@ function toForm(canonical: unknown, sections: SectionSpec[], u: UnitSystem): For
       const k = keyOf(f.path);
       if (f.type === "number") v[k] = inputText(cur as number | undefined, f.q, u);
       else if (f.type === "bool") v[k] = cur === undefined ? (f.default ?? false) : Boolean(cur);
+      else if (f.type === "enum") v[k] = cur === undefined || cur === null ? (f.default ?? "") : String(cur);
       else v[k] = cur === undefined || cur === null ? "" : String(cur);
     }
   }

@@ -8,7 +8,7 @@ const PROPS: Record<NodeKind, SectionSpec["fields"]> = {
   stick: [
     { type: "number", path: "props.gripArm", label: "Grip arm", q: "length", required: true, hint: "pivot to hand-grip centre" },
     { type: "number", path: "props.attachArm", label: "Link arm", q: "length", required: true, hint: "pivot to the pushrod hole" },
-    { type: "enum", path: "props.axis", label: "Axis", options: opts(["pitch", "roll"] as const), required: true },
+    { type: "enum", path: "props.axis", label: "Axis", options: opts(["pitch", "roll"] as const), required: true, default: "pitch" },
     { type: "number", path: "props.designForce", label: "Design force override", q: "force", hint: "empty = the build setting" },
     { type: "number", path: "props.travelFwd", label: "Forward travel", q: "angle" },
     { type: "number", path: "props.travelAft", label: "Aft travel", q: "angle" },
@@ -33,7 +33,7 @@ const PROPS: Record<NodeKind, SectionSpec["fields"]> = {
     { type: "number", path: "props.outputArm", label: "Output arm", q: "length", required: true },
   ],
   pushrod: [
-    { type: "enum", path: "props.material", label: "Tube material", options: opts(TUBE_MATERIALS), required: true },
+    { type: "enum", path: "props.material", label: "Tube material", options: opts(TUBE_MATERIALS), required: true, default: "4130N" },
     { type: "number", path: "props.outsideDiameter", label: "Outside diameter", q: "length", required: true },
     { type: "number", path: "props.wall", label: "Wall thickness", q: "length", required: true },
     { type: "number", path: "props.length", label: "Length, ball to ball", q: "length", required: true },
@@ -72,9 +72,9 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     title: "Rod-end bearing",
     optional: "rodEnd",
     fields: [
-      { type: "enum", path: "rodEnd.shank", label: "Shank", options: opts(["male", "female"] as const), required: true },
+      { type: "enum", path: "rodEnd.shank", label: "Shank", options: opts(["male", "female"] as const), required: true, default: "male" },
       { type: "enum", path: "rodEnd.thread", label: "Thread (UNF)", options: opts(THREADS), required: true },
-      { type: "enum", path: "rodEnd.hand", label: "Thread hand", options: [["RH", "right-hand"], ["LH", "left-hand"]], required: true },
+      { type: "enum", path: "rodEnd.hand", label: "Thread hand", options: [["RH", "right-hand"], ["LH", "left-hand"]], required: true, default: "RH" },
       { type: "number", path: "rodEnd.ballBore", label: "Ball bore", q: "length", required: true },
       { type: "number", path: "rodEnd.ballDiameter", label: "Ball diameter", q: "length" },
       { type: "number", path: "rodEnd.housingBore", label: "Housing bore", q: "length", hint: "the retaining washer must be larger" },
@@ -100,7 +100,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     fields: [
       { type: "enum", path: "bolt.size", label: "Size", options: [...opts(AN_BOLTS), ["custom", "other"]], required: true },
       { type: "number", path: "bolt.diameter", label: "Shank diameter", q: "length", hint: "filled from the AN size" },
-      { type: "enum", path: "bolt.material", label: "Material", options: [["steel", "steel"], ["aluminium", "aluminium"]], required: true },
+      { type: "enum", path: "bolt.material", label: "Material", options: [["steel", "steel"], ["aluminium", "aluminium"]], required: true, default: "steel" },
       { type: "number", path: "bolt.grip", label: "Grip length", q: "length" },
       { type: "number", path: "bolt.stack", label: "Clamped stack", q: "length" },
       { type: "number", path: "bolt.threadsProtruding", label: "Threads past the nut", q: "count" },
@@ -111,7 +111,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     optional: "nut",
     fields: [
       { type: "enum", path: "nut.type", label: "Type and locking", options: opts(NUT_TYPES, NUT_NAMES), required: true },
-      { type: "enum", path: "nut.pattern", label: "Pattern", options: [["tension", "tension (full)"], ["shear", "shear (thin)"]], required: true },
+      { type: "enum", path: "nut.pattern", label: "Pattern", options: [["tension", "tension (full)"], ["shear", "shear (thin)"]], required: true, default: "tension" },
       { type: "bool", path: "nut.cotterPinNew", label: "New cotter pin" },
     ],
   },
@@ -135,8 +135,8 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
   {
     title: "Fit, torque & marks",
     fields: [
-      { type: "enum", path: "fit", label: "Bolt fit", options: [["clamped", "clamped on the race"], ["freeToRotate", "free to rotate"]], required: true },
-      { type: "enum", path: "shear", label: "Shear", options: [["single", "single"], ["double", "double"]], required: true },
+      { type: "enum", path: "fit", label: "Bolt fit", options: [["clamped", "clamped on the race"], ["freeToRotate", "free to rotate"]], required: true, default: "clamped" },
+      { type: "enum", path: "shear", label: "Shear", options: [["single", "single"], ["double", "double"]], required: true, default: "double" },
       { type: "enum", path: "bearing", label: "Turns on", options: [["rodEnd", "rod end"], ["ballBearing", "ball bearing"], ["plainBushing", "plain bushing"], ["clevisPin", "clevis pin"], ["none", "nothing (fixed)"]] },
       { type: "number", path: "torque", label: "Applied torque", q: "torque", hint: "including the nut's drag" },
       { type: "bool", path: "torqueStripe", label: "Torque stripe applied" },

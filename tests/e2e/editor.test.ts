@@ -1,0 +1,185 @@
+/**
+ * The linkage editor in Debian Chromium, against the served app: build a control run with the
+ * mouse, fill a joint card, watch a finding come and go, reload, export a picture, and meet a
+ * save conflict from a second page. Screenshots of every step land in tests/artifacts/editor-*.png.
+ */
+import { readFileSync } from "node:fs";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
+import sharp from "sharp";
+import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
+import { DEMO_BUILD, DEMO_USERS } from "@/db/demo-accounts";
+import { EXPORT_SIZE } from "@/editor/export";
+
+let browser: Browser;
+let context: BrowserContext;
+let page: Page;
+let editorUrl = "";
+const errors: string[] = [];
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  context = await browser.newContext({ viewport: { width: 1600, height: 1000 }, acceptDownloads: true });
+  page = await context.newPage();
+  page.on("pageerror", (e) => errors.push(String(e)));
+});
+afterAll(() => browser?.close());
+
+const canvas = (p: Page) => p.getByTestId("canvas");
+const status = (p: Page) => p.getByTestId("save-status");
+
+async function waitSaved(p: Page) {
+  await p.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "saved", null, { timeout: 15_000 });
+}
+
+/** Drag a kind from the parts tray and drop it at a point of the canvas. */
+async function dropPart(p: Page, kind: string, x: number, y: number): Promise<string> {
+  const before = await p.locator(".react-flow__node").count();
+  await p.getByTestId(`tray-${kind}`).dragTo(canvas(p), { targetPosition: { x, y } });
+  await expect.poll(() => p.locator(".react-flow__node").count()).toBe(before + 1);
+  const id = await p.locator(".react-flow__node").nth(before).getAttribute("data-id");
+  return id!;
+}
+
+async function centre(l: Locator) {
+  const b = await l.boundingBox();
+  if (!b) throw new Error("not on screen");
+  return { x: b.x + b.width / 2, y: b.y + b.height / 2 };
+}
+
+/** Press on one port, move to the other, let go — as a person connects two parts. */
+async function connect(p: Page, from: [string, string], to: [string, string]) {
+  const before = await p.locator(".react-flow__edge").count();
+  const a = await centre(p.getByTestId(`port-${from[0]}-${from[1]}`));
+  const b = await centre(p.getByTestId(`port-${to[0]}-${to[1]}`));
+  await p.mouse.move(a.x, a.y);
+  await p.mouse.down();
+  await p.mouse.move((a.x + b.x) / 2, (a.y + b.y) / 2 + 10, { steps: 6 });
+  await p.mouse.move(b.x, b.y, { steps: 6 });
+  await p.mouse.up();
+  await expect.poll(() => p.locator(".react-flow__edge").count()).toBe(before + 1);
+}
+
+describe("linkage editor in a real browser", () => {
+  const name = `Pitch run ${Date.now().toString(36)}`;
+  let ids: { stick: string; fwd: string; crank: string; aft: string; horn: string };
+  let jointId = "";
+
+  it("the demo builder creates a linkage and opens the editor", async () => {
+    const dana = DEMO_USERS[0];
+    await signInPage(page, dana.email, dana.password);
+    await page.getByTestId("build-card").filter({ hasText: DEMO_BUILD.name }).click();
+    await page.waitForURL(/\/builds\/[0-9a-f-]{36}$/);
+    await page.getByTestId("new-linkage").click();
+    await page.getByTestId("linkage-name").fill(name);
+    await page.getByTestId("create-linkage").click();
+    const row = page.getByTestId("linkage-row").filter({ hasText: name });
+    await row.waitFor();
+    await row.getByRole("link", { name }).click();
+    await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
+    editorUrl = page.url();
+    await expect(status(page).getAttribute("data-status")).resolves.toBe("saved");
+    await shot(page, "editor-01-empty");
+  });
+
+  it("builds stick → pushrod → bellcrank → pushrod → horn with the mouse", async () => {
+    const y = 260;
+    ids = {
+      stick: await dropPart(page, "stick", 110, y),
+      fwd: await dropPart(page, "pushrod", 320, y),
+      crank: await dropPart(page, "bellcrank", 530, y),
+      aft: await dropPart(page, "pushrod", 740, y),
+      horn: await dropPart(page, "controlHorn", 950, y),
+    };
+    await connect(page, [ids.stick, "attach"], [ids.fwd, "a"]);
+    await connect(page, [ids.fwd, "b"], [ids.crank, "in"]);
+    await connect(page, [ids.crank, "out"], [ids.aft, "a"]);
+    await connect(page, [ids.aft, "b"], [ids.horn, "attach"]);
+    expect(await page.locator(".react-flow__edge").count()).toBe(4);
+    await shot(page, "editor-02-run-built");
+    await waitSaved(page);
+  });
+
+  it("fills a joint card: a rod end without a jam nut is flagged, fitting one clears it", async () => {
+    const edge = page.locator(".react-flow__edge").nth(1);
+    jointId = (await edge.getAttribute("data-id"))!;
+    await page.getByTestId(`joint-${jointId}`).click();
+    const card = page.getByTestId("joint-card");
+    await card.waitFor();
+    await card.getByTestId("joint-form-on-rodEnd").check();
+    await card.getByTestId("joint-form-rodEnd__thread").selectOption("1/4-28");
+    await card.getByTestId("joint-form-rodEnd__ballBore").fill("0.25");
+    await card.getByTestId("joint-form-rodEnd__ratedUltimate").fill("abc");
+    // Typed nonsense is explained and not applied.
+    await expect(card.getByTestId("joint-form-rodEnd__ratedUltimate-error").textContent()).resolves.toMatch(/not a number/);
+    await card.getByTestId("joint-form-rodEnd__ratedUltimate").fill("3000");
+    await card.getByTestId("joint-form-engagement__witnessHoleVerified").check();
+    const jam = card.locator("[data-testid=subject-findings] [data-code=jam-nut-missing]");
+    await jam.waitFor({ timeout: 5000 });
+    await expect(page.getByTestId(`joint-${jointId}`).getAttribute("data-severity")).resolves.toBe("hazard");
+    await shot(page, "editor-03-jam-nut-missing");
+    await card.getByTestId("joint-form-jamNut__fitted").check();
+    await card.getByTestId("joint-form-jamNut__tightened").check();
+    await expect.poll(() => card.locator("[data-code^=jam-nut]").count(), { timeout: 5000 }).toBe(0);
+    await expect(page.getByTestId(`joint-${jointId}`).locator("[data-chip=jamNut]").getAttribute("data-state")).resolves.toBe("solid");
+    await shot(page, "editor-04-jam-nut-fitted");
+    await waitSaved(page);
+  });
+
+  it("reloads and finds everything saved", async () => {
+    await page.reload();
+    await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
+    expect(await page.locator(".react-flow__node").count()).toBe(5);
+    expect(await page.locator(".react-flow__edge").count()).toBe(4);
+    await page.getByTestId(`joint-${jointId}`).click();
+    const card = page.getByTestId("joint-card");
+    await expect(card.getByTestId("joint-form-jamNut__tightened").isChecked()).resolves.toBe(true);
+    await expect(card.getByTestId("joint-form-rodEnd__ratedUltimate").inputValue()).resolves.toBe("3000");
+    expect(Number(await page.getByTestId("editor-revision").textContent())).toBeGreaterThan(1);
+    await shot(page, "editor-05-reloaded");
+  });
+
+  it("exports a PNG of the whole linkage with its title block", async () => {
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("btn-export-png").click()]);
+    const file = await download.path();
+    const buf = readFileSync(file!);
+    expect(buf.subarray(1, 4).toString("latin1")).toBe("PNG");
+    const img = sharp(buf);
+    const meta = await img.metadata();
+    expect(meta.format).toBe("png");
+    expect(meta.width).toBe(EXPORT_SIZE.width);
+    expect(meta.height).toBe(EXPORT_SIZE.height);
+    // Not blank: the diagram area holds a fair share of non-white pixels.
+    const { data, info } = await sharp(buf).extract({ left: 0, top: 0, width: EXPORT_SIZE.width, height: 1800 }).removeAlpha().raw().toBuffer({ resolveWithObject: true });
+    let ink = 0;
+    for (let i = 0; i < data.length; i += info.channels) if (data[i] < 200 || data[i + 1] < 200 || data[i + 2] < 200) ink++;
+    expect(ink / (info.width * info.height)).toBeGreaterThan(0.002);
+    await sharp(buf).resize({ width: 1200 }).toFile("tests/artifacts/editor-06-export.png");
+  });
+
+  it("a stale page meets the conflict dialog with the newer author and the difference", async () => {
+    const other = await context.newPage();
+    other.on("pageerror", (e) => errors.push(String(e)));
+    await other.goto(editorUrl);
+    await other.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
+    // Edit in the second page and let it save.
+    await other.getByTestId("tray-travelStop").click();
+    await waitSaved(other);
+    await shot(other, "editor-07-second-page-saved");
+    // The first page is now stale: its edit gets the dialog.
+    await page.getByTestId(`node-${ids.horn}`).click();
+    await page.getByTestId("node-form-label").fill("Elevator horn, left");
+    await page.getByTestId("btn-save").click();
+    const dialog = page.getByTestId("conflict-dialog");
+    await dialog.waitFor({ timeout: 10_000 });
+    await expect(dialog.getByTestId("conflict-author").textContent()).resolves.toContain(DEMO_USERS[0].name);
+    await expect(dialog.getByTestId("conflict-diff").textContent()).resolves.toMatch(/only in theirs.*Travel stop/s);
+    await expect(status(page).getAttribute("data-status")).resolves.toBe("conflict");
+    await shot(page, "editor-08-conflict");
+    await dialog.getByTestId("conflict-keep-mine").click();
+    await waitSaved(page);
+    await shot(page, "editor-09-kept-mine");
+    await other.close();
+    expect(errors).toEqual([]);
+  });
+});
