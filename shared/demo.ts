@@ -179,9 +179,11 @@ export function generateLinkage(nodeCount: number): LinkageGraph {
   const main = buildBranch(open[0], perBranch[0], 0, true);
   ends.push([...main, 0]);
   for (let b = 1; b < branches; b++) {
-    const [sp, col] = splitPoints[b - 1];
+    // Split off crank b-1 of the main branch (reusing cranks when branches outnumber them), or the stick.
+    const [sp, col] = splitPoints.length ? splitPoints[(b - 1) % splitPoints.length] : ["stick", 0];
+    const port = splitPoints.length ? "out" : "attach";
     const row = 2 * b;
-    ends.push([...buildBranch([sp, "out", col, row], perBranch[b], row, false), row]);
+    ends.push([...buildBranch([sp, port, col, row], perBranch[b], row, false), row]);
   }
   let padLeft = pad;
   ends.forEach(([fromId, fromPort, col, row], i) => {

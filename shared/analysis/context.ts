@@ -62,11 +62,15 @@ export function jointsAt(ctx: Ctx, n: number, port: string): number[] {
   return (m && m[port]) || EMPTY;
 }
 
-/** The far end of joint j seen from node n: [node index, port], or null when it is missing. */
-export function otherEnd(ctx: Ctx, j: number, n: number): [number, string] | null {
+/** Node index at the far end of joint j seen from node n (-1 when it is missing). No allocation. */
+export function otherNode(ctx: Ctx, j: number, n: number): number {
+  return ctx.jFrom[j] === n ? ctx.jTo[j] : ctx.jFrom[j];
+}
+
+/** Port at the far end of joint j seen from node n. */
+export function otherPort(ctx: Ctx, j: number, n: number): string {
   const jt = ctx.joints[j];
-  if (ctx.jFrom[j] === n) return ctx.jTo[j] >= 0 ? [ctx.jTo[j], jt.to.port] : null;
-  return ctx.jFrom[j] >= 0 ? [ctx.jFrom[j], jt.from.port] : null;
+  return ctx.jFrom[j] === n ? jt.to.port : jt.from.port;
 }
 
 /** The pushrod end (node index and port) on joint j, if one end is a pushrod. */

@@ -22,7 +22,7 @@
  */
 import type { LinkageGraph, LinkageNode } from "../linkage/schema";
 import type { AnalysisSettings } from "./types";
-import { type Ctx, jointsAt, otherEnd } from "./context";
+import { type Ctx, jointsAt, otherNode, otherPort } from "./context";
 
 export type InputLoad = { node: number; gripForce: number; linkForce: number; reachesSurface: boolean };
 
@@ -138,9 +138,9 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
       if (visited[j] === stamp) continue;
       visited[j] = stamp;
       recJ(j, f);
-      const far = otherEnd(ctx, j, from);
-      if (!far) continue;
-      const [n, port] = far;
+      const n = otherNode(ctx, j, from);
+      if (n < 0) continue;
+      const port = otherPort(ctx, j, from);
       const node = nodes[n];
       if (!driven[n]) driven[n] = 1;
       switch (node.kind) {

@@ -7,7 +7,7 @@
 import { PORTS } from "../linkage/schema";
 import { SRC } from "../hardware";
 import type { Finding } from "./types";
-import { type Ctx, jointsAt, nodeLabel, otherEnd } from "./context";
+import { type Ctx, jointsAt, nodeLabel, otherNode } from "./context";
 import type { Loads } from "./loads";
 import { finding, jointSubject, linkageSubject, nodeSubject } from "./format";
 
@@ -25,23 +25,19 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
   // Joints: ends that do not resolve (only in graphs that skipped the schema), ports, hardware.
   for (let j = 0; j < joints.length; j++) {
     const jt = joints[j];
-    const s = jointSubject(jt.id);
     const f = ctx.jFrom[j], t = ctx.jTo[j];
     if (f < 0 || t < 0) {
-      out.push(finding("joint-end-missing", "caution", s, `Joint ${jt.id} refers to a part that is not in the drawing; it is left out of the check.`, SRC.structure));
+      out.push(finding("joint-end-missing", "caution", jointSubject(jt.id), `Joint ${jt.id} refers to a part that is not in the drawing; it is left out of the check.`, SRC.structure));
       continue;
     }
     if (f === t) {
-      out.push(finding("joint-to-itself", "caution", s, `Joint ${jt.id} joins a part to itself; it is left out of the check.`, SRC.structure));
+      out.push(finding("joint-to-itself", "caution", jointSubject(jt.id), `Joint ${jt.id} joins a part to itself; it is left out of the check.`, SRC.structure));
       continue;
     }
-    for (const [n, port] of [[f, jt.from.port], [t, jt.to.port]] as const) {
-      const ports = PORTS[nodes[n].kind];
-      if (ports && !ports.includes(port))
-        out.push(finding("joint-port-unknown", "caution", s, `Joint ${jt.id} attaches to "${port}" of ${nodeLabel(nodes[n])}, which a ${nodes[n].kind} does not have; that end carries no load in the check.`, SRC.structure));
-    }
+    checkPort(nodes[f], jt.from.port, jt.id, out);
+    checkPort(nodes[t], jt.to.port, jt.id, out);
     if (!hasHardware(jt.hardware)) {
-      out.push(finding("joint-hardware-missing", "caution", s,
+      out.push(finding("joint-hardware-missing", "caution", jointSubject(jt.id),
         `Joint ${jt.id} has no hardware recorded (no bolt, nut, rod end or bearing), so nothing about it can be checked. Fill in its joint card.`, SRC.structure));
     }
   }
@@ -49,27 +45,26 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
   let inputCount = 0;
   for (let n = 0; n < nodes.length; n++) {
     const node = nodes[n];
-    const subj = nodeSubject(node.id);
     if (node.kind === "stick" || node.kind === "pedal") inputCount++;
     if (ctx.degree[n] === 0) {
-      out.push(finding("part-unconnected", "caution", subj, `${nodeLabel(node)} is not joined to anything. Connect it or remove it.`, SRC.structure));
+      out.push(finding("part-unconnected", "caution", nodeSubject(node.id), `${nodeLabel(node)} is not joined to anything. Connect it or remove it.`, SRC.structure));
       continue;
     }
     if (node.kind === "pushrod") {
       for (const end of ["a", "b"]) {
         if (jointsAt(ctx, n, end).length === 0)
-          out.push(finding("pushrod-end-open", "caution", subj,
+          out.push(finding("pushrod-end-open", "caution", nodeSubject(node.id),
             `Pushrod ${nodeLabel(node)} has nothing on its ${end} end. A pushrod carries load only between two joints; connect both ends.`, SRC.structure));
       }
     }
     if (PIVOTED.has(node.kind)) {
       let mounted = false;
       for (const k of jointsAt(ctx, n, "pivot")) {
-        const far = otherEnd(ctx, k, n);
-        if (far && nodes[far[0]].kind === "structureMount") { mounted = true; break; }
+        const far = otherNode(ctx, k, n);
+        if (far >= 0 && nodes[far].kind === "structureMount") { mounted = true; break; }
       }
       if (!mounted)
-        out.push(finding("pivot-unmounted", "caution", subj,
+        out.push(finding("pivot-unmounted", "caution", nodeSubject(node.id),
           `${nodeLabel(node)} has no pivot joint to a structure mount, so nothing reacts its pivot load. Join its pivot to the structure it turns on.`, SRC.structure));
     }
   }
@@ -112,4 +107,10 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
         `Joint ${joints[j].id} closes a loop in the run. Loads in a closed loop share out by stiffness, which this check does not model: each path is taken to carry the full force, and the result should be checked by hand.`, SRC.structure));
     else parent[a] = b;
   }
+}
+
+function checkPort(node: Ctx["nodes"][number], port: string, jointId: string, out: Finding[]) {
+  const ports = PORTS[node.kind];
+  if (ports && !ports.includes(port))
+    out.push(finding("joint-port-unknown", "caution", jointSubject(jointId), `Joint ${jointId} attaches to "${port}" of ${nodeLabel(node)}, which a ${node.kind} does not have; that end carries no load in the check.`, SRC.structure));
 }
