@@ -4,7 +4,7 @@ import { makeBuild, makeUser, snapshot, testDb } from "../support/db";
 import { signIn, type Client } from "../support/http";
 import { apiRoutes } from "../support/routes";
 import { BAD_INPUT } from "./matrix";
-import type { Ctx } from "./matrix/types";
+import type { BadInput, Ctx } from "./matrix/types";
 
 const B = (c: Ctx) => `/api/builds/${c.buildId}`;
 const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
@@ -12,7 +12,7 @@ const nodeWithoutArms = { id: "s1", kind: "stick", label: "", position: { x: 0, 
 
 // route → path and a list of malformed bodies, each with a field the error must name
 // prettier-ignore
-const CASES: Record<string, { path: (c: Ctx) => string; bodies: [unknown, string][] }> = {
+const CASES: BadInput = {
   ...BAD_INPUT,
   "POST /api/sign-up": { path: () => "/api/sign-up", bodies: [[{ name: "", email: "not-an-email", password: "short" }, "email"], [{ name: 7 }, "name"]] },
   "PATCH /api/me": { path: () => "/api/me", bodies: [[{ unitSystem: "imperial" }, "unitSystem"]] },
@@ -41,12 +41,15 @@ const NO_BODY = new Set([
 ]);
 
 let owner: Client;
+let reviewer: Client;
 let ctx: Ctx;
 beforeAll(async () => {
   const u = await makeUser("writer");
+  const r = await makeUser("reviewer");
   const extra = await makeUser("extra");
   owner = await signIn(u.email);
-  ctx = { ...(await makeBuild({ owner: u, extra })), extraId: extra.id, token: "", users: {} as Ctx["users"], x: {} };
+  reviewer = await signIn(r.email);
+  ctx = { ...(await makeBuild({ owner: u, reviewer: r, extra })), extraId: extra.id, token: "", users: {} as Ctx["users"], x: {} };
 });
 afterAll(() => testDb.destroy());
 
@@ -60,16 +63,17 @@ describe("malformed input", () => {
   for (const [route, c] of Object.entries(CASES)) {
     const method = route.split(" ")[0];
     it(`${route} → 400 with field errors, nothing changed`, async () => {
+      const sender = c.as === "reviewer" ? reviewer : owner;
       for (const [body, field] of c.bodies) {
         const before = await snapshot();
-        const res = await owner.request(method, c.path(ctx), body);
+        const res = await sender.request(method, c.path(ctx), body);
         expect(res.status, JSON.stringify(res.body)).toBe(400);
         expect(res.body.error.code).toBe("invalid_input");
         expect(Object.keys(res.body.error.fields)).toContain(field);
         expect(await snapshot()).toEqual(before);
       }
       const before = await snapshot();
-      const broken = await owner.request(method, c.path(ctx), undefined, "{not json");
+      const broken = await sender.request(method, c.path(ctx), undefined, "{not json");
       expect(broken.status).toBe(400);
       expect(broken.body.error.code).toBe("invalid_json");
       expect(await snapshot()).toEqual(before);

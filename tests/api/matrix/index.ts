@@ -1,6 +1,7 @@
 /** Every feature's rows of the authorization matrix and its malformed-input cases, in one place. */
 import { rows as foundation } from "./foundation";
+import { rows as review, badInput as reviewBadInput } from "./review";
 import type { BadInput, Row } from "./types";
 
-export const MATRIX: Record<string, Row> = { ...foundation };
-export const BAD_INPUT: BadInput = {};
+export const MATRIX: Record<string, Row> = { ...foundation, ...review };
+export const BAD_INPUT: BadInput = { ...reviewBadInput };

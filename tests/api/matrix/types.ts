@@ -19,7 +19,7 @@ export type Row = {
   send?: (client: Client, c: Ctx) => Promise<{ status: number; body: any }>;
 };
 /** Malformed bodies for a write route, each with a field the 400 must name. */
-export type BadInput = Record<string, { path: (c: Ctx) => string; bodies: [unknown, string][] }>;
+export type BadInput = Record<string, { path: (c: Ctx) => string; bodies: [unknown, string][]; /** Who sends them (default: the owner). */ as?: "owner" | "reviewer" }>;
 
 export const read = { owner: 200, builder: 200, reviewer: 200, viewer: 200, outsider: 404, anon: 401 };
 export const edit = (ok: number) => ({ owner: ok, builder: ok, reviewer: 403, viewer: 403, outsider: 404, anon: 401 });

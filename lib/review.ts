@@ -1,0 +1,71 @@
+import "server-only";
+/** What the review routes share: the linkage and revision they act on, names of subjects, hooks after a save. */
+import { notFound } from "./errors";
+import { getLinkage, getRevision, type RevisionView } from "@/db/linkages";
+import { buildOwners, claimNewlyStaleSignoffs } from "@/db/review";
+import type { Build } from "@/db/builds";
+import type { SessionUser } from "./auth";
+import { analyze } from "@/shared/analysis";
+import type { Report, Subject } from "@/shared/analysis/types";
+import type { LinkageGraph } from "@/shared/linkage/schema";
+import { notifyStale } from "./review-mail";
+
+export async function requireLinkage(buildId: string, linkageId: string) {
+  const linkage = await getLinkage(buildId, linkageId);
+  if (!linkage) throw notFound("linkage");
+  return linkage;
+}
+
+export async function requireRevision(linkageId: string, revision?: number) {
+  const rev = await getRevision(linkageId, revision);
+  if (!rev) throw notFound("revision");
+  return rev;
+}
+
+/** The analysis stored with a revision; revisions saved before the engine ran get it computed now. */
+export function reportOf(build: Build, rev: RevisionView): Report {
+  return rev.analysis ?? analyze(rev.graph, build.analysisSettings);
+}
+
+/** A subject named the way a person reads it: "the joint Aft pushrod – Elevator horn". */
+export function subjectLabel(graph: LinkageGraph, s: Subject): string {
+  const nodeName = (id: string) => {
+    const n = graph.nodes.find((x) => x.id === id);
+    return n ? n.label || n.kind : id;
+  };
+  if (s.type === "node") return `the part ${nodeName(s.id)}`;
+  if (s.type === "joint") {
+    const j = graph.joints.find((x) => x.id === s.id);
+    return j ? `the joint ${nodeName(j.from.node)} – ${nodeName(j.to.node)}` : `the joint ${s.id}`;
+  }
+  return "the linkage";
+}
+
+export function subjectExists(graph: LinkageGraph, s: Subject, linkageId: string) {
+  if (s.type === "node") return graph.nodes.some((n) => n.id === s.id);
+  if (s.type === "joint") return graph.joints.some((j) => j.id === s.id);
+  return s.id === linkageId;
+}
+
+/** After a new revision is saved: sign-offs of earlier revisions are stale; tell the owners once. */
+export async function afterRevisionSaved(build: Build, user: SessionUser, linkageId: string, revision: number) {
+  try {
+    const stale = await claimNewlyStaleSignoffs(linkageId, revision);
+    if (stale.length === 0) return;
+    const linkage = await getLinkage(build.id, linkageId);
+    await notifyStale({
+      owners: await buildOwners(build.id),
+      editorId: user.id,
+      editorName: user.name,
+      buildId: build.id,
+      buildName: build.name,
+      linkageId,
+      linkageName: linkage?.name ?? "linkage",
+      signed: stale,
+      newRevision: revision,
+    });
+  } catch (e) {
+    // The save itself succeeded; a mail problem must not turn it into an error.
+    console.error("[review] stale sign-off notice failed", e);
+  }
+}
