@@ -31,14 +31,14 @@ describe("demo: Larkspur LX-2 pitch run", () => {
   it("the washer finding carries its numbers: 0.438 in washer on a 0.500 in housing bore", () => {
     const f = r.findings.find((x) => x.code === "retaining-washer-small")!;
     expect(f.numbers).toEqual([
-      { label: "washer outside diameter", value: 0.438, unit: "in" },
-      { label: "housing bore", value: 0.5, unit: "in" },
+      { label: "washer outside diameter", value: 0.438, unit: "in" }, // invented demo washer (AN960-size), no source
+      { label: "housing bore", value: 0.5, unit: "in" }, // invented demo rod end, no source
     ]);
     expect(f.source.kind).toBe("commonPractice");
   });
   it("every margin is positive (the mistakes are retention, not strength)", () => {
     // 167 lbf (14 CFR 23.397(b)) × 20/6 = 556.7 lbf forward; × 3/4 = 417.5 lbf aft
-    expect(r.pushrods.map((p) => Math.round(p.limitAxial * 10) / 10)).toEqual([556.7, 417.5]);
+    expect(r.pushrods.map((p) => Math.round(p.limitAxial * 10) / 10)).toEqual([556.7, 417.5]); // 167·20/6 and ·3/4 (statics, from memory)
     expect(r.summary.lowestMargin!.value).toBeGreaterThan(0);
   });
 });

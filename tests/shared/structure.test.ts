@@ -37,7 +37,7 @@ describe("crank or stick without a pivot to a structure mount", () => {
   });
   it("trips when the pivot goes to something other than a mount", () => {
     const g = goodRun();
-    g.nodes.push(pushrod("stray", "4130N", 1, 0.049, 10));
+    g.nodes.push(pushrod("stray", "4130N", 1, 0.049, 10)); // fixture tube, size irrelevant here
     g.joints = g.joints.map((x) => (x.id === "pivot" ? j("pivot", ["stick", "pivot"], ["stray", "a"], goodBallPivot()) : x));
     expect(codes(g)).toContain("pivot-unmounted@stick");
   });
@@ -46,14 +46,14 @@ describe("crank or stick without a pivot to a structure mount", () => {
 describe("loops", () => {
   it("trips on a second pushrod closing a loop between stick and horn", () => {
     const g = goodRun();
-    g.nodes.push(pushrod("rod2", "4130N", 1, 0.049, 24));
+    g.nodes.push(pushrod("rod2", "4130N", 1, 0.049, 24)); // same fixture tube as goodRun
     g.joints.push(j("r2a", ["stick", "attach"], ["rod2", "a"], goodRodEndJoint({}, { hand: "RH" })));
     g.joints.push(j("r2b", ["rod2", "b"], ["hornpart", "attach"], goodRodEndJoint({}, { hand: "LH" })));
     const c = codes(g);
     expect(c.filter((x) => x.startsWith("linkage-loop"))).toHaveLength(1);
     // The analysis still ends and still loads both pushrods: 167 × 20/5 = 668 lbf each (full force on each path)
     const r = analyze(valid(g));
-    expect(r.pushrods.map((p) => Math.round(p.limitAxial))).toEqual([668, 668]);
+    expect(r.pushrods.map((p) => Math.round(p.limitAxial))).toEqual([668, 668]); // 14 CFR 23.397(b) 167 lbf × 20/5
   });
   it("does not count several parts pivoting on one shared structure mount as a loop", () => {
     const g = goodRun();
