@@ -7,6 +7,8 @@ import { BuildNav } from "@/components/BuildNav";
 import { Badge, Card, Caution } from "@/components/ui";
 import { can, ROLE_LABEL } from "@/shared/roles";
 import { LinkagesPanel } from "./LinkagesPanel";
+import { reviewSummaryForBuild } from "@/db/review";
+import { OverviewReview } from "@/components/review/OverviewReview";
 
 export const metadata: Metadata = { title: "Build overview" };
 
@@ -22,12 +24,20 @@ const ACTION_TEXT: Record<string, string> = {
   "invitation.create": "sent an invitation",
   "invitation.accept": "joined through an invitation",
   "demo.seed": "set up the demo build",
+  "comment.create": "commented on a linkage",
+  "comment.reply": "replied to a comment",
+  "comment.edit": "edited a comment",
+  "comment.resolve": "resolved a review thread",
+  "comment.reopen": "reopened a review thread",
+  "finding.acknowledge": "acknowledged a finding",
+  "finding.unacknowledge": "withdrew an acknowledgement",
+  "linkage.signoff": "signed off a linkage revision",
 };
 
 export default async function BuildOverview({ params }: { params: Promise<{ buildId: string }> }) {
   const { buildId } = await params;
   const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}`);
-  const [linkages, members, activity] = await Promise.all([listLinkages(build.id), listMembers(build.id), recentActivity(build.id)]);
+  const [linkages, members, activity, review] = await Promise.all([listLinkages(build.id), listMembers(build.id), recentActivity(build.id), reviewSummaryForBuild(build.id)]);
   const open = linkages.reduce((acc, l) => ({ hazard: acc.hazard + (l.summary?.hazard ?? 0), caution: acc.caution + (l.summary?.caution ?? 0) }), { hazard: 0, caution: 0 });
   return (
     <>
@@ -48,6 +58,9 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
                 <div><p className="text-2xl font-semibold text-caution">{open.caution}</p><p className="text-xs text-ink-soft">cautions</p></div>
               </div>
             )}
+          </Card>
+          <Card title="Review and sign-off">
+            <OverviewReview buildId={build.id} linkages={linkages} summary={review} />
           </Card>
           <Card title="Members">
             <ul className="space-y-1">

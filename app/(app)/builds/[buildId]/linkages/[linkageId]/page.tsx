@@ -28,6 +28,7 @@ export default async function LinkagePage({ params }: { params: Promise<{ buildI
       canComment={can(role, "comment")}
       unitSystem={user.unitSystem}
       settings={settingsSchema.parse(build.analysisSettings ?? {})}
+      review={{ userId: user.id, canAcknowledge: can(role, "acknowledge"), canSignOff: can(role, "signOff") }}
     />
   );
 }

@@ -1,0 +1,211 @@
+"use client";
+/** The linkage's review panel: sign-off state and form, what still blocks it, revision history and diff, e-mail setting. */
+import { useState } from "react";
+import { ApiFailure } from "@/components/api-client";
+import { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "@/shared/review-api";
+import { showValue, type ChangedItem, type GraphDiff } from "@/shared/review/diff";
+import { useAcknowledgements, useDiff, useNotify, useReviewActions, useRevisions, useSignoffs } from "./api";
+import type { ReviewMe } from "./ReviewThread";
+import { SignoffBadge } from "./SignoffBadge";
+
+const when = (iso: string) => new Date(iso).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" });
+const box = "w-full rounded border border-ink/20 bg-white px-2 py-1 text-[12px] text-ink focus:border-advisory focus:outline-none";
+const heading = "text-[11px] font-semibold uppercase tracking-wide text-ink-soft";
+
+type Hazard = { code: string; subject: { type: string; id: string }; message: string; lapsed: boolean };
+
+function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId: string; me: ReviewMe }) {
+  const s = useSignoffs(buildId, linkageId);
+  const acks = useAcknowledgements(buildId, linkageId);
+  const actions = useReviewActions(buildId, linkageId);
+  const [statement, setStatement] = useState("");
+  const [refused, setRefused] = useState<{ message: string; hazards: Hazard[] } | null>(null);
+  const current = s.data?.currentRevision;
+  const blocking = (acks.data?.findings ?? []).filter((f) => f.severity === "hazard" && !f.acknowledgement);
+  return (
+    <div className="space-y-1.5" data-testid="signoff-section">
+      <p className={heading}>Sign-off</p>
+      {s.data && <SignoffBadge status={s.data.status} currentRevision={s.data.currentRevision} />}
+      {s.data && s.data.signoffs.length > 0 && (
+        <ul className="space-y-1 text-[11px]" data-testid="signoff-list">
+          {s.data.signoffs.slice(0, 5).map((x) => (
+            <li key={x.id} data-testid="signoff-item" data-stale={x.stale ? "yes" : "no"} className={x.stale ? "text-ink-soft line-through decoration-ink/30" : ""}>
+              r{x.revision} · {x.reviewer.name} · {when(x.createdAt)}
+              <span className="block whitespace-pre-wrap no-underline" style={{ textDecoration: "none" }}>&ldquo;{x.statement}&rdquo;</span>
+            </li>
+          ))}
+        </ul>
+      )}
+      {blocking.length > 0 && (
+        <div className="rounded border border-hazard/30 bg-hazard/5 p-1.5 text-[11px]" data-testid="signoff-blockers">
+          <p className="font-semibold text-hazard">{blocking.length} hazard{blocking.length === 1 ? "" : "s"} without an acknowledgement:</p>
+          <ul className="list-disc pl-4">
+            {blocking.map((f, i) => (
+              <li key={i}>
+                <span className="font-mono">{f.code}</span> on {f.subject.type} {f.subject.id}
+                {f.lapsed ? " (acknowledgement lapsed)" : ""}
+              </li>
+            ))}
+          </ul>
+          <p className="mt-0.5 text-ink-soft">Select the part or joint to acknowledge a finding with a reason, or fix the hardware.</p>
+        </div>
+      )}
+      {me.canSignOff && current !== undefined && (
+        <form
+          className="space-y-1"
+          onSubmit={async (e) => {
+            e.preventDefault();
+            setRefused(null);
+            try {
+              await actions.signOff.mutateAsync({ revision: current, statement });
+              setStatement("");
+            } catch (err) {
+              if (err instanceof ApiFailure && err.code === "unacknowledged_hazards") {
+                const body = err.body as { error: { hazards: Hazard[] } };
+                setRefused({ message: err.message, hazards: body.error.hazards });
+              } else setRefused({ message: err instanceof Error ? err.message : String(err), hazards: [] });
+            }
+          }}
+        >
+          <label htmlFor="signoff-statement" className="block text-[11px] text-ink-soft">
+            Statement for revision {current}
+          </label>
+          <textarea id="signoff-statement" data-testid="signoff-statement" className={box} rows={2} value={statement} onChange={(e) => setStatement(e.target.value)} placeholder="What you inspected and on what basis" />
+          {refused && (
+            <div role="alert" data-testid="signoff-refused" className="text-[11px] text-hazard">
+              {refused.message}
+              {refused.hazards.length > 0 && (
+                <ul className="list-disc pl-4">
+                  {refused.hazards.map((h, i) => (
+                    <li key={i}>{h.code} on {h.subject.type} {h.subject.id}: {h.message}</li>
+                  ))}
+                </ul>
+              )}
+            </div>
+          )}
+          <button type="submit" data-testid="signoff-submit" disabled={!statement.trim() || actions.signOff.isPending} className="rounded bg-ok px-2 py-0.5 text-[11px] font-medium text-white disabled:opacity-50">
+            Sign off revision {current}
+          </button>
+        </form>
+      )}
+    </div>
+  );
+}
+
+function Changed({ items, what }: { items: ChangedItem[]; what: string }) {
+  return (
+    <>
+      {items.map((c) => (
+        <li key={`${what}-${c.id}`}>
+          <span className="font-semibold">{what} {c.label || c.id}</span> changed:
+          <ul className="pl-3">
+            {c.fields.map((f) => (
+              <li key={f.path} data-testid="diff-field" className="font-mono text-[10px]">
+                {f.path}: <span className="text-hazard">{showValue(f.before)}</span> → <span className="text-ok">{showValue(f.after)}</span>
+              </li>
+            ))}
+          </ul>
+        </li>
+      ))}
+    </>
+  );
+}
+
+function DiffView({ d }: { d: GraphDiff }) {
+  if (d.same) return <p className="text-[11px] text-ink-soft" data-testid="diff-view">No design changes{d.nodes.moved ? ` (${d.nodes.moved} part${d.nodes.moved === 1 ? "" : "s"} moved on the canvas)` : ""}.</p>;
+  return (
+    <ul className="space-y-1 text-[11px]" data-testid="diff-view">
+      {d.linkage.map((f) => (
+        <li key={f.path}>Linkage {f.path}: {showValue(f.before)} → {showValue(f.after)}</li>
+      ))}
+      {d.nodes.added.map((n) => <li key={`na-${n.id}`} className="text-ok">+ part {n.label || n.id} ({n.kind})</li>)}
+      {d.nodes.removed.map((n) => <li key={`nr-${n.id}`} className="text-hazard">− part {n.label || n.id} ({n.kind})</li>)}
+      {d.joints.added.map((j) => <li key={`ja-${j.id}`} className="text-ok">+ joint {j.label}</li>)}
+      {d.joints.removed.map((j) => <li key={`jr-${j.id}`} className="text-hazard">− joint {j.label}</li>)}
+      <Changed items={d.nodes.changed} what="part" />
+      <Changed items={d.joints.changed} what="joint" />
+      {d.nodes.moved > 0 && <li className="text-ink-soft">{d.nodes.moved} part{d.nodes.moved === 1 ? "" : "s"} moved on the canvas</li>}
+    </ul>
+  );
+}
+
+function HistorySection({ buildId, linkageId }: { buildId: string; linkageId: string }) {
+  const [open, setOpen] = useState(false);
+  const revs = useRevisions(buildId, linkageId, open);
+  const list = revs.data?.revisions ?? [];
+  const [pick, setPick] = useState<{ from: number | null; to: number | null }>({ from: null, to: null });
+  const to = pick.to ?? list[0]?.revision ?? null;
+  const from = pick.from ?? (to !== null ? Math.max(1, to - 1) : null);
+  const diff = useDiff(buildId, linkageId, open ? from : null, open ? to : null);
+  return (
+    <div className="space-y-1" data-testid="history-section">
+      <button type="button" data-testid="history-toggle" className={`${heading} hover:text-ink`} onClick={() => setOpen((v) => !v)} aria-expanded={open}>
+        {open ? "▾" : "▸"} Revision history
+      </button>
+      {open && (
+        <>
+          <ul className="max-h-40 space-y-0.5 overflow-y-auto text-[11px]" data-testid="revision-list">
+            {list.map((r) => (
+              <li key={r.revision} data-testid="revision-item" className="flex gap-1">
+                <span className="w-8 font-mono">r{r.revision}</span>
+                <span className="flex-1 truncate">{r.author.name}</span>
+                <span className="text-ink-soft">{when(r.createdAt)}</span>
+                {r.summary && r.summary.hazard > 0 && <span className="text-hazard">{r.summary.hazard}H</span>}
+              </li>
+            ))}
+          </ul>
+          {list.length > 1 && (
+            <div className="flex items-center gap-1 text-[11px]">
+              Changes from
+              <select data-testid="diff-from" className="rounded border border-ink/20 px-1" value={from ?? ""} onChange={(e) => setPick({ to, from: Number(e.target.value) })}>
+                {list.map((r) => <option key={r.revision} value={r.revision}>r{r.revision}</option>)}
+              </select>
+              to
+              <select data-testid="diff-to" className="rounded border border-ink/20 px-1" value={to ?? ""} onChange={(e) => setPick({ from, to: Number(e.target.value) })}>
+                {list.map((r) => <option key={r.revision} value={r.revision}>r{r.revision}</option>)}
+              </select>
+            </div>
+          )}
+          {diff.data && <DiffView d={diff.data.diff} />}
+        </>
+      )}
+    </div>
+  );
+}
+
+function NotifySetting() {
+  const q = useNotify();
+  const { setNotify } = useReviewActions("", "");
+  if (!q.data) return null;
+  return (
+    <div className="space-y-0.5">
+      <label htmlFor="notify-pref" className={heading}>Review e-mail to me</label>
+      <select id="notify-pref" data-testid="notify-select" className={box} value={q.data.notify} onChange={(e) => setNotify.mutate(e.target.value as NotifyPref)}>
+        {NOTIFY_PREFS.map((p) => <option key={p} value={p}>{NOTIFY_LABEL[p]}</option>)}
+      </select>
+    </div>
+  );
+}
+
+export function ReviewPanel({ buildId, linkageId, me, unresolved }: { buildId: string; linkageId: string; me: ReviewMe; unresolved: Record<string, number> }) {
+  const openSubjects = Object.entries(unresolved).filter(([k]) => !k.startsWith("linkage:"));
+  return (
+    <div className="space-y-3 rounded border border-ink/10 bg-white p-2" data-testid="review-panel">
+      <SignoffSection buildId={buildId} linkageId={linkageId} me={me} />
+      {openSubjects.length > 0 && (
+        <div className="text-[11px]" data-testid="open-threads">
+          <p className={heading}>Open threads</p>
+          <ul>
+            {openSubjects.map(([k, n]) => (
+              <li key={k}>
+                {k.replace(":", " ")} — {n} open
+              </li>
+            ))}
+          </ul>
+        </div>
+      )}
+      <HistorySection buildId={buildId} linkageId={linkageId} />
+      <NotifySetting />
+    </div>
+  );
+}
