@@ -1,0 +1,63 @@
+/** The engine behind the API: POST /api/analyze answers without storing; a save stores the report with its revision. */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import { makeBuild, makeUser, snapshot, testDb } from "../support/db";
+import { signIn, type Client } from "../support/http";
+import { demoPitchLinkage } from "@/shared/demo";
+import { analyze } from "@/shared/analysis";
+
+let owner: Client;
+let ids: { buildId: string; linkageId: string };
+beforeAll(async () => {
+  const u = await makeUser("analyst");
+  owner = await signIn(u.email);
+  ids = await makeBuild({ owner: u });
+});
+afterAll(() => testDb.destroy());
+
+const codes = (r: { findings: { code: string; subject: { id: string } }[] }) => r.findings.map((f) => `${f.code}@${f.subject.id}`).sort();
+
+describe("analysis over the API", () => {
+  it("POST /api/analyze returns the same report the engine gives, and stores nothing", async () => {
+    const graph = demoPitchLinkage();
+    const before = await snapshot();
+    const res = await owner.request("POST", "/api/analyze", { graph });
+    expect(res.status).toBe(200);
+    expect(codes(res.body.report)).toEqual(codes(analyze(graph)));
+    expect(res.body.report.findings.some((f: { code: string }) => f.code === "jam-nut-missing")).toBe(true);
+    expect(await snapshot()).toEqual(before);
+  });
+
+  it("takes the build's settings in the request: a doubled pilot force doubles every pushrod load", async () => {
+    const graph = demoPitchLinkage();
+    const base = (await owner.request("POST", "/api/analyze", { graph })).body.report;
+    const doubled = (await owner.request("POST", "/api/analyze", { graph, settings: { pilotForce: { pitchStick: 334, rollStick: 67, yawPedal: 200, other: 100 } } })).body.report;
+    expect(base.pushrods.length).toBeGreaterThan(0);
+    base.pushrods.forEach((p: { nodeId: string; limitAxial: number }, i: number) => {
+      expect(doubled.pushrods[i].nodeId).toBe(p.nodeId);
+      expect(doubled.pushrods[i].limitAxial).toBeCloseTo(2 * p.limitAxial, 6);
+    });
+  });
+
+  it("a save stores the analysis with the revision and returns it", async () => {
+    const graph = demoPitchLinkage();
+    const url = `/api/builds/${ids.buildId}/linkages/${ids.linkageId}/graph`;
+    const res = await owner.request("PUT", url, { baseRevision: 1, graph });
+    expect(res.status).toBe(200);
+    const stored = await testDb("linkage_revisions").where({ linkage_id: ids.linkageId, revision: res.body.revision }).first();
+    expect(stored.analysis.summary).toEqual(res.body.analysis.summary);
+    expect(codes(stored.analysis)).toEqual(codes(analyze(graph)));
+    const got = await owner.request("GET", url);
+    expect(got.body.analysis.summary.hazard).toBe(res.body.analysis.summary.hazard);
+    expect(got.body.analysis.summary.hazard).toBeGreaterThan(0);
+  });
+
+  it("uses the build's own factors when it saves", async () => {
+    await testDb("builds").where({ id: ids.buildId }).update({ analysis_settings: JSON.stringify({ ultimateFactor: 3 }) });
+    const url = `/api/builds/${ids.buildId}/linkages/${ids.linkageId}/graph`;
+    const cur = (await owner.request("GET", url)).body;
+    const res = await owner.request("PUT", url, { baseRevision: cur.revision, graph: demoPitchLinkage() });
+    expect(res.body.analysis.settings.ultimateFactor).toBe(3);
+    const p0 = res.body.analysis.pushrods[0];
+    expect(p0.ultimateAxial).toBeCloseTo(p0.limitAxial * 3, 6); // ultimate = limit × the build's factor (14 CFR 23.303 default 1.5)
+  });
+});
