@@ -15,6 +15,7 @@ import { analyze } from "@/shared/analysis";
 import { EditorConfigContext, EditorStoreContext } from "./context";
 import { createEditorStore, toGraph, type EditorStore } from "./store";
 import Canvas, { GRID } from "./Canvas";
+import { nodeLines } from "./nodes";
 import PartsTray from "./panels/PartsTray";
 import Inspector, { type ReviewSlot } from "./panels/Inspector";
 import { CAUTION, FindingsList, subjectName, SummaryStrip } from "./panels/Findings";
@@ -155,6 +156,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
           lowestMarginText: lm ? `${lm.value.toFixed(2)} (${lm.what}) at ${subjectName(s, lm.subject)}` : undefined,
           caution: CAUTION,
         },
+        scene: { joints: s.joints, worstByNode: s.worstByNode, worstByJoint: s.worstByJoint, lines: (n) => nodeLines(n, props.unitSystem) },
       });
       downloadBlob(blob, `${fileSafe(buildName)}-${fileSafe(linkageName)}-r${s.revision}.png`);
     } catch (e) {
@@ -162,7 +164,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
     } finally {
       setExporting(false);
     }
-  }, [store, rf, buildName, linkageName, system, autosave.lastSavedAt, props.initial.createdAt]);
+  }, [store, rf, buildName, linkageName, system, autosave.lastSavedAt, props.initial.createdAt, props.unitSystem]);
 
   // Keyboard: editing keys only when not typing in a field; Ctrl/Cmd+S everywhere.
   useEffect(() => {

@@ -2,9 +2,13 @@
  * Picture export for the build log: the whole linkage (not just what is in view), drawn at 2× with
  * html-to-image, on top of a title block (build, linkage, revision, date, findings, caution).
  */
-import { getNodesBounds, getViewportForBounds, type Node } from "@xyflow/react";
+import { getBezierPath, getNodesBounds, getViewportForBounds, Position, type Node } from "@xyflow/react";
 import { getFontEmbedCSS, toPng } from "html-to-image";
-import type { Summary } from "@/shared/analysis/types";
+import type { Severity, Summary } from "@/shared/analysis/types";
+import type { Joint, LinkageNode } from "@/shared/linkage/schema";
+import { PORT_SIDES } from "./nodes";
+import { hardwareChips, SEVERITY_HEX } from "./joints/JointEdge";
+import { KIND_NAMES } from "./store";
 
 export const EXPORT_WIDTH = 1600;
 export const EXPORT_DIAGRAM_HEIGHT = 1000;
@@ -109,12 +113,135 @@ function drawTitleBlock(ctx: CanvasRenderingContext2D, t: TitleBlock, y0: number
     .forEach((l, i) => ctx.fillText(l, 24, y0 + 148 + i * 16));
 }
 
+/** What the drawn (vector) path needs to paint parts and joints without copying the DOM. */
+export type VectorScene = {
+  joints: Joint[];
+  worstByNode: Record<string, Severity>;
+  worstByJoint: Record<string, Severity>;
+  lines: (n: LinkageNode) => string[];
+};
+
+/**
+ * Above this many DOM elements in the viewport, html-to-image (which copies every computed style)
+ * gets slow — about 2.6 ms per element in Chromium — so the picture is drawn from the graph instead.
+ */
+export const DOM_EXPORT_LIMIT = 1200;
+
+type Box = { x: number; y: number; w: number; h: number };
+const SIDE_POS: Record<string, Position> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
+
+function portPoint(n: LinkageNode, box: Box, port: string): { x: number; y: number; pos: Position } {
+  const sides = PORT_SIDES[n.kind] as Record<string, string>;
+  const side = sides[port] ?? "right";
+  const same = Object.keys(sides).filter((p) => sides[p] === side);
+  const f = (same.indexOf(port) + 1) / (same.length + 1);
+  if (side === "left") return { x: box.x, y: box.y + box.h * f, pos: Position.Left };
+  if (side === "right") return { x: box.x + box.w, y: box.y + box.h * f, pos: Position.Right };
+  if (side === "top") return { x: box.x + box.w * f, y: box.y, pos: Position.Top };
+  return { x: box.x + box.w * f, y: box.y + box.h, pos: SIDE_POS.bottom };
+}
+
+function roundRect(ctx: CanvasRenderingContext2D, x: number, y: number, w: number, h: number, r: number) {
+  ctx.beginPath();
+  ctx.roundRect(x, y, w, h, r);
+}
+
+function clip(ctx: CanvasRenderingContext2D, text: string, max: number) {
+  if (ctx.measureText(text).width <= max) return text;
+  let t = text;
+  while (t.length > 1 && ctx.measureText(t + "…").width > max) t = t.slice(0, -1);
+  return t + "…";
+}
+
+/** Paint parts, joints and badges straight onto the canvas in flow coordinates. */
+function drawScene(ctx: CanvasRenderingContext2D, nodes: Node[], scene: VectorScene) {
+  const INK = "#1f2a37";
+  const boxes = new Map<string, { n: LinkageNode; box: Box }>();
+  for (const rn of nodes) {
+    const n = (rn.data as { node?: LinkageNode }).node;
+    if (!n) continue;
+    boxes.set(rn.id, { n, box: { x: rn.position.x, y: rn.position.y, w: rn.measured?.width ?? 148, h: rn.measured?.height ?? 50 } });
+  }
+  const labels: { x: number; y: number; j: Joint }[] = [];
+  ctx.lineCap = "round";
+  for (const j of scene.joints) {
+    const a = boxes.get(j.from.node);
+    const b = boxes.get(j.to.node);
+    if (!a || !b) continue;
+    const s = portPoint(a.n, a.box, j.from.port);
+    const t = portPoint(b.n, b.box, j.to.port);
+    const [path, lx, ly] = getBezierPath({ sourceX: s.x, sourceY: s.y, sourcePosition: s.pos, targetX: t.x, targetY: t.y, targetPosition: t.pos });
+    const w = scene.worstByJoint[j.id];
+    ctx.strokeStyle = w ? SEVERITY_HEX[w] : "#9aa3ad";
+    ctx.lineWidth = 2;
+    ctx.stroke(new Path2D(path));
+    labels.push({ x: lx, y: ly, j });
+  }
+  for (const { n, box } of boxes.values()) {
+    const w = scene.worstByNode[n.id];
+    roundRect(ctx, box.x, box.y, box.w, box.h, 6);
+    ctx.fillStyle = "#ffffff";
+    ctx.fill();
+    ctx.lineWidth = 2;
+    ctx.strokeStyle = w ? SEVERITY_HEX[w] : "rgba(31,42,55,0.25)";
+    ctx.stroke();
+    ctx.fillStyle = INK;
+    ctx.font = "600 12px Inter, system-ui, sans-serif";
+    ctx.fillText(clip(ctx, n.label || KIND_NAMES[n.kind], box.w - 36), box.x + 8, box.y + 17);
+    ctx.fillStyle = "#4b5563";
+    ctx.font = "11px Inter, system-ui, sans-serif";
+    scene.lines(n).forEach((l, i) => ctx.fillText(clip(ctx, l, box.w - 16), box.x + 8, box.y + 32 + i * 16));
+    if (w) {
+      ctx.fillStyle = SEVERITY_HEX[w];
+      roundRect(ctx, box.x + box.w - 20, box.y + 6, 14, 14, 3);
+      ctx.fill();
+    }
+  }
+  for (const { x, y, j } of labels) {
+    const chips = hardwareChips(j.hardware);
+    const w = scene.worstByJoint[j.id];
+    ctx.font = "bold 9px Inter, system-ui, sans-serif";
+    const widths = chips.map((c) => (c.glyph === "text" ? ctx.measureText(c.text ?? "").width + 4 : 13));
+    const total = widths.reduce((a, b) => a + b, 0) + 8;
+    roundRect(ctx, x - total / 2, y - 8, total, 16, 8);
+    ctx.fillStyle = "#ffffff";
+    ctx.fill();
+    ctx.lineWidth = 1.5;
+    ctx.strokeStyle = w ? SEVERITY_HEX[w] : "#9aa3ad";
+    ctx.stroke();
+    let cx = x - total / 2 + 4;
+    chips.forEach((c, i) => {
+      const colour = c.state === "missing" ? "#b54708" : INK;
+      ctx.strokeStyle = colour;
+      ctx.fillStyle = colour;
+      ctx.lineWidth = 1.2;
+      ctx.setLineDash(c.state === "missing" ? [2, 1.5] : []);
+      if (c.glyph === "text") {
+        ctx.fillText(c.text ?? "", cx + 2, y + 3);
+      } else {
+        ctx.beginPath();
+        ctx.arc(cx + 6, y, 4.5, 0, Math.PI * 2);
+        ctx.stroke();
+        if (c.state === "solid") {
+          ctx.beginPath();
+          ctx.arc(cx + 6, y, 2, 0, Math.PI * 2);
+          ctx.fill();
+        }
+      }
+      ctx.setLineDash([]);
+      cx += widths[i];
+    });
+  }
+}
+
 /**
  * Draw the whole linkage and its title block into a PNG.
  * `viewportEl` is the canvas's `.react-flow__viewport`; `nodes` are the React Flow nodes with their measured sizes.
+ * Small linkages are copied from the DOM with html-to-image (exactly what is on screen); large ones are
+ * drawn from `scene` when given, which keeps a 200-part export well under a second.
  */
-export async function exportLinkagePng(opts: { viewportEl: HTMLElement; nodes: Node[]; title: TitleBlock }): Promise<Blob> {
-  const { viewportEl, nodes, title } = opts;
+export async function exportLinkagePng(opts: { viewportEl: HTMLElement; nodes: Node[]; title: TitleBlock; scene?: VectorScene }): Promise<Blob> {
+  const { viewportEl, nodes, title, scene } = opts;
   const W = EXPORT_WIDTH;
   const H = EXPORT_DIAGRAM_HEIGHT;
   const pr = EXPORT_PIXEL_RATIO;
@@ -127,7 +254,15 @@ export async function exportLinkagePng(opts: { viewportEl: HTMLElement; nodes: N
   ctx.fillStyle = "#ffffff";
   ctx.fillRect(0, 0, W, H);
 
-  if (nodes.length > 0) {
+  if (nodes.length > 0 && scene && viewportEl.getElementsByTagName("*").length > DOM_EXPORT_LIMIT) {
+    const bounds = getNodesBounds(nodes);
+    const vp = getViewportForBounds(bounds, W, H, 0.02, 1.5, 0.06);
+    ctx.save();
+    ctx.translate(vp.x, vp.y);
+    ctx.scale(vp.zoom, vp.zoom);
+    drawScene(ctx, nodes, scene);
+    ctx.restore();
+  } else if (nodes.length > 0) {
     const bounds = getNodesBounds(nodes);
     const vp = getViewportForBounds(bounds, W, H, 0.05, 1.5, 0.06);
     fontCss ??= getFontEmbedCSS(viewportEl).catch(() => "");

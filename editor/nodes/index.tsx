@@ -9,7 +9,7 @@ import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
 import type { Severity } from "@/shared/analysis/types";
 import { useEditorConfig, useEditorStore } from "../context";
 import { KIND_NAMES } from "../store";
-import { fmt, type UnitSystem } from "../units";
+import { fmt, toDisplay, unitLabel, type UnitSystem } from "../units";
 import { KindGlyph } from "./glyphs";
 
 export type PartNodeData = { node: LinkageNode };
@@ -109,30 +109,41 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
   );
 }
 
-const L = (v: number, u: UnitSystem) => fmt(v, "length", u, u === "SI" ? 0 : 2);
+/** A bare number in display units, trimmed: 18, 0.5, 0.035 (in) or 457, 12.7 (mm). */
+const n = (v: number, u: UnitSystem) => {
+  const d = toDisplay(v, "length", u);
+  const s = d.toFixed(u === "SI" ? (d < 10 ? 1 : 0) : 3);
+  return s.includes(".") ? s.replace(/0+$/, "").replace(/\.$/, "") : s;
+};
+const lu = (u: UnitSystem) => unitLabel("length", u);
+
+const LINES: Partial<Record<NodeKind, (props: never, u: UnitSystem) => string[]>> = {};
+/** The key-number lines a part's card shows (also drawn by the picture export). */
+export function nodeLines(node: LinkageNode, u: UnitSystem): string[] {
+  return LINES[node.kind]?.(node.props as never, u) ?? [];
+}
 
 function makeNode<K extends NodeKind>(kind: K, lines: (props: Extract<LinkageNode, { kind: K }>["props"], u: UnitSystem) => string[]) {
+  LINES[kind] = lines as (props: never, u: UnitSystem) => string[];
   const C = memo(function PartNode({ id, data, selected }: NodeProps<PartFlowNode>) {
     const { unitSystem } = useEditorConfig();
-    const n = data.node as Extract<LinkageNode, { kind: K }>;
-    return <PartFrame id={id} kind={kind} label={n.label} lines={lines(n.props as never, unitSystem)} selected={!!selected} />;
+    const node = data.node as Extract<LinkageNode, { kind: K }>;
+    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props as never, unitSystem)} selected={!!selected} />;
   });
   C.displayName = `${kind}Node`;
   return C;
 }
 
 const ratio = (a: number, b: number) => (a > 0 ? `×${(b / a).toFixed(2)}` : "");
+const arms = (a: number, b: number, u: UnitSystem, names = ["in", "out"]) => `${names[0]} ${n(a, u)} · ${names[1]} ${n(b, u)} ${lu(u)}`;
 
-export const StickNode = makeNode("stick", (p, u) => [`grip ${L(p.gripArm, u)} · link ${L(p.attachArm, u)}`, `${p.axis} axis · ${p.travelFwd}°/${p.travelAft}°`]);
-export const PedalNode = makeNode("pedal", (p, u) => [`pedal ${L(p.pedalArm, u)} · link ${L(p.attachArm, u)}`, `travel ${p.travel}°`]);
-export const TorqueTubeNode = makeNode("torqueTube", (p, u) => [`in ${L(p.inputArm, u)} · out ${L(p.outputArm, u)}`, `ratio ${ratio(p.inputArm, p.outputArm)}`]);
-export const BellcrankNode = makeNode("bellcrank", (p, u) => [`in ${L(p.inputArm, u)} · out ${L(p.outputArm, u)}`, `${p.armAngle}° between arms · ${ratio(p.inputArm, p.outputArm)}`]);
-export const IdlerArmNode = makeNode("idlerArm", (p, u) => [`in ${L(p.inputArm, u)} · out ${L(p.outputArm, u)}`, `ratio ${ratio(p.inputArm, p.outputArm)}`]);
-export const PushrodNode = makeNode("pushrod", (p, u) => [
-  `Ø ${fmt(p.outsideDiameter, "length", u, u === "SI" ? 1 : 3)} × ${fmt(p.wall, "length", u, u === "SI" ? 2 : 3)}`,
-  `${L(p.length, u)} c–c · ${p.material}`,
-]);
-export const ControlHornNode = makeNode("controlHorn", (p, u) => [`arm ${L(p.hornArm, u)} · link ${p.linkAngle}°`]);
+export const StickNode = makeNode("stick", (p, u) => [arms(p.gripArm, p.attachArm, u, ["grip", "link"]), `${p.axis} · ${p.travelFwd}°/${p.travelAft}°${p.designForce ? ` · ${fmt(p.designForce, "force", u)}` : ""}`]);
+export const PedalNode = makeNode("pedal", (p, u) => [arms(p.pedalArm, p.attachArm, u, ["pedal", "link"]), `travel ${p.travel}°${p.designForce ? ` · ${fmt(p.designForce, "force", u)}` : ""}`]);
+export const TorqueTubeNode = makeNode("torqueTube", (p, u) => [arms(p.inputArm, p.outputArm, u), `ratio ${ratio(p.inputArm, p.outputArm)}`]);
+export const BellcrankNode = makeNode("bellcrank", (p, u) => [arms(p.inputArm, p.outputArm, u), `${p.armAngle}° apart · ${ratio(p.inputArm, p.outputArm)}`]);
+export const IdlerArmNode = makeNode("idlerArm", (p, u) => [arms(p.inputArm, p.outputArm, u), `ratio ${ratio(p.inputArm, p.outputArm)}`]);
+export const PushrodNode = makeNode("pushrod", (p, u) => [`Ø${n(p.outsideDiameter, u)} × ${n(p.wall, u)} ${lu(u)}`, `${n(p.length, u)} ${lu(u)} · ${p.material}`]);
+export const ControlHornNode = makeNode("controlHorn", (p, u) => [`arm ${n(p.hornArm, u)} ${lu(u)} · ${p.linkAngle}°`]);
 export const ControlSurfaceNode = makeNode("controlSurface", (p) => [`up ${p.travelUp}° · down ${p.travelDown}°`]);
 export const StructureMountNode = makeNode("structureMount", (p) => (p.note ? [p.note] : ["fixed to structure"]));
 export const TravelStopNode = makeNode("travelStop", (p) => [`contacts at ${p.stopAt}°`]);
