@@ -4,6 +4,7 @@
  */
 const benches: [name: string, load: () => Promise<{ run: () => Promise<{ ok: boolean }> }>][] = [
   ["engine", () => import("./engine")],
+  ["editor", () => import("./editor")],
 ];
 
 async function main() {
