@@ -20,6 +20,7 @@ const started = Date.now();
 
 ensurePackages();
 ensureDebianPackage("/usr/bin/chromium", "chromium");
+ensureDebianPackage("/usr/bin/pdftoppm", "poppler-utils");
 startPostgres();
 
 step(`Recreating the test database ${TEST_DB}`);

@@ -1,0 +1,31 @@
+import { withBuild, parseParams, json } from "@/lib/http";
+import { notFound } from "@/lib/errors";
+import { deleteFileRow, getFileRow } from "@/db/files";
+import { uuidParam } from "@/shared/api";
+import { streamObject } from "@/lib/records-http";
+import { removeObjects } from "@/lib/uploads";
+import { audit } from "@/db/audit";
+
+type P = { buildId: string; fileId: string };
+
+/** The file's bytes (or `?thumb=1` its thumbnail), streamed to members only. */
+export const GET = withBuild<P>("read", async ({ req, build, params }) => {
+  const id = parseParams(params.fileId, uuidParam);
+  const row = await getFileRow(build.id, id);
+  if (!row) throw notFound("file");
+  const thumb = req.nextUrl.searchParams.get("thumb") === "1";
+  if (thumb && !row.thumb_key) throw notFound("thumbnail");
+  return thumb
+    ? streamObject(row.thumb_key!, { contentType: "image/jpeg", name: `thumb-${row.name.replace(/\.[^.]+$/, "")}.jpg` })
+    : streamObject(row.key, { contentType: row.content_type, name: row.name, download: req.nextUrl.searchParams.get("download") === "1" });
+});
+
+/** Deletes the file, its thumbnail and every link to it (joints, log entries, revision pictures). */
+export const DELETE = withBuild<P>("edit", async ({ user, build, params }) => {
+  const id = parseParams(params.fileId, uuidParam);
+  const keys = await deleteFileRow(build.id, id);
+  if (!keys) throw notFound("file");
+  await removeObjects(keys);
+  await audit({ buildId: build.id, userId: user.id, action: "file.delete", detail: { fileId: id } });
+  return json({ deleted: true });
+});

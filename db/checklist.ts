@@ -1,0 +1,25 @@
+import "server-only";
+import { db } from "./index";
+
+export type Tick = { jointId: string; code: string; tickedBy: string | null; tickedAt: string | null; note: string };
+
+export async function listTicks(linkageId: string, revision: number): Promise<Tick[]> {
+  const rows = await db("checklist_items as c").leftJoin("users as u", "u.id", "c.ticked_by").where({ "c.linkage_id": linkageId, "c.revision": revision })
+    .select("c.joint_id", "c.item_code", "c.ticked_at", "c.note", "u.name");
+  return rows.map((r: { joint_id: string; item_code: string; ticked_at: Date | null; note: string; name: string | null }) => ({
+    jointId: r.joint_id, code: r.item_code, tickedBy: r.ticked_at ? r.name ?? "former member" : null, tickedAt: r.ticked_at ? r.ticked_at.toISOString() : null, note: r.note,
+  }));
+}
+
+export async function setTick(linkageId: string, revision: number, jointId: string, code: string, ticked: boolean, note: string | undefined, userId: string) {
+  const values = {
+    ticked_by: ticked ? userId : null,
+    ticked_at: ticked ? db.fn.now() : null,
+    ...(note !== undefined ? { note } : {}),
+    updated_at: db.fn.now(),
+  };
+  await db("checklist_items")
+    .insert({ linkage_id: linkageId, revision, joint_id: jointId, item_code: code, note: note ?? "", ...values })
+    .onConflict(["linkage_id", "revision", "joint_id", "item_code"])
+    .merge(values);
+}

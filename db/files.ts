@@ -1,0 +1,110 @@
+import "server-only";
+import type { Knex } from "knex";
+import { db } from "./index";
+
+export type FileKind = "photo" | "pdf" | "linkage-picture";
+type FileRow = {
+  id: string; build_id: string; key: string; kind: FileKind; content_type: string; size: number; name: string;
+  thumb_key: string | null; width: number | null; height: number | null; uploaded_by: string | null; created_at: Date;
+  uploader_name?: string | null;
+};
+
+export const toFile = (r: FileRow) => ({
+  id: r.id,
+  buildId: r.build_id,
+  kind: r.kind,
+  contentType: r.content_type,
+  size: r.size,
+  name: r.name,
+  hasThumbnail: !!r.thumb_key,
+  width: r.width,
+  height: r.height,
+  uploadedBy: r.uploader_name ?? null,
+  createdAt: r.created_at.toISOString(),
+  url: `/api/builds/${r.build_id}/files/${r.id}`,
+  thumbUrl: r.thumb_key ? `/api/builds/${r.build_id}/files/${r.id}?thumb=1` : null,
+});
+export type StoredFile = ReturnType<typeof toFile>;
+
+export async function insertFile(
+  f: { id: string; buildId: string; key: string; kind: FileKind; contentType: string; size: number; name: string; thumbKey: string | null; width: number | null; height: number | null; uploadedBy: string },
+  trx: Knex = db,
+) {
+  const [row] = await trx<FileRow>("files")
+    .insert({ id: f.id, build_id: f.buildId, key: f.key, kind: f.kind, content_type: f.contentType, size: f.size, name: f.name, thumb_key: f.thumbKey, width: f.width, height: f.height, uploaded_by: f.uploadedBy })
+    .returning("*");
+  return toFile(row);
+}
+
+/** The row with its storage keys (server only). */
+export async function getFileRow(buildId: string, fileId: string) {
+  return db<FileRow>("files").where({ build_id: buildId, id: fileId }).first();
+}
+
+export async function getFile(buildId: string, fileId: string) {
+  const r = await getFileRow(buildId, fileId);
+  return r ? toFile(r) : null;
+}
+
+const withUploader = () => db("files as f").leftJoin("users as u", "u.id", "f.uploaded_by").select("f.*", "u.name as uploader_name");
+
+export async function listFiles(buildId: string, kind?: FileKind) {
+  const q = withUploader().where("f.build_id", buildId).orderBy("f.created_at", "desc").limit(500);
+  if (kind) q.where("f.kind", kind);
+  return (await q).map(toFile);
+}
+
+export async function filesByIds(buildId: string, ids: string[]) {
+  if (!ids.length) return [];
+  const rows = await withUploader().where("f.build_id", buildId).whereIn("f.id", ids);
+  const byId = new Map(rows.map((r: FileRow) => [r.id, toFile(r)]));
+  return ids.map((id) => byId.get(id)).filter(Boolean) as StoredFile[];
+}
+
+/** Deletes the row (links cascade) and returns the storage keys to delete. */
+export async function deleteFileRow(buildId: string, fileId: string) {
+  const [row] = await db<FileRow>("files").where({ build_id: buildId, id: fileId }).del().returning(["key", "thumb_key"]);
+  return row ? { key: row.key, thumbKey: row.thumb_key } : null;
+}
+
+// ---- joint photos ---------------------------------------------------------------------------
+
+export async function linkJointPhoto(linkageId: string, jointId: string, fileId: string, userId: string, trx: Knex = db) {
+  await trx("joint_photos").insert({ linkage_id: linkageId, joint_id: jointId, file_id: fileId, added_by: userId }).onConflict(["linkage_id", "joint_id", "file_id"]).ignore();
+}
+
+export async function unlinkJointPhoto(linkageId: string, jointId: string, fileId: string) {
+  return (await db("joint_photos").where({ linkage_id: linkageId, joint_id: jointId, file_id: fileId }).del()) > 0;
+}
+
+export async function listJointPhotos(buildId: string, linkageId: string, jointId?: string) {
+  const q = withUploader().join("joint_photos as jp", "jp.file_id", "f.id").where({ "f.build_id": buildId, "jp.linkage_id": linkageId }).select("jp.joint_id").orderBy("jp.created_at");
+  if (jointId !== undefined) q.where("jp.joint_id", jointId);
+  const rows = await q;
+  return rows.map((r: FileRow & { joint_id: string }) => ({ ...toFile(r), jointId: r.joint_id }));
+}
+
+// ---- revision pictures ----------------------------------------------------------------------
+
+/** Sets the picture of a revision; returns the file it replaced (to delete), if any. */
+export async function setRevisionPicture(linkageId: string, revision: number, fileId: string, trx: Knex = db) {
+  const old = await trx("revision_pictures").where({ linkage_id: linkageId, revision }).first<{ file_id: string } | undefined>("file_id");
+  await trx("revision_pictures").insert({ linkage_id: linkageId, revision, file_id: fileId }).onConflict(["linkage_id", "revision"]).merge({ file_id: fileId, created_at: trx.fn.now() });
+  return old?.file_id && old.file_id !== fileId ? old.file_id : null;
+}
+
+export async function getRevisionPicture(buildId: string, linkageId: string, revision: number) {
+  const row = await withUploader().join("revision_pictures as rp", "rp.file_id", "f.id").where({ "f.build_id": buildId, "rp.linkage_id": linkageId, "rp.revision": revision }).first();
+  return row ? toFile(row as FileRow) : null;
+}
+
+export async function getRevisionPictureRow(buildId: string, linkageId: string, revision: number) {
+  return db("files as f").join("revision_pictures as rp", "rp.file_id", "f.id").where({ "f.build_id": buildId, "rp.linkage_id": linkageId, "rp.revision": revision }).first<FileRow | undefined>("f.*");
+}
+
+/** Storage keys of files (server only: for embedding in PDFs). */
+export async function fileKeys(buildId: string, ids: string[]) {
+  if (!ids.length) return new Map<string, { key: string; contentType: string; kind: FileKind }>();
+  const rows = await db<FileRow>("files").where("build_id", buildId).whereIn("id", ids).select("id", "key", "content_type", "kind");
+  return new Map(rows.map((r) => [r.id, { key: r.key, contentType: r.content_type, kind: r.kind }]));
+}

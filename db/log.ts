@@ -1,0 +1,150 @@
+import "server-only";
+import { db } from "./index";
+import { audit } from "./audit";
+import { filesByIds, type StoredFile } from "./files";
+import type { ControlSystem } from "@/shared/linkage/schema";
+
+type EntryRow = {
+  id: string; build_id: string; date: string | Date; hours: string; title: string; text: string; systems: ControlSystem[];
+  linkage_id: string | null; revision: number | null; author_id: string | null; created_at: Date; updated_at: Date;
+  author_name?: string | null; linkage_name?: string | null;
+};
+
+const isoDay = (d: string | Date) => (typeof d === "string" ? d.slice(0, 10) : `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`);
+
+const toEntry = (r: EntryRow, files: StoredFile[] = []) => ({
+  id: r.id,
+  date: isoDay(r.date),
+  hours: Number(r.hours),
+  title: r.title,
+  text: r.text,
+  systems: r.systems ?? [],
+  linkageId: r.linkage_id,
+  linkageName: r.linkage_name ?? null,
+  revision: r.revision,
+  author: r.author_name ?? null,
+  createdAt: r.created_at.toISOString(),
+  updatedAt: r.updated_at.toISOString(),
+  files,
+});
+export type LogEntry = ReturnType<typeof toEntry>;
+
+export type LogFilter = { system?: ControlSystem; from?: string; to?: string; q?: string };
+
+function filtered(buildId: string, f: LogFilter) {
+  const q = db("log_entries as e").where("e.build_id", buildId);
+  if (f.system) q.whereRaw("? = any(e.systems)", [f.system]);
+  if (f.from) q.where("e.date", ">=", f.from);
+  if (f.to) q.where("e.date", "<=", f.to);
+  if (f.q && f.q.trim()) {
+    const like = `%${f.q.trim().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    q.where((w) => w.whereILike("e.title", like).orWhereILike("e.text", like));
+  }
+  return q;
+}
+
+async function attachFiles(buildId: string, rows: EntryRow[]) {
+  if (!rows.length) return [];
+  const links = await db("log_entry_files").whereIn("entry_id", rows.map((r) => r.id)).orderBy("position");
+  const files = await filesByIds(buildId, [...new Set(links.map((l: { file_id: string }) => l.file_id))]);
+  const byId = new Map(files.map((f) => [f.id, f]));
+  return rows.map((r) => toEntry(r, links.filter((l: { entry_id: string }) => l.entry_id === r.id).map((l: { file_id: string }) => byId.get(l.file_id)!).filter(Boolean)));
+}
+
+export async function listEntries(buildId: string, f: LogFilter = {}) {
+  const rows = await filtered(buildId, f)
+    .leftJoin("users as u", "u.id", "e.author_id")
+    .leftJoin("linkages as l", "l.id", "e.linkage_id")
+    .select("e.*", "u.name as author_name", "l.name as linkage_name")
+    .orderBy([{ column: "e.date", order: "desc" }, { column: "e.created_at", order: "desc" }])
+    .limit(2000);
+  return attachFiles(buildId, rows);
+}
+
+/** Hours by system and by month over the filtered entries. An entry with several systems counts toward each. */
+export async function hourTotals(buildId: string, f: LogFilter = {}) {
+  const rows = await filtered(buildId, f).select("e.date", "e.hours", "e.systems");
+  const bySystem: Record<string, number> = {};
+  const byMonth: Record<string, Record<string, number>> = {};
+  let total = 0;
+  for (const r of rows as EntryRow[]) {
+    const h = Number(r.hours);
+    total += h;
+    const month = isoDay(r.date).slice(0, 7);
+    const systems = r.systems?.length ? r.systems : ["unassigned"];
+    byMonth[month] ??= {};
+    for (const s of systems) {
+      bySystem[s] = (bySystem[s] ?? 0) + h;
+      byMonth[month][s] = (byMonth[month][s] ?? 0) + h;
+    }
+  }
+  const months = Object.keys(byMonth).sort().map((m) => ({ month: m, ...byMonth[m], total: Object.values(byMonth[m]).reduce((a, b) => a + b, 0) }));
+  return { total: Math.round(total * 100) / 100, bySystem, byMonth: months };
+}
+
+export async function getEntry(buildId: string, id: string) {
+  const row = await db("log_entries as e")
+    .leftJoin("users as u", "u.id", "e.author_id")
+    .leftJoin("linkages as l", "l.id", "e.linkage_id")
+    .where({ "e.build_id": buildId, "e.id": id })
+    .first("e.*", "u.name as author_name", "l.name as linkage_name");
+  return row ? (await attachFiles(buildId, [row]))[0] : null;
+}
+
+type EntryValues = { date: string; hours: number; title: string; text: string; systems: ControlSystem[]; linkageId?: string | null; revision?: number | null; fileIds: string[] };
+
+/** Returns "bad_files" when a file id is not one of this build's files, "bad_linkage" for a foreign linkage or revision. */
+async function checkRefs(buildId: string, v: Partial<EntryValues>) {
+  if (v.fileIds?.length) {
+    const [{ n }] = await db("files").where("build_id", buildId).whereIn("id", v.fileIds).count<{ n: string }[]>("* as n");
+    if (Number(n) !== new Set(v.fileIds).size) return "bad_files" as const;
+  }
+  if (v.linkageId) {
+    const l = await db("linkages").where({ id: v.linkageId, build_id: buildId }).first("current_revision");
+    if (!l) return "bad_linkage" as const;
+    if (v.revision && !(await db("linkage_revisions").where({ linkage_id: v.linkageId, revision: v.revision }).first("id"))) return "bad_revision" as const;
+  }
+  return null;
+}
+
+export async function createEntry(buildId: string, userId: string, v: EntryValues) {
+  const bad = await checkRefs(buildId, v);
+  if (bad) return bad;
+  let revision = v.revision ?? null;
+  if (v.linkageId && !revision) revision = (await db("linkages").where({ id: v.linkageId }).first("current_revision")).current_revision;
+  return db.transaction(async (trx) => {
+    const [row] = await trx("log_entries")
+      .insert({ build_id: buildId, date: v.date, hours: v.hours, title: v.title, text: v.text, systems: v.systems, linkage_id: v.linkageId ?? null, revision: v.linkageId ? revision : null, author_id: userId })
+      .returning("id");
+    const ids = [...new Set(v.fileIds)];
+    if (ids.length) await trx("log_entry_files").insert(ids.map((file_id, position) => ({ entry_id: row.id, file_id, position })));
+    await audit({ buildId, userId, action: "log.create", detail: { entryId: row.id, title: v.title } }, trx);
+    return row.id as string;
+  });
+}
+
+export async function updateEntry(buildId: string, id: string, userId: string, v: Partial<EntryValues>) {
+  const bad = await checkRefs(buildId, v);
+  if (bad) return bad;
+  return db.transaction(async (trx) => {
+    const values: Record<string, unknown> = { updated_at: trx.fn.now() };
+    for (const k of ["date", "hours", "title", "text", "systems", "revision"] as const) if (v[k] !== undefined) values[k] = v[k];
+    if (v.linkageId !== undefined) values.linkage_id = v.linkageId;
+    if (v.linkageId === null) values.revision = null;
+    const n = await trx("log_entries").where({ build_id: buildId, id }).update(values);
+    if (!n) return "missing" as const;
+    if (v.fileIds) {
+      await trx("log_entry_files").where({ entry_id: id }).del();
+      const ids = [...new Set(v.fileIds)];
+      if (ids.length) await trx("log_entry_files").insert(ids.map((file_id, position) => ({ entry_id: id, file_id, position })));
+    }
+    await audit({ buildId, userId, action: "log.update", detail: { entryId: id } }, trx);
+    return "ok" as const;
+  });
+}
+
+export async function deleteEntry(buildId: string, id: string, userId: string) {
+  const n = await db("log_entries").where({ build_id: buildId, id }).del();
+  if (n) await audit({ buildId, userId, action: "log.delete", detail: { entryId: id } });
+  return n > 0;
+}

@@ -1,0 +1,86 @@
+/**
+ * The hardware list of a build: every part the joint cards of the current revisions call for, grouped
+ * into lines by an identity key, with quantities and where each is used. Pure.
+ */
+import { AN_BOLTS_BY_SIZE, type AnBoltSize } from "../hardware";
+import type { Joint, LinkageGraph } from "../linkage/schema";
+import { jointWhere } from "./checklist";
+
+export const HARDWARE_STATES = ["to_order", "ordered", "received", "installed", "inspected"] as const;
+export type HardwareState = (typeof HARDWARE_STATES)[number];
+export const HARDWARE_STATE_LABEL: Record<HardwareState, string> = {
+  to_order: "To order", ordered: "Ordered", received: "Received", installed: "Installed", inspected: "Inspected",
+};
+
+export type HardwareKind = "rodEnd" | "jamNut" | "bolt" | "nut" | "washer" | "cotterPin";
+export type WhereUsed = { linkageId: string; linkageName: string; jointId: string; where: string };
+export type HardwareLine = {
+  /** Stable identity of the line: the same part in two joints is one line. */
+  key: string;
+  kind: HardwareKind;
+  description: string;
+  partNumber: string | null;
+  quantity: number;
+  usedIn: WhereUsed[];
+};
+
+const n3 = (v: number | undefined) => (v === undefined ? "?" : String(Number(v.toFixed(3))));
+const NUT_LABEL: Record<string, string> = {
+  selfLockingMetal: "all-metal self-locking nut", selfLockingInsert: "nylon-insert self-locking nut", castellatedCotter: "castellated nut",
+  plainSafetyWire: "plain nut (safety-wired)", plain: "plain nut",
+};
+
+function boltThread(j: Joint) {
+  const b = j.hardware.bolt;
+  if (!b || b.size === "custom") return null;
+  return AN_BOLTS_BY_SIZE[b.size as AnBoltSize]?.thread ?? null;
+}
+
+/** The parts one joint calls for: [key, kind, description, partNumber, count]. */
+export function jointParts(j: Joint): [string, HardwareKind, string, string | null, number][] {
+  const hw = j.hardware;
+  const out: [string, HardwareKind, string, string | null, number][] = [];
+  const re = hw.rodEnd;
+  if (re) {
+    const pn = re.partNumber?.trim() || null;
+    out.push([pn ? `rodEnd|${pn.toLowerCase()}` : `rodEnd|${re.thread}|${re.hand}|${re.shank}|${n3(re.ballBore)}`, "rodEnd",
+      `Rod end ${re.thread} ${re.hand} ${re.shank}, bore ${n3(re.ballBore)} in`, pn, 1]);
+    if (hw.jamNut?.fitted) out.push([`jamNut|${re.thread}|${re.hand}`, "jamNut", `Jam nut ${re.thread} ${re.hand}`, null, 1]);
+  }
+  const b = hw.bolt;
+  if (b) {
+    const name = b.size === "custom" ? `Bolt Ø${n3(b.diameter)} in` : `${b.size} bolt`;
+    out.push([`bolt|${b.size}|${n3(b.diameter)}|${n3(b.grip)}|${b.material}`, "bolt", `${name}, grip ${n3(b.grip)} in, ${b.material}`, null, 1]);
+  }
+  const nut = hw.nut;
+  if (nut && nut.type !== "none") {
+    const th = boltThread(j) ?? "?";
+    out.push([`nut|${nut.type}|${nut.pattern}|${th}`, "nut", `${NUT_LABEL[nut.type] ?? nut.type} ${th} (${nut.pattern})`, null, 1]);
+    if (nut.type === "castellatedCotter") out.push([`cotterPin|${th}`, "cotterPin", `Cotter pin for ${th} castellated nut`, null, 1]);
+  }
+  const washers = [hw.washerUnderHead, hw.washerUnderNut].filter(Boolean) as { outsideDiameter: number; thickness?: number }[];
+  const boltD = b ? (b.size === "custom" ? b.diameter : AN_BOLTS_BY_SIZE[b.size as AnBoltSize]?.diameter) : undefined;
+  for (const w of washers) {
+    out.push([`washer|${n3(boltD)}|${n3(w.outsideDiameter)}|${n3(w.thickness)}`, "washer",
+      `Washer for Ø${n3(boltD)} in, OD ${n3(w.outsideDiameter)} in, ${n3(w.thickness)} in thick`, null, 1]);
+  }
+  return out;
+}
+
+export function hardwareList(linkages: { id: string; name: string; graph: LinkageGraph }[]): HardwareLine[] {
+  const lines = new Map<string, HardwareLine>();
+  for (const l of linkages) {
+    const nodes = new Map(l.graph.nodes.map((n) => [n.id, n]));
+    for (const j of l.graph.joints) {
+      const where = jointWhere(j, nodes);
+      for (const [key, kind, description, partNumber, count] of jointParts(j)) {
+        let line = lines.get(key);
+        if (!line) lines.set(key, (line = { key, kind, description, partNumber, quantity: 0, usedIn: [] }));
+        line.quantity += count;
+        line.usedIn.push({ linkageId: l.id, linkageName: l.name, jointId: j.id, where });
+      }
+    }
+  }
+  const order: HardwareKind[] = ["rodEnd", "jamNut", "bolt", "nut", "washer", "cotterPin"];
+  return [...lines.values()].sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind) || a.description.localeCompare(b.description));
+}

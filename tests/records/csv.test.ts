@@ -1,0 +1,69 @@
+/** Parts CSV import: the row-by-row report on awkward files. Pure (shared/records/parts.ts). */
+import { describe, expect, it } from "vitest";
+import { parsePartsCsv, partsToCsv } from "@/shared/records/parts";
+
+// Ratings and sizes below are invented test values, not data of any real part. // common practice, no source
+const HEADER = "kind,partNumber,description,thread,hand,ballBore,ratedUltimate";
+
+describe("parts CSV import", () => {
+  it("reads a clean file with a BOM, quoted commas and mixed-case headers", () => {
+    const csv = "\uFEFFKind,Part Number,Description,Thread,Hand,Ball_Bore,Rated Ultimate\r\n" +
+      'rodEnd,TST-1,"Rod end, male, 1/4-28",1/4-28,RH,0.25,4200\r\n' +
+      'rodEnd,TST-2,"Rod end, ""LH"" thread",1/4-28,LH,0.25,4200\r\n\r\n';
+    const r = parsePartsCsv(csv);
+    expect(r.errors).toEqual([]);
+    expect(r.delimiter).toBe(",");
+    expect(r.parts.map((p) => [p.row, p.partNumber, p.description])).toEqual([
+      [2, "TST-1", "Rod end, male, 1/4-28"],
+      [3, "TST-2", 'Rod end, "LH" thread'],
+    ]);
+    expect(r.parts[0].spec).toMatchObject({ thread: "1/4-28", hand: "RH", ballBore: 0.25, ratedUltimate: 4200, shank: "male", hasWitnessHole: true });
+  });
+
+  it("reads semicolon files, with a decimal comma", () => {
+    const csv = "kind;partNumber;thread;hand;ballBore;ratedUltimate\nrodEnd;TST-3;5/16-24;RH;0,3125;5800\nwasher;W-1;;;;\n";
+    const r = parsePartsCsv(csv.replace("washer;W-1;;;;", "bolt;B-1;;;;"));
+    expect(r.delimiter).toBe(";");
+    expect(r.parts[0].spec).toMatchObject({ ballBore: 0.3125, ratedUltimate: 5800 });
+    // a bolt without its size is reported, naming the column
+    expect(r.errors).toEqual([{ row: 3, partNumber: "B-1", errors: [{ column: "size", message: "size is required for a bolt" }] }]);
+  });
+
+  it("reports bad numbers, unknown threads, unknown kinds and duplicates with their rows", () => {
+    const csv = [
+      HEADER,
+      "rodEnd,A-1,,1/4-28,RH,0.25,4200",
+      "rodEnd,A-2,,1/4-28,RH,quarter,42OO",
+      "rodEnd,A-3,,M6x1,RH,0.25,4200",
+      "rodEnd,A-1,,1/4-28,RH,0.25,4200",
+      "sprocket,A-4,,,,,",
+      "rodEnd,A-5,,1/4-28,RH,0.25,4200,extra",
+      "rodEnd,OLD-9,,1/4-28,RH,0.25,4200",
+    ].join("\n");
+    const r = parsePartsCsv(csv, ["old-9"]);
+    expect(r.parts.map((p) => p.partNumber)).toEqual(["A-1"]);
+    expect(r.errors).toEqual([
+      { row: 3, partNumber: "A-2", errors: [{ column: "ballBore", message: '"quarter" is not a number (in)' }, { column: "ratedUltimate", message: '"42OO" is not a number (lbf)' }] },
+      { row: 4, partNumber: "A-3", errors: [{ column: "thread", message: 'unknown thread "M6x1" (use 10-32, 1/4-28, 5/16-24, 3/8-24, 7/16-20, 1/2-20)' }] },
+      { row: 5, partNumber: "A-1", errors: [{ column: "partNumber", message: '"A-1" is a duplicate of row 2' }] },
+      { row: 6, partNumber: "A-4", errors: [{ column: "kind", message: 'unknown kind "sprocket" (use rodEnd, bolt, nut, washer, tube, bushing)' }] },
+      { row: 7, partNumber: "A-5", errors: [{ column: "row", message: "has 8 fields, the header has 7 (a delimiter inside a value needs quotes)" }] },
+      { row: 8, partNumber: "OLD-9", errors: [{ column: "partNumber", message: '"OLD-9" is already in this library' }] },
+    ]);
+  });
+
+  it("refuses a file without the needed columns", () => {
+    expect(parsePartsCsv("name,colour\nx,1\n").errors).toEqual([
+      { row: 1, partNumber: null, errors: [{ column: "header", message: 'unknown columns: "name", "colour"' }, { column: "header", message: 'the header has no "kind" column' }, { column: "header", message: 'the header has no "partNumber" column' }] },
+    ]);
+    // "size" is a real column (bolts): the unknown-column message only names the unknown one
+    expect(parsePartsCsv("kind,partNumber,colour\n").errors[0].errors).toEqual([{ column: "header", message: 'unknown column: "colour"' }]);
+  });
+
+  it("exports what it imports", () => {
+    const csv = [HEADER, 'rodEnd,R-1,"a, b",3/8-24,LH,0.375,8800'].join("\n");
+    const a = parsePartsCsv(csv).parts;
+    const b = parsePartsCsv(partsToCsv(a)).parts;
+    expect(b.map(({ row, ...p }) => p)).toEqual(a.map(({ row, ...p }) => p));
+  });
+});

@@ -1,0 +1,103 @@
+/** "Suggest a part" ordering on a known library, and the checklist of the demo pitch linkage. Pure. */
+import { describe, expect, it } from "vitest";
+import { demoPitchLinkage, DEMO_WRONG_JOINT } from "@/shared/demo";
+import { analyze } from "@/shared/analysis";
+import type { JointResult } from "@/shared/analysis/types";
+import { suggestParts } from "@/shared/records/suggest";
+import { checklistFor } from "@/shared/records/checklist";
+import { hardwareList } from "@/shared/records/hardware";
+import type { Part } from "@/shared/records/parts";
+
+const at = "2026-12-01T00:00:00.000Z";
+const rodEnd = (pn: string, thread: string, hand: "RH" | "LH", ballBore: number, ratedUltimate: number): Part => ({
+  id: pn, kind: "rodEnd", partNumber: pn, description: "", createdAt: at, updatedAt: at,
+  spec: { thread: thread as "1/4-28", hand, shank: "male", ballBore, ratedUltimate, hasWitnessHole: true },
+});
+const bolt = (pn: string, size: "AN3" | "AN4", material: "steel" | "aluminium"): Part => ({
+  id: pn, kind: "bolt", partNumber: pn, description: "", createdAt: at, updatedAt: at, spec: { size, material },
+});
+
+// Ratings are invented library values for the test. // common practice, no source
+const LIBRARY: Part[] = [
+  rodEnd("A-4200", "1/4-28", "LH", 0.25, 4200),
+  rodEnd("B-6000", "1/4-28", "LH", 0.25, 6000),
+  rodEnd("C-RH", "1/4-28", "RH", 0.25, 9000),
+  rodEnd("D-516", "5/16-24", "LH", 0.3125, 9000),
+  rodEnd("E-weak", "1/4-28", "LH", 0.25, 100),
+  rodEnd("F-bore", "1/4-28", "LH", 0.3125, 9000),
+  bolt("AN3-st", "AN3", "steel"),
+  bolt("AN4-st", "AN4", "steel"),
+  bolt("AN4-al", "AN4", "aluminium"),
+];
+
+describe("suggest a part", () => {
+  const graph = demoPitchLinkage();
+  const joint = graph.joints.find((j) => j.id === DEMO_WRONG_JOINT)!; // 1/4-28 LH rod end, bore 0.25 in, single shear
+
+  it("orders fitting parts by margin against a known required load, and says why the others miss", () => {
+    const result = { jointId: joint.id, radialUltimate: 2000 } as JointResult; // 2000 lbf: a round test value, no source
+    const s = suggestParts(joint, result, LIBRARY);
+    expect(s.required).toBe(2000);
+    expect(s.rodEnds.map((x) => [x.part.partNumber, Number(x.margin.toFixed(3))])).toEqual([["B-6000", 2], ["A-4200", 1.1]]);
+    // AN4 steel, single shear: 75 ksi · π · 0.25² / 4 = 3681.6 lbf (shared/hardware/bolts.ts, from memory) → margin 0.841
+    expect(s.bolts.map((x) => [x.part.partNumber, Number(x.margin.toFixed(3))])).toEqual([["AN4-st", 0.841]]);
+    const misses = Object.fromEntries(s.nearMisses.map((m) => [m.part.partNumber, m.reason]));
+    expect(Object.keys(misses).sort()).toEqual(["AN4-al", "C-RH", "E-weak", "F-bore"]); // D-516 does not share the thread: not named
+    expect(misses["C-RH"]).toBe("RH thread, the joint needs LH");
+    expect(misses["E-weak"]).toMatch(/rated 100 lbf, below the 2000 lbf required/);
+    expect(misses["F-bore"]).toBe("bore 0.3125 in, the joint needs 0.25 in");
+  });
+
+  it("uses the engine's required load for the demo joint", () => {
+    const report = analyze(graph);
+    const r = report.joints.find((j) => j.jointId === joint.id)!;
+    expect(r.radialUltimate).toBeGreaterThan(0);
+    const s = suggestParts(joint, r, LIBRARY);
+    expect(s.required).toBeCloseTo(r.radialUltimate, 6);
+    const margins = s.rodEnds.map((x) => x.margin);
+    expect([...margins].sort((a, b) => b - a)).toEqual(margins);
+    for (const x of s.rodEnds) expect(x.margin).toBeCloseTo(x.capacity / r.radialUltimate - 1, 9);
+  });
+});
+
+describe("inspection checklist", () => {
+  it("lists, for the demo pitch linkage, exactly the checks each joint's hardware calls for", () => {
+    const items = checklistFor(demoPitchLinkage());
+    const byJoint: Record<string, string[]> = {};
+    for (const i of items) (byJoint[i.jointId] ??= []).push(i.code);
+    const rodEndJoint = ["jam-nut", "witness-hole", "nut-locking", "torque", "torque-stripe"];
+    expect(byJoint).toEqual({
+      "j-stick-pivot": ["cotter-pin"], // castellated nut on a bushing: snugged, pinned, not torqued
+      "j-stick-fwd": rodEndJoint,
+      "j-fwd-bellcrank": rodEndJoint,
+      "j-bellcrank-pivot": ["nut-locking", "torque", "torque-stripe"],
+      "j-bellcrank-aft": rodEndJoint,
+      // the seeded wrong joint: single shear, so the retaining washer is checked; the jam nut is checked though none is recorded
+      [DEMO_WRONG_JOINT]: ["jam-nut", "witness-hole", "retaining-washer", "nut-locking", "torque", "torque-stripe"],
+      "j-horn-elevator": ["nut-locking", "torque", "torque-stripe"],
+      "j-elevator-hinge": ["nut-locking", "torque", "torque-stripe"],
+      "": ["full-free-travel", "stops-before-limits"],
+    });
+    const washer = items.find((i) => i.jointId === DEMO_WRONG_JOINT && i.code === "retaining-washer")!;
+    expect(washer.text).toContain("over 0.5 in"); // the demo rod end's housing bore, 0.500 in (shared/demo.ts, invented part)
+    expect(washer.where).toBe("Aft pushrod · b ↔ Elevator horn · attach");
+    expect(items.find((i) => i.jointId === "j-bellcrank-pivot" && i.code === "torque")!.text).toContain("120 in·lbf"); // demo value
+    expect(items.find((i) => i.code === "stops-before-limits")!.text).toContain("Elevator 25° up / 20° down"); // demo travel
+    for (const i of items) expect(i.source.text.length).toBeGreaterThan(0);
+  });
+});
+
+describe("hardware list", () => {
+  it("groups the demo's parts with quantities and where used", () => {
+    const lines = hardwareList([{ id: "L1", name: "Pitch", graph: demoPitchLinkage() }]);
+    const q = Object.fromEntries(lines.map((l) => [l.description, l.quantity]));
+    expect(q["Rod end 1/4-28 RH male, bore 0.25 in"]).toBe(2);
+    expect(q["Rod end 1/4-28 LH male, bore 0.25 in"]).toBe(2);
+    expect(q["Jam nut 1/4-28 RH"]).toBe(2);
+    expect(q["Jam nut 1/4-28 LH"]).toBe(1); // the wrong joint has none
+    expect(q["Cotter pin for 5/16-24 castellated nut"]).toBe(1);
+    const lh = lines.find((l) => l.description === "Rod end 1/4-28 LH male, bore 0.25 in")!;
+    expect(lh.partNumber).toBe("LW-SRE4M-LH");
+    expect(lh.usedIn.map((u) => u.jointId)).toEqual(["j-fwd-bellcrank", DEMO_WRONG_JOINT]);
+  });
+});

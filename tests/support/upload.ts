@@ -1,0 +1,70 @@
+/** Multipart uploads from tests, test images made with sharp, and a look into the local S3 fake. */
+import { randomUUID } from "node:crypto";
+import { S3Client, ListObjectsV2Command, PutObjectCommand } from "@aws-sdk/client-s3";
+import { APP_URL } from "./env";
+import type { Client } from "./http";
+import { testDb } from "./db";
+
+/** The test-mode S3 fake started by scripts/services.mjs (LW_SERVICES_MODE=test). */
+export const S3 = {
+  endpoint: process.env.LW_TEST_S3_ENDPOINT || `http://127.0.0.1:${process.env.LW_S3_PORT || 4570}`,
+  bucket: "linkwright",
+};
+const s3 = new S3Client({ endpoint: S3.endpoint, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" } });
+
+/** Every key in the bucket under a prefix (e.g. `builds/<id>/`). */
+export async function s3Keys(prefix = ""): Promise<string[]> {
+  const keys: string[] = [];
+  let token: string | undefined;
+  do {
+    const r = await s3.send(new ListObjectsV2Command({ Bucket: S3.bucket, Prefix: prefix, ContinuationToken: token }));
+    for (const o of r.Contents ?? []) if (o.Key) keys.push(o.Key);
+    token = r.IsTruncated ? r.NextContinuationToken : undefined;
+  } while (token);
+  return keys.sort();
+}
+
+export async function upload(client: Client, path: string, file: { bytes: Buffer | Uint8Array; name: string; type?: string }, fields: Record<string, string> = {}, method = "POST") {
+  const form = new FormData();
+  form.set("file", new Blob([file.bytes as Uint8Array<ArrayBuffer>], { type: file.type ?? "application/octet-stream" }), file.name);
+  for (const [k, v] of Object.entries(fields)) form.set(k, v);
+  const res = await fetch(`${APP_URL}${path}`, { method, headers: client.cookie ? { cookie: client.cookie } : {}, body: form, redirect: "manual" });
+  return readJson(res);
+}
+
+/** A raw (non-multipart) body, as the editor posts its PNG. */
+export async function uploadRaw(client: Client, path: string, bytes: Buffer | Uint8Array, type: string) {
+  const res = await fetch(`${APP_URL}${path}`, { method: "POST", headers: { ...(client.cookie ? { cookie: client.cookie } : {}), "content-type": type }, body: bytes as Uint8Array<ArrayBuffer>, redirect: "manual" });
+  return readJson(res);
+}
+
+async function readJson(res: Response) {
+  const text = await res.text();
+  let body: any = text;
+  try { body = JSON.parse(text); } catch {}
+  return { status: res.status, body };
+}
+
+export async function fetchBytes(client: Client, path: string) {
+  const res = await fetch(`${APP_URL}${path}`, { headers: client.cookie ? { cookie: client.cookie } : {}, redirect: "manual" });
+  return { status: res.status, headers: res.headers, bytes: Buffer.from(await res.arrayBuffer()) };
+}
+
+/** A small test photo: a two-colour JPEG/PNG/WebP of the given size, made with sharp. */
+export async function testImage(format: "jpeg" | "png" | "webp" = "jpeg", width = 800, height = 600) {
+  const sharp = (await import("sharp")).default;
+  const half = await sharp({ create: { width: Math.ceil(width / 2), height, channels: 3, background: "#1f6f8b" } }).png().toBuffer();
+  return sharp({ create: { width, height, channels: 3, background: "#e3b23c" } }).composite([{ input: half, left: 0, top: 0 }])[format]().toBuffer();
+}
+
+/** A stored file without going through the API (fixtures): the object in the fake and its row. */
+export async function fixtureFile(buildId: string, userId: string | null, o: { kind?: "photo" | "linkage-picture"; bytes?: Buffer } = {}) {
+  const id = randomUUID();
+  const bytes = o.bytes ?? (await testImage("png", 64, 48));
+  const key = `builds/${buildId}/files/${id}.png`;
+  const thumbKey = `builds/${buildId}/thumbs/${id}.jpg`;
+  await s3.send(new PutObjectCommand({ Bucket: S3.bucket, Key: key, Body: bytes, ContentType: "image/png" }));
+  await s3.send(new PutObjectCommand({ Bucket: S3.bucket, Key: thumbKey, Body: bytes, ContentType: "image/jpeg" }));
+  await testDb("files").insert({ id, build_id: buildId, key, kind: o.kind ?? "photo", content_type: "image/png", size: bytes.length, name: "fixture.png", thumb_key: thumbKey, width: 64, height: 48, uploaded_by: userId });
+  return id;
+}
