@@ -1,4 +1,5 @@
 import { forwardRef } from "react";
+import { CAUTION_TEXT } from "@/shared/caution";
 
 type Tone = "primary" | "secondary" | "danger" | "ghost";
 const tones: Record<Tone, string> = {
@@ -60,8 +61,8 @@ export function EmptyState({ title, children, action }: { title: string; childre
   );
 }
 
-export const CAUTION_TEXT =
-  "Linkwright's numbers aid your own engineering and the designer's data — they do not replace them. Follow the kit or plans designer's instructions, the airworthiness regulations and a qualified inspector; defer to local rules and licensed practice.";
+/** The one caution text, kept in shared/ so server-made exports (PDFs) print the same words. */
+export { CAUTION_TEXT };
 
 export function Caution({ className = "" }: { className?: string }) {
   return (

@@ -1,0 +1,99 @@
+"use client";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import Link from "next/link";
+import { useState } from "react";
+import { api } from "@/components/api-client";
+import { Button, Caution } from "@/components/ui";
+import { JointPhotos } from "@/components/records/JointPhotos";
+
+type Item = { jointId: string; where: string; code: string; text: string; source: { kind: string; text: string }; tickedBy: string | null; tickedAt: string | null; note: string };
+type Data = { revision: number; currentRevision: number; items: Item[] };
+
+export function ChecklistScreen(p: { buildId: string; linkageId: string; linkageName: string; revision?: number; canTick: boolean; canEdit: boolean }) {
+  const url = `/api/builds/${p.buildId}/linkages/${p.linkageId}/checklist`;
+  const key = ["checklist", p.linkageId, p.revision ?? "current"];
+  const qc = useQueryClient();
+  const q = useQuery({ queryKey: key, queryFn: () => api<Data>(`${url}${p.revision ? `?revision=${p.revision}` : ""}`) });
+  const [error, setError] = useState<string | null>(null);
+  const tick = useMutation({
+    mutationFn: (v: { jointId: string; code: string; ticked: boolean; note?: string }) => api(url, { method: "PUT", body: { revision: q.data!.revision, ...v } }),
+    // Optimistic: the box shows the new state at once; the server's person and time replace it.
+    onMutate: (v) => {
+      qc.setQueryData<Data>(key, (old) => old && {
+        ...old,
+        items: old.items.map((x) => x.jointId === v.jointId && x.code === v.code
+          ? { ...x, tickedAt: v.ticked ? x.tickedAt ?? new Date().toISOString() : null, tickedBy: v.ticked ? x.tickedBy ?? "you" : null, note: v.note ?? x.note }
+          : x),
+      });
+    },
+    onSuccess: () => setError(null),
+    onSettled: () => qc.invalidateQueries({ queryKey: key }),
+    onError: (e) => setError(e instanceof Error ? e.message : String(e)),
+  });
+  if (q.isLoading) return <p className="text-ink-soft">Loading the checklist…</p>;
+  if (q.error || !q.data) return <p role="alert" className="text-hazard">{String(q.error instanceof Error ? q.error.message : "The checklist could not be loaded.")}</p>;
+  const d = q.data;
+  const groups: { jointId: string; where: string; items: Item[] }[] = [];
+  for (const i of d.items) {
+    const last = groups[groups.length - 1];
+    if (last && last.jointId === i.jointId) last.items.push(i);
+    else groups.push({ jointId: i.jointId, where: i.where, items: [i] });
+  }
+  const done = d.items.filter((i) => i.tickedAt).length;
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <Link href={`/builds/${p.buildId}/checklist`} className="no-print text-xs text-ink-soft hover:underline">All checklists</Link>
+          <h1 className="text-xl font-semibold">Checklist — {p.linkageName}</h1>
+          <p className="text-ink-soft">Revision {d.revision}{d.revision !== d.currentRevision ? ` (the linkage is now at revision ${d.currentRevision})` : ""} · <span data-testid="checklist-progress">{done} of {d.items.length} ticked</span></p>
+        </div>
+        <div className="no-print flex gap-2">
+          <Button tone="secondary" onClick={() => window.print()}>Print</Button>
+          <a className="rounded bg-ink px-3 py-1.5 text-sm font-medium text-white hover:bg-ink/90" href={`${url}/pdf?revision=${d.revision}`} target="_blank" rel="noreferrer">PDF</a>
+        </div>
+      </div>
+      {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
+      {d.items.length <= 2 ? <p className="rounded border border-dashed border-ink/25 p-4 text-ink-soft">This revision has no joints yet, so only the travel checks show. Add joints with their hardware in the editor and each one brings its own checks.</p> : null}
+      {groups.map((g) => (
+        <section key={g.jointId || "whole"} className="rounded-lg border border-ink/10 bg-white" data-testid={`checklist-joint-${g.jointId || "linkage"}`}>
+          <header className="flex flex-wrap items-center justify-between gap-2 border-b border-ink/10 px-4 py-2">
+            <h2 className="text-sm font-semibold">{g.jointId ? <>Joint <span className="font-mono">{g.jointId}</span> · {g.where}</> : g.where}</h2>
+            {g.jointId ? <Link className="no-print text-xs text-advisory hover:underline" href={`/builds/${p.buildId}/linkages/${p.linkageId}?select=${encodeURIComponent(g.jointId)}`}>Open in the editor</Link> : null}
+          </header>
+          <ul className="divide-y divide-ink/5">
+            {g.items.map((i) => <ItemRow key={i.code} i={i} canTick={p.canTick} onChange={(v) => tick.mutate({ jointId: i.jointId, code: i.code, ...v })} />)}
+          </ul>
+          {g.jointId ? <div className="border-t border-ink/10 px-4 py-2"><JointPhotos buildId={p.buildId} linkageId={p.linkageId} jointId={g.jointId} canEdit={p.canEdit} /></div> : null}
+        </section>
+      ))}
+      <Caution />
+    </div>
+  );
+}
+
+function ItemRow({ i, canTick, onChange }: { i: Item; canTick: boolean; onChange: (v: { ticked: boolean; note?: string }) => void }) {
+  const id = `ck-${i.jointId}-${i.code}`;
+  const [note, setNote] = useState(i.note);
+  const [editing, setEditing] = useState(false);
+  return (
+    <li className="flex gap-3 px-4 py-2" data-testid="checklist-item">
+      <input id={id} type="checkbox" className="mt-1 h-4 w-4" checked={!!i.tickedAt} disabled={!canTick} onChange={(e) => onChange({ ticked: e.target.checked })} />
+      <div className="flex-1">
+        <label htmlFor={id} className="text-sm">{i.text}</label>
+        <p className="text-xs text-ink-soft">
+          {i.tickedAt ? <>Ticked by {i.tickedBy} · {new Date(i.tickedAt).toLocaleString("en-CA")}</> : "Not ticked"} · source: {i.source.text}
+        </p>
+        {editing ? (
+          <form className="mt-1 flex gap-2" onSubmit={(e) => { e.preventDefault(); onChange({ ticked: !!i.tickedAt, note }); setEditing(false); }}>
+            <input aria-label={`Note on: ${i.text}`} className="flex-1 rounded border border-ink/20 px-2 py-1 text-xs" value={note} onChange={(e) => setNote(e.target.value)} autoFocus maxLength={2000}
+              onKeyDown={(e) => { if (e.key === "Escape") { setNote(i.note); setEditing(false); } }} />
+            <Button size="sm" type="submit">Save note</Button>
+          </form>
+        ) : i.note ? (
+          <p className="mt-1 text-xs"><span className="font-semibold">Note:</span> {i.note} {canTick ? <button type="button" className="no-print text-advisory hover:underline" onClick={() => setEditing(true)}>edit</button> : null}</p>
+        ) : canTick ? <button type="button" className="no-print mt-1 text-xs text-advisory hover:underline" onClick={() => setEditing(true)}>Add a note</button> : null}
+      </div>
+    </li>
+  );
+}

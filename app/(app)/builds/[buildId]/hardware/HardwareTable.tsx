@@ -1,0 +1,113 @@
+"use client";
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type ColumnFiltersState, type SortingState } from "@tanstack/react-table";
+import Link from "next/link";
+import { useMemo, useState } from "react";
+import { api } from "@/components/api-client";
+import { Card, EmptyState, Input, Select } from "@/components/ui";
+import { HARDWARE_STATES, HARDWARE_STATE_LABEL, type HardwareLine, type HardwareState } from "@/shared/records/hardware";
+
+type Line = HardwareLine & { state: HardwareState; stateBy: string | null; stateAt: string | null };
+const KIND_LABEL: Record<string, string> = { rodEnd: "Rod end", jamNut: "Jam nut", bolt: "Bolt", nut: "Nut", washer: "Washer", cotterPin: "Cotter pin" };
+const STATE_TONE: Record<HardwareState, string> = { to_order: "text-caution", ordered: "text-advisory", received: "text-ink", installed: "text-ink", inspected: "text-ok" };
+const col = createColumnHelper<Line>();
+
+export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; canEdit: boolean; initial: Line[] }) {
+  const qc = useQueryClient();
+  const key = ["hardware", buildId];
+  const q = useQuery({ queryKey: key, queryFn: async () => (await api<{ lines: Line[] }>(`/api/builds/${buildId}/hardware`)).lines, initialData: initial });
+  const [error, setError] = useState<string | null>(null);
+  const setState = useMutation({
+    mutationFn: (v: { key: string; state: HardwareState }) => api(`/api/builds/${buildId}/hardware`, { method: "PUT", body: v }),
+    onMutate: (v) => { qc.setQueryData<Line[]>(key, (old) => old?.map((l) => (l.key === v.key ? { ...l, state: v.state } : l))); },
+    onSettled: () => qc.invalidateQueries({ queryKey: key }),
+    onError: (e) => setError(e instanceof Error ? e.message : String(e)),
+  });
+  const [sorting, setSorting] = useState<SortingState>([]);
+  const [filter, setFilter] = useState("");
+  const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
+
+  const columns = useMemo(() => [
+    col.accessor("kind", { header: "Kind", cell: (c) => KIND_LABEL[c.getValue()] ?? c.getValue(), filterFn: "equals" }),
+    col.accessor("description", { header: "Part" }),
+    col.accessor("partNumber", { header: "Part number", cell: (c) => <span className="font-mono text-xs">{c.getValue() ?? "—"}</span> }),
+    col.accessor("quantity", { header: "Qty", cell: (c) => <span className="tabular-nums">{c.getValue()}</span> }),
+    col.accessor((l) => l.usedIn.map((u) => `${u.linkageName} ${u.jointId} ${u.where}`).join(" "), {
+      id: "usedIn", header: "Where used", enableSorting: false,
+      cell: (c) => (
+        <ul className="space-y-0.5">
+          {c.row.original.usedIn.map((u) => (
+            <li key={`${u.linkageId}-${u.jointId}`}>
+              <Link className="text-advisory hover:underline" href={`/builds/${buildId}/linkages/${u.linkageId}?select=${encodeURIComponent(u.jointId)}`} title={`Open ${u.linkageName} with joint ${u.jointId} selected`}>
+                {u.linkageName}: {u.where}
+              </Link>
+            </li>
+          ))}
+        </ul>
+      ),
+    }),
+    col.accessor("state", {
+      header: "State", filterFn: "equals",
+      sortingFn: (a, b) => HARDWARE_STATES.indexOf(a.original.state) - HARDWARE_STATES.indexOf(b.original.state),
+      cell: (c) => canEdit ? (
+        <Select aria-label={`State of ${c.row.original.description}`} value={c.getValue()} className={`w-32 ${STATE_TONE[c.getValue()]}`} onChange={(e) => setState.mutate({ key: c.row.original.key, state: e.target.value as HardwareState })}>
+          {HARDWARE_STATES.map((s) => <option key={s} value={s}>{HARDWARE_STATE_LABEL[s]}</option>)}
+        </Select>
+      ) : <span className={STATE_TONE[c.getValue()]}>{HARDWARE_STATE_LABEL[c.getValue()]}</span>,
+    }),
+  ], [buildId, canEdit, setState]);
+
+  const table = useReactTable({
+    data: q.data, columns, state: { sorting, globalFilter: filter, columnFilters }, onSortingChange: setSorting, onGlobalFilterChange: setFilter, onColumnFiltersChange: setColumnFilters,
+    getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(), getFilteredRowModel: getFilteredRowModel(),
+  });
+  const count = (s: HardwareState) => q.data.filter((l) => l.state === s).reduce((a, l) => a + l.quantity, 0);
+  const colFilter = (id: string) => (columnFilters.find((f) => f.id === id)?.value as string) ?? "";
+  const setColFilter = (id: string, v: string) => setColumnFilters((fs) => [...fs.filter((f) => f.id !== id), ...(v ? [{ id, value: v }] : [])]);
+
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-end justify-between gap-3">
+        <div>
+          <h1 className="text-xl font-semibold">Hardware list</h1>
+          <p className="text-ink-soft">Every part the joint cards call for, across the current revision of each linkage.</p>
+        </div>
+        <a href={`/api/builds/${buildId}/hardware/export`} className="rounded border border-ink/20 bg-white px-3 py-1.5 text-sm font-medium hover:bg-ink/5">Export CSV</a>
+      </div>
+      {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
+      {q.data.length === 0 ? (
+        <EmptyState title="No hardware yet">
+          The list builds itself from the joint cards: open a linkage, select a joint and fill in its rod end, bolt, nut and washers.
+          Each part then shows here with its quantity and where it is used, ready to track from ordered to inspected.
+        </EmptyState>
+      ) : (
+        <Card
+          title={<span className="font-normal text-ink-soft">{HARDWARE_STATES.map((s) => `${HARDWARE_STATE_LABEL[s]} ${count(s)}`).join(" · ")}</span>}
+          actions={<>
+            <Select aria-label="Only kind" value={colFilter("kind")} onChange={(e) => setColFilter("kind", e.target.value)} className="w-32"><option value="">All kinds</option>{Object.entries(KIND_LABEL).map(([k, v]) => <option key={k} value={k}>{v}</option>)}</Select>
+            <Select aria-label="Only state" value={colFilter("state")} onChange={(e) => setColFilter("state", e.target.value)} className="w-32"><option value="">All states</option>{HARDWARE_STATES.map((s) => <option key={s} value={s}>{HARDWARE_STATE_LABEL[s]}</option>)}</Select>
+            <Input aria-label="Filter hardware" placeholder="Filter…" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-44" />
+          </>}
+        >
+          <table className="w-full text-left text-sm" data-testid="hardware-table">
+            <thead className="text-xs uppercase tracking-wide text-ink-soft">
+              {table.getHeaderGroups().map((hg) => (
+                <tr key={hg.id}>{hg.headers.map((h) => (
+                  <th key={h.id} className="py-1 pr-3 font-medium" aria-sort={h.column.getIsSorted() === "asc" ? "ascending" : h.column.getIsSorted() === "desc" ? "descending" : undefined}>
+                    {h.column.getCanSort() ? <button type="button" className="hover:text-ink" onClick={h.column.getToggleSortingHandler()}>{flexRender(h.column.columnDef.header, h.getContext())}{h.column.getIsSorted() === "asc" ? " ▲" : h.column.getIsSorted() === "desc" ? " ▼" : ""}</button> : flexRender(h.column.columnDef.header, h.getContext())}
+                  </th>
+                ))}</tr>
+              ))}
+            </thead>
+            <tbody>
+              {table.getRowModel().rows.map((r) => (
+                <tr key={r.id} className="border-t border-ink/10" data-testid="hardware-row">{r.getVisibleCells().map((c) => <td key={c.id} className="py-1.5 pr-3 align-top">{flexRender(c.column.columnDef.cell, c.getContext())}</td>)}</tr>
+              ))}
+            </tbody>
+          </table>
+          {table.getRowModel().rows.length === 0 ? <p className="py-4 text-center text-ink-soft">Nothing matches these filters.</p> : null}
+        </Card>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,22 @@
+import type { Metadata } from "next";
+import { requirePageBuild } from "@/lib/page-access";
+import { buildHardware } from "@/db/hardware";
+import { BuildNav } from "@/components/BuildNav";
+import { can } from "@/shared/roles";
+import { HardwareTable } from "./HardwareTable";
+
+export const metadata: Metadata = { title: "Hardware list" };
+
+export default async function HardwarePage({ params }: { params: Promise<{ buildId: string }> }) {
+  const { buildId } = await params;
+  const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}/hardware`);
+  const lines = await buildHardware(build.id);
+  return (
+    <>
+      <BuildNav buildId={build.id} buildName={build.name} current="/hardware" />
+      <main className="mx-auto max-w-6xl p-6">
+        <HardwareTable buildId={build.id} canEdit={can(role, "edit")} initial={lines} />
+      </main>
+    </>
+  );
+}

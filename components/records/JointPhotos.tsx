@@ -1,0 +1,45 @@
+"use client";
+/**
+ * Photos that prove a joint (witness hole, jam nut, washer): thumbnails and an upload button.
+ * Used on the checklist; the editor's joint card can host it too (props: buildId, linkageId, jointId).
+ */
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useRef, useState } from "react";
+import { api } from "@/components/api-client";
+import { ACCEPT_PHOTOS, uploadFile, type StoredFile } from "./upload-client";
+
+export function JointPhotos({ buildId, linkageId, jointId, canEdit }: { buildId: string; linkageId: string; jointId: string; canEdit: boolean }) {
+  const url = `/api/builds/${buildId}/linkages/${linkageId}/joints/${encodeURIComponent(jointId)}/photos`;
+  const key = ["joint-photos", linkageId, jointId];
+  const qc = useQueryClient();
+  const input = useRef<HTMLInputElement>(null);
+  const [error, setError] = useState<string | null>(null);
+  const photos = useQuery({ queryKey: key, queryFn: async () => (await api<{ photos: StoredFile[] }>(url)).photos });
+  const add = useMutation({
+    mutationFn: async (files: File[]) => { for (const f of files) await uploadFile(url, f); },
+    onSuccess: () => { setError(null); qc.invalidateQueries({ queryKey: key }); },
+    onError: (e) => { setError(e instanceof Error ? e.message : String(e)); qc.invalidateQueries({ queryKey: key }); },
+  });
+  const list = photos.data ?? [];
+  return (
+    <div className="flex flex-wrap items-center gap-2" data-testid={`joint-photos-${jointId}`}>
+      {list.map((p) => (
+        <a key={p.id} href={p.url} target="_blank" rel="noreferrer" title={`${p.name}${p.uploadedBy ? ` — ${p.uploadedBy}` : ""}`} className="block rounded border border-ink/15 hover:border-advisory focus:outline-2 focus:outline-advisory">
+          {/* eslint-disable-next-line @next/next/no-img-element */}
+          <img src={p.thumbUrl ?? p.url} alt={`Photo of joint ${jointId}: ${p.name}`} className="h-14 w-auto rounded" loading="lazy" data-testid="joint-photo-thumb" />
+        </a>
+      ))}
+      {list.length === 0 && !photos.isLoading ? <span className="text-xs text-ink-soft">No photo yet — a close-up of the witness hole, jam nut and washer is the evidence an inspector asks for.</span> : null}
+      {canEdit ? (
+        <>
+          <input ref={input} type="file" accept={ACCEPT_PHOTOS} multiple className="sr-only" id={`photo-${linkageId}-${jointId}`} aria-label={`Add a photo of joint ${jointId}`}
+            onChange={(e) => { const files = [...(e.target.files ?? [])]; e.target.value = ""; if (files.length) add.mutate(files); }} />
+          <label htmlFor={`photo-${linkageId}-${jointId}`} className="cursor-pointer rounded border border-dashed border-ink/30 px-2 py-1 text-xs text-ink-soft hover:border-ink hover:text-ink focus-within:outline">
+            {add.isPending ? "Uploading…" : "+ Photo"}
+          </label>
+        </>
+      ) : null}
+      {error ? <span role="alert" className="text-xs text-hazard">{error}</span> : null}
+    </div>
+  );
+}
