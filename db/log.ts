@@ -148,3 +148,14 @@ export async function deleteEntry(buildId: string, id: string, userId: string) {
   if (n) await audit({ buildId, userId, action: "log.delete", detail: { entryId: id } });
   return n > 0;
 }
+
+/** The latest few entries, for the build overview (no files). */
+export async function recentEntries(buildId: string, limit = 5) {
+  const rows = await db("log_entries as e")
+    .leftJoin("users as u", "u.id", "e.author_id")
+    .where("e.build_id", buildId)
+    .select("e.*", "u.name as author_name")
+    .orderBy([{ column: "e.date", order: "desc" }, { column: "e.created_at", order: "desc" }])
+    .limit(limit);
+  return (rows as EntryRow[]).map((r) => toEntry(r));
+}

@@ -41,6 +41,24 @@ export async function seed(knex: Knex): Promise<void> {
       analysis: JSON.stringify(analyze(graph)),
       author_id: owner,
     });
+    // A few log entries and a small build parts library, so the records pages are not empty on first look.
+    const day = (daysAgo: number) => new Date(Date.now() - daysAgo * 86_400_000).toISOString().slice(0, 10);
+    await trx("log_entries").insert([
+      { build_id: build.id, date: day(9), hours: 3.5, title: "Stick assembly and seat-frame pivot", text: "Reamed the pivot lugs, fitted the bushing and the AN5 pivot bolt with a castellated nut and a new cotter pin.", systems: ["pitch"], author_id: owner },
+      { build_id: build.id, date: day(4), hours: 2.25, title: "Forward pushrod cut and rod ends fitted", text: "Cut the tube to length, tapped both ends, one right-hand and one left-hand rod end. Jam nuts snug for now.", systems: ["pitch"], author_id: owner },
+      { build_id: build.id, date: day(1), hours: 1.5, title: "Aft pushrod to the elevator horn", text: "First fit of the aft pushrod at the horn. Still to do: jam nut and the retaining washer under the bolt head.", systems: ["pitch"], author_id: owner, linkage_id: linkage.id, revision: 1 },
+    ]);
+    // Invented parts for the demo only: the numbers are not any maker's.
+    const rodEnd = (partNumber: string, hand: "RH" | "LH", thread: string, ballBore: number, ratedUltimate: number) => ({
+      build_id: build.id, kind: "rodEnd", part_number: partNumber, description: `Demo rod end ${thread} ${hand} (invented rating)`,
+      spec: JSON.stringify({ thread, hand, shank: "male", ballBore, ballDiameter: ballBore * 2, housingBore: ballBore * 2, ratedUltimate, ratedMisalignment: 10, hasWitnessHole: true }),
+    });
+    await trx("parts").insert([
+      rodEnd("LW-DEMO-RE4-RH", "RH", "1/4-28", 0.25, 3600),
+      rodEnd("LW-DEMO-RE4-LH", "LH", "1/4-28", 0.25, 3600),
+      rodEnd("LW-DEMO-RE4H-RH", "RH", "1/4-28", 0.25, 5200),
+      rodEnd("LW-DEMO-RE5-RH", "RH", "5/16-24", 0.3125, 6100),
+    ]);
     await trx("audit_events").insert({ build_id: build.id, user_id: owner, action: "demo.seed", detail: JSON.stringify({}) });
   });
 }

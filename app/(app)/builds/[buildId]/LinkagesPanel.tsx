@@ -72,11 +72,11 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
       ) : (
         <table className="w-full text-left">
           <thead className="text-xs uppercase tracking-wide text-ink-soft">
-            <tr><th className="py-1">Name</th><th>System</th><th>Findings</th><th>Last change</th><th className="sr-only">Actions</th></tr>
+            <tr className="[&>th]:pr-3"><th className="py-1">Name</th><th>System</th><th>Findings</th><th>Last change</th><th className="sr-only">Actions</th></tr>
           </thead>
           <tbody>
             {linkages.map((l) => (
-              <tr key={l.id} className="border-t border-ink/10" data-testid="linkage-row">
+              <tr key={l.id} className="border-t border-ink/10 [&>td]:pr-3" data-testid="linkage-row">
                 <td className="py-2">
                   {renaming === l.id ? (
                     <form className="flex gap-1" onSubmit={(e) => { e.preventDefault(); rename.mutate({ id: l.id, name: String(new FormData(e.currentTarget).get("name")) }); }}>

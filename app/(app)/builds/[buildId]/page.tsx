@@ -7,6 +7,8 @@ import { BuildNav } from "@/components/BuildNav";
 import { Badge, Card, Caution } from "@/components/ui";
 import { can, ROLE_LABEL } from "@/shared/roles";
 import { LinkagesPanel } from "./LinkagesPanel";
+import { recentEntries } from "@/db/log";
+import Link from "next/link";
 import { reviewSummaryForBuild } from "@/db/review";
 import { OverviewReview } from "@/components/review/OverviewReview";
 
@@ -37,7 +39,13 @@ const ACTION_TEXT: Record<string, string> = {
 export default async function BuildOverview({ params }: { params: Promise<{ buildId: string }> }) {
   const { buildId } = await params;
   const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}`);
-  const [linkages, members, activity, review] = await Promise.all([listLinkages(build.id), listMembers(build.id), recentActivity(build.id), reviewSummaryForBuild(build.id)]);
+  const [linkages, members, activity, review, log] = await Promise.all([
+    listLinkages(build.id),
+    listMembers(build.id),
+    recentActivity(build.id),
+    reviewSummaryForBuild(build.id),
+    recentEntries(build.id, 5),
+  ]);
   const open = linkages.reduce((acc, l) => ({ hazard: acc.hazard + (l.summary?.hazard ?? 0), caution: acc.caution + (l.summary?.caution ?? 0) }), { hazard: 0, caution: 0 });
   return (
     <>
@@ -46,6 +54,20 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
         <div className="space-y-6 lg:col-span-2">
           <p className="text-ink-soft">{build.model || "Model not set"}{build.registration ? ` · ${build.registration}` : ""}</p>
           <LinkagesPanel buildId={build.id} initial={linkages} canEdit={can(role, "edit")} />
+          <Card title="Recent log entries" actions={<Link href={`/builds/${build.id}/log`} className="text-xs text-advisory hover:underline">Open the build log</Link>}>
+            {log.length === 0 ? (
+              <p className="text-ink-soft">No entries yet. Each shop session gets one: date, hours, what was done, photos.</p>
+            ) : (
+              <ul className="divide-y divide-ink/10" data-testid="recent-log">
+                {log.map((e) => (
+                  <li key={e.id} className="flex items-baseline justify-between gap-3 py-1.5">
+                    <span><span className="text-xs tabular-nums text-ink-soft">{e.date}</span> <span className="font-medium">{e.title}</span></span>
+                    <span className="shrink-0 text-xs text-ink-soft">{e.hours} h{e.author ? ` · ${e.author}` : ""}</span>
+                  </li>
+                ))}
+              </ul>
+            )}
+          </Card>
           <Caution />
         </div>
         <aside className="space-y-6">
