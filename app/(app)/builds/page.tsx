@@ -32,7 +32,7 @@ export default async function BuildsPage() {
               <Link href={`/builds/${b.id}`} className="block rounded-lg border border-ink/10 bg-white p-4 hover:border-advisory" data-testid="build-card">
                 <div className="flex items-start justify-between gap-2">
                   <div>
-                    <p className="font-semibold">{b.name}</p>
+                    <p className="font-semibold" data-testid="build-name">{b.name}</p>
                     <p className="text-ink-soft">{b.model || "Model not set"}{b.registration ? ` · ${b.registration}` : ""}</p>
                   </div>
                   <Badge>{ROLE_LABEL[b.role]}</Badge>

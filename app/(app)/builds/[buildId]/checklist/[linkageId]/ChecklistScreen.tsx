@@ -1,7 +1,7 @@
 "use client";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { api } from "@/components/api-client";
 import { Button, Caution } from "@/components/ui";
 import { JointPhotos } from "@/components/records/JointPhotos";
@@ -76,9 +76,12 @@ function ItemRow({ i, canTick, onChange }: { i: Item; canTick: boolean; onChange
   const id = `ck-${i.jointId}-${i.code}`;
   const [note, setNote] = useState(i.note);
   const [editing, setEditing] = useState(false);
+  // The box follows the click in the same event; the server's answer (via the query) confirms or reverts it.
+  const [checked, setChecked] = useState(!!i.tickedAt);
+  useEffect(() => setChecked(!!i.tickedAt), [i.tickedAt]);
   return (
     <li className="flex gap-3 px-4 py-2" data-testid="checklist-item">
-      <input id={id} type="checkbox" className="mt-1 h-4 w-4" checked={!!i.tickedAt} disabled={!canTick} onChange={(e) => onChange({ ticked: e.target.checked })} />
+      <input id={id} type="checkbox" className="mt-1 h-4 w-4" checked={checked} disabled={!canTick} onChange={(e) => { setChecked(e.target.checked); onChange({ ticked: e.target.checked }); }} />
       <div className="flex-1">
         <label htmlFor={id} className="text-sm">{i.text}</label>
         <p className="text-xs text-ink-soft">
