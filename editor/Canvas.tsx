@@ -1,6 +1,6 @@
 "use client";
 /** The React Flow canvas, rendered from the editor store; every change goes back through store actions. */
-import { useCallback, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import {
   Background,
   BackgroundVariant,
@@ -8,6 +8,8 @@ import {
   Controls,
   MiniMap,
   ReactFlow,
+  getNodesBounds,
+  useNodesInitialized,
   useReactFlow,
   type Connection,
   type EdgeChange,
@@ -20,6 +22,7 @@ import { useEditorConfig, useEditorStore, useEditorStoreApi } from "./context";
 import { nodeTypes, type PartFlowNode } from "./nodes";
 import { edgeTypes, SEVERITY_HEX, type JointFlowEdge } from "./joints/JointEdge";
 import type { EditorState, SubjectRef } from "./store";
+import { FIT, focusZoom, openingViewport } from "./view";
 
 export const KIND_MIME = "application/x-linkwright-kind";
 export const GRID = 10;
@@ -82,42 +85,78 @@ function useFlowEdges(): JointFlowEdge[] {
   }, [joints, selected]);
 }
 
+/** The centre of a part or a joint in flow coordinates (null when it is not on the canvas). */
+export function subjectCentre(s: Pick<EditorState, "nodes" | "joints" | "measured">, subject: SubjectRef): { x: number; y: number } | null {
+  const centre = (id: string) => {
+    const n = s.nodes.find((x) => x.id === id);
+    if (!n) return null;
+    const m = s.measured[id] ?? { width: 148, height: 50 };
+    return { x: n.position.x + m.width / 2, y: n.position.y + m.height / 2 };
+  };
+  if (subject.type === "node") return centre(subject.id);
+  if (subject.type === "joint") {
+    const j = s.joints.find((x) => x.id === subject.id);
+    const a = j && centre(j.from.node);
+    const b = j && centre(j.to.node);
+    if (a && b) return { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+  }
+  return null;
+}
+
 /** Select a subject and bring it to the middle of the canvas. */
 export function useFocusSubject() {
   const api = useEditorStoreApi();
   const rf = useReactFlow();
   return useCallback(
-    (subject: SubjectRef) => {
+    (subject: SubjectRef, o?: { duration?: number; zoom?: number }) => {
       const s = api.getState();
       s.select(subject);
-      const centre = (id: string) => {
-        const n = s.nodes.find((x) => x.id === id);
-        if (!n) return null;
-        const m = s.measured[id] ?? { width: 148, height: 50 };
-        return { x: n.position.x + m.width / 2, y: n.position.y + m.height / 2 };
-      };
-      let p: { x: number; y: number } | null = null;
-      if (subject.type === "node") p = centre(subject.id);
-      if (subject.type === "joint") {
-        const j = s.joints.find((x) => x.id === subject.id);
-        const a = j && centre(j.from.node);
-        const b = j && centre(j.to.node);
-        if (a && b) p = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
-      }
-      if (p) rf.setCenter(p.x, p.y, { zoom: Math.max(rf.getZoom(), 1), duration: 250 });
+      const p = subjectCentre(s, subject);
+      if (p) void rf.setCenter(p.x, p.y, { zoom: o?.zoom ?? focusZoom(rf.getZoom()), duration: o?.duration ?? 250 });
     },
     [api, rf],
   );
 }
 
-export default function Canvas() {
+/**
+ * The first view, once every part has its size: the deep-linked subject centred (and selected), or the
+ * whole linkage fitted with labels kept readable (editor/view.ts). The canvas stays hidden until then so
+ * it does not jump.
+ */
+function useOpeningView(wrap: React.RefObject<HTMLDivElement | null>, opening: SubjectRef | null | undefined) {
+  const api = useEditorStoreApi();
+  const rf = useReactFlow();
+  const initialized = useNodesInitialized();
+  const focus = useFocusSubject();
+  // An empty linkage keeps 1:1 so drops land where aimed.
+  const [ready, setReady] = useState(() => api.getState().nodes.length === 0);
+  useEffect(() => {
+    if (ready || !initialized) return;
+    const r = wrap.current?.getBoundingClientRect();
+    if (!r || r.width === 0 || r.height === 0) return;
+    const v = openingViewport(getNodesBounds(rf.getNodes()), r.width, r.height);
+    void rf.setViewport(v);
+    api.getState().setViewport(v);
+    if (opening) focus(opening, { duration: 0, zoom: focusZoom(v.zoom) });
+    setReady(true);
+  }, [ready, initialized, wrap, rf, api, opening, focus]);
+  // Never leave the canvas hidden if measuring takes unusually long.
+  useEffect(() => {
+    if (ready) return;
+    const t = setTimeout(() => setReady(true), 2000);
+    return () => clearTimeout(t);
+  }, [ready]);
+  return ready;
+}
+
+export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
   const api = useEditorStoreApi();
   const { readOnly } = useEditorConfig();
   const nodes = useFlowNodes(readOnly);
   const edges = useFlowEdges();
   const rf = useReactFlow();
-  // Fit the view to a linkage that opens with parts; an empty one keeps 1:1 so drops land where aimed.
-  const [fitOnOpen] = useState(() => api.getState().nodes.length > 0);
+  const wrap = useRef<HTMLDivElement>(null);
+  const ready = useOpeningView(wrap, opening);
 
   const onNodesChange = useCallback(
     (changes: NodeChange<PartFlowNode>[]) => {
@@ -201,7 +240,7 @@ export default function Canvas() {
   }, [api]);
 
   return (
-    <div className="h-full w-full" onDragOver={onDragOver} onDrop={onDrop} data-testid="canvas">
+    <div ref={wrap} className="h-full w-full" style={ready ? undefined : { opacity: 0 }} data-view={ready ? "ready" : "opening"} onDragOver={onDragOver} onDrop={onDrop} data-testid="canvas">
       <ReactFlow<PartFlowNode, JointFlowEdge>
         nodes={nodes}
         edges={edges}
@@ -222,8 +261,6 @@ export default function Canvas() {
         disableKeyboardA11y
         snapToGrid
         snapGrid={[GRID, GRID]}
-        fitView={fitOnOpen}
-        fitViewOptions={{ padding: 0.2, maxZoom: 1.2 }}
         minZoom={0.05}
         maxZoom={3}
         connectionRadius={28}
@@ -231,7 +268,7 @@ export default function Canvas() {
       >
         <Background variant={BackgroundVariant.Dots} gap={GRID * 2} size={1} color="#cfd4da" />
         <MiniMap<PartFlowNode> pannable zoomable nodeColor={minimapColor} className="!bg-white/90" />
-        <Controls showInteractive={false} />
+        <Controls showInteractive={false} fitViewOptions={{ padding: FIT.padding, maxZoom: FIT.maxZoom, minZoom: 0.05, duration: 200 }} />
       </ReactFlow>
     </div>
   );

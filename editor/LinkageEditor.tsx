@@ -23,6 +23,8 @@ import { useAutosave, type SaveStatus } from "./useAutosave";
 import { downloadBlob, exportLinkagePng, fileSafe } from "./export";
 import { ConflictDialog } from "./panels/ConflictDialog";
 import { ShortcutsSheet } from "./panels/ShortcutsSheet";
+import { FIT, readDeepLink } from "./view";
+import { uploadFile } from "@/components/records/upload-client";
 
 export type LinkageEditorProps = {
   buildId: string;
@@ -38,6 +40,19 @@ export type LinkageEditorProps = {
   /** Rendered under the joint card: the review thread of the selection. */
   reviewSlot?: ReviewSlot;
 };
+
+/** The Fit button and F: the whole linkage, however small it gets. */
+const FIT_ALL = { padding: FIT.padding, maxZoom: FIT.maxZoom, minZoom: 0.05 } as const;
+
+export function pictureUrl(buildId: string, linkageId: string, revision: number) {
+  return `/api/builds/${encodeURIComponent(buildId)}/linkages/${encodeURIComponent(linkageId)}/revisions/${revision}/picture`;
+}
+
+type PicturePhase =
+  | { phase: "idle" }
+  | { phase: "saving" | "rendering" | "uploading"; revision?: number }
+  | { phase: "kept"; revision: number; url: string }
+  | { phase: "error"; message: string };
 
 const STATUS_TEXT: Record<SaveStatus, string> = {
   saved: "All changes saved",
@@ -84,6 +99,47 @@ function ToolButton(props: React.ButtonHTMLAttributes<HTMLButtonElement> & { kbd
   );
 }
 
+function PictureStatus({ state, onDismiss }: { state: PicturePhase; onDismiss: () => void }) {
+  if (state.phase === "idle") return null;
+  const busy = state.phase === "saving" || state.phase === "rendering" || state.phase === "uploading";
+  const text =
+    state.phase === "saving"
+      ? "Saving your changes first (the picture belongs to a saved revision)…"
+      : state.phase === "rendering"
+        ? `Drawing the picture of revision ${state.revision}…`
+        : state.phase === "uploading"
+          ? `Uploading the picture of revision ${state.revision}…`
+          : state.phase === "kept"
+            ? `Kept with revision ${state.revision} for the build log`
+            : state.phase === "error"
+              ? `Picture not kept: ${state.message}`
+              : "";
+  return (
+    <span
+      data-testid="picture-status"
+      data-phase={state.phase}
+      role={state.phase === "error" ? "alert" : "status"}
+      aria-live="polite"
+      className={`flex max-w-[26rem] items-center gap-1 truncate rounded-full px-2 py-0.5 text-[11px] font-medium ${
+        state.phase === "error" ? "bg-hazard/10 text-hazard" : state.phase === "kept" ? "bg-ok/10 text-ok" : "bg-advisory/10 text-advisory"
+      }`}
+      title={text}
+    >
+      <span className="truncate">{text}</span>
+      {state.phase === "kept" && (
+        <a href={state.url} target="_blank" rel="noreferrer" className="underline" data-testid="picture-view">
+          view
+        </a>
+      )}
+      {!busy && (
+        <button type="button" onClick={onDismiss} className="ml-0.5 leading-none" aria-label="Dismiss">
+          ×
+        </button>
+      )}
+    </span>
+  );
+}
+
 function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
   const { store, canEdit, buildName, linkageName, system } = props;
   const rf = useReactFlow();
@@ -92,6 +148,13 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
   const [sheet, setSheet] = useState(false);
   const [importErrors, setImportErrors] = useState<string[] | null>(null);
   const [exporting, setExporting] = useState(false);
+  const [picture, setPicture] = useState<PicturePhase>({ phase: "idle" });
+  // The deep link (?select= / ?focus=) is read once, when the editor opens.
+  const [deepLink] = useState(() => (typeof window === "undefined" ? null : readDeepLink(window.location.search, props.initial.graph)));
+  const opening = deepLink && "subject" in deepLink ? deepLink.subject : null;
+  useEffect(() => {
+    if (deepLink && "missing" in deepLink) store.getState().setNotice(`The link points at ${deepLink.missing}, which is not in revision ${props.initial.revision} of this linkage.`);
+  }, [deepLink, store, props.initial.revision]);
   const autosave = useAutosave({ store, buildId: props.buildId, linkageId: props.linkageId, enabled: canEdit });
   const { canUndo, canRedo, hasSel, notice, revision } = useStore(
     store,
@@ -130,16 +193,16 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
       setImportErrors(null);
       store.getState().replaceGraph(r.graph);
       store.getState().setNotice(`Imported ${r.graph.nodes.length} parts and ${r.graph.joints.length} joints from ${file.name} (undo to go back).`);
-      setTimeout(() => rf.fitView({ padding: 0.2, maxZoom: 1.2 }), 50);
+      setTimeout(() => rf.fitView(FIT_ALL), 50);
     },
     [store, rf],
   );
 
-  const exportPng = useCallback(async () => {
-    const el = rootRef.current?.querySelector<HTMLElement>(".react-flow__viewport");
-    if (!el) return;
-    setExporting(true);
-    try {
+  /** The picture of the whole linkage with its title block, as it is in the store now. */
+  const renderPng = useCallback(
+    async (o?: { date?: string }) => {
+      const el = rootRef.current?.querySelector<HTMLElement>(".react-flow__viewport");
+      if (!el) throw new Error("the canvas is not on the page");
       const s = store.getState();
       const lm = s.report?.summary.lowestMargin;
       const blob = await exportLinkagePng({
@@ -151,20 +214,55 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
           system,
           revision: s.revision,
           dirty: s.dirty,
-          date: fmtDate(autosave.lastSavedAt ?? props.initial.createdAt),
+          date: o?.date ?? fmtDate(autosave.lastSavedAt ?? props.initial.createdAt),
           summary: s.report?.summary ?? null,
           lowestMarginText: lm ? `${lm.value.toFixed(2)} (${lm.what}) at ${subjectName(s, lm.subject)}` : undefined,
           caution: CAUTION,
         },
         scene: { joints: s.joints, worstByNode: s.worstByNode, worstByJoint: s.worstByJoint, lines: (n) => nodeLines(n, props.unitSystem) },
       });
-      downloadBlob(blob, `${fileSafe(buildName)}-${fileSafe(linkageName)}-r${s.revision}.png`);
+      return { blob, revision: s.revision };
+    },
+    [store, rf, buildName, linkageName, system, autosave.lastSavedAt, props.initial.createdAt, props.unitSystem],
+  );
+
+  const exportPng = useCallback(async () => {
+    setExporting(true);
+    try {
+      const { blob, revision } = await renderPng();
+      downloadBlob(blob, `${fileSafe(buildName)}-${fileSafe(linkageName)}-r${revision}.png`);
     } catch (e) {
       store.getState().setNotice(`The picture could not be made: ${e instanceof Error ? e.message : String(e)}`);
     } finally {
       setExporting(false);
     }
-  }, [store, rf, buildName, linkageName, system, autosave.lastSavedAt, props.initial.createdAt, props.unitSystem]);
+  }, [store, renderPng, buildName, linkageName]);
+
+  /**
+   * Keeps the picture on the server as the revision's picture for the build log. A picture belongs to
+   * a saved revision, so unsaved changes are saved first (and nothing is uploaded if that fails).
+   */
+  const keepPicture = useCallback(async () => {
+    const before = store.getState();
+    let justSaved = false;
+    try {
+      if (before.dirty || autosave.status === "saving") {
+        setPicture({ phase: "saving" });
+        const rev = await autosave.saveAndWait();
+        justSaved = rev !== before.revision;
+      }
+      const revision = store.getState().revision;
+      setPicture({ phase: "rendering", revision });
+      const { blob } = await renderPng(justSaved ? { date: fmtDate(new Date().toISOString()) } : undefined);
+      if (store.getState().revision !== revision) throw new Error("the linkage was saved again while the picture was drawn; keep it again");
+      setPicture({ phase: "uploading", revision });
+      const url = pictureUrl(props.buildId, props.linkageId, revision);
+      await uploadFile(url, blob, `${fileSafe(buildName)}-${fileSafe(linkageName)}-r${revision}.png`);
+      setPicture({ phase: "kept", revision, url });
+    } catch (e) {
+      setPicture({ phase: "error", message: e instanceof Error ? e.message : String(e) });
+    }
+  }, [store, autosave, renderPng, props.buildId, props.linkageId, buildName, linkageName]);
 
   // Keyboard: editing keys only when not typing in a field; Ctrl/Cmd+S everywhere.
   useEffect(() => {
@@ -194,7 +292,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         return;
       }
       if (mod && k === "c") return s.copy();
-      if (!mod && k === "f") return void rf.fitView({ padding: 0.2, duration: 200, maxZoom: 1.2 });
+      if (!mod && k === "f") return void rf.fitView({ ...FIT_ALL, duration: 200 });
       if (e.key === "]" || e.key === "[") {
         e.preventDefault();
         if (s.nodes.length === 0) return;
@@ -244,7 +342,11 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
             {buildName} · revision <span data-testid="editor-revision">{revision}</span>
           </div>
         </div>
-        <span data-testid="save-status" data-status={autosave.status} className={`rounded-full px-2 py-0.5 text-[11px] font-medium ${STATUS_TONE[autosave.status]}`} aria-live="polite">
+        <span
+          data-testid="save-status"
+          data-status={autosave.status}
+          title={autosave.status === "readonly" ? "You can select and inspect this linkage and comment on it; editing is for the build's owner and builders." : undefined}
+          className={`rounded-full px-2 py-0.5 text-[11px] font-medium ${STATUS_TONE[autosave.status]}`} aria-live="polite">
           {STATUS_TEXT[autosave.status]}
         </span>
         {autosave.error && autosave.status === "error" && (
@@ -265,7 +367,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         <ToolButton onClick={() => s().deleteSelection()} disabled={!canEdit || !hasSel} title="Delete the selection" kbd="Del" data-testid="btn-delete">
           Delete
         </ToolButton>
-        <ToolButton onClick={() => rf.fitView({ padding: 0.2, duration: 200, maxZoom: 1.2 })} title="Fit the whole linkage in view" kbd="F">
+        <ToolButton onClick={() => rf.fitView({ ...FIT_ALL, duration: 200 })} title="Fit the whole linkage in view" kbd="F">
           Fit
         </ToolButton>
         <span className="mx-1 h-5 w-px bg-ink/10" aria-hidden="true" />
@@ -293,6 +395,17 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         <ToolButton onClick={() => void exportPng()} disabled={exporting} title="Download a picture of the whole linkage with its title block" data-testid="btn-export-png">
           {exporting ? "Drawing…" : "Picture (PNG)"}
         </ToolButton>
+        {canEdit && (
+          <ToolButton
+            onClick={() => void keepPicture()}
+            disabled={picture.phase === "saving" || picture.phase === "rendering" || picture.phase === "uploading"}
+            title="Keep the picture on the server as this revision's picture for the build log (unsaved changes are saved first)"
+            data-testid="btn-keep-picture"
+          >
+            Keep for the log
+          </ToolButton>
+        )}
+        <PictureStatus state={picture} onDismiss={() => setPicture({ phase: "idle" })} />
         <ToolButton onClick={() => setSheet(true)} className="ml-auto" title="Keyboard shortcuts" kbd="?" data-testid="btn-shortcuts">
           Keys ?
         </ToolButton>
@@ -314,9 +427,9 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         </div>
       )}
       <div className="flex min-h-0 flex-1">
-        <PartsTray />
+        {canEdit && <PartsTray />}
         <main className="relative min-w-0 flex-1" aria-label="Linkage canvas">
-          <Canvas />
+          <Canvas opening={opening} />
           {notice && (
             <div role="status" data-testid="notice" className="pointer-events-none absolute bottom-4 left-1/2 z-10 max-w-lg -translate-x-1/2 rounded bg-ink px-3 py-1.5 text-[12px] text-white shadow-lg">
               {notice.text}

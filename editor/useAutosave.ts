@@ -86,7 +86,7 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
   const mutation = useMutation({ mutationFn: (body: { baseRevision: number; graph: LinkageGraph }) => putGraph(url, body) });
   const mutate = mutation.mutateAsync;
 
-  const saveRef = useRef<() => Promise<void>>(async () => {});
+  const saveRef = useRef<() => Promise<string | null>>(async () => null);
   const schedule = useCallback((ms = AUTOSAVE_DELAY) => {
     if (timer.current) clearTimeout(timer.current);
     timer.current = setTimeout(() => {
@@ -95,10 +95,11 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
     }, ms);
   }, []);
 
-  const save = useCallback(async () => {
-    if (!enabled || busy.current || conflictRef.current) return;
+  /** One save attempt; resolves with why it did not save (null when it did, or there was nothing to do). */
+  const save = useCallback(async (): Promise<string | null> => {
+    if (!enabled || busy.current || conflictRef.current) return conflictRef.current ? "Someone else saved a newer revision." : null;
     const s = store.getState();
-    if (!s.dirty) return;
+    if (!s.dirty) return null;
     const snapshot: Snapshot = { nodes: s.nodes, joints: s.joints };
     busy.current = true;
     setInFlight(true);
@@ -109,27 +110,37 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
       setError(null);
       setLastSavedAt(res.createdAt ?? new Date().toISOString());
       if (store.getState().dirty) schedule();
+      return null;
     } catch (e) {
       if (e instanceof SaveError) {
         setOffline(false);
         if (e.status === 409 && e.code === "stale_revision") {
           const cur = (e.body as { error?: { current?: RemoteRevision } })?.error?.current;
-          if (cur) setConflict(cur);
-          else setError({ message: e.message });
+          if (cur) {
+            conflictRef.current = cur;
+            setConflict(cur);
+            return "Someone else saved a newer revision; settle the difference first.";
+          }
+          setError({ message: e.message });
+          return e.message;
         } else if (e.status === 403) {
-          setError({ message: "You no longer have permission to edit this linkage; your changes are not saved." });
+          const message = "You no longer have permission to edit this linkage; your changes are not saved.";
+          setError({ message });
+          return message;
         } else if (e.status === 400) {
           const fields = (e.body as { error?: { fields?: unknown } })?.error?.fields;
-          setError({ message: `The server refused the linkage: ${e.message}`, fields });
-        } else {
-          setError({ message: e.message });
-          schedule(10_000);
+          const message = `The server refused the linkage: ${e.message}`;
+          setError({ message, fields });
+          return message;
         }
-      } else {
-        // fetch itself failed: no connection. Try again when the browser says it is back, and every 10 s.
-        setOffline(true);
+        setError({ message: e.message });
         schedule(10_000);
+        return e.message;
       }
+      // fetch itself failed: no connection. Try again when the browser says it is back, and every 10 s.
+      setOffline(true);
+      schedule(10_000);
+      return "Offline: the changes could not be saved.";
     } finally {
       busy.current = false;
       setInFlight(false);
@@ -172,6 +183,30 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
   }, [store]);
 
   useEffect(() => () => void (timer.current && clearTimeout(timer.current)), []);
+
+  /**
+   * Saves now and resolves once the linkage is clean on the server (with the revision it is at), or
+   * rejects with the reason it is not (conflict, refused, offline, read-only, timeout).
+   */
+  const saveAndWait = useCallback(
+    async (timeoutMs = 20_000): Promise<number> => {
+      if (!enabled) throw new Error("This linkage is read-only for you.");
+      if (timer.current) clearTimeout(timer.current);
+      timer.current = null;
+      const until = Date.now() + timeoutMs;
+      for (;;) {
+        if (conflictRef.current) throw new Error("Someone else saved a newer revision; settle the difference first.");
+        const s = store.getState();
+        if (!s.dirty && !busy.current) return s.revision;
+        if (!busy.current) {
+          const reason = await save();
+          if (reason) throw new Error(reason);
+        } else await new Promise((r) => setTimeout(r, 100));
+        if (Date.now() > until) throw new Error("Saving took too long; try again.");
+      }
+    },
+    [enabled, store, save],
+  );
 
   const saveNow = useCallback(() => {
     if (timer.current) clearTimeout(timer.current);
@@ -218,5 +253,5 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
               ? "unsaved"
               : "saved";
 
-  return { status, error, conflict, difference, lastSavedAt, saveNow, loadTheirs, keepMine };
+  return { status, error, conflict, difference, lastSavedAt, saveNow, saveAndWait, loadTheirs, keepMine };
 }
