@@ -129,8 +129,8 @@ describe("linkage editor in a real browser", () => {
   it("reloads and finds everything saved", async () => {
     await page.reload();
     await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
-    expect(await page.locator(".react-flow__node").count()).toBe(5);
-    expect(await page.locator(".react-flow__edge").count()).toBe(4);
+    await expect.poll(() => page.locator(".react-flow__node").count()).toBe(5);
+    await expect.poll(() => page.locator(".react-flow__edge").count()).toBe(4); // edges draw once the nodes are measured
     await page.getByTestId(`joint-${jointId}`).click();
     const card = page.getByTestId("joint-card");
     await expect(card.getByTestId("joint-form-jamNut__tightened").isChecked()).resolves.toBe(true);
