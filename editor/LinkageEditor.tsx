@@ -438,7 +438,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         </main>
         <aside className="flex w-[360px] shrink-0 flex-col border-l border-ink/10 bg-paper" aria-label="Inspector and findings">
           <div className="min-h-0 flex-[3] overflow-y-auto">
-            <Inspector linkageId={props.linkageId} linkageName={linkageName} reviewSlot={props.reviewSlot} />
+            <Inspector buildId={props.buildId} linkageId={props.linkageId} linkageName={linkageName} reviewSlot={props.reviewSlot} />
           </div>
           <div className="flex min-h-0 flex-[2] flex-col border-t border-ink/10 bg-white">
             <FindingsList />

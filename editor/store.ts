@@ -115,7 +115,8 @@ export type EditorState = {
   beginGesture: () => void;
   endGesture: () => void;
   updateNode: (id: string, patch: { label?: string; props?: unknown }, opts?: { coalesce?: string }) => Result;
-  updateJointHardware: (id: string, hardware: unknown, opts?: { coalesce?: string }) => Result;
+  /** `external`: the change comes from outside the joint card (e.g. a suggested part), so the card resets. */
+  updateJointHardware: (id: string, hardware: unknown, opts?: { coalesce?: string; external?: boolean }) => Result;
   canConnect: (from: Endpoint, to: Endpoint) => Result;
   connect: (from: Endpoint, to: Endpoint) => Result<string>;
   deleteSelection: () => void;
@@ -331,7 +332,7 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
         const parsed = hardwareSchema.safeParse(hardware);
         if (!parsed.success) return { ok: false, reason: issuesText(parsed.error) };
         if (JSON.stringify(parsed.data) === JSON.stringify(cur.hardware)) return { ok: true, value: undefined };
-        commit({ joints: s.joints.map((j) => (j.id === id ? { ...j, hardware: parsed.data as JointHardware } : j)) }, { coalesce: o?.coalesce });
+        commit({ joints: s.joints.map((j) => (j.id === id ? { ...j, hardware: parsed.data as JointHardware } : j)) }, { coalesce: o?.coalesce, external: o?.external });
         return { ok: true, value: undefined };
       },
 

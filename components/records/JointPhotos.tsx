@@ -8,7 +8,7 @@ import { useRef, useState } from "react";
 import { api } from "@/components/api-client";
 import { ACCEPT_PHOTOS, uploadFile, type StoredFile } from "./upload-client";
 
-export function JointPhotos({ buildId, linkageId, jointId, canEdit }: { buildId: string; linkageId: string; jointId: string; canEdit: boolean }) {
+export function JointPhotos({ buildId, linkageId, jointId, canEdit, canRemove = false }: { buildId: string; linkageId: string; jointId: string; canEdit: boolean; canRemove?: boolean }) {
   const url = `/api/builds/${buildId}/linkages/${linkageId}/joints/${encodeURIComponent(jointId)}/photos`;
   const key = ["joint-photos", linkageId, jointId];
   const qc = useQueryClient();
@@ -20,14 +20,26 @@ export function JointPhotos({ buildId, linkageId, jointId, canEdit }: { buildId:
     onSuccess: () => { setError(null); qc.invalidateQueries({ queryKey: key }); },
     onError: (e) => { setError(e instanceof Error ? e.message : String(e)); qc.invalidateQueries({ queryKey: key }); },
   });
+  // Detach only (the upload stays in the build's files); offered where the host asks for it (the editor's joint card).
+  const remove = useMutation({
+    mutationFn: (fileId: string) => api(`${url}/${fileId}`, { method: "DELETE" }),
+    onSuccess: () => { setError(null); qc.invalidateQueries({ queryKey: key }); },
+    onError: (e) => setError(e instanceof Error ? e.message : String(e)),
+  });
   const list = photos.data ?? [];
   return (
     <div className="flex flex-wrap items-center gap-2" data-testid={`joint-photos-${jointId}`}>
       {list.map((p) => (
-        <a key={p.id} href={p.url} target="_blank" rel="noreferrer" title={`${p.name}${p.uploadedBy ? ` — ${p.uploadedBy}` : ""}`} className="block rounded border border-ink/15 hover:border-advisory focus:outline-2 focus:outline-advisory">
-          {/* eslint-disable-next-line @next/next/no-img-element */}
-          <img src={p.thumbUrl ?? p.url} alt={`Photo of joint ${jointId}: ${p.name}`} className="h-14 w-auto rounded" loading="lazy" data-testid="joint-photo-thumb" />
-        </a>
+        <span key={p.id} className="relative">
+          <a href={p.url} target="_blank" rel="noreferrer" title={`${p.name}${p.uploadedBy ? ` — ${p.uploadedBy}` : ""}`} className="block rounded border border-ink/15 hover:border-advisory focus:outline-2 focus:outline-advisory">
+            {/* eslint-disable-next-line @next/next/no-img-element */}
+            <img src={p.thumbUrl ?? p.url} alt={`Photo of joint ${jointId}: ${p.name}`} className="h-14 w-auto rounded" loading="lazy" data-testid="joint-photo-thumb" />
+          </a>
+          {canEdit && canRemove ? (
+            <button type="button" onClick={() => remove.mutate(p.id)} disabled={remove.isPending} aria-label={`Remove ${p.name} from joint ${jointId}`} title="Remove from this joint (the file stays in the build's uploads)"
+              className="absolute -right-1.5 -top-1.5 flex h-4 w-4 items-center justify-center rounded-full bg-ink text-[10px] leading-none text-white hover:bg-hazard" data-testid="joint-photo-remove">×</button>
+          ) : null}
+        </span>
       ))}
       {list.length === 0 && !photos.isLoading ? <span className="text-xs text-ink-soft">No photo yet — a close-up of the witness hole, jam nut and washer is the evidence an inspector asks for.</span> : null}
       {canEdit ? (

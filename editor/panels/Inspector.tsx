@@ -11,6 +11,7 @@ import { KindGlyph } from "../nodes/glyphs";
 import { SchemaForm } from "./SchemaForm";
 import { HARDWARE_SECTIONS, nodeSections } from "./specs";
 import { FindingItem, LinkageFindings } from "./Findings";
+import { JointEvidence, SuggestPart, type RecordsTarget } from "./JointExtras";
 
 export type ReviewSlot = (sel: { type: "node" | "joint" | "linkage"; id: string }) => React.ReactNode;
 
@@ -82,7 +83,7 @@ function NodeInspector({ id }: { id: string }) {
   );
 }
 
-function JointInspector({ id }: { id: string }) {
+function JointInspector({ id, records }: { id: string; records?: RecordsTarget }) {
   const api = useEditorStoreApi();
   const { unitSystem, readOnly } = useEditorConfig();
   const joint = useEditorStore((s) => s.joints.find((j) => j.id === id));
@@ -111,6 +112,7 @@ function JointInspector({ id }: { id: string }) {
         <span className="block text-[11px] font-normal text-ink-soft">{name}</span>
       </h3>
       <SubjectFindings subjectKey={`joint:${id}`} />
+      {records && joint.hardware.rodEnd && <SuggestPart target={records} joint={joint} />}
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}
         testId="joint-form"
@@ -122,9 +124,13 @@ function JointInspector({ id }: { id: string }) {
         onValid={onValid}
         onFieldChange={onFieldChange}
       />
-      <p className="text-[10px] text-ink-soft">
-        Photos: {joint.hardware.photos.length === 0 ? "none attached" : `${joint.hardware.photos.length} attached`}
-      </p>
+      {records ? (
+        <JointEvidence target={records} jointId={id} />
+      ) : (
+        <p className="text-[10px] text-ink-soft">
+          Photos: {joint.hardware.photos.length === 0 ? "none attached" : `${joint.hardware.photos.length} attached`}
+        </p>
+      )}
     </div>
   );
 }
@@ -144,7 +150,18 @@ function LinkageOverview({ linkageName }: { linkageName: string }) {
   );
 }
 
-export default function Inspector({ linkageId, linkageName, reviewSlot }: { linkageId: string; linkageName: string; reviewSlot?: ReviewSlot }) {
+export default function Inspector({
+  buildId,
+  linkageId,
+  linkageName,
+  reviewSlot,
+}: {
+  /** With a build id, the joint card shows the records of the joint (photos, suggested parts). */
+  buildId?: string;
+  linkageId: string;
+  linkageName: string;
+  reviewSlot?: ReviewSlot;
+}) {
   const sel = useEditorStore((s) => s.selection);
   const single =
     sel.nodes.length + sel.joints.length === 1
@@ -156,7 +173,7 @@ export default function Inspector({ linkageId, linkageName, reviewSlot }: { link
   return (
     <div className="space-y-3 p-3" data-testid="inspector">
       {single?.type === "node" && <NodeInspector id={single.id} />}
-      {single?.type === "joint" && <JointInspector id={single.id} />}
+      {single?.type === "joint" && <JointInspector id={single.id} records={buildId ? { buildId, linkageId } : undefined} />}
       {!single && <LinkageOverview linkageName={linkageName} />}
       {reviewSlot && (
         <div data-testid="review-slot" className="border-t border-ink/10 pt-2">
