@@ -8,6 +8,7 @@ export const BUILD_SECTIONS: { href: string; label: string }[] = [
   { href: "/parts", label: "Parts library" },
   { href: "/checklist", label: "Checklist" },
   { href: "/members", label: "Members" },
+  { href: "/settings", label: "Settings" },
 ];
 
 export function BuildNav({ buildId, buildName, current, extra }: { buildId: string; buildName: string; current: string; extra?: React.ReactNode }) {

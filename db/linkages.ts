@@ -147,3 +147,20 @@ export async function countRevisions(linkageId: string) {
   const [{ count }] = await db("linkage_revisions").where({ linkage_id: linkageId }).count<{ count: string }[]>("* as count");
   return Number(count);
 }
+
+/**
+ * After the build's design settings change, the stored analysis of each linkage's current revision
+ * is computed again with the new settings (older revisions keep the analysis they were saved with).
+ */
+export async function refreshCurrentAnalyses(buildId: string, run: (graph: LinkageGraph) => Report) {
+  const rows = await db("linkages as l")
+    .join("linkage_revisions as r", function () {
+      this.on("r.linkage_id", "l.id").andOn("r.revision", "l.current_revision");
+    })
+    .where("l.build_id", buildId)
+    .select("r.id", "r.graph");
+  for (const r of rows as { id: string; graph: LinkageGraph }[]) {
+    await db("linkage_revisions").where({ id: r.id }).update({ analysis: JSON.stringify(run(r.graph)) });
+  }
+  return rows.length;
+}

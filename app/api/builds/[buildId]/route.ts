@@ -1,13 +1,18 @@
 import { withBuild, parseBody, json } from "@/lib/http";
 import { buildPatch } from "@/shared/api";
 import { deleteBuild, updateBuild } from "@/db/builds";
+import { refreshCurrentAnalyses } from "@/db/linkages";
+import { analyze, settingsSchema } from "@/shared/analysis";
 
 export const GET = withBuild("read", async ({ build, role }) => json({ build, role }));
 
 export const PATCH = withBuild("manage", async ({ req, user, build }) => {
   const body = await parseBody(req, buildPatch);
-  const analysisSettings = body.analysisSettings ? { ...build.analysisSettings, ...body.analysisSettings } : undefined;
-  return json({ build: await updateBuild(build.id, user.id, { ...body, analysisSettings }) });
+  const analysisSettings = body.analysisSettings ? settingsSchema.parse({ ...build.analysisSettings, ...body.analysisSettings }) : undefined;
+  const updated = await updateBuild(build.id, user.id, { ...body, analysisSettings });
+  // New factors or forces change every number: the current revisions are checked again with them.
+  if (analysisSettings) await refreshCurrentAnalyses(build.id, (graph) => analyze(graph, analysisSettings));
+  return json({ build: updated });
 });
 
 export const DELETE = withBuild("manage", async ({ build }) => {
