@@ -4,6 +4,8 @@ import { makeBuild, makeUser, snapshot, testDb } from "../support/db";
 import { signIn, type Client } from "../support/http";
 import { demoPitchLinkage } from "@/shared/demo";
 import { analyze } from "@/shared/analysis";
+import { parseLinkageFile } from "@/shared/linkage/io";
+import { APP_URL } from "../support/env";
 
 let owner: Client;
 let ids: { buildId: string; linkageId: string };
@@ -59,5 +61,25 @@ describe("analysis over the API", () => {
     expect(res.body.analysis.settings.ultimateFactor).toBe(3);
     const p0 = res.body.analysis.pushrods[0];
     expect(p0.ultimateAxial).toBeCloseTo(p0.limitAxial * 3, 6); // ultimate = limit × the build's factor (14 CFR 23.303 default 1.5)
+  });
+});
+
+describe("linkage files", () => {
+  it("a linkage exported as a file imports as a new linkage with the same parts, joints and findings", async () => {
+    const url = `/api/builds/${ids.buildId}/linkages/${ids.linkageId}`;
+    const res = await fetch(`${APP_URL}${url}/file`, { headers: { cookie: owner.cookie } });
+    expect(res.status).toBe(200);
+    expect(res.headers.get("content-disposition")).toMatch(/attachment; filename="pitch-run-rev\d+\.linkage\.json"/);
+    const text = await res.text();
+    const parsed = parseLinkageFile(text);
+    expect(parsed.ok).toBe(true);
+    if (!parsed.ok) return;
+    const created = await owner.request("POST", `/api/builds/${ids.buildId}/linkages`, { name: "Imported copy", system: "pitch", graph: parsed.graph });
+    expect(created.status).toBe(201);
+    const copy = (await owner.request("GET", `/api/builds/${ids.buildId}/linkages/${created.body.linkage.id}/graph`)).body;
+    const original = (await owner.request("GET", `${url}/graph`)).body;
+    expect(copy.graph.nodes).toEqual(original.graph.nodes);
+    expect(copy.graph.joints).toEqual(original.graph.joints);
+    expect(codes(copy.analysis)).toEqual(codes(original.analysis));
   });
 });

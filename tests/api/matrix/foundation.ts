@@ -37,6 +37,7 @@ export const rows: Record<string, Row> = {
   "GET /api/builds/[buildId]/linkages/[linkageId]":     { expect: read, path: L },
   "PATCH /api/builds/[buildId]/linkages/[linkageId]":   { expect: edit(200), path: L, body: () => ({ name: "Pitch run, renamed" }) },
   "DELETE /api/builds/[buildId]/linkages/[linkageId]":  { expect: edit(200), path: L },
+  "GET /api/builds/[buildId]/linkages/[linkageId]/file": { expect: read, path: (c) => `${L(c)}/file` },
   "GET /api/builds/[buildId]/linkages/[linkageId]/graph": { expect: read, path: (c) => `${L(c)}/graph` },
   "PUT /api/builds/[buildId]/linkages/[linkageId]/graph": { expect: edit(200), path: (c) => `${L(c)}/graph`, body: () => ({ baseRevision: 1, graph: emptyGraph("Pitch run", "pitch") }) },
 };

@@ -4,7 +4,8 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useState } from "react";
 import { api, ApiFailure } from "@/components/api-client";
 import { Badge, Button, Card, EmptyState, Input, Select } from "@/components/ui";
-import { SYSTEMS, type ControlSystem } from "@/shared/linkage/schema";
+import { SYSTEMS, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
+import { parseLinkageFile } from "@/shared/linkage/io";
 
 type Linkage = {
   id: string;
@@ -28,8 +29,20 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
   const invalidate = () => qc.invalidateQueries({ queryKey: key });
   const onError = (e: unknown) => setError(e instanceof ApiFailure ? Object.values(e.fields ?? {})[0] ?? e.message : String(e));
 
+  const [importErrors, setImportErrors] = useState<{ file: string; errors: { path: string; message: string }[] } | null>(null);
+  async function importFile(file: File) {
+    setImportErrors(null);
+    const parsed = parseLinkageFile(await file.text());
+    if (!parsed.ok) {
+      setImportErrors({ file: file.name, errors: parsed.errors });
+      return;
+    }
+    const name = parsed.graph.name.trim() || file.name.replace(/(\.linkage)?\.json$/i, "");
+    create.mutate({ name: name.slice(0, 120), system: parsed.graph.system, graph: parsed.graph });
+  }
+
   const create = useMutation({
-    mutationFn: (v: { name: string; system: ControlSystem }) => api<{ linkage: Linkage }>(`/api/builds/${buildId}/linkages`, { body: v }),
+    mutationFn: (v: { name: string; system: ControlSystem; graph?: LinkageGraph }) => api<{ linkage: Linkage }>(`/api/builds/${buildId}/linkages`, { body: v }),
     onSuccess: () => { setAdding(false); setError(null); invalidate(); },
     onError,
   });
@@ -45,7 +58,28 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
   });
 
   return (
-    <Card title="Linkages" actions={canEdit && !adding ? <Button size="sm" onClick={() => setAdding(true)} data-testid="new-linkage">New linkage</Button> : null}>
+    <Card
+      title="Linkages"
+      actions={canEdit && !adding ? (
+        <>
+          <label className="inline-flex cursor-pointer items-center rounded border border-ink/20 bg-white px-2 py-1 text-xs font-medium hover:bg-ink/5 focus-within:outline focus-within:outline-2 focus-within:outline-advisory">
+            Import a file
+            <input type="file" accept=".json,application/json" className="sr-only" data-testid="import-linkage"
+              onChange={(e) => { const f = e.target.files?.[0]; e.target.value = ""; if (f) void importFile(f); }} />
+          </label>
+          <Button size="sm" onClick={() => setAdding(true)} data-testid="new-linkage">New linkage</Button>
+        </>
+      ) : null}
+    >
+      {importErrors ? (
+        <div role="alert" className="mb-3 rounded border border-hazard/30 bg-hazard/5 p-2 text-xs" data-testid="import-errors">
+          <p className="font-semibold text-hazard">{importErrors.file} is not a linkage file Linkwright can read. Nothing was imported.</p>
+          <ul className="mt-1 list-disc pl-5">
+            {importErrors.errors.slice(0, 12).map((e, i) => <li key={i}><code>{e.path || "(file)"}</code>: {e.message}</li>)}
+          </ul>
+          {importErrors.errors.length > 12 ? <p>…and {importErrors.errors.length - 12} more.</p> : null}
+        </div>
+      ) : null}
       {adding ? (
         <form
           className="mb-4 flex flex-wrap items-end gap-2"

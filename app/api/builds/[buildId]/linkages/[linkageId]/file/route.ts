@@ -1,0 +1,27 @@
+import { z } from "zod";
+import { withBuild, parseParams } from "@/lib/http";
+import { notFound } from "@/lib/errors";
+import { uuidParam } from "@/shared/api";
+import { getLinkage, getRevision } from "@/db/linkages";
+import { serializeLinkage } from "@/shared/linkage/io";
+
+type P = { buildId: string; linkageId: string };
+const revisionQuery = z.coerce.number().int().min(1);
+
+/** The linkage as a file in the linkage format (`?revision=N` for an older one), to keep outside Linkwright. */
+export const GET = withBuild<P>("read", async ({ req, build, params }) => {
+  const id = parseParams(params.linkageId, uuidParam);
+  const linkage = await getLinkage(build.id, id);
+  if (!linkage) throw notFound("linkage");
+  const q = req.nextUrl.searchParams.get("revision");
+  const rev = await getRevision(id, q === null ? undefined : parseParams(q, revisionQuery));
+  if (!rev) throw notFound("revision");
+  const base = (linkage.name || "linkage").toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60) || "linkage";
+  return new Response(serializeLinkage({ ...rev.graph, name: linkage.name, system: linkage.system }), {
+    headers: {
+      "content-type": "application/json; charset=utf-8",
+      "content-disposition": `attachment; filename="${base}-rev${rev.revision}.linkage.json"`,
+      "x-content-type-options": "nosniff",
+    },
+  });
+});
