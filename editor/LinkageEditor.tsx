@@ -39,6 +39,8 @@ export type LinkageEditorProps = {
   settings: AnalysisSettings;
   /** Rendered under the joint card: the review thread of the selection. */
   reviewSlot?: ReviewSlot;
+  /** Fill the parent's height (the page puts a review strip above the editor) instead of the screen under the header. */
+  fill?: boolean;
 };
 
 /** The Fit button and F: the whole linkage, however small it gets. */
@@ -332,7 +334,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
 
   const s = store.getState;
   return (
-    <div ref={rootRef} className="flex h-[calc(100vh-3.5rem)] min-h-0 flex-col overflow-hidden bg-paper text-ink" data-testid="linkage-editor">
+    <div ref={rootRef} className={`flex ${props.fill ? "h-full" : "h-[calc(100vh-3.5rem)]"} min-h-0 flex-col overflow-hidden bg-paper text-ink`} data-testid="linkage-editor">
       <div className="flex flex-wrap items-center gap-1 border-b border-ink/10 bg-white px-2 py-1" role="toolbar" aria-label="Linkage tools">
         <div className="mr-2 min-w-0">
           <div className="truncate text-[13px] font-semibold leading-4" data-testid="editor-title">

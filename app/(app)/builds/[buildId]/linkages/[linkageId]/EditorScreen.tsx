@@ -21,7 +21,7 @@ export function EditorScreen({ review, ...props }: Props) {
     <div className="flex h-[calc(100vh-3.5rem)] flex-col">
       <EditorReviewBar buildId={props.buildId} linkageId={props.linkageId} />
       <div className="relative min-h-0 flex-1">
-        <LinkageEditor {...props} reviewSlot={(subject) => <ReviewThread key={`${subject.type}:${subject.id}`} buildId={props.buildId} linkageId={props.linkageId} subject={subject} me={me} />} />
+        <LinkageEditor {...props} fill reviewSlot={(subject) => <ReviewThread key={`${subject.type}:${subject.id}`} buildId={props.buildId} linkageId={props.linkageId} subject={subject} me={me} />} />
         <ReviewMarkers buildId={props.buildId} linkageId={props.linkageId} />
       </div>
     </div>
