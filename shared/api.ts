@@ -23,7 +23,23 @@ export const buildInput = z.object({
     .optional()
     .nullable(),
 });
-export const buildPatch = buildInput.partial().extend({ analysisSettings: settingsSchema.partial().optional() }).refine(
+/**
+ * A patch of a schema: every field optional and no defaults filled in, nested objects too, so that
+ * a patch naming one factor leaves the stored others alone (zod's `.partial()` would fill defaults).
+ */
+function patchOf(schema: z.ZodObject): z.ZodObject {
+  const shape: Record<string, z.ZodType> = {};
+  for (const [key, field] of Object.entries(schema.shape)) {
+    let inner: z.ZodType = field instanceof z.ZodDefault ? (field.unwrap() as z.ZodType) : (field as z.ZodType);
+    if (inner instanceof z.ZodObject) inner = patchOf(inner);
+    shape[key] = inner.optional();
+  }
+  return z.object(shape);
+}
+type DeepPartial<T> = { [K in keyof T]?: T[K] extends object ? DeepPartial<T[K]> : T[K] };
+export const settingsPatch = patchOf(settingsSchema) as unknown as z.ZodType<DeepPartial<z.infer<typeof settingsSchema>>>;
+
+export const buildPatch = buildInput.partial().extend({ analysisSettings: settingsPatch.optional() }).refine(
   (v) => Object.keys(v).length > 0,
   "Nothing to change",
 );

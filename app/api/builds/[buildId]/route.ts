@@ -8,7 +8,9 @@ export const GET = withBuild("read", async ({ build, role }) => json({ build, ro
 
 export const PATCH = withBuild("manage", async ({ req, user, build }) => {
   const body = await parseBody(req, buildPatch);
-  const analysisSettings = body.analysisSettings ? settingsSchema.parse({ ...build.analysisSettings, ...body.analysisSettings }) : undefined;
+  const stored = settingsSchema.parse(build.analysisSettings ?? {});
+  const patch = body.analysisSettings;
+  const analysisSettings = patch ? settingsSchema.parse({ ...stored, ...patch, pilotForce: { ...stored.pilotForce, ...patch.pilotForce } }) : undefined;
   const updated = await updateBuild(build.id, user.id, { ...body, analysisSettings });
   // New factors or forces change every number: the current revisions are checked again with them.
   if (analysisSettings) await refreshCurrentAnalyses(build.id, (graph) => analyze(graph, analysisSettings));
