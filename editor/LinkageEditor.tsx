@@ -218,7 +218,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
           dirty: s.dirty,
           date: o?.date ?? fmtDate(autosave.lastSavedAt ?? props.initial.createdAt),
           summary: s.report?.summary ?? null,
-          lowestMarginText: lm ? `${lm.value.toFixed(2)} (${lm.what}) at ${subjectName(s, lm.subject)}` : undefined,
+          lowestMarginText: lm ? `${lm.value.toFixed(2)} at ${subjectName(s, lm.subject)} (${lm.what})` : undefined,
           caution: CAUTION,
         },
         scene: { joints: s.joints, worstByNode: s.worstByNode, worstByJoint: s.worstByJoint, lines: (n) => nodeLines(n, props.unitSystem) },

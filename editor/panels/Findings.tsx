@@ -144,7 +144,7 @@ export function SummaryStrip({ system, settings }: { system: ControlSystem; sett
         Lowest margin:{" "}
         {lm ? (
           <button type="button" className={`font-semibold underline-offset-2 hover:underline ${lm.value < 0 ? "text-hazard" : "text-ink"}`} onClick={() => focus(lm.subject)}>
-            {lm.value >= 10 ? lm.value.toFixed(0) : lm.value.toFixed(2)} ({lm.what}) at {where}
+            {lm.value >= 10 ? lm.value.toFixed(0) : lm.value.toFixed(2)} at {where} ({lm.what})
           </button>
         ) : (
           <span className="text-ink">—</span>

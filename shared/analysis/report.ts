@@ -14,13 +14,13 @@ export function summarize(findings: Finding[], pushrods: PushrodResult[], joints
   };
   for (const p of pushrods) {
     if (p.limitAxial <= 0) continue;
-    consider(p.marginCompression, "node", p.nodeId, `pushrod ${p.nodeId} in compression (${p.columnMode === "euler" ? "Euler" : "Johnson"} column)`);
-    consider(p.marginTension, "node", p.nodeId, `pushrod ${p.nodeId} in tension`);
+    consider(p.marginCompression, "node", p.nodeId, `compression, ${p.columnMode === "euler" ? "Euler" : "Johnson"} column`);
+    consider(p.marginTension, "node", p.nodeId, "tension");
   }
   for (const j of joints) {
     if (j.radialLimit <= 0) continue;
-    consider(j.rodEndMargin, "joint", j.jointId, `rod end at joint ${j.jointId}`);
-    consider(j.boltMargin, "joint", j.jointId, `bolt shear at joint ${j.jointId}`);
+    consider(j.rodEndMargin, "joint", j.jointId, "rod-end rating");
+    consider(j.boltMargin, "joint", j.jointId, "bolt shear");
   }
   s.lowestMargin = best;
   return s;
