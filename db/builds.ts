@@ -77,7 +77,14 @@ export async function updateBuild(buildId: string, userId: string, patch: Partia
   return toBuild(row);
 }
 
-export const deleteBuild = (buildId: string) => db("builds").where({ id: buildId }).del();
+/** Deletes the build and everything in it; returns the storage keys of its files, for the caller to remove. */
+export async function deleteBuild(buildId: string): Promise<string[]> {
+  return db.transaction(async (trx) => {
+    const files = await trx("files").where({ build_id: buildId }).select("key", "thumb_key");
+    await trx("builds").where({ id: buildId }).del();
+    return files.flatMap((f: { key: string; thumb_key: string | null }) => (f.thumb_key ? [f.key, f.thumb_key] : [f.key]));
+  });
+}
 
 export async function listMembers(buildId: string) {
   const rows = await db("memberships as m")

@@ -3,6 +3,7 @@ import { buildPatch } from "@/shared/api";
 import { deleteBuild, updateBuild } from "@/db/builds";
 import { refreshCurrentAnalyses } from "@/db/linkages";
 import { analyze, settingsSchema } from "@/shared/analysis";
+import { deleteObject } from "@/lib/storage";
 
 export const GET = withBuild("read", async ({ build, role }) => json({ build, role }));
 
@@ -18,6 +19,8 @@ export const PATCH = withBuild("manage", async ({ req, user, build }) => {
 });
 
 export const DELETE = withBuild("manage", async ({ build }) => {
-  await deleteBuild(build.id);
-  return json({ deleted: true });
+  const keys = await deleteBuild(build.id);
+  // The rows are gone; the stored objects follow (a failure here leaves orphans, never dangling rows).
+  await Promise.allSettled(keys.map((k) => deleteObject(k)));
+  return json({ deleted: true, filesRemoved: keys.length });
 });
