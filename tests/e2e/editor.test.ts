@@ -68,7 +68,7 @@ describe("linkage editor in a real browser", () => {
   it("the demo builder creates a linkage and opens the editor", async () => {
     const dana = DEMO_USERS[0];
     await signInPage(page, dana.email, dana.password);
-    await page.getByTestId("build-card").filter({ hasText: DEMO_BUILD.name }).click();
+    await page.getByTestId("build-card").filter({ has: page.getByTestId("build-name").getByText(DEMO_BUILD.name, { exact: true }) }).click();
     await page.waitForURL(/\/builds\/[0-9a-f-]{36}$/);
     await page.getByTestId("new-linkage").click();
     await page.getByTestId("linkage-name").fill(name);
