@@ -44,7 +44,7 @@ describe("build overview", () => {
   it("the owner changes the design pitch force on the settings page and the check runs again", async () => {
     await page.goto(`${APP_URL}/builds/${buildId}/settings`);
     const field = page.getByLabel("Stick, pitch (lbf)");
-    expect(await field.inputValue()).toBe("167"); // 14 CFR 23.397(b) default
+    await expect.poll(() => field.inputValue()).toBe("167"); // 14 CFR 23.397(b) default (the form fills in once it hydrates)
     await field.fill("0");
     await page.getByTestId("save-design-settings").click();
     await expect.poll(() => page.getByText("Must be above 0").count()).toBe(1);
