@@ -44,8 +44,13 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
       {parts.data && parts.data.length === 0 ? (
         <EmptyState title="No parts in this library yet">
           Record the rod ends, bolts, nuts, washers, tubes and bushings you buy, with the maker&apos;s ratings. &ldquo;Suggest a part&rdquo; on a joint then
-          picks the ones that fit (thread, hand, bore) and carry the load, best margin first. Add them one by one above, or import a CSV with a header row such as
-          <code className="mx-1 rounded bg-ink/5 px-1">kind,partNumber,thread,hand,ballBore,ratedUltimate</code>.
+          picks the ones that fit (thread, hand, bore) and carry the load, best margin first.{" "}
+          {canEdit ? (
+            <>Add them one by one above, or import a CSV with a header row such as
+              <code className="mx-1 rounded bg-ink/5 px-1">kind,partNumber,thread,hand,ballBore,ratedUltimate</code>.</>
+          ) : (
+            <>The build&apos;s owner and builders fill this library.</>
+          )}
         </EmptyState>
       ) : (
         <Card title={`${table.getFilteredRowModel().rows.length} part${table.getFilteredRowModel().rows.length === 1 ? "" : "s"}`} actions={<Input aria-label="Filter parts" placeholder="Filter…" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-48" />}>
