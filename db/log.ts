@@ -8,6 +8,7 @@ type EntryRow = {
   id: string; build_id: string; date: string | Date; hours: string; title: string; text: string; systems: ControlSystem[];
   linkage_id: string | null; revision: number | null; author_id: string | null; created_at: Date; updated_at: Date;
   author_name?: string | null; linkage_name?: string | null;
+  revision_summary?: { hazard: number; caution: number; advisory: number } | null;
 };
 
 const isoDay = (d: string | Date) => (typeof d === "string" ? d.slice(0, 10) : `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`);
@@ -22,6 +23,8 @@ const toEntry = (r: EntryRow, files: StoredFile[] = []) => ({
   linkageId: r.linkage_id,
   linkageName: r.linkage_name ?? null,
   revision: r.revision,
+  /** Findings counts of the tied revision, as stored with it. */
+  revisionSummary: r.revision_summary ? { hazard: r.revision_summary.hazard, caution: r.revision_summary.caution, advisory: r.revision_summary.advisory } : null,
   author: r.author_name ?? null,
   createdAt: r.created_at.toISOString(),
   updatedAt: r.updated_at.toISOString(),
@@ -55,7 +58,10 @@ export async function listEntries(buildId: string, f: LogFilter = {}) {
   const rows = await filtered(buildId, f)
     .leftJoin("users as u", "u.id", "e.author_id")
     .leftJoin("linkages as l", "l.id", "e.linkage_id")
-    .select("e.*", "u.name as author_name", "l.name as linkage_name")
+    .leftJoin("linkage_revisions as lr", function () {
+      this.on("lr.linkage_id", "e.linkage_id").andOn("lr.revision", "e.revision");
+    })
+    .select("e.*", "u.name as author_name", "l.name as linkage_name", db.raw("lr.analysis -> 'summary' as revision_summary"))
     .orderBy([{ column: "e.date", order: "desc" }, { column: "e.created_at", order: "desc" }])
     .limit(2000);
   return attachFiles(buildId, rows);
@@ -86,8 +92,11 @@ export async function getEntry(buildId: string, id: string) {
   const row = await db("log_entries as e")
     .leftJoin("users as u", "u.id", "e.author_id")
     .leftJoin("linkages as l", "l.id", "e.linkage_id")
+    .leftJoin("linkage_revisions as lr", function () {
+      this.on("lr.linkage_id", "e.linkage_id").andOn("lr.revision", "e.revision");
+    })
     .where({ "e.build_id": buildId, "e.id": id })
-    .first("e.*", "u.name as author_name", "l.name as linkage_name");
+    .first("e.*", "u.name as author_name", "l.name as linkage_name", db.raw("lr.analysis -> 'summary' as revision_summary"));
   return row ? (await attachFiles(buildId, [row]))[0] : null;
 }
 

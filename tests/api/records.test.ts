@@ -212,6 +212,10 @@ describe("build log", () => {
     const a = await e({ date: "2026-10-03", hours: 3.5, title: "Made the aft pushrod", text: "Cut and deburred the 6061 tube; riveted the inserts.", systems: ["pitch"], fileIds: [photo.id], linkageId });
     expect(a.status, JSON.stringify(a.body)).toBe(201);
     expect(a.body.entry).toMatchObject({ revision: 1, linkageName: "Pitch run", files: [{ id: photo.id }] });
+    // the entry carries the findings counts stored with that revision
+    const stored = (await testDb("linkage_revisions").where({ linkage_id: linkageId, revision: 1 }).first()).analysis.summary;
+    expect(a.body.entry.revisionSummary).toEqual({ hazard: stored.hazard, caution: stored.caution, advisory: stored.advisory });
+    expect(stored.hazard).toBeGreaterThan(0);
     await e({ date: "2026-10-20", hours: 2, title: "Rudder pedals", systems: ["yaw"] });
     await e({ date: "2026-11-02", hours: 1.25, title: "Torque stripes on the bellcrank", systems: ["pitch", "roll"] });
     const bad = await e({ date: "2026-11-02", hours: 1, title: "x", fileIds: ["00000000-0000-4000-8000-000000000000"] });

@@ -13,7 +13,7 @@ import { ACCEPT_FILES, uploadFile, type StoredFile } from "@/components/records/
 
 type Entry = {
   id: string; date: string; hours: number; title: string; text: string; systems: string[]; linkageId: string | null; linkageName: string | null;
-  revision: number | null; author: string | null; files: StoredFile[];
+  revision: number | null; revisionSummary?: { hazard: number; caution: number; advisory: number } | null; author: string | null; files: StoredFile[];
 };
 type Totals = { total: number; bySystem: Record<string, number>; byMonth: ({ month: string; total: number } & Record<string, number | string>)[] };
 type Filter = { system: string; from: string; to: string; q: string };
@@ -130,7 +130,17 @@ function EntryCard({ e, buildId, canEdit }: { e: Entry; buildId: string; canEdit
         <div className="mt-2 flex items-center gap-3 rounded bg-paper p-2 text-sm">
           {/* eslint-disable-next-line @next/next/no-img-element */}
           <img src={`/api/builds/${buildId}/linkages/${e.linkageId}/revisions/${e.revision}/picture`} alt="" className="h-16 rounded border border-ink/10 bg-white" onError={(ev) => { (ev.target as HTMLImageElement).style.display = "none"; }} />
-          <a className="hover:underline" href={`/builds/${buildId}/linkages/${e.linkageId}`}>{e.linkageName ?? "Linkage"}, revision {e.revision}</a>
+          <div>
+            <a className="hover:underline" href={`/builds/${buildId}/linkages/${e.linkageId}`}>{e.linkageName ?? "Linkage"}, revision {e.revision}</a>
+            {e.revisionSummary ? (
+              <p className="text-xs text-ink-soft" data-testid="log-revision-findings">
+                Findings at that revision:{" "}
+                <span className={e.revisionSummary.hazard ? "font-semibold text-hazard" : ""}>{e.revisionSummary.hazard} hazard{e.revisionSummary.hazard === 1 ? "" : "s"}</span>,{" "}
+                <span className={e.revisionSummary.caution ? "font-semibold text-caution" : ""}>{e.revisionSummary.caution} caution{e.revisionSummary.caution === 1 ? "" : "s"}</span>,{" "}
+                {e.revisionSummary.advisory} advisory
+              </p>
+            ) : null}
+          </div>
         </div>
       ) : null}
       {e.files.length ? (
