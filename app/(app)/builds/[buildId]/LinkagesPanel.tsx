@@ -123,7 +123,7 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
                   )}
                 </td>
                 <td>{SYSTEM_LABEL[l.system]}</td>
-                <td className="space-x-1">
+                <td className="space-x-1 whitespace-nowrap">
                   {l.summary ? (
                     <>
                       {l.summary.hazard ? <Badge tone="hazard">{l.summary.hazard} hazard{l.summary.hazard > 1 ? "s" : ""}</Badge> : null}
@@ -132,8 +132,8 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
                     </>
                   ) : <span className="text-xs text-ink-soft">not checked</span>}
                 </td>
-                <td className="text-xs text-ink-soft">rev {l.revision} · {new Date(l.updatedAt).toLocaleString("en-CA")}{l.lastAuthor ? ` · ${l.lastAuthor}` : ""}</td>
-                <td className="text-right">
+                <td className="text-xs text-ink-soft">rev {l.revision} · {new Date(l.updatedAt).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" })}{l.lastAuthor ? ` · ${l.lastAuthor}` : ""}</td>
+                <td className="whitespace-nowrap text-right">
                   {canEdit && renaming !== l.id ? (
                     <span className="space-x-1">
                       <Button size="sm" tone="ghost" onClick={() => setRenaming(l.id)}>Rename</Button>
