@@ -1,5 +1,6 @@
 import "server-only";
 import { createHash, randomBytes } from "node:crypto";
+import type { Knex } from "knex";
 import { db } from "./index";
 import { audit } from "./audit";
 import type { Role } from "@/shared/roles";
@@ -106,28 +107,37 @@ export async function addMember(buildId: string, userId: string, role: Role, byU
   await audit({ buildId, userId: byUserId, action: "member.add", detail: { userId, role } });
 }
 
-async function ownerCount(buildId: string) {
-  const [{ count }] = await db("memberships").where({ build_id: buildId, role: "owner" }).count<{ count: string }[]>("* as count");
-  return Number(count);
+/**
+ * The build's owners, their rows locked until the transaction ends: two owners demoting or removing
+ * each other at the same moment are taken one after the other, so the second sees the first's change.
+ */
+async function lockOwners(trx: Knex.Transaction, buildId: string) {
+  return (await trx("memberships").where({ build_id: buildId, role: "owner" }).orderBy("user_id").forUpdate().select("user_id")).length;
 }
 
 /** Returns "last_owner" when the change would leave the build without an owner. */
 export async function setMemberRole(buildId: string, userId: string, role: Role, byUserId: string) {
-  const current = await db("memberships").where({ build_id: buildId, user_id: userId }).first<{ role: Role } | undefined>();
-  if (!current) return "missing" as const;
-  if (current.role === "owner" && role !== "owner" && (await ownerCount(buildId)) <= 1) return "last_owner" as const;
-  await db("memberships").where({ build_id: buildId, user_id: userId }).update({ role });
-  await audit({ buildId, userId: byUserId, action: "member.role", detail: { userId, role } });
-  return "ok" as const;
+  return db.transaction(async (trx) => {
+    const owners = await lockOwners(trx, buildId);
+    const current = await trx("memberships").where({ build_id: buildId, user_id: userId }).first<{ role: Role } | undefined>();
+    if (!current) return "missing" as const;
+    if (current.role === "owner" && role !== "owner" && owners <= 1) return "last_owner" as const;
+    await trx("memberships").where({ build_id: buildId, user_id: userId }).update({ role });
+    await audit({ buildId, userId: byUserId, action: "member.role", detail: { userId, role } }, trx);
+    return "ok" as const;
+  });
 }
 
 export async function removeMember(buildId: string, userId: string, byUserId: string) {
-  const current = await db("memberships").where({ build_id: buildId, user_id: userId }).first<{ role: Role } | undefined>();
-  if (!current) return "missing" as const;
-  if (current.role === "owner" && (await ownerCount(buildId)) <= 1) return "last_owner" as const;
-  await db("memberships").where({ build_id: buildId, user_id: userId }).del();
-  await audit({ buildId, userId: byUserId, action: "member.remove", detail: { userId } });
-  return "ok" as const;
+  return db.transaction(async (trx) => {
+    const owners = await lockOwners(trx, buildId);
+    const current = await trx("memberships").where({ build_id: buildId, user_id: userId }).first<{ role: Role } | undefined>();
+    if (!current) return "missing" as const;
+    if (current.role === "owner" && owners <= 1) return "last_owner" as const;
+    await trx("memberships").where({ build_id: buildId, user_id: userId }).del();
+    await audit({ buildId, userId: byUserId, action: "member.remove", detail: { userId } }, trx);
+    return "ok" as const;
+  });
 }
 
 // ---- invitations ----------------------------------------------------------------------------

@@ -133,11 +133,20 @@ export async function createEntry(buildId: string, userId: string, v: EntryValue
 }
 
 export async function updateEntry(buildId: string, id: string, userId: string, v: Partial<EntryValues>) {
-  const bad = await checkRefs(buildId, v);
+  const stored = await db("log_entries").where({ build_id: buildId, id }).first<{ linkage_id: string | null } | undefined>("linkage_id");
+  if (!stored) return "missing" as const;
+  // A revision is checked against the linkage the entry will name: the patched one, else the stored one.
+  const linkageId = v.linkageId !== undefined ? v.linkageId : stored.linkage_id;
+  if (v.revision && !linkageId) return "bad_revision" as const;
+  const bad = await checkRefs(buildId, { ...v, linkageId: v.revision ? linkageId : v.linkageId });
   if (bad) return bad;
+  // Moved to another linkage without a revision: its current one, as for a new entry (the old number is not its).
+  let revision = v.revision;
+  if (v.linkageId && v.linkageId !== stored.linkage_id && !v.revision) revision = (await db("linkages").where({ id: v.linkageId }).first("current_revision")).current_revision;
   return db.transaction(async (trx) => {
     const values: Record<string, unknown> = { updated_at: trx.fn.now() };
-    for (const k of ["date", "hours", "title", "text", "systems", "revision"] as const) if (v[k] !== undefined) values[k] = v[k];
+    for (const k of ["date", "hours", "title", "text", "systems"] as const) if (v[k] !== undefined) values[k] = v[k];
+    if (revision !== undefined) values.revision = revision;
     if (v.linkageId !== undefined) values.linkage_id = v.linkageId;
     if (v.linkageId === null) values.revision = null;
     const n = await trx("log_entries").where({ build_id: buildId, id }).update(values);

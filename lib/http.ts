@@ -7,6 +7,20 @@ import { getMembership, type Build } from "@/db/builds";
 import { can, type Capability, type Role, CAPABILITIES } from "@/shared/roles";
 
 export const MAX_BODY_BYTES = 5 * 1024 * 1024;
+/** A UUID as Postgres reads it: anything else names no row (and must not reach a uuid column). */
+export const UUID_RE = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+/** The path of the first string (or key) holding U+0000, which Postgres text and jsonb cannot store. */
+function nulPath(v: unknown, path: string[] = []): string | null {
+  if (typeof v === "string") return v.includes("\u0000") ? path.join(".") || "_" : null;
+  if (!v || typeof v !== "object") return null;
+  for (const [k, x] of Object.entries(v)) {
+    if (k.includes("\u0000")) return [...path, "_"].join(".");
+    const p = nulPath(x, [...path, k]);
+    if (p) return p;
+  }
+  return null;
+}
 
 /** Read a JSON body and parse it with a zod schema: 400 with field errors when it does not fit. */
 export async function parseBody<S extends z.ZodTypeAny>(req: Request, schema: S): Promise<z.infer<S>> {
@@ -18,6 +32,9 @@ export async function parseBody<S extends z.ZodTypeAny>(req: Request, schema: S)
   } catch {
     throw new ApiError(400, "invalid_json", "The request body is not valid JSON.");
   }
+  // A NUL can only come in as the escape \u0000 (JSON has no raw control characters in strings).
+  const nul = text.includes("\\u0000") ? nulPath(json) : null;
+  if (nul) throw new ApiError(400, "invalid_input", "Some fields need attention.", { [nul]: "must not contain NUL characters" });
   const r = schema.safeParse(json);
   if (!r.success) throw invalid(r.error);
   return r.data;
@@ -82,7 +99,7 @@ const WHY: Record<Capability, string> = {
 };
 
 export async function requireBuild(user: SessionUser, buildId: string, capability: Capability) {
-  if (!/^[0-9a-f-]{36}$/i.test(buildId)) throw notFound();
+  if (!UUID_RE.test(buildId)) throw notFound();
   const m = await getMembership(buildId, user.id);
   if (!m) throw notFound(); // non-members never learn the build exists
   if (!can(m.role, capability)) throw forbidden(WHY[capability]);

@@ -2,6 +2,7 @@ import "server-only";
 import { notFound, redirect } from "next/navigation";
 import { getSessionUser } from "./auth";
 import { getMembership } from "@/db/builds";
+import { UUID_RE } from "./http";
 
 /** For server pages: the signed-in user or a redirect to sign-in. */
 export async function requirePageUser(next?: string) {
@@ -13,7 +14,7 @@ export async function requirePageUser(next?: string) {
 /** For build pages: the user, the build and the role, or 404 for non-members. */
 export async function requirePageBuild(buildId: string, next?: string) {
   const user = await requirePageUser(next);
-  if (!/^[0-9a-f-]{36}$/i.test(buildId)) notFound();
+  if (!UUID_RE.test(buildId)) notFound();
   const m = await getMembership(buildId, user.id);
   if (!m) notFound();
   return { user, ...m };

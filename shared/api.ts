@@ -54,8 +54,13 @@ export const linkagePatch = z
   .object({ name: text("Linkage name", 120).optional(), system: systemSchema.optional() })
   .refine((v) => v.name !== undefined || v.system !== undefined, "Nothing to change");
 
+/** Revision numbers are Postgres integers: anything above fits no revision (and must not reach the database). */
+export const REVISION_MAX = 2_147_483_647;
+/** `?revision=N` and the like: a whole number from 1 to REVISION_MAX. */
+export const revisionQuery = z.coerce.number().int().min(1).max(REVISION_MAX);
+
 export const graphPut = z.object({
-  baseRevision: z.number({ error: "baseRevision must be a number" }).int().min(1),
+  baseRevision: z.number({ error: "baseRevision must be a number" }).int().min(1).max(REVISION_MAX),
   graph: graphSchema,
 });
 

@@ -4,11 +4,12 @@ import { SYSTEMS } from "./linkage/schema";
 import { partInput } from "./records/parts";
 import { HARDWARE_STATES } from "./records/hardware";
 import { ITEM_CODES } from "./records/checklist";
+import { REVISION_MAX } from "./api";
 
 export { partInput };
 
 const isoDate = z.string({ error: "date is required (YYYY-MM-DD)" }).regex(/^\d{4}-\d{2}-\d{2}$/, "date must be YYYY-MM-DD")
-  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s), "not a calendar date");
+  .refine((s) => !Number.isNaN(Date.parse(`${s}T00:00:00Z`)) && new Date(`${s}T00:00:00Z`).toISOString().startsWith(s) && s.slice(0, 4) !== "0000", "not a calendar date"); // Postgres has no year 0
 
 export const logEntryInput = z.object({
   date: isoDate,
@@ -18,7 +19,7 @@ export const logEntryInput = z.object({
   systems: z.array(z.enum(SYSTEMS, { error: `systems are ${SYSTEMS.join(", ")}` })).max(6).default([]),
   /** Optionally the linkage revision this work concerns: its picture and findings show in the entry. */
   linkageId: z.string().uuid("linkageId must be a linkage id").nullable().optional(),
-  revision: z.number().int().min(1).nullable().optional(),
+  revision: z.number().int().min(1).max(REVISION_MAX).nullable().optional(),
   /** Uploaded files (photos, PDFs) of this build to attach, in order. */
   fileIds: z.array(z.string().uuid("fileIds must be file ids")).max(40).default([]),
 }).refine((v) => !v.revision || v.linkageId, { path: ["revision"], message: "a revision needs a linkageId" });
@@ -29,7 +30,7 @@ export const logEntryPatch = z.object({
   text: z.string().max(20_000).optional(),
   systems: z.array(z.enum(SYSTEMS)).max(6).optional(),
   linkageId: z.string().uuid().nullable().optional(),
-  revision: z.number().int().min(1).nullable().optional(),
+  revision: z.number().int().min(1).max(REVISION_MAX).nullable().optional(),
   fileIds: z.array(z.string().uuid()).max(40).optional(),
 }).refine((v) => Object.keys(v).length > 0, "Nothing to change");
 
@@ -37,7 +38,7 @@ export const logFilter = z.object({
   system: z.enum(SYSTEMS).optional(),
   from: isoDate.optional(),
   to: isoDate.optional(),
-  q: z.string().max(200).optional(),
+  q: z.string().max(200).refine((s) => !s.includes("\u0000"), "must not contain NUL characters").optional(),
 });
 
 export const partPatch = partInput;
@@ -55,7 +56,7 @@ export const hardwareStatePut = z.object({
 });
 
 export const checklistTick = z.object({
-  revision: z.number({ error: "revision is required" }).int().min(1),
+  revision: z.number({ error: "revision is required" }).int().min(1).max(REVISION_MAX),
   jointId: z.string().max(64).default(""),
   code: z.enum(ITEM_CODES, { error: "unknown checklist item" }),
   ticked: z.boolean({ error: "ticked must be true or false" }),

@@ -7,7 +7,7 @@ const text = (what: string, max: number) =>
 export const SUBJECT_TYPES = ["node", "joint", "linkage"] as const;
 export const subjectSchema = z.object({
   type: z.enum(SUBJECT_TYPES, { error: "Subject type must be node, joint or linkage" }),
-  id: z.string({ error: "Subject id is required" }).min(1, "Subject id is required").max(64, "Subject id is at most 64 characters"),
+  id: z.string({ error: "Subject id is required" }).min(1, "Subject id is required").max(64, "Subject id is at most 64 characters").refine((s) => !s.includes("\u0000"), "Subject id must not contain NUL characters"),
 });
 
 /** Minutes during which the author may still change a comment's text. */

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { requirePageBuild } from "@/lib/page-access";
+import { UUID_RE } from "@/lib/http";
 import { getLinkage } from "@/db/linkages";
 import { BuildNav } from "@/components/BuildNav";
 import { can } from "@/shared/roles";
@@ -12,7 +13,7 @@ export default async function LinkageChecklist({ params, searchParams }: { param
   const { buildId, linkageId } = await params;
   const { revision } = await searchParams;
   const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}/checklist/${linkageId}`);
-  if (!/^[0-9a-f-]{36}$/i.test(linkageId)) notFound();
+  if (!UUID_RE.test(linkageId)) notFound();
   const linkage = await getLinkage(build.id, linkageId);
   if (!linkage) notFound();
   const rev = revision && /^\d+$/.test(revision) ? Number(revision) : undefined;

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { requirePageBuild } from "@/lib/page-access";
+import { UUID_RE } from "@/lib/http";
 import { getLinkage, getRevision } from "@/db/linkages";
 import { can } from "@/shared/roles";
 import { settingsSchema } from "@/shared/analysis/types";
@@ -11,7 +12,7 @@ export const metadata: Metadata = { title: "Linkage" };
 export default async function LinkagePage({ params }: { params: Promise<{ buildId: string; linkageId: string }> }) {
   const { buildId, linkageId } = await params;
   const { build, role, user } = await requirePageBuild(buildId, `/builds/${buildId}/linkages/${linkageId}`);
-  if (!/^[0-9a-f-]{36}$/i.test(linkageId)) notFound();
+  if (!UUID_RE.test(linkageId)) notFound();
   const linkage = await getLinkage(build.id, linkageId);
   if (!linkage) notFound();
   const rev = await getRevision(linkage.id);

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { revisionQuery } from "@/shared/api";
 import { withBuild, parseBody, parseParams, json } from "@/lib/http";
 import { ApiError, notFound } from "@/lib/errors";
 import { getRevision } from "@/db/linkages";
@@ -9,7 +9,6 @@ import { checklistTick } from "@/shared/records-api";
 import { requireLinkage } from "@/lib/records-http";
 
 type P = { buildId: string; linkageId: string };
-const revisionQuery = z.coerce.number().int().min(1);
 
 /** The checklist generated from a revision (current by default, `?revision=N`), with its ticks and notes. */
 export const GET = withBuild<P>("read", async ({ req, build, params }) => {

@@ -1,11 +1,9 @@
-import { z } from "zod";
 import { withBuild, parseParams, json } from "@/lib/http";
-import { uuidParam } from "@/shared/api";
+import { revisionQuery, uuidParam } from "@/shared/api";
 import { requireLinkage, requireRevision } from "@/lib/review";
 import { diffGraphs } from "@/shared/review/diff";
 
 type P = { buildId: string; linkageId: string };
-const revisionQuery = z.coerce.number().int().min(1);
 
 /** `?from=A&to=B`: what changed from revision A to revision B (defaults: the current one and the one before). */
 export const GET = withBuild<P>("read", async ({ req, build, params }) => {

@@ -1,12 +1,10 @@
-import { z } from "zod";
 import { withBuild, parseParams } from "@/lib/http";
 import { notFound } from "@/lib/errors";
-import { uuidParam } from "@/shared/api";
+import { revisionQuery, uuidParam } from "@/shared/api";
 import { getLinkage, getRevision } from "@/db/linkages";
 import { serializeLinkage } from "@/shared/linkage/io";
 
 type P = { buildId: string; linkageId: string };
-const revisionQuery = z.coerce.number().int().min(1);
 
 /** The linkage as a file in the linkage format (`?revision=N` for an older one), to keep outside Linkwright. */
 export const GET = withBuild<P>("read", async ({ req, build, params }) => {

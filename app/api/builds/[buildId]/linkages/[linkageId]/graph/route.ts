@@ -1,13 +1,11 @@
-import { z } from "zod";
 import { withBuild, parseBody, parseParams, json } from "@/lib/http";
 import { ApiError, notFound } from "@/lib/errors";
-import { graphPut, uuidParam } from "@/shared/api";
+import { graphPut, revisionQuery, uuidParam } from "@/shared/api";
 import { getLinkage, getRevision, saveRevision } from "@/db/linkages";
 import { analyze } from "@/shared/analysis";
 import { afterRevisionSaved } from "@/lib/review";
 
 type P = { buildId: string; linkageId: string };
-const revisionQuery = z.coerce.number().int().min(1);
 
 /** The current revision of the graph (or `?revision=N`), with the analysis stored beside it. */
 export const GET = withBuild<P>("read", async ({ req, build, params }) => {

@@ -1,4 +1,4 @@
-import { z } from "zod";
+import { revisionQuery } from "@/shared/api";
 import { withBuild, parseParams } from "@/lib/http";
 import { notFound } from "@/lib/errors";
 import { getRevision } from "@/db/linkages";
@@ -12,7 +12,7 @@ type P = { buildId: string; linkageId: string };
 export const GET = withBuild<P>("read", async ({ req, build, params }) => {
   const linkage = await requireLinkage(build.id, params.linkageId);
   const q = req.nextUrl.searchParams.get("revision");
-  const rev = await getRevision(linkage.id, q === null ? undefined : parseParams(q, z.coerce.number().int().min(1)));
+  const rev = await getRevision(linkage.id, q === null ? undefined : parseParams(q, revisionQuery));
   if (!rev) throw notFound("revision");
   const ticks = await listTicks(linkage.id, rev.revision);
   const bytes = await checklistPdf(build, linkage, rev.revision, checklistFor(rev.graph), ticks);
