@@ -27,6 +27,13 @@ import { FIT, focusZoom, openingViewport } from "./view";
 export const KIND_MIME = "application/x-linkwright-kind";
 export const GRID = 10;
 
+// Module-level: React Flow copies each of these props into its store whenever its reference changes,
+// and every subscribed node and edge re-checks (a new `defaultEdgeOptions` re-renders every edge), so
+// an inline literal here costs a full store pass on every render of the canvas, i.e. every drag frame.
+const SNAP_GRID: [number, number] = [GRID, GRID];
+const DEFAULT_EDGE_OPTIONS = { type: "joint" } as const;
+const CONTROLS_FIT = { padding: FIT.padding, maxZoom: FIT.maxZoom, minZoom: 0.05, duration: 200 } as const;
+
 type NodeCacheEntry = { src: EditorState["nodes"][number]; sel: boolean; m: EditorState["measured"][string] | undefined; ro: boolean; rf: PartFlowNode };
 type EdgeCacheEntry = { src: EditorState["joints"][number]; sel: boolean; rf: JointFlowEdge };
 
@@ -260,15 +267,15 @@ export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
         deleteKeyCode={null}
         disableKeyboardA11y
         snapToGrid
-        snapGrid={[GRID, GRID]}
+        snapGrid={SNAP_GRID}
         minZoom={0.05}
         maxZoom={3}
         connectionRadius={28}
-        defaultEdgeOptions={{ type: "joint" }}
+        defaultEdgeOptions={DEFAULT_EDGE_OPTIONS}
       >
         <Background variant={BackgroundVariant.Dots} gap={GRID * 2} size={1} color="#cfd4da" />
         <MiniMap<PartFlowNode> pannable zoomable nodeColor={minimapColor} className="!bg-white/90" />
-        <Controls showInteractive={false} fitViewOptions={{ padding: FIT.padding, maxZoom: FIT.maxZoom, minZoom: 0.05, duration: 200 }} />
+        <Controls showInteractive={false} fitViewOptions={CONTROLS_FIT} />
       </ReactFlow>
     </div>
   );

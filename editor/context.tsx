@@ -19,6 +19,15 @@ export function useEditorStore<T>(selector: (s: EditorState) => T): T {
   return useStore(store, useShallow(selector));
 }
 
+/**
+ * Subscribe to one value that the store keeps by reference (a primitive, or an object it only replaces
+ * when it changes), compared with Object.is. Cheaper than useEditorStore for the hundreds of parts and
+ * joints on the canvas, whose selectors all run on every store change (every drag frame).
+ */
+export function useEditorValue<T>(selector: (s: EditorState) => T): T {
+  return useStore(useEditorStoreApi(), selector);
+}
+
 export type EditorConfig = {
   unitSystem: "US" | "SI";
   readOnly: boolean;

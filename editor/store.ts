@@ -107,6 +107,11 @@ export type EditorState = {
   findingsBySubject: Record<string, Finding[]>;
   worstByNode: Record<string, Severity>;
   worstByJoint: Record<string, Severity>;
+  /**
+   * Per subject key (`node:<id>`, `joint:<id>`) with findings: the worst severity and how many, one stable
+   * object per analysis run, so a part or joint on the canvas subscribes to one reference.
+   */
+  badgeBySubject: Record<string, Badge>;
   /** The last refused action, for a toast. */
   notice: { text: string; at: number } | null;
 
@@ -141,6 +146,7 @@ export type EditorState = {
 };
 
 export type EditorStore = StoreApi<EditorState>;
+export type Badge = { worst: Severity; count: number };
 
 /** The graph document of the current state (what is saved and exported). */
 export function toGraph(s: Pick<EditorState, "meta" | "nodes" | "joints">, snap?: Snapshot): LinkageGraph {
@@ -257,6 +263,7 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
       findingsBySubject: {},
       worstByNode: {},
       worstByJoint: {},
+      badgeBySubject: {},
       notice: null,
 
       addNode(kind, position, init) {
@@ -560,7 +567,13 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
             if (f.subject.type === "node") worstByNode[f.subject.id] = worse(worstByNode[f.subject.id], f.severity);
             if (f.subject.type === "joint") worstByJoint[f.subject.id] = worse(worstByJoint[f.subject.id], f.severity);
           }
-          set({ report, findingsBySubject, worstByNode, worstByJoint, analysisError: null });
+          const badgeBySubject: Record<string, Badge> = {};
+          for (const [key, list] of Object.entries(findingsBySubject)) {
+            let w: Severity | undefined;
+            for (const f of list) w = worse(w, f.severity);
+            if (w) badgeBySubject[key] = { worst: w, count: list.length };
+          }
+          set({ report, findingsBySubject, worstByNode, worstByJoint, badgeBySubject, analysisError: null });
         } catch (e) {
           set({ analysisError: e instanceof Error ? e.message : String(e) });
         }
@@ -589,10 +602,27 @@ function sameList(a: string[], b: string[]) {
   return a.length === b.length && a.every((x, i) => x === b[i]);
 }
 
+const indexes = new WeakMap<readonly { id: string }[], Map<string, { id: string }>>();
+/**
+ * id → item of a parts or joints array (the first with that id, as `find` would), built once per array.
+ * Store arrays are replaced, never mutated, so selectors that look names up for many findings on every
+ * store change (every drag frame) do one pass per new array instead of one per finding.
+ */
+export function indexById<T extends { id: string }>(list: readonly T[]): Map<string, T> {
+  let m = indexes.get(list);
+  if (!m) {
+    m = new Map();
+    for (const x of list) if (!m.has(x.id)) m.set(x.id, x);
+    indexes.set(list, m);
+  }
+  return m as Map<string, T>;
+}
+
 /** A readable name for a joint: "Pushrod 1 · a ↔ Bellcrank 1 · in". */
 export function jointName(j: Joint, nodes: LinkageNode[]): string {
+  const index = indexById(nodes);
   const label = (id: string) => {
-    const n = nodes.find((x) => x.id === id);
+    const n = index.get(id);
     return n ? n.label || KIND_NAMES[n.kind] : id;
   };
   return `${label(j.from.node)} · ${j.from.port} ↔ ${label(j.to.node)} · ${j.to.port}`;

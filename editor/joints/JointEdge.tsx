@@ -8,7 +8,7 @@ import { memo } from "react";
 import { BaseEdge, EdgeLabelRenderer, getBezierPath, type Edge, type EdgeProps } from "@xyflow/react";
 import type { Joint } from "@/shared/linkage/schema";
 import type { Severity } from "@/shared/analysis/types";
-import { useEditorStore, useEditorStoreApi } from "../context";
+import { useEditorStoreApi, useEditorValue } from "../context";
 
 export type JointEdgeData = { joint: Joint };
 export type JointFlowEdge = Edge<JointEdgeData, "joint">;
@@ -84,8 +84,10 @@ function ChipGlyph({ chip }: { chip: Chip }) {
 export const JointEdge = memo(function JointEdge(props: EdgeProps<JointFlowEdge>) {
   const { id, sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition, selected, data } = props;
   const api = useEditorStoreApi();
-  const worst = useEditorStore((s) => s.worstByJoint[id]);
-  const count = useEditorStore((s) => s.findingsBySubject[`joint:${id}`]?.length ?? 0);
+  const key = `joint:${id}`;
+  const badge = useEditorValue((s) => s.badgeBySubject[key]);
+  const worst = badge?.worst;
+  const count = badge?.count ?? 0;
   const [path, lx, ly] = getBezierPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition });
   const tone = worst ? SEVERITY_HEX[worst] : selected ? INK : MUTED;
   const chips = data ? hardwareChips(data.joint.hardware) : [];

@@ -7,7 +7,7 @@ import { memo } from "react";
 import { Handle, Position, type Node, type NodeProps } from "@xyflow/react";
 import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
 import type { Severity } from "@/shared/analysis/types";
-import { useEditorConfig, useEditorStore } from "../context";
+import { useEditorConfig, useEditorValue } from "../context";
 import { KIND_NAMES } from "../store";
 import { fmt, toDisplay, unitLabel, type UnitSystem } from "../units";
 import { KindGlyph } from "./glyphs";
@@ -41,8 +41,10 @@ export const SEVERITY_TEXT: Record<Severity, string> = { hazard: "text-hazard", 
 
 function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: NodeKind; label: string; lines: string[]; selected: boolean }) {
   const { readOnly } = useEditorConfig();
-  const worst = useEditorStore((s) => s.worstByNode[id]);
-  const count = useEditorStore((s) => s.findingsBySubject[`node:${id}`]?.length ?? 0);
+  const key = `node:${id}`;
+  const badge = useEditorValue((s) => s.badgeBySubject[key]);
+  const worst = badge?.worst;
+  const count = badge?.count ?? 0;
   const sides = PORT_SIDES[kind];
   const ports = Object.keys(sides);
   return (

@@ -5,7 +5,7 @@ import { SEVERITIES, type AnalysisSettings, type Finding, type Severity } from "
 import type { ControlSystem } from "@/shared/linkage/schema";
 import { useEditorConfig, useEditorStore } from "../context";
 import { useFocusSubject } from "../Canvas";
-import { jointName, KIND_NAMES, type EditorState } from "../store";
+import { indexById, jointName, KIND_NAMES, type EditorState } from "../store";
 import { fmt, fmtUnit } from "../units";
 import { SEVERITY_BG, SEVERITY_TEXT } from "../nodes";
 
@@ -17,11 +17,11 @@ const SOURCE_NAMES = { published: "published", commonPractice: "common practice"
 
 export function subjectName(s: Pick<EditorState, "nodes" | "joints">, subject: Finding["subject"]): string {
   if (subject.type === "node") {
-    const n = s.nodes.find((x) => x.id === subject.id);
+    const n = indexById(s.nodes).get(subject.id);
     return n ? n.label || KIND_NAMES[n.kind] : subject.id;
   }
   if (subject.type === "joint") {
-    const j = s.joints.find((x) => x.id === subject.id);
+    const j = indexById(s.joints).get(subject.id);
     return j ? jointName(j, s.nodes) : subject.id;
   }
   return "whole linkage";

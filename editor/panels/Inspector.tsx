@@ -4,7 +4,7 @@ import { useCallback, useMemo, useState } from "react";
 import { z } from "zod";
 import { hardwareSchema, nodeSchema, type NodeKind } from "@/shared/linkage/schema";
 import { AN_BOLTS_BY_SIZE } from "@/shared/hardware";
-import { useEditorConfig, useEditorStore, useEditorStoreApi } from "../context";
+import { useEditorConfig, useEditorStore, useEditorStoreApi, useEditorValue } from "../context";
 import { KIND_NAMES, jointName } from "../store";
 import { inputText } from "../units";
 import { KindGlyph } from "../nodes/glyphs";
@@ -46,8 +46,9 @@ function SubjectFindings({ subjectKey }: { subjectKey: string }) {
 function NodeInspector({ id }: { id: string }) {
   const api = useEditorStoreApi();
   const { unitSystem, readOnly } = useEditorConfig();
-  const node = useEditorStore((s) => s.nodes.find((n) => n.id === id));
-  const epoch = useEditorStore((s) => s.epoch);
+  // Only the kind: the node object changes on every drag frame, and the form must not re-render for moves.
+  const kind = useEditorValue((s) => s.nodes.find((n) => n.id === id)?.kind);
+  const epoch = useEditorValue((s) => s.epoch);
   const [pending, setPending] = useState(0);
   const onValid = useCallback(
     (v: { label: string; props: unknown }) => {
@@ -58,20 +59,24 @@ function NodeInspector({ id }: { id: string }) {
   );
   // The form's starting values only change when the node changes from outside the form.
   // eslint-disable-next-line react-hooks/exhaustive-deps
-  const value = useMemo(() => (node ? { label: node.label, props: node.props } : null), [id, epoch, unitSystem]);
-  if (!node || !value) return null;
+  const value = useMemo(() => {
+    const node = api.getState().nodes.find((n) => n.id === id);
+    return node ? { label: node.label, props: node.props } : null;
+  }, [id, epoch, unitSystem]);
+  const sections = useMemo(() => (kind ? nodeSections(kind) : []), [kind]);
+  if (!kind || !value) return null;
   return (
     <div className="space-y-2" data-testid="node-form-panel">
       <h3 className="flex items-center gap-1.5 text-sm font-semibold text-ink">
-        <KindGlyph kind={node.kind} /> {KIND_NAMES[node.kind]}
-        <span className="ml-auto font-mono text-[10px] font-normal text-ink-soft">{node.id}</span>
+        <KindGlyph kind={kind} /> {KIND_NAMES[kind]}
+        <span className="ml-auto font-mono text-[10px] font-normal text-ink-soft">{id}</span>
       </h3>
       <SubjectFindings subjectKey={`node:${id}`} />
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}
         testId="node-form"
-        schema={nodeFormSchema(node.kind)}
-        sections={nodeSections(node.kind)}
+        schema={nodeFormSchema(kind)}
+        sections={sections}
         value={value as Record<string, unknown>}
         unitSystem={unitSystem}
         disabled={readOnly}

@@ -1,14 +1,21 @@
 /**
  * Editor benchmark (issue 4), in headless Debian Chromium against a production Vite build of the editor
  * alone (tests/bench/editor-harness; the API is answered in the page, so no server or database).
- * Reports: time to first render of a generated 500-part linkage, the median and 95th-percentile frame
- * time (interval between animation frames) while a part is dragged for 2 s, and the PNG export time
- * for 200 parts. Targets: first render < 2 s, drag frames < 16 ms (p50; one 60 Hz frame is 16.7 ms),
- * export < 1.5 s.
+ * Reports: time to first render of a generated 500-part linkage; while a part near the middle of the
+ * canvas is dragged for 2 s (the pointer stays inside the canvas, so React Flow does not auto-pan), the
+ * interval between animation frames AND the main-thread work per frame; and the PNG export time for
+ * 200 parts.
+ *
+ * The frame interval alone cannot show "under 16 ms": at 60 Hz it never goes below the 16.7 ms vsync,
+ * and a frame that needs 20 ms of work shows up as 33.3 ms. So the drag is also traced (CDP Tracing) and
+ * for each frame (from one BeginMainFrame on the renderer's main thread to the next) the time the main
+ * thread was busy with tasks (input handling, React, rAF, style, layout, paint) is summed.
+ * Targets: first render < 2 s; drag: main-thread work per frame p95 < 16 ms and frame interval p50 at the
+ * 60 Hz vsync (< 17 ms); export < 1.5 s.
  */
 import path from "node:path";
 import { build, preview } from "vite";
-import { chromium, type Page } from "playwright-core";
+import { chromium, type CDPSession, type Page } from "playwright-core";
 
 const ROOT = path.resolve(__dirname, "../..");
 const HARNESS = path.join(__dirname, "editor-harness");
@@ -19,6 +26,15 @@ export type EditorBenchResult = {
   dragFrameMedianMs: number;
   dragFrameP95Ms: number;
   dragFrames: number;
+  /** Main-thread busy time per frame while dragging (from the trace). */
+  dragWorkMedianMs: number;
+  dragWorkP95Ms: number;
+  dragWorkMaxMs: number;
+  /** The same as main-thread CPU time (p95). */
+  dragCpuP95Ms: number;
+  /** Frames whose main-thread work was 16 ms or more. */
+  dragFramesOver16: number;
+  dragMoves: number;
   exportMs: number;
   exportParts: number;
 };
@@ -41,6 +57,66 @@ async function openEditor(page: Page, base: string, n: number) {
     { timeout: 60_000, polling: "raf" },
   );
   return page.evaluate(() => performance.now());
+}
+
+type TraceEvent = { name: string; ph: string; pid: number; tid: number; ts: number; dur?: number; tdur?: number; args?: { name?: string } };
+
+async function traceStart(cdp: CDPSession) {
+  const events: TraceEvent[] = [];
+  cdp.on("Tracing.dataCollected", (d) => events.push(...(d.value as unknown as TraceEvent[])));
+  // RunTask (every main-thread task) and BeginMainFrame (one per frame); nothing heavier.
+  await cdp.send("Tracing.start", { traceConfig: { includedCategories: ["disabled-by-default-devtools.timeline", "benchmark"], excludedCategories: ["*"] }, transferMode: "ReportEvents" });
+  return async () => {
+    const done = new Promise((r) => cdp.once("Tracing.tracingComplete", r));
+    await cdp.send("Tracing.end");
+    await done;
+    return events;
+  };
+}
+
+/**
+ * Per frame on the renderer main thread: busy time (merged RunTask spans, wall clock) between consecutive
+ * BeginMainFrames, and the main thread's CPU time in the tasks that start in that frame (robust to other
+ * processes competing for the CPU, which stretch wall time).
+ */
+function workPerFrame(events: TraceEvent[]): { wall: number[]; cpu: number[] } {
+  const mains = new Set(events.filter((e) => e.ph === "M" && e.name === "thread_name" && e.args?.name === "CrRendererMain").map((e) => `${e.pid}:${e.tid}`));
+  const busy = new Map<string, number>();
+  for (const e of events) if (e.name === "RunTask" && e.ph === "X" && mains.has(`${e.pid}:${e.tid}`)) busy.set(`${e.pid}:${e.tid}`, (busy.get(`${e.pid}:${e.tid}`) ?? 0) + (e.dur ?? 0));
+  const main = [...busy].sort((a, b) => b[1] - a[1])[0]?.[0];
+  if (!main) return { wall: [], cpu: [] };
+  const on = (e: TraceEvent) => `${e.pid}:${e.tid}` === main;
+  const frames = events.filter((e) => on(e) && e.ph === "X" && e.name === "ProxyMain::BeginMainFrame").map((e) => e.ts).sort((a, b) => a - b);
+  const runTasks = events.filter((e) => on(e) && e.ph === "X" && e.name === "RunTask").sort((a, b) => a.ts - b.ts);
+  const tasks = runTasks.map((e) => [e.ts, e.ts + (e.dur ?? 0)] as const);
+  // Merge nested / overlapping tasks.
+  const spans: [number, number][] = [];
+  for (const [a, b] of tasks) {
+    const last = spans[spans.length - 1];
+    if (last && a <= last[1]) last[1] = Math.max(last[1], b);
+    else spans.push([a, b]);
+  }
+  const wall: number[] = [];
+  const cpu: number[] = [];
+  let j = 0;
+  for (let i = 0; i + 1 < frames.length; i++) {
+    const [f0, f1] = [frames[i], frames[i + 1]];
+    let sum = 0;
+    while (j < spans.length && spans[j][1] <= f0) j++;
+    for (let k = j; k < spans.length && spans[k][0] < f1; k++) sum += Math.min(f1, spans[k][1]) - Math.max(f0, spans[k][0]);
+    wall.push(sum / 1000);
+    // Top-level tasks only (a nested RunTask's time is inside its parent's).
+    let c = 0;
+    let end = -Infinity;
+    for (const t of runTasks) {
+      if (t.ts >= f1) break;
+      if (t.ts < end) continue;
+      end = t.ts + (t.dur ?? 0);
+      if (t.ts >= f0) c += t.tdur ?? t.dur ?? 0;
+    }
+    cpu.push(c / 1000);
+  }
+  return { wall, cpu };
 }
 
 export async function run(): Promise<{ ok: boolean; result: EditorBenchResult }> {
@@ -69,15 +145,21 @@ export async function run(): Promise<{ ok: boolean; result: EditorBenchResult }>
     }
     const firstRenderMs = pct(renders, 50);
 
-    // 2. Drag one part for 2 s and record the interval between animation frames.
+    // 2. Drag the part nearest the middle of the canvas for 2 s (the pointer stays well inside the canvas),
+    //    recording the interval between animation frames and, from a trace, the main-thread work per frame.
     const page = ctx.pages()[ctx.pages().length - 1];
-    const handle = page.locator(".react-flow__node").first();
-    const box = (await handle.boundingBox())!;
+    const pane = (await page.locator(".react-flow").boundingBox())!;
+    const boxes = await page.locator(".react-flow__node").evaluateAll((els) => els.map((el) => el.getBoundingClientRect().toJSON() as DOMRect));
+    const cx = pane.x + pane.width / 2;
+    const cy = pane.y + pane.height / 2;
+    const box = boxes.reduce((a, b) => (Math.hypot(b.x + b.width / 2 - cx, b.y + b.height / 2 - cy) < Math.hypot(a.x + a.width / 2 - cx, a.y + a.height / 2 - cy) ? b : a));
     const x0 = box.x + box.width / 2;
     const y0 = box.y + 10;
     await page.mouse.move(x0, y0);
     await page.mouse.down();
     await page.mouse.move(x0 + 8, y0 + 8, { steps: 2 });
+    const cdp = await page.context().newCDPSession(page);
+    const traceStop = await traceStart(cdp);
     // A string, so the loader's helpers (tsx names functions) do not leak into the page.
     await page.evaluate(`(() => {
       window.__frames = [];
@@ -97,6 +179,11 @@ export async function run(): Promise<{ ok: boolean; result: EditorBenchResult }>
       await page.mouse.move(x0 + 8 + 150 * Math.sin(k / 15), y0 + 8 + 80 * Math.cos(k / 20));
     }
     const frames = (await page.evaluate("(() => { window.__stop = true; return window.__frames; })()")) as number[];
+    const trace = await traceStop();
+    // LW_BENCH_TRACE=file.json keeps the drag's trace (open it in chrome://tracing or Perfetto).
+    if (process.env.LW_BENCH_TRACE) (await import("node:fs")).writeFileSync(process.env.LW_BENCH_TRACE, JSON.stringify({ traceEvents: trace }));
+    const { wall: work, cpu } = workPerFrame(trace);
+    await cdp.detach();
     await page.mouse.up();
 
     // 3. PNG export of a 200-part linkage (click → file downloaded).
@@ -120,17 +207,37 @@ export async function run(): Promise<{ ok: boolean; result: EditorBenchResult }>
       dragFrameMedianMs: Number(pct(frames, 50).toFixed(1)),
       dragFrameP95Ms: Number(pct(frames, 95).toFixed(1)),
       dragFrames: frames.length,
+      dragWorkMedianMs: Number(pct(work, 50).toFixed(1)),
+      dragWorkP95Ms: Number(pct(work, 95).toFixed(1)),
+      dragWorkMaxMs: Number(Math.max(0, ...work).toFixed(1)),
+      dragCpuP95Ms: Number((pct(cpu, 95) ?? 0).toFixed(1)),
+      dragFramesOver16: work.filter((w) => w >= 16).length,
+      dragMoves: k,
       exportMs,
       exportParts: 200,
     };
-    const ok = result.firstRenderMs < 2000 && result.dragFrameMedianMs < 17 && result.exportMs < 1500;
+    const checks = {
+      firstRender: result.firstRenderMs < 2000,
+      work: work.length > 0 && result.dragWorkP95Ms < 16,
+      interval: result.dragFrameMedianMs < 17,
+      export: result.exportMs < 1500,
+    };
+    const ok = checks.firstRender && checks.work && checks.interval && checks.export;
+    const yes = (b: boolean) => (b ? "yes" : "NO");
     console.table([
-      { measure: "first render, 500 parts", value: `${result.firstRenderMs} ms`, target: "< 2000 ms", ok: result.firstRenderMs < 2000 },
-      { measure: "drag frame p50 (500 parts)", value: `${result.dragFrameMedianMs} ms`, target: "≤ 16.7 ms (60 Hz)", ok: result.dragFrameMedianMs < 17 },
-      { measure: "drag frame p95 (500 parts)", value: `${result.dragFrameP95Ms} ms`, target: "reported", ok: true },
-      { measure: "PNG export, 200 parts", value: `${result.exportMs} ms`, target: "< 1500 ms", ok: result.exportMs < 1500 },
+      { measure: "first render, 500 parts", value: `${result.firstRenderMs} ms`, target: "< 2000 ms", holds: yes(checks.firstRender) },
+      { measure: "drag: main-thread work per frame p50", value: `${result.dragWorkMedianMs} ms`, target: "reported", holds: "" },
+      { measure: "drag: main-thread work per frame p95", value: `${result.dragWorkP95Ms} ms`, target: "< 16 ms", holds: yes(checks.work) },
+      { measure: "drag: main-thread CPU per frame p95", value: `${result.dragCpuP95Ms} ms`, target: "reported (wall time minus waiting for the CPU)", holds: "" },
+      { measure: "drag: frame interval p50", value: `${result.dragFrameMedianMs} ms`, target: "< 17 ms (60 Hz vsync)", holds: yes(checks.interval) },
+      { measure: "drag: frame interval p95", value: `${result.dragFrameP95Ms} ms`, target: "reported (33 ms = a dropped frame)", holds: "" },
+      { measure: "PNG export, 200 parts", value: `${result.exportMs} ms`, target: "< 1500 ms", holds: yes(checks.export) },
     ]);
-    console.log(`(${result.dragFrames} frames while dragging; first renders ${renders.map((r) => Math.round(r)).join(", ")} ms; exports ${exports.join(", ")} ms)`);
+    console.log(
+      `(drag: ${result.dragMoves} pointer moves, ${result.dragFrames} frames, ${work.length} traced frames, ${result.dragFramesOver16} with ≥ 16 ms of main-thread work, worst ${result.dragWorkMaxMs} ms; ` +
+        `first renders ${renders.map((r) => Math.round(r)).join(", ")} ms; exports ${exports.join(", ")} ms)`,
+    );
+    console.log(`editor targets: ${ok ? "all hold" : `missed: ${Object.entries(checks).filter(([, v]) => !v).map(([k]) => k).join(", ")}`}`);
     return { ok, result };
   } finally {
     await browser.close();
