@@ -131,7 +131,13 @@ function parseNumber(raw: string, decimalComma: boolean): number | null {
  */
 export function parsePartsCsv(text: string, existing: Iterable<string> = []): CsvImport {
   const clean = text.replace(/^\uFEFF/, "");
-  const res = Papa.parse<string[]>(clean, { header: false, skipEmptyLines: false, delimitersToGuess: [",", ";", "\t", "|"] });
+  const res = Papa.parse<string[]>(clean, {
+    header: false,
+    skipEmptyLines: false,
+    delimitersToGuess: [",", ";", "\t", "|"],
+    // Our export guards cells that a spreadsheet would run as a formula with a leading apostrophe; take it off again.
+    transform: (v) => (/^'[=+\-@\t\r]/.test(v) ? v.slice(1) : v),
+  });
   const delimiter = res.meta.delimiter || ",";
   const data = res.data as string[][];
   const errors: RowError[] = [];
@@ -217,7 +223,8 @@ export function partsToCsv(parts: PartInput[]): string {
       return v === undefined || v === null ? "" : typeof v === "boolean" ? (v ? "yes" : "no") : String(v);
     });
   });
-  return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows }, { newline: "\r\n" }) + "\r\n";
+  // escapeFormulae: a description like "=HYPERLINK(…)" must not run when the file is opened in a spreadsheet.
+  return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows }, { newline: "\r\n", escapeFormulae: true }) + "\r\n";
 }
 
 /** One line a part, for tables and pickers. */

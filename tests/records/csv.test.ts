@@ -66,4 +66,15 @@ describe("parts CSV import", () => {
     const b = parsePartsCsv(partsToCsv(a)).parts;
     expect(b.map(({ row, ...p }) => p)).toEqual(a.map(({ row, ...p }) => p));
   });
+
+  it("guards cells a spreadsheet would run as formulas, and reads them back unchanged", () => {
+    const csv = [HEADER, 'rodEnd,R-2,"=HYPERLINK(""http://x.invalid"",""open"")",3/8-24,RH,0.375,8800', "rodEnd,R-3,@SUM(A1),3/8-24,RH,0.375,8800"].join("\n");
+    const a = parsePartsCsv(csv).parts;
+    expect(a.map((p) => p.description)).toEqual(['=HYPERLINK("http://x.invalid","open")', "@SUM(A1)"]);
+    const out = partsToCsv(a);
+    expect(out).toContain(`"'=HYPERLINK(`);
+    expect(out).toContain("'@SUM(A1)");
+    expect(out.split("\r\n").some((line) => /(^|,)"?[=@]/.test(line))).toBe(false);
+    expect(parsePartsCsv(out).parts.map((p) => p.description)).toEqual(a.map((p) => p.description));
+  });
 });

@@ -9,6 +9,6 @@ export const GET = withBuild("read", async ({ build }) => {
   const csv = Papa.unparse({
     fields: ["kind", "description", "partNumber", "quantity", "state", "usedIn"],
     data: lines.map((l) => [l.kind, l.description, l.partNumber ?? "", l.quantity, HARDWARE_STATE_LABEL[l.state], l.usedIn.map((u) => `${u.linkageName}: ${u.where}`).join(" | ")]),
-  }, { newline: "\r\n" });
+  }, { newline: "\r\n", escapeFormulae: true }); // no cell runs as a spreadsheet formula
   return csvResponse(csv + "\r\n", `${slug(build.name)}-hardware.csv`);
 });
