@@ -1,12 +1,13 @@
 "use client";
 /** A parts library (a person's own, or a build's): sortable table, add a part, CSV import with a row report, CSV export. */
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
+import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { api, ApiFailure } from "@/components/api-client";
 import { Button, Card, EmptyState, Field, Input, Select } from "@/components/ui";
 import { CSV_UNITS, PART_KINDS, PART_KIND_LABEL, SPEC_COLUMNS, describeSpec, partInput, type Part, type PartKind, type RowError } from "@/shared/records/parts";
 import { THREADS } from "@/shared/linkage/schema";
+import { DataTable } from "@/components/DataTable";
 
 type Report = { rows: number; valid: number; imported: number; skipped?: number; errors: RowError[]; delimiter: string };
 const col = createColumnHelper<Part>();
@@ -54,22 +55,7 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
         </EmptyState>
       ) : (
         <Card title={`${table.getFilteredRowModel().rows.length} part${table.getFilteredRowModel().rows.length === 1 ? "" : "s"}`} actions={<Input aria-label="Filter parts" placeholder="Filter…" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-48" />}>
-          <table className="w-full text-left text-sm" data-testid="parts-table">
-            <thead className="text-xs uppercase tracking-wide text-ink-soft">
-              {table.getHeaderGroups().map((hg) => (
-                <tr key={hg.id}>{hg.headers.map((h) => (
-                  <th key={h.id} className="py-1 pr-3 font-medium" aria-sort={h.column.getIsSorted() === "asc" ? "ascending" : h.column.getIsSorted() === "desc" ? "descending" : undefined}>
-                    {h.column.getCanSort() ? <button type="button" className="hover:text-ink" onClick={h.column.getToggleSortingHandler()}>{flexRender(h.column.columnDef.header, h.getContext())}{h.column.getIsSorted() === "asc" ? " ▲" : h.column.getIsSorted() === "desc" ? " ▼" : ""}</button> : flexRender(h.column.columnDef.header, h.getContext())}
-                  </th>
-                ))}</tr>
-              ))}
-            </thead>
-            <tbody>
-              {table.getRowModel().rows.map((r) => (
-                <tr key={r.id} className="border-t border-ink/10" data-testid="part-row">{r.getVisibleCells().map((c) => <td key={c.id} className="py-1.5 pr-3 align-top">{flexRender(c.column.columnDef.cell, c.getContext())}</td>)}</tr>
-              ))}
-            </tbody>
-          </table>
+          <DataTable table={table} testId="parts-table" rowTestId="part-row" />
         </Card>
       )}
     </div>

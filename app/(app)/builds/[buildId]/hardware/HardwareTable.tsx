@@ -1,11 +1,12 @@
 "use client";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type ColumnFiltersState, type SortingState } from "@tanstack/react-table";
+import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type ColumnFiltersState, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import { api } from "@/components/api-client";
 import { Card, EmptyState, Input, Select } from "@/components/ui";
 import { HARDWARE_STATES, HARDWARE_STATE_LABEL, type HardwareLine, type HardwareState } from "@/shared/records/hardware";
+import { DataTable } from "@/components/DataTable";
 
 type Line = HardwareLine & { state: HardwareState; stateBy: string | null; stateAt: string | null };
 const KIND_LABEL: Record<string, string> = { rodEnd: "Rod end", jamNut: "Jam nut", bolt: "Bolt", nut: "Nut", washer: "Washer", cotterPin: "Cotter pin" };
@@ -89,22 +90,7 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
             <Input aria-label="Filter hardware" placeholder="Filter…" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-44" />
           </>}
         >
-          <table className="w-full text-left text-sm" data-testid="hardware-table">
-            <thead className="text-xs uppercase tracking-wide text-ink-soft">
-              {table.getHeaderGroups().map((hg) => (
-                <tr key={hg.id}>{hg.headers.map((h) => (
-                  <th key={h.id} className="py-1 pr-3 font-medium" aria-sort={h.column.getIsSorted() === "asc" ? "ascending" : h.column.getIsSorted() === "desc" ? "descending" : undefined}>
-                    {h.column.getCanSort() ? <button type="button" className="hover:text-ink" onClick={h.column.getToggleSortingHandler()}>{flexRender(h.column.columnDef.header, h.getContext())}{h.column.getIsSorted() === "asc" ? " ▲" : h.column.getIsSorted() === "desc" ? " ▼" : ""}</button> : flexRender(h.column.columnDef.header, h.getContext())}
-                  </th>
-                ))}</tr>
-              ))}
-            </thead>
-            <tbody>
-              {table.getRowModel().rows.map((r) => (
-                <tr key={r.id} className="border-t border-ink/10" data-testid="hardware-row">{r.getVisibleCells().map((c) => <td key={c.id} className="py-1.5 pr-3 align-top">{flexRender(c.column.columnDef.cell, c.getContext())}</td>)}</tr>
-              ))}
-            </tbody>
-          </table>
+          <DataTable table={table} testId="hardware-table" rowTestId="hardware-row" />
           {table.getRowModel().rows.length === 0 ? <p className="py-4 text-center text-ink-soft">Nothing matches these filters.</p> : null}
         </Card>
       )}
