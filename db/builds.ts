@@ -3,6 +3,9 @@ import { createHash, randomBytes } from "node:crypto";
 import type { Knex } from "knex";
 import { db } from "./index";
 import { audit } from "./audit";
+import { refreshCurrentAnalyses } from "./linkages";
+import type { LinkageGraph } from "@/shared/linkage/schema";
+import type { Report } from "@/shared/analysis/types";
 import type { Role } from "@/shared/roles";
 
 export type BuildRow = {
@@ -67,14 +70,31 @@ export async function createBuild(userId: string, b: { name: string; model: stri
   });
 }
 
-export async function updateBuild(buildId: string, userId: string, patch: Partial<{ name: string; model: string; registration: string | null; analysisSettings: Record<string, unknown> }>) {
-  const values: Record<string, unknown> = { updated_at: db.fn.now() };
+/**
+ * Updates the build. With `reanalyze`, the stored analysis of every linkage's current revision is
+ * computed again in the same transaction (new settings and their results land together or not at all).
+ */
+export async function updateBuild(
+  buildId: string,
+  userId: string,
+  patch: Partial<{ name: string; model: string; registration: string | null; analysisSettings: Record<string, unknown> }>,
+  reanalyze?: (graph: LinkageGraph) => Report,
+) {
+  return db.transaction(async (trx) => {
+    const build = await updateBuildIn(trx, buildId, userId, patch);
+    if (reanalyze) await refreshCurrentAnalyses(buildId, reanalyze, trx);
+    return build;
+  });
+}
+
+async function updateBuildIn(trx: Knex, buildId: string, userId: string, patch: Parameters<typeof updateBuild>[2]) {
+  const values: Record<string, unknown> = { updated_at: trx.fn.now() };
   if (patch.name !== undefined) values.name = patch.name;
   if (patch.model !== undefined) values.model = patch.model;
   if (patch.registration !== undefined) values.registration = patch.registration || null;
   if (patch.analysisSettings !== undefined) values.analysis_settings = JSON.stringify(patch.analysisSettings);
-  const [row] = await db<BuildRow>("builds").where({ id: buildId }).update(values).returning("*");
-  await audit({ buildId, userId, action: "build.update", detail: { fields: Object.keys(patch) } });
+  const [row] = await trx<BuildRow>("builds").where({ id: buildId }).update(values).returning("*");
+  await audit({ buildId, userId, action: "build.update", detail: { fields: Object.keys(patch) } }, trx);
   return toBuild(row);
 }
 

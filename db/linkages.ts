@@ -1,4 +1,5 @@
 import "server-only";
+import type { Knex } from "knex";
 import { db } from "./index";
 import { audit } from "./audit";
 import { emptyGraph, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
@@ -152,15 +153,15 @@ export async function countRevisions(linkageId: string) {
  * After the build's design settings change, the stored analysis of each linkage's current revision
  * is computed again with the new settings (older revisions keep the analysis they were saved with).
  */
-export async function refreshCurrentAnalyses(buildId: string, run: (graph: LinkageGraph) => Report) {
-  const rows = await db("linkages as l")
+export async function refreshCurrentAnalyses(buildId: string, run: (graph: LinkageGraph) => Report, trx: Knex = db) {
+  const rows = await trx("linkages as l")
     .join("linkage_revisions as r", function () {
       this.on("r.linkage_id", "l.id").andOn("r.revision", "l.current_revision");
     })
     .where("l.build_id", buildId)
     .select("r.id", "r.graph");
   for (const r of rows as { id: string; graph: LinkageGraph }[]) {
-    await db("linkage_revisions").where({ id: r.id }).update({ analysis: JSON.stringify(run(r.graph)) });
+    await trx("linkage_revisions").where({ id: r.id }).update({ analysis: JSON.stringify(run(r.graph)) });
   }
   return rows.length;
 }

@@ -1,7 +1,6 @@
 import { withBuild, parseBody, json } from "@/lib/http";
 import { buildPatch } from "@/shared/api";
 import { deleteBuild, updateBuild } from "@/db/builds";
-import { refreshCurrentAnalyses } from "@/db/linkages";
 import { analyze, settingsSchema } from "@/shared/analysis";
 import { deleteObject } from "@/lib/storage";
 
@@ -12,10 +11,9 @@ export const PATCH = withBuild("manage", async ({ req, user, build }) => {
   const stored = settingsSchema.parse(build.analysisSettings ?? {});
   const patch = body.analysisSettings;
   const analysisSettings = patch ? settingsSchema.parse({ ...stored, ...patch, pilotForce: { ...stored.pilotForce, ...patch.pilotForce } }) : undefined;
-  const updated = await updateBuild(build.id, user.id, { ...body, analysisSettings });
   // New factors or forces change every number: the current revisions are checked again with them.
-  if (analysisSettings) await refreshCurrentAnalyses(build.id, (graph) => analyze(graph, analysisSettings));
-  return json({ build: updated });
+  const reanalyze = analysisSettings ? (graph: Parameters<typeof analyze>[0]) => analyze(graph, analysisSettings) : undefined;
+  return json({ build: await updateBuild(build.id, user.id, { ...body, analysisSettings }, reanalyze) });
 });
 
 export const DELETE = withBuild("manage", async ({ build }) => {
