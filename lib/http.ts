@@ -4,6 +4,8 @@ import type { z } from "zod";
 import { ApiError, invalid, notFound, unauthorized, forbidden } from "./errors";
 import { getSessionUser, type SessionUser } from "./auth";
 import { getMembership, type Build } from "@/db/builds";
+import { getRevision } from "@/db/linkages";
+import { revisionQuery } from "@/shared/api";
 import { can, type Capability, type Role, CAPABILITIES } from "@/shared/roles";
 
 export const MAX_BODY_BYTES = 5 * 1024 * 1024;
@@ -122,3 +124,11 @@ export function withBuild<P extends { buildId: string } = { buildId: string }>(
 
 export const json = (data: unknown, status = 200) => NextResponse.json(data, { status });
 export { CAPABILITIES };
+
+/** The revision a request names with `?revision=N` (the current one when absent); 404 when there is none. */
+export async function requestedRevision(req: NextRequest, linkageId: string) {
+  const q = req.nextUrl.searchParams.get("revision");
+  const rev = await getRevision(linkageId, q === null ? undefined : parseParams(q, revisionQuery));
+  if (!rev) throw notFound("revision");
+  return rev;
+}

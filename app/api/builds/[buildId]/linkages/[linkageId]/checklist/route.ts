@@ -1,6 +1,5 @@
-import { revisionQuery } from "@/shared/api";
-import { withBuild, parseBody, parseParams, json } from "@/lib/http";
-import { ApiError, notFound } from "@/lib/errors";
+import { withBuild, parseBody, json, requestedRevision } from "@/lib/http";
+import { ApiError } from "@/lib/errors";
 import { getRevision } from "@/db/linkages";
 import { listTicks, setTick } from "@/db/checklist";
 import { audit } from "@/db/audit";
@@ -13,9 +12,7 @@ type P = { buildId: string; linkageId: string };
 /** The checklist generated from a revision (current by default, `?revision=N`), with its ticks and notes. */
 export const GET = withBuild<P>("read", async ({ req, build, params }) => {
   const linkage = await requireLinkage(build.id, params.linkageId);
-  const q = req.nextUrl.searchParams.get("revision");
-  const rev = await getRevision(linkage.id, q === null ? undefined : parseParams(q, revisionQuery));
-  if (!rev) throw notFound("revision");
+  const rev = await requestedRevision(req, linkage.id);
   const ticks = await listTicks(linkage.id, rev.revision);
   const byKey = new Map(ticks.map((t) => [`${t.jointId}|${t.code}`, t]));
   const items = checklistFor(rev.graph).map((i) => {

@@ -1,7 +1,7 @@
-import { withBuild, parseParams } from "@/lib/http";
+import { withBuild, parseParams, requestedRevision } from "@/lib/http";
 import { notFound } from "@/lib/errors";
-import { revisionQuery, uuidParam } from "@/shared/api";
-import { getLinkage, getRevision } from "@/db/linkages";
+import { uuidParam } from "@/shared/api";
+import { getLinkage } from "@/db/linkages";
 import { serializeLinkage } from "@/shared/linkage/io";
 
 type P = { buildId: string; linkageId: string };
@@ -11,9 +11,7 @@ export const GET = withBuild<P>("read", async ({ req, build, params }) => {
   const id = parseParams(params.linkageId, uuidParam);
   const linkage = await getLinkage(build.id, id);
   if (!linkage) throw notFound("linkage");
-  const q = req.nextUrl.searchParams.get("revision");
-  const rev = await getRevision(id, q === null ? undefined : parseParams(q, revisionQuery));
-  if (!rev) throw notFound("revision");
+  const rev = await requestedRevision(req, id);
   const base = (linkage.name || "linkage").toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60) || "linkage";
   return new Response(serializeLinkage({ ...rev.graph, name: linkage.name, system: linkage.system }), {
     headers: {

@@ -1,6 +1,6 @@
-import { withBuild, parseBody, parseParams, json } from "@/lib/http";
+import { withBuild, parseBody, parseParams, json, requestedRevision } from "@/lib/http";
 import { ApiError, notFound } from "@/lib/errors";
-import { graphPut, revisionQuery, uuidParam } from "@/shared/api";
+import { graphPut, uuidParam } from "@/shared/api";
 import { getLinkage, getRevision, saveRevision } from "@/db/linkages";
 import { analyze } from "@/shared/analysis";
 import { afterRevisionSaved } from "@/lib/review";
@@ -11,10 +11,7 @@ type P = { buildId: string; linkageId: string };
 export const GET = withBuild<P>("read", async ({ req, build, params }) => {
   const id = parseParams(params.linkageId, uuidParam);
   if (!(await getLinkage(build.id, id))) throw notFound("linkage");
-  const q = req.nextUrl.searchParams.get("revision");
-  const revision = q === null ? undefined : parseParams(q, revisionQuery);
-  const rev = await getRevision(id, revision);
-  if (!rev) throw notFound("revision");
+  const rev = await requestedRevision(req, id);
   return json(rev);
 });
 
