@@ -1,5 +1,8 @@
 import "server-only";
-import { PDFDocument, StandardFonts, rgb, type PDFFont, type PDFPage, type PDFImage } from "pdf-lib";
+import { readFile } from "node:fs/promises";
+import path from "node:path";
+import fontkit from "@pdf-lib/fontkit";
+import { PDFDocument, rgb, type PDFFont, type PDFPage, type PDFImage } from "pdf-lib";
 import { fileKeys, getRevisionPictureRow } from "@/db/files";
 import { getRevision } from "@/db/linkages";
 import type { LogEntry, LogFilter } from "@/db/log";
@@ -17,13 +20,23 @@ const SOFT = rgb(0.4, 0.43, 0.47);
 const CAUTION = rgb(0.62, 0.38, 0.02);
 const HAZARD = rgb(0.72, 0.12, 0.1);
 
-/** The standard PDF fonts speak WinAnsi only: map the few other characters we write, drop the rest. */
-export function winAnsi(s: string): string {
-  return s
-    .replace(/↔/g, "<->").replace(/[≥]/g, ">=").replace(/[≤]/g, "<=").replace(/[−–]/g, "-").replace(/[“”]/g, '"').replace(/[‘’]/g, "'")
-    .replace(/\u00a0/g, " ").replace(/[\t\r]/g, " ")
-    // eslint-disable-next-line no-control-regex
-    .replace(/[^\x0a\x20-\x7e\u00a0-\u00ff—·•…€™]/g, "?");
+/**
+ * The PDFs embed DejaVu Sans (an open font shipped by the dejavu-fonts-ttf package), so names in any
+ * Latin, Greek or Cyrillic script and signs such as ↔ ≥ ± ° × print as typed. A character the font has
+ * no glyph for (an emoji, say) prints as "?".
+ */
+const FONT_DIR = path.join(process.cwd(), "node_modules", "dejavu-fonts-ttf", "ttf");
+let fontFiles: Promise<[Buffer, Buffer]> | null = null;
+const loadFonts = () => (fontFiles ??= Promise.all([readFile(path.join(FONT_DIR, "DejaVuSans.ttf")), readFile(path.join(FONT_DIR, "DejaVuSans-Bold.ttf"))]));
+
+export function printable(s: string, font: PDFFont): string {
+  const glyphs = new Set(font.getCharacterSet());
+  let out = "";
+  for (const ch of s.replace(/[\t\r]/g, " ")) {
+    const cp = ch.codePointAt(0)!;
+    out += cp === 10 || glyphs.has(cp) ? ch : "?";
+  }
+  return out;
 }
 
 class Doc {
@@ -39,8 +52,10 @@ class Doc {
     this.pdf.setTitle(this.title);
     this.pdf.setProducer("Linkwright");
     this.pdf.setCreator("Linkwright");
-    this.font = await this.pdf.embedFont(StandardFonts.Helvetica);
-    this.bold = await this.pdf.embedFont(StandardFonts.HelveticaBold);
+    this.pdf.registerFontkit(fontkit);
+    const [regular, bold] = await loadFonts();
+    this.font = await this.pdf.embedFont(regular, { subset: true });
+    this.bold = await this.pdf.embedFont(bold, { subset: true });
     this.newPage();
     return this;
   }
@@ -55,7 +70,7 @@ class Doc {
   }
   wrap(text: string, size: number, font: PDFFont, width: number): string[] {
     const out: string[] = [];
-    for (const para of winAnsi(text).split("\n")) {
+    for (const para of printable(text, this.font).split("\n")) {
       let line = "";
       for (const word of para.split(/ +/)) {
         const next = line ? `${line} ${word}` : word;
@@ -108,7 +123,7 @@ class Doc {
       this.ensure(h);
       sized.forEach((s, k) => {
         s.draw(this.y);
-        this.page.drawText(this.wrap(s.caption, 7, this.font, cellW)[0] ?? "", { x: M + k * (cellW + gap), y: this.y - s.h - 9, size: 7, font: this.font, color: SOFT });
+        this.page.drawText(this.wrap(printable(s.caption, this.font), 7, this.font, cellW)[0] ?? "", { x: M + k * (cellW + gap), y: this.y - s.h - 9, size: 7, font: this.font, color: SOFT });
       });
       this.y -= h + 4;
     }
@@ -118,7 +133,7 @@ class Doc {
     this.pages.forEach((p, i) => {
       const lines = this.wrap(`Caution. ${CAUTION_TEXT}`, 7, this.font, PAGE.w - 2 * M);
       lines.forEach((l, k) => p.drawText(l, { x: M, y: M + 30 - k * 9, size: 7, font: this.font, color: CAUTION }));
-      p.drawText(`${winAnsi(this.title)} · page ${i + 1} of ${n}`, { x: M, y: M - 14, size: 7, font: this.font, color: SOFT });
+      p.drawText(`${printable(this.title, this.font)} · page ${i + 1} of ${n}`, { x: M, y: M - 14, size: 7, font: this.font, color: SOFT });
     });
     return this.pdf.save();
   }

@@ -250,6 +250,18 @@ describe("build log", () => {
     expect(squash(text)).toContain(squash(CAUTION_TEXT));
     expect(pdfImages(res.bytes)).toBeGreaterThanOrEqual(2); // the photo and the revision picture
   });
+
+  it("prints names and signs beyond Latin-1 as typed (embedded font), and an emoji as ?", async () => {
+    const title = "Łukasz fitted the Höhenruder horn ↔ pushrod, ±0.5° play, ≥ 2 threads";
+    const r = await owner.request("POST", `${B()}/log`, { date: "2026-09-15", hours: 0.5, title, text: "Ωmega check 🛩 done", systems: ["pitch"] });
+    expect(r.status).toBe(201);
+    const res = await fetchBytes(viewer, `${B()}/log/pdf?from=2026-09-15&to=2026-09-15`);
+    expect(res.status).toBe(200);
+    const text = pdfText(res.bytes);
+    expect(squash(text)).toContain(squash(title));
+    expect(text).toContain("Ωmega check ? done");
+    renderPdf(res.bytes, "log-unicode");
+  });
 });
 
 describe("hardware list and checklist", () => {
