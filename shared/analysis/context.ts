@@ -91,6 +91,7 @@ function roleOf(a: LinkageNode, pa: string, b: LinkageNode, pb: string): JointRo
   return "link";
 }
 
+/** How a message names a part: its label as the builder typed it (the finding's subject carries the id). */
 export function nodeLabel(n: LinkageNode): string {
-  return n.label ? `${n.label} (${n.id})` : n.id;
+  return n.label ? `"${n.label}"` : n.id;
 }
