@@ -5,21 +5,26 @@ import {
   Background,
   BackgroundVariant,
   ConnectionMode,
+  ControlButton,
   Controls,
   MiniMap,
+  Position,
   ReactFlow,
   getNodesBounds,
-  useNodesInitialized,
+  getViewportForBounds,
   useReactFlow,
+  useStoreApi,
   type Connection,
   type EdgeChange,
   type IsValidConnection,
   type NodeChange,
+  type NodeHandle,
   type Viewport,
 } from "@xyflow/react";
 import type { NodeKind } from "@/shared/linkage/schema";
 import { useEditorConfig, useEditorStore, useEditorStoreApi } from "./context";
-import { nodeTypes, type PartFlowNode } from "./nodes";
+import { cardSize, nodeTypes, type PartFlowNode } from "./nodes";
+import { portBoxes } from "./nodes/geometry";
 import { edgeTypes, SEVERITY_HEX, type JointFlowEdge } from "./joints/JointEdge";
 import type { EditorState, SubjectRef } from "./store";
 import { FIT, focusZoom, openingViewport } from "./view";
@@ -32,7 +37,6 @@ export const GRID = 10;
 // an inline literal here costs a full store pass on every render of the canvas, i.e. every drag frame.
 const SNAP_GRID: [number, number] = [GRID, GRID];
 const DEFAULT_EDGE_OPTIONS = { type: "joint" } as const;
-const CONTROLS_FIT = { padding: FIT.padding, maxZoom: FIT.maxZoom, minZoom: 0.05, duration: 200 } as const;
 
 type NodeCacheEntry = { src: EditorState["nodes"][number]; sel: boolean; m: EditorState["measured"][string] | undefined; ro: boolean; rf: PartFlowNode };
 type EdgeCacheEntry = { src: EditorState["joints"][number]; sel: boolean; rf: JointFlowEdge };
@@ -52,7 +56,21 @@ function useFlowNodes(readOnly: boolean): PartFlowNode[] {
         next.set(n.id, c);
         return c.rf;
       }
-      const rf: PartFlowNode = { id: n.id, type: n.kind, position: n.position, data: { node: n }, selected: isSel, measured: m, draggable: !readOnly };
+      // Only the parts in view are mounted (onlyRenderVisibleElements); until a part has been measured its
+      // size and ports come from the card's layout, so joints to parts off screen are drawn all the same.
+      const size = cardSize(n);
+      const rf: PartFlowNode = {
+        id: n.id,
+        type: n.kind,
+        position: n.position,
+        data: { node: n },
+        selected: isSel,
+        measured: m,
+        initialWidth: size.width,
+        initialHeight: size.height,
+        handles: m ? undefined : portHandles(n.kind, size),
+        draggable: !readOnly,
+      };
       next.set(n.id, { src: n, sel: isSel, m, ro: readOnly, rf });
       return rf;
     });
@@ -60,6 +78,11 @@ function useFlowNodes(readOnly: boolean): PartFlowNode[] {
     return out;
   }, [nodes, selected, measured, readOnly]);
 }
+
+function portHandles(kind: PartFlowNode["type"] & string, size: { width: number; height: number }): NodeHandle[] {
+  return portBoxes(kind as never, size).map((b) => ({ id: b.id, type: "source", position: SIDE_POSITION[b.side], x: b.x, y: b.y, width: b.width, height: b.height }));
+}
+const SIDE_POSITION = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom } as const;
 
 function useFlowEdges(): JointFlowEdge[] {
   const { joints, selected } = useEditorStore((s) => ({ joints: s.joints, selected: s.selection.joints }));
@@ -97,7 +120,7 @@ export function subjectCentre(s: Pick<EditorState, "nodes" | "joints" | "measure
   const centre = (id: string) => {
     const n = s.nodes.find((x) => x.id === id);
     if (!n) return null;
-    const m = s.measured[id] ?? { width: 148, height: 50 };
+    const m = s.measured[id] ?? cardSize(n);
     return { x: n.position.x + m.width / 2, y: n.position.y + m.height / 2 };
   };
   if (subject.type === "node") return centre(subject.id);
@@ -108,6 +131,34 @@ export function subjectCentre(s: Pick<EditorState, "nodes" | "joints" | "measure
     if (a && b) return { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
   }
   return null;
+}
+
+/** The flow-space box around every part: stored positions, measured sizes or, unmeasured, the card layout. */
+export function linkageBounds(s: Pick<EditorState, "nodes" | "measured">) {
+  return getNodesBounds(s.nodes.map((n) => ({ id: n.id, position: n.position, data: {}, measured: s.measured[n.id] ?? cardSize(n) })));
+}
+
+/** "Fit" (button, F key, after an import): the whole linkage in view (padding 0.15, at most 1.25×). */
+export const FIT_ALL = { padding: FIT.padding, maxZoom: FIT.maxZoom, minZoom: 0.05 } as const;
+
+/**
+ * Fit the whole linkage. Computed here rather than with React Flow's fitView, which waits until every
+ * part has been measured: the canvas mounts only the parts in view, so on a long run that never happens.
+ */
+export function useFitAll() {
+  const api = useEditorStoreApi();
+  const flow = useStoreApi();
+  const rf = useReactFlow();
+  return useCallback(
+    (o?: { duration?: number }) => {
+      const s = api.getState();
+      const { width, height } = flow.getState();
+      if (s.nodes.length === 0 || !width || !height) return;
+      const v = getViewportForBounds(linkageBounds(s), width, height, FIT_ALL.minZoom, FIT_ALL.maxZoom, FIT_ALL.padding);
+      void rf.setViewport(v, { duration: o?.duration });
+    },
+    [api, flow, rf],
+  );
 }
 
 /** Select a subject and bring it to the middle of the canvas. */
@@ -126,28 +177,28 @@ export function useFocusSubject() {
 }
 
 /**
- * The first view, once every part has its size: the deep-linked subject centred (and selected), or the
- * whole linkage fitted with labels kept readable (editor/view.ts). The canvas stays hidden until then so
+ * The first view: the deep-linked subject centred (and selected), or the whole linkage fitted with labels
+ * kept readable (editor/view.ts). Part sizes come from the card layout, so this does not wait for the
+ * browser to measure every part (only those in view are mounted). The canvas stays hidden until then so
  * it does not jump.
  */
 function useOpeningView(wrap: React.RefObject<HTMLDivElement | null>, opening: SubjectRef | null | undefined) {
   const api = useEditorStoreApi();
   const rf = useReactFlow();
-  const initialized = useNodesInitialized();
   const focus = useFocusSubject();
   // An empty linkage keeps 1:1 so drops land where aimed.
   const [ready, setReady] = useState(() => api.getState().nodes.length === 0);
   useEffect(() => {
-    if (ready || !initialized) return;
+    if (ready) return;
     const r = wrap.current?.getBoundingClientRect();
     if (!r || r.width === 0 || r.height === 0) return;
-    const v = openingViewport(getNodesBounds(rf.getNodes()), r.width, r.height);
+    const v = openingViewport(linkageBounds(api.getState()), r.width, r.height);
     void rf.setViewport(v);
     api.getState().setViewport(v);
     if (opening) focus(opening, { duration: 0, zoom: focusZoom(v.zoom) });
     setReady(true);
-  }, [ready, initialized, wrap, rf, api, opening, focus]);
-  // Never leave the canvas hidden if measuring takes unusually long.
+  }, [ready, wrap, rf, api, opening, focus]);
+  // Never leave the canvas hidden if the canvas takes unusually long to get its size.
   useEffect(() => {
     if (ready) return;
     const t = setTimeout(() => setReady(true), 2000);
@@ -164,6 +215,7 @@ export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
   const rf = useReactFlow();
   const wrap = useRef<HTMLDivElement>(null);
   const ready = useOpeningView(wrap, opening);
+  const fitAll = useFitAll();
 
   const onNodesChange = useCallback(
     (changes: NodeChange<PartFlowNode>[]) => {
@@ -272,10 +324,15 @@ export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
         maxZoom={3}
         connectionRadius={28}
         defaultEdgeOptions={DEFAULT_EDGE_OPTIONS}
+        onlyRenderVisibleElements
       >
         <Background variant={BackgroundVariant.Dots} gap={GRID * 2} size={1} color="#cfd4da" />
         <MiniMap<PartFlowNode> pannable zoomable nodeColor={minimapColor} className="!bg-white/90" />
-        <Controls showInteractive={false} fitViewOptions={CONTROLS_FIT} />
+        <Controls showInteractive={false} showFitView={false}>
+          <ControlButton onClick={() => fitAll({ duration: 200 })} title="Fit the whole linkage in view (F)" aria-label="Fit the whole linkage in view">
+            <svg viewBox="0 0 16 16" aria-hidden="true"><path d="M2 6V2h4M10 2h4v4M14 10v4h-4M6 14H2v-4" fill="none" stroke="currentColor" strokeWidth="1.6" /></svg>
+          </ControlButton>
+        </Controls>
       </ReactFlow>
     </div>
   );

@@ -14,7 +14,7 @@ import type { AnalysisSettings } from "@/shared/analysis/types";
 import { analyze } from "@/shared/analysis";
 import { EditorConfigContext, EditorStoreContext } from "./context";
 import { createEditorStore, toGraph, type EditorStore } from "./store";
-import Canvas, { GRID } from "./Canvas";
+import Canvas, { GRID, useFitAll } from "./Canvas";
 import { nodeLines } from "./nodes";
 import PartsTray from "./panels/PartsTray";
 import Inspector, { type ReviewSlot } from "./panels/Inspector";
@@ -23,7 +23,7 @@ import { useAutosave, type SaveStatus } from "./useAutosave";
 import { downloadBlob, exportLinkagePng, fileSafe } from "./export";
 import { ConflictDialog } from "./panels/ConflictDialog";
 import { ShortcutsSheet } from "./panels/ShortcutsSheet";
-import { FIT, readDeepLink } from "./view";
+import { readDeepLink } from "./view";
 import { uploadFile } from "@/components/records/upload-client";
 
 export type LinkageEditorProps = {
@@ -44,7 +44,6 @@ export type LinkageEditorProps = {
 };
 
 /** The Fit button and F: the whole linkage, however small it gets. */
-const FIT_ALL = { padding: FIT.padding, maxZoom: FIT.maxZoom, minZoom: 0.05 } as const;
 
 export function pictureUrl(buildId: string, linkageId: string, revision: number) {
   return `/api/builds/${encodeURIComponent(buildId)}/linkages/${encodeURIComponent(linkageId)}/revisions/${revision}/picture`;
@@ -145,6 +144,7 @@ function PictureStatus({ state, onDismiss }: { state: PicturePhase; onDismiss: (
 function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
   const { store, canEdit, buildName, linkageName, system } = props;
   const rf = useReactFlow();
+  const fitAll = useFitAll();
   const rootRef = useRef<HTMLDivElement>(null);
   const fileRef = useRef<HTMLInputElement>(null);
   const [sheet, setSheet] = useState(false);
@@ -195,9 +195,9 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
       setImportErrors(null);
       store.getState().replaceGraph(r.graph);
       store.getState().setNotice(`Imported ${r.graph.nodes.length} parts and ${r.graph.joints.length} joints from ${file.name} (undo to go back).`);
-      setTimeout(() => rf.fitView(FIT_ALL), 50);
+      setTimeout(() => fitAll(), 50);
     },
-    [store, rf],
+    [store, fitAll],
   );
 
   /** The picture of the whole linkage with its title block, as it is in the store now. */
@@ -294,7 +294,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         return;
       }
       if (mod && k === "c") return s.copy();
-      if (!mod && k === "f") return void rf.fitView({ ...FIT_ALL, duration: 200 });
+      if (!mod && k === "f") return void fitAll({ duration: 200 });
       if (e.key === "]" || e.key === "[") {
         e.preventDefault();
         if (s.nodes.length === 0) return;
@@ -330,7 +330,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
     };
     window.addEventListener("keydown", onKey);
     return () => window.removeEventListener("keydown", onKey);
-  }, [store, rf, canEdit, autosave, sheet]);
+  }, [store, rf, fitAll, canEdit, autosave, sheet]);
 
   const s = store.getState;
   return (
@@ -369,7 +369,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         <ToolButton onClick={() => s().deleteSelection()} disabled={!canEdit || !hasSel} title="Delete the selection" kbd="Del" data-testid="btn-delete">
           Delete
         </ToolButton>
-        <ToolButton onClick={() => rf.fitView({ ...FIT_ALL, duration: 200 })} title="Fit the whole linkage in view" kbd="F">
+        <ToolButton onClick={() => fitAll({ duration: 200 })} title="Fit the whole linkage in view" kbd="F">
           Fit
         </ToolButton>
         <span className="mx-1 h-5 w-px bg-ink/10" aria-hidden="true" />

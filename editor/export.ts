@@ -6,7 +6,7 @@ import { getBezierPath, getNodesBounds, getViewportForBounds, Position, type Nod
 import { getFontEmbedCSS, toPng } from "html-to-image";
 import type { Severity, Summary } from "@/shared/analysis/types";
 import type { Joint, LinkageNode } from "@/shared/linkage/schema";
-import { PORT_SIDES } from "./nodes";
+import { cardSize, PORT_SIDES } from "./nodes";
 import { hardwareChips, SEVERITY_HEX } from "./joints/JointEdge";
 import { KIND_NAMES } from "./store";
 
@@ -160,7 +160,7 @@ function drawScene(ctx: CanvasRenderingContext2D, nodes: Node[], scene: VectorSc
   for (const rn of nodes) {
     const n = (rn.data as { node?: LinkageNode }).node;
     if (!n) continue;
-    boxes.set(rn.id, { n, box: { x: rn.position.x, y: rn.position.y, w: rn.measured?.width ?? 148, h: rn.measured?.height ?? 50 } });
+    boxes.set(rn.id, { n, box: { x: rn.position.x, y: rn.position.y, w: rn.measured?.width ?? cardSize(n).width, h: rn.measured?.height ?? cardSize(n).height } });
   }
   const labels: { x: number; y: number; j: Joint }[] = [];
   ctx.lineCap = "round";
@@ -254,7 +254,9 @@ export async function exportLinkagePng(opts: { viewportEl: HTMLElement; nodes: N
   ctx.fillStyle = "#ffffff";
   ctx.fillRect(0, 0, W, H);
 
-  if (nodes.length > 0 && scene && viewportEl.getElementsByTagName("*").length > DOM_EXPORT_LIMIT) {
+  // The canvas mounts only the parts in view: when some are not in the DOM, the picture is drawn from the scene.
+  const allMounted = viewportEl.getElementsByClassName("react-flow__node").length >= nodes.length;
+  if (nodes.length > 0 && scene && (!allMounted || viewportEl.getElementsByTagName("*").length > DOM_EXPORT_LIMIT)) {
     const bounds = getNodesBounds(nodes);
     const vp = getViewportForBounds(bounds, W, H, 0.02, 1.5, 0.06);
     ctx.save();

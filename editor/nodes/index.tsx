@@ -11,24 +11,12 @@ import { useEditorConfig, useEditorValue } from "../context";
 import { KIND_NAMES } from "../store";
 import { fmt, toDisplay, unitLabel, type UnitSystem } from "../units";
 import { KindGlyph } from "./glyphs";
+import { CARD_WIDTH, cardHeight, PORT_SIDES, type Side } from "./geometry";
 
 export type PartNodeData = { node: LinkageNode };
 export type PartFlowNode = Node<PartNodeData, NodeKind>;
 
-type Side = "left" | "right" | "top" | "bottom";
-/** Where each port sits on the card. */
-export const PORT_SIDES: Record<NodeKind, Record<string, Side>> = {
-  stick: { attach: "right", pivot: "bottom" },
-  pedal: { attach: "right", pivot: "bottom" },
-  torqueTube: { in: "left", out: "right", pivot: "bottom" },
-  bellcrank: { in: "left", out: "right", pivot: "bottom" },
-  idlerArm: { in: "left", out: "right", pivot: "bottom" },
-  pushrod: { a: "left", b: "right" },
-  controlHorn: { attach: "left", surface: "right" },
-  controlSurface: { horn: "left", hinge: "bottom" },
-  structureMount: { mount: "top" },
-  travelStop: { contact: "top" },
-};
+export { PORT_SIDES };
 const POS: Record<Side, Position> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
 
 export const SEVERITY_BORDER: Record<Severity, string> = {
@@ -123,6 +111,11 @@ const LINES: Partial<Record<NodeKind, (props: never, u: UnitSystem) => string[]>
 /** The key-number lines a part's card shows (also drawn by the picture export). */
 export function nodeLines(node: LinkageNode, u: UnitSystem): string[] {
   return LINES[node.kind]?.(node.props as never, u) ?? [];
+}
+
+/** A part card's size as laid out (editor/nodes/geometry.ts); the line count does not depend on units. */
+export function cardSize(node: LinkageNode): { width: number; height: number } {
+  return { width: CARD_WIDTH, height: cardHeight(nodeLines(node, "US").length) };
 }
 
 function makeNode<K extends NodeKind>(kind: K, lines: (props: Extract<LinkageNode, { kind: K }>["props"], u: UnitSystem) => string[]) {

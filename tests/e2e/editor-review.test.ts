@@ -19,6 +19,8 @@ import { demoPitchLinkage, DEMO_WRONG_JOINT } from "@/shared/demo";
 import { serializeLinkage } from "@/shared/linkage/io";
 import { EXPORT_SIZE } from "@/editor/export";
 import { READABLE_ZOOM } from "@/editor/view";
+import { cardSize } from "@/editor/nodes";
+import { portBoxes } from "@/editor/nodes/geometry";
 
 const dana = DEMO_USERS[0];
 const sam = DEMO_USERS[1];
@@ -94,6 +96,39 @@ describe("the reviewer in the editor", () => {
     expect(Math.abs(badge!.x + badge!.width / 2 - (c!.x + c!.width / 2))).toBeLessThan(40);
     expect(Math.abs(badge!.y + badge!.height / 2 - (c!.y + c!.height / 2))).toBeLessThan(40);
     await shot(samPage, "editor-review-02-deep-link-select");
+  });
+
+  it("lays out every part card and port where editor/nodes/geometry.ts computes them (parts out of view are drawn from those numbers)", async () => {
+    await open(samPage, editorUrl(demoLinkageId));
+    const graph = demoPitchLinkage();
+    const measured = await samPage.evaluate(() => {
+      const t = (document.querySelector(".react-flow__viewport") as HTMLElement).style.transform;
+      const zoom = Number(/scale\(([\d.]+)\)/.exec(t)?.[1] ?? NaN);
+      return Array.from(document.querySelectorAll<HTMLElement>(".react-flow__node")).map((el) => {
+        const r = el.getBoundingClientRect();
+        return {
+          id: el.dataset.id!,
+          width: el.offsetWidth,
+          height: el.offsetHeight,
+          ports: Array.from(el.querySelectorAll<HTMLElement>(".react-flow__handle")).map((h) => {
+            const b = h.getBoundingClientRect();
+            return { id: h.dataset.handleid!, x: (b.left - r.left) / zoom, y: (b.top - r.top) / zoom, width: b.width / zoom, height: b.height / zoom };
+          }),
+        };
+      });
+    });
+    expect(measured.length).toBe(graph.nodes.length);
+    for (const m of measured) {
+      const n = graph.nodes.find((x) => x.id === m.id)!;
+      const size = cardSize(n);
+      expect({ id: m.id, width: m.width, height: m.height }).toEqual({ id: m.id, ...size });
+      const boxes = portBoxes(n.kind, size);
+      expect(m.ports.map((p) => p.id).sort()).toEqual(boxes.map((b) => b.id).sort());
+      for (const p of m.ports) {
+        const b = boxes.find((x) => x.id === p.id)!;
+        for (const k of ["x", "y", "width", "height"] as const) expect(Math.abs(p[k] - b[k]), `${m.id}.${p.id}.${k}`).toBeLessThan(0.6);
+      }
+    }
   });
 
   it("a ?focus=joint: link from review e-mail opens that joint with its thread; an unknown one says so", async () => {
