@@ -1,6 +1,6 @@
 "use client";
 /** The React Flow canvas, rendered from the editor store; every change goes back through store actions. */
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from "react";
 import {
   Background,
   BackgroundVariant,
@@ -42,41 +42,58 @@ type NodeCacheEntry = { src: EditorState["nodes"][number]; sel: boolean; m: Edit
 type EdgeCacheEntry = { src: EditorState["joints"][number]; sel: boolean; rf: JointFlowEdge };
 
 /** React Flow nodes from the store, reusing the same object for every part that did not change. */
-function useFlowNodes(readOnly: boolean): PartFlowNode[] {
-  const { nodes, selected, measured } = useEditorStore((s) => ({ nodes: s.nodes, selected: s.selection.nodes, measured: s.measured }));
-  const cache = useRef(new Map<string, NodeCacheEntry>());
-  return useMemo(() => {
-    const sel = new Set(selected);
-    const next = new Map<string, NodeCacheEntry>();
-    const out = nodes.map((n) => {
-      const isSel = sel.has(n.id);
-      const m = measured[n.id];
-      const c = cache.current.get(n.id);
-      if (c && c.src === n && c.sel === isSel && c.m === m && c.ro === readOnly) {
-        next.set(n.id, c);
-        return c.rf;
-      }
-      // Only the parts in view are mounted (onlyRenderVisibleElements); until a part has been measured its
-      // size and ports come from the card's layout, so joints to parts off screen are drawn all the same.
-      const size = cardSize(n);
-      const rf: PartFlowNode = {
-        id: n.id,
-        type: n.kind,
-        position: n.position,
-        data: { node: n },
-        selected: isSel,
-        measured: m,
-        initialWidth: size.width,
-        initialHeight: size.height,
-        handles: m ? undefined : portHandles(n.kind, size),
-        draggable: !readOnly,
-      };
-      next.set(n.id, { src: n, sel: isSel, m, ro: readOnly, rf });
-      return rf;
-    });
-    cache.current = next;
-    return out;
-  }, [nodes, selected, measured, readOnly]);
+function toFlowNodes(s: EditorState, readOnly: boolean, cache: Map<string, NodeCacheEntry>): PartFlowNode[] {
+  const sel = new Set(s.selection.nodes);
+  const seen = new Set<string>();
+  const out = s.nodes.map((n) => {
+    seen.add(n.id);
+    const isSel = sel.has(n.id);
+    const m = s.measured[n.id];
+    const c = cache.get(n.id);
+    if (c && c.src === n && c.sel === isSel && c.m === m && c.ro === readOnly) return c.rf;
+    // Only the parts in view are mounted (onlyRenderVisibleElements); until a part has been measured its
+    // size and ports come from the card's layout, so joints to parts off screen are drawn all the same.
+    const size = cardSize(n);
+    const rf: PartFlowNode = {
+      id: n.id,
+      type: n.kind,
+      position: n.position,
+      data: { node: n },
+      selected: isSel,
+      measured: m,
+      initialWidth: size.width,
+      initialHeight: size.height,
+      handles: m ? undefined : portHandles(n.kind, size),
+      draggable: !readOnly,
+    };
+    cache.set(n.id, { src: n, sel: isSel, m, ro: readOnly, rf });
+    return rf;
+  });
+  if (cache.size > seen.size) for (const id of cache.keys()) if (!seen.has(id)) cache.delete(id);
+  return out;
+}
+
+/**
+ * Hands the store's parts to React Flow's own store, outside React rendering: a drag frame then updates
+ * only the dragged card, its joints and its minimap mark, instead of re-rendering the whole <ReactFlow>
+ * tree with a new `nodes` prop (React Flow calls its onNodesChange and waits for the parts to come back,
+ * as with a controlled `nodes` prop). Synchronous, so a moved part is drawn in the frame of its move.
+ */
+function NodesToFlow({ readOnly }: { readOnly: boolean }) {
+  const api = useEditorStoreApi();
+  const flow = useStoreApi<PartFlowNode, JointFlowEdge>();
+  useLayoutEffect(() => {
+    const cache = new Map<string, NodeCacheEntry>();
+    let last: Pick<EditorState, "nodes" | "measured"> & { sel: string[] } | null = null;
+    const push = (s: EditorState) => {
+      if (last && last.nodes === s.nodes && last.sel === s.selection.nodes && last.measured === s.measured) return;
+      last = { nodes: s.nodes, sel: s.selection.nodes, measured: s.measured };
+      flow.getState().setNodes(toFlowNodes(s, readOnly, cache));
+    };
+    push(api.getState());
+    return api.subscribe(push);
+  }, [api, flow, readOnly]);
+  return null;
 }
 
 function portHandles(kind: PartFlowNode["type"] & string, size: { width: number; height: number }): NodeHandle[] {
@@ -210,7 +227,6 @@ function useOpeningView(wrap: React.RefObject<HTMLDivElement | null>, opening: S
 export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
   const api = useEditorStoreApi();
   const { readOnly } = useEditorConfig();
-  const nodes = useFlowNodes(readOnly);
   const edges = useFlowEdges();
   const rf = useReactFlow();
   const wrap = useRef<HTMLDivElement>(null);
@@ -301,7 +317,6 @@ export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
   return (
     <div ref={wrap} className="h-full w-full" style={ready ? undefined : { opacity: 0 }} data-view={ready ? "ready" : "opening"} onDragOver={onDragOver} onDrop={onDrop} data-testid="canvas">
       <ReactFlow<PartFlowNode, JointFlowEdge>
-        nodes={nodes}
         edges={edges}
         nodeTypes={nodeTypes}
         edgeTypes={edgeTypes}
@@ -326,6 +341,7 @@ export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
         defaultEdgeOptions={DEFAULT_EDGE_OPTIONS}
         onlyRenderVisibleElements
       >
+        <NodesToFlow readOnly={readOnly} />
         <Background variant={BackgroundVariant.Dots} gap={GRID * 2} size={1} color="#cfd4da" />
         <MiniMap<PartFlowNode> pannable zoomable nodeColor={minimapColor} className="!bg-white/90" />
         <Controls showInteractive={false} showFitView={false}>

@@ -8,10 +8,15 @@
  *
  * The frame interval alone cannot show "under 16 ms": at 60 Hz it never goes below the 16.7 ms vsync,
  * and a frame that needs 20 ms of work shows up as 33.3 ms. So the drag is also traced (CDP Tracing) and
- * for each frame (from one BeginMainFrame on the renderer's main thread to the next) the time the main
- * thread was busy with tasks (input handling, React, rAF, style, layout, paint) is summed.
- * Targets: first render < 2 s; drag: main-thread work per frame p95 < 16 ms and frame interval p50 at the
- * 60 Hz vsync (< 17 ms); export < 1.5 s.
+ * for each frame (from one BeginMainFrame on the renderer's main thread to the next) the main thread's
+ * work (input handling, React, rAF, style, layout, paint) is summed twice: as CPU time of the thread, and
+ * as wall time, which also counts the time the thread was ready but waiting for a core.
+ * Targets: first render < 2 s; drag: main-thread CPU per frame p95 < 16 ms and frame interval p95 at the
+ * 60 Hz vsync (< 17 ms: 95 % of frames on time, none dropped); export < 1.5 s.
+ * The wall time per frame is reported, not judged: on a 2-core machine the renderer's main thread shares
+ * the cores with its compositor and raster threads, the browser and display processes (software drawing,
+ * no GPU) and this script, so it exceeds the CPU time by the time spent waiting; the frame interval shows
+ * whether that wait cost a frame.
  */
 import path from "node:path";
 import { build, preview } from "vite";
@@ -30,7 +35,8 @@ export type EditorBenchResult = {
   dragWorkMedianMs: number;
   dragWorkP95Ms: number;
   dragWorkMaxMs: number;
-  /** The same as main-thread CPU time (p95). */
+  /** Main-thread CPU time per frame while dragging (from the trace). */
+  dragCpuMedianMs: number;
   dragCpuP95Ms: number;
   /** Frames whose main-thread work was 16 ms or more. */
   dragFramesOver16: number;
@@ -220,6 +226,7 @@ export async function run(): Promise<{ ok: boolean; result: EditorBenchResult }>
       dragWorkMedianMs: Number(pct(work, 50).toFixed(1)),
       dragWorkP95Ms: Number(pct(work, 95).toFixed(1)),
       dragWorkMaxMs: Number(Math.max(0, ...work).toFixed(1)),
+      dragCpuMedianMs: Number((pct(cpu, 50) ?? 0).toFixed(1)),
       dragCpuP95Ms: Number((pct(cpu, 95) ?? 0).toFixed(1)),
       dragFramesOver16: work.filter((w) => w >= 16).length,
       dragMoves: k,
@@ -228,23 +235,23 @@ export async function run(): Promise<{ ok: boolean; result: EditorBenchResult }>
     };
     const checks = {
       firstRender: result.firstRenderMs < 2000,
-      work: work.length > 0 && result.dragWorkP95Ms < 16,
-      interval: result.dragFrameMedianMs < 17,
+      work: cpu.length > 0 && result.dragCpuP95Ms < 16,
+      interval: result.dragFrameP95Ms < 17,
       export: result.exportMs < 1500,
     };
     const ok = checks.firstRender && checks.work && checks.interval && checks.export;
     const yes = (b: boolean) => (b ? "yes" : "NO");
     console.table([
       { measure: "first render, 500 parts", value: `${result.firstRenderMs} ms`, target: "< 2000 ms", holds: yes(checks.firstRender) },
-      { measure: "drag: main-thread work per frame p50", value: `${result.dragWorkMedianMs} ms`, target: "reported", holds: "" },
-      { measure: "drag: main-thread work per frame p95", value: `${result.dragWorkP95Ms} ms`, target: "< 16 ms", holds: yes(checks.work) },
-      { measure: "drag: main-thread CPU per frame p95", value: `${result.dragCpuP95Ms} ms`, target: "reported (wall time minus waiting for the CPU)", holds: "" },
-      { measure: "drag: frame interval p50", value: `${result.dragFrameMedianMs} ms`, target: "< 17 ms (60 Hz vsync)", holds: yes(checks.interval) },
-      { measure: "drag: frame interval p95", value: `${result.dragFrameP95Ms} ms`, target: "reported (33 ms = a dropped frame)", holds: "" },
+      { measure: "drag: main-thread CPU per frame p50", value: `${result.dragCpuMedianMs} ms`, target: "reported", holds: "" },
+      { measure: "drag: main-thread CPU per frame p95", value: `${result.dragCpuP95Ms} ms`, target: "< 16 ms", holds: yes(checks.work) },
+      { measure: "drag: main-thread wall time per frame p95", value: `${result.dragWorkP95Ms} ms`, target: "reported (CPU time plus waiting for a core)", holds: "" },
+      { measure: "drag: frame interval p50", value: `${result.dragFrameMedianMs} ms`, target: "reported (16.7 ms = 60 Hz vsync)", holds: "" },
+      { measure: "drag: frame interval p95", value: `${result.dragFrameP95Ms} ms`, target: "< 17 ms (33 ms = a dropped frame)", holds: yes(checks.interval) },
       { measure: "PNG export, 200 parts", value: `${result.exportMs} ms`, target: "< 1500 ms", holds: yes(checks.export) },
     ]);
     console.log(
-      `(drag: ${result.dragMoves} pointer moves, ${result.dragFrames} frames, ${work.length} traced frames, ${result.dragFramesOver16} with ≥ 16 ms of main-thread work, worst ${result.dragWorkMaxMs} ms; ` +
+      `(drag: ${result.dragMoves} pointer moves, ${result.dragFrames} frames, ${work.length} traced frames, ${cpu.filter((c) => c >= 16).length} with ≥ 16 ms of main-thread CPU (${result.dragFramesOver16} of wall time), worst ${result.dragWorkMaxMs} ms; ` +
         `first renders ${renders.map((r) => Math.round(r)).join(", ")} ms with ${mounted500} of 500 parts in view and mounted; exports ${exports.join(", ")} ms)`,
     );
     console.log(`editor targets: ${ok ? "all hold" : `missed: ${Object.entries(checks).filter(([, v]) => !v).map(([k]) => k).join(", ")}`}`);
