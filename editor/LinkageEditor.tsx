@@ -43,8 +43,6 @@ export type LinkageEditorProps = {
   fill?: boolean;
 };
 
-/** The Fit button and F: the whole linkage, however small it gets. */
-
 export function pictureUrl(buildId: string, linkageId: string, revision: number) {
   return `/api/builds/${encodeURIComponent(buildId)}/linkages/${encodeURIComponent(linkageId)}/revisions/${revision}/picture`;
 }
