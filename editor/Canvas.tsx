@@ -8,7 +8,6 @@ import {
   ControlButton,
   Controls,
   MiniMap,
-  Position,
   ReactFlow,
   getNodesBounds,
   getViewportForBounds,
@@ -18,13 +17,11 @@ import {
   type EdgeChange,
   type IsValidConnection,
   type NodeChange,
-  type NodeHandle,
   type Viewport,
 } from "@xyflow/react";
 import type { NodeKind } from "@/shared/linkage/schema";
 import { useEditorConfig, useEditorStore, useEditorStoreApi } from "./context";
-import { cardSize, nodeTypes, type PartFlowNode } from "./nodes";
-import { portBoxes } from "./nodes/geometry";
+import { cardSize, layoutHandles, nodeTypes, type PartFlowNode } from "./nodes";
 import { edgeTypes, SEVERITY_HEX, type JointFlowEdge } from "./joints/JointEdge";
 import type { EditorState, SubjectRef } from "./store";
 import { FIT, focusZoom, openingViewport } from "./view";
@@ -63,7 +60,7 @@ function toFlowNodes(s: EditorState, readOnly: boolean, cache: Map<string, NodeC
       measured: m,
       initialWidth: size.width,
       initialHeight: size.height,
-      handles: m ? undefined : portHandles(n.kind, size),
+      handles: m ? undefined : layoutHandles(n.kind, size),
       draggable: !readOnly,
     };
     cache.set(n.id, { src: n, sel: isSel, m, ro: readOnly, rf });
@@ -96,10 +93,6 @@ function NodesToFlow({ readOnly }: { readOnly: boolean }) {
   return null;
 }
 
-function portHandles(kind: PartFlowNode["type"] & string, size: { width: number; height: number }): NodeHandle[] {
-  return portBoxes(kind as never, size).map((b) => ({ id: b.id, type: "source", position: SIDE_POSITION[b.side], x: b.x, y: b.y, width: b.width, height: b.height }));
-}
-const SIDE_POSITION = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom } as const;
 
 function useFlowEdges(): JointFlowEdge[] {
   const { joints, selected } = useEditorStore((s) => ({ joints: s.joints, selected: s.selection.joints }));

@@ -160,7 +160,8 @@ function drawScene(ctx: CanvasRenderingContext2D, nodes: Node[], scene: VectorSc
   for (const rn of nodes) {
     const n = (rn.data as { node?: LinkageNode }).node;
     if (!n) continue;
-    boxes.set(rn.id, { n, box: { x: rn.position.x, y: rn.position.y, w: rn.measured?.width ?? cardSize(n).width, h: rn.measured?.height ?? cardSize(n).height } });
+    const size = rn.measured?.width && rn.measured?.height ? rn.measured : cardSize(n);
+    boxes.set(rn.id, { n, box: { x: rn.position.x, y: rn.position.y, w: size.width!, h: size.height! } });
   }
   const labels: { x: number; y: number; j: Joint }[] = [];
   ctx.lineCap = "round";

@@ -4,14 +4,14 @@
  * ports (React Flow handles, id = port name) and a line or two of the numbers that matter.
  */
 import { memo } from "react";
-import { Handle, Position, type Node, type NodeProps } from "@xyflow/react";
+import { Handle, Position, type Node, type NodeHandle, type NodeProps } from "@xyflow/react";
 import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
 import type { Severity } from "@/shared/analysis/types";
 import { useEditorConfig, useEditorValue } from "../context";
 import { KIND_NAMES } from "../store";
 import { fmt, toDisplay, unitLabel, type UnitSystem } from "../units";
 import { KindGlyph } from "./glyphs";
-import { CARD_WIDTH, cardHeight, PORT_SIDES, type Side } from "./geometry";
+import { CARD_WIDTH, cardHeight, PORT_SIDES, portBoxes, portFraction, type Side } from "./geometry";
 
 export type PartNodeData = { node: LinkageNode };
 export type PartFlowNode = Node<PartNodeData, NodeKind>;
@@ -33,8 +33,7 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
   const badge = useEditorValue((s) => s.badgeBySubject[key]);
   const worst = badge?.worst;
   const count = badge?.count ?? 0;
-  const sides = PORT_SIDES[kind];
-  const ports = Object.keys(sides);
+  const ports = Object.keys(PORT_SIDES[kind]);
   return (
     <div
       data-testid={`node-${id}`}
@@ -63,10 +62,8 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
         </div>
       ))}
       {ports.map((port) => {
-        const side = sides[port];
-        const same = ports.filter((p) => sides[p] === side);
-        const idx = same.indexOf(port);
-        const pct = `${((idx + 1) / (same.length + 1)) * 100}%`;
+        const { side, f } = portFraction(kind, port)!;
+        const pct = `${f * 100}%`;
         const style = side === "left" || side === "right" ? { top: pct } : { left: pct };
         return (
           <Handle
@@ -116,6 +113,11 @@ export function nodeLines(node: LinkageNode, u: UnitSystem): string[] {
 /** A part card's size as laid out (editor/nodes/geometry.ts); the line count does not depend on units. */
 export function cardSize(node: LinkageNode): { width: number; height: number } {
   return { width: CARD_WIDTH, height: cardHeight(nodeLines(node, "US").length) };
+}
+
+/** The ports of a card not measured yet, placed as the card lays them out (so its joints can be drawn). */
+export function layoutHandles(kind: NodeKind, size: { width: number; height: number }): NodeHandle[] {
+  return portBoxes(kind, size).map((b) => ({ id: b.id, type: "source", position: POS[b.side], x: b.x, y: b.y, width: b.width, height: b.height }));
 }
 
 function makeNode<K extends NodeKind>(kind: K, lines: (props: Extract<LinkageNode, { kind: K }>["props"], u: UnitSystem) => string[]) {
