@@ -12,6 +12,7 @@ import type { Linkage } from "@/db/linkages";
 import type { ChecklistItem } from "@/shared/records/checklist";
 import { CAUTION_TEXT } from "@/shared/caution";
 import { getObject } from "./storage";
+import { printable, wrapText } from "./pdf-wrap";
 
 const PAGE = { w: 612, h: 792 }; // US Letter, points
 const M = 50;
@@ -29,15 +30,7 @@ const FONT_DIR = path.join(process.cwd(), "node_modules", "dejavu-fonts-ttf", "t
 let fontFiles: Promise<[Buffer, Buffer]> | null = null;
 const loadFonts = () => (fontFiles ??= Promise.all([readFile(path.join(FONT_DIR, "DejaVuSans.ttf")), readFile(path.join(FONT_DIR, "DejaVuSans-Bold.ttf"))]));
 
-export function printable(s: string, font: PDFFont): string {
-  const glyphs = new Set(font.getCharacterSet());
-  let out = "";
-  for (const ch of s.replace(/[\t\r]/g, " ")) {
-    const cp = ch.codePointAt(0)!;
-    out += cp === 10 || glyphs.has(cp) ? ch : "?";
-  }
-  return out;
-}
+export { printable };
 
 class Doc {
   pdf!: PDFDocument;
@@ -68,27 +61,9 @@ class Doc {
   ensure(h: number) {
     if (this.y - h < M + 46) this.newPage();
   }
+  /** Lines of `text` that fit `width` points, in time linear in the text (lib/pdf-wrap.ts). */
   wrap(text: string, size: number, font: PDFFont, width: number): string[] {
-    const out: string[] = [];
-    for (const para of printable(text, this.font).split("\n")) {
-      let line = "";
-      for (const word of para.split(/ +/)) {
-        const next = line ? `${line} ${word}` : word;
-        if (font.widthOfTextAtSize(next, size) <= width) line = next;
-        else {
-          if (line) out.push(line);
-          line = word;
-          while (font.widthOfTextAtSize(line, size) > width && line.length > 1) {
-            let cut = line.length - 1;
-            while (cut > 1 && font.widthOfTextAtSize(line.slice(0, cut), size) > width) cut--;
-            out.push(line.slice(0, cut));
-            line = line.slice(cut);
-          }
-        }
-      }
-      out.push(line);
-    }
-    return out;
+    return wrapText(printable(text, this.font), size, font, width);
   }
   text(t: string, o: { size?: number; bold?: boolean; color?: ReturnType<typeof rgb>; x?: number; width?: number; gap?: number } = {}) {
     const size = o.size ?? 10;
