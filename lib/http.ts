@@ -1,10 +1,10 @@
 import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
 import type { z } from "zod";
-import { ApiError, invalid, notFound, unauthorized, forbidden } from "./errors";
+import { ApiError, fieldError, invalid, notFound, serverError, unauthorized, forbidden } from "./errors";
 import { getSessionUser, type SessionUser } from "./auth";
 import { getMembership, type Build } from "@/db/builds";
-import { getRevision } from "@/db/linkages";
+import { getLinkage, getRevision, type Linkage, type RevisionView } from "@/db/linkages";
 import { revisionQuery } from "@/shared/api";
 import { can, type Capability, type Role, CAPABILITIES } from "@/shared/roles";
 
@@ -27,16 +27,16 @@ function nulPath(v: unknown, path: string[] = []): string | null {
 /** Read a JSON body and parse it with a zod schema: 400 with field errors when it does not fit. */
 export async function parseBody<S extends z.ZodTypeAny>(req: Request, schema: S): Promise<z.infer<S>> {
   const text = await req.text();
-  if (text.length > MAX_BODY_BYTES) throw new ApiError(413, "too_large", "The request body is larger than 5 MB.");
+  if (text.length > MAX_BODY_BYTES) throw new ApiError("too_large", "The request body is larger than 5 MB.");
   let json: unknown;
   try {
     json = text.length ? JSON.parse(text) : undefined;
   } catch {
-    throw new ApiError(400, "invalid_json", "The request body is not valid JSON.");
+    throw new ApiError("invalid_json", "The request body is not valid JSON.");
   }
   // A NUL can only come in as the escape \u0000 (JSON has no raw control characters in strings).
   const nul = text.includes("\\u0000") ? nulPath(json) : null;
-  if (nul) throw new ApiError(400, "invalid_input", "Some fields need attention.", { [nul]: "must not contain NUL characters" });
+  if (nul) throw fieldError(nul, "must not contain NUL characters");
   const r = schema.safeParse(json);
   if (!r.success) throw invalid(r.error);
   return r.data;
@@ -52,7 +52,7 @@ export function parseParams<S extends z.ZodTypeAny>(params: unknown, schema: S):
 function errorResponse(e: unknown) {
   if (e instanceof ApiError) return e.toResponse();
   console.error(e);
-  return NextResponse.json({ error: { code: "server_error", message: "Something went wrong on the server. Nothing was changed." } }, { status: 500 });
+  return serverError().toResponse();
 }
 
 type RouteCtx<P> = { params: Promise<P> };
@@ -125,10 +125,51 @@ export function withBuild<P extends { buildId: string } = { buildId: string }>(
 export const json = (data: unknown, status = 200) => NextResponse.json(data, { status });
 export { CAPABILITIES };
 
-/** The revision a request names with `?revision=N` (the current one when absent); 404 when there is none. */
-export async function requestedRevision(req: NextRequest, linkageId: string) {
-  const q = req.nextUrl.searchParams.get("revision");
-  const rev = await getRevision(linkageId, q === null ? undefined : parseParams(q, revisionQuery));
+/** The linkage `rawId` names in this build; 404 for a malformed id or a linkage of another build. */
+export async function getLinkageOrThrow(buildId: string, rawId: string): Promise<Linkage> {
+  const linkage = UUID_RE.test(rawId) ? await getLinkage(buildId, rawId) : null;
+  if (!linkage) throw notFound("linkage");
+  return linkage;
+}
+
+/** A revision of the linkage (the current one when `revision` is undefined); 404 when there is none. */
+export async function getRevisionOrThrow(linkageId: string, revision?: number): Promise<RevisionView> {
+  const rev = await getRevision(linkageId, revision);
   if (!rev) throw notFound("revision");
   return rev;
+}
+
+type LinkageArgs<P> = { req: NextRequest; user: SessionUser; build: Build; role: Role; linkage: Linkage; params: P };
+/**
+ * Which revision the handler receives: "current", or "requested" (`?revision=N`, the current one when
+ * absent). A malformed or unknown N is a 404.
+ */
+type RevisionChoice = { revision: "current" | "requested" };
+
+/**
+ * A linkage route: withBuild's checks, then the linkage of `params.linkageId` in that build (404 otherwise),
+ * and, when asked for, the revision it acts on.
+ *   export const GET = withLinkage<P>("read", { revision: "requested" }, async ({ linkage, revision }) => …)
+ */
+export function withLinkage<P extends { buildId: string; linkageId: string } = { buildId: string; linkageId: string }>(
+  capability: Capability,
+  handler: (a: LinkageArgs<P>) => Promise<Response>,
+): ReturnType<typeof withBuild<P>>;
+export function withLinkage<P extends { buildId: string; linkageId: string } = { buildId: string; linkageId: string }>(
+  capability: Capability,
+  choice: RevisionChoice,
+  handler: (a: LinkageArgs<P> & { revision: RevisionView }) => Promise<Response>,
+): ReturnType<typeof withBuild<P>>;
+export function withLinkage<P extends { buildId: string; linkageId: string }>(
+  capability: Capability,
+  a: RevisionChoice | ((a: LinkageArgs<P>) => Promise<Response>),
+  b?: (a: LinkageArgs<P> & { revision: RevisionView }) => Promise<Response>,
+) {
+  return withBuild<P>(capability, async (args) => {
+    const linkage = await getLinkageOrThrow(args.build.id, args.params.linkageId);
+    if (typeof a === "function") return a({ ...args, linkage });
+    const q = a.revision === "requested" ? args.req.nextUrl.searchParams.get("revision") : null;
+    const revision = await getRevisionOrThrow(linkage.id, q === null ? undefined : parseParams(q, revisionQuery));
+    return b!({ ...args, linkage, revision });
+  });
 }

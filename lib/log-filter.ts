@@ -1,6 +1,6 @@
 import "server-only";
 import type { NextRequest } from "next/server";
-import { invalid } from "./errors";
+import { fieldError, invalid } from "./errors";
 import { logFilter } from "@/shared/records-api";
 
 /** `?system=&from=&to=&q=` of the log routes; a bad value is a 400 naming it. */
@@ -12,3 +12,10 @@ export function readLogFilter(req: NextRequest) {
   if (!r.success) throw invalid(r.error, "The filter is not valid.");
   return r.data;
 }
+
+/** The refusals of a log entry naming what is not this build's: files, a linkage or its revision. */
+export const LOG_REF_ERRORS = {
+  bad_files: fieldError("fileIds", "not files of this build", "Some attached files are not this build's uploads."),
+  bad_linkage: fieldError("linkageId", "not a linkage of this build", "That linkage is not in this build."),
+  bad_revision: fieldError("revision", "no such revision", "That linkage has no such revision."),
+};

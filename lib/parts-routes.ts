@@ -1,6 +1,6 @@
 import "server-only";
 import { parseBody, parseParams, json } from "./http";
-import { ApiError, notFound } from "./errors";
+import { csvRowsInvalid, duplicatePart, notFound } from "./errors";
 import { createPart, deletePart, importParts, listParts, partNumbers, updatePart, type Library } from "@/db/parts";
 import { partInput, partsImport } from "@/shared/records-api";
 import { parsePartsCsv, partsToCsv } from "@/shared/records/parts";
@@ -14,7 +14,7 @@ export const partsHandlers = {
   create: async (lib: Library, req: Request) => {
     const p = await parseBody(req, partInput);
     const part = await createPart(lib, p);
-    if (part === "duplicate") throw new ApiError(409, "duplicate_part", `Part number ${p.partNumber} is already in this library.`, { partNumber: "already in this library" });
+    if (part === "duplicate") throw duplicatePart(`Part number ${p.partNumber} is already in this library.`, { partNumber: "already in this library" });
     return json({ part }, 201);
   },
 
@@ -22,7 +22,7 @@ export const partsHandlers = {
     const id = parseParams(rawId, uuidParam);
     const p = await parseBody(req, partInput);
     const part = await updatePart(lib, id, p);
-    if (part === "duplicate") throw new ApiError(409, "duplicate_part", `Part number ${p.partNumber} is already in this library.`, { partNumber: "already in this library" });
+    if (part === "duplicate") throw duplicatePart(`Part number ${p.partNumber} is already in this library.`, { partNumber: "already in this library" });
     if (!part) throw notFound("part");
     return json({ part });
   },
@@ -43,10 +43,10 @@ export const partsHandlers = {
     const base = { rows: report.rows, delimiter: report.delimiter, errors: report.errors, valid: report.parts.length };
     if (dryRun) return json({ ...base, imported: 0, dryRun: true });
     if (report.errors.length && !skipBadRows) {
-      throw new ApiError(422, "csv_rows_invalid", `${report.errors.length} row${report.errors.length > 1 ? "s have" : " has"} errors; nothing was imported. Fix them, or choose to skip bad rows.`, undefined, { report: { ...base, imported: 0 } });
+      throw csvRowsInvalid(`${report.errors.length} row${report.errors.length > 1 ? "s have" : " has"} errors; nothing was imported. Fix them, or choose to skip bad rows.`, { ...base, imported: 0 });
     }
     const n = await importParts(lib, report.parts);
-    if (n === "duplicate") throw new ApiError(409, "duplicate_part", "Another import added some of these part numbers just now; nothing was imported.");
+    if (n === "duplicate") throw duplicatePart("Another import added some of these part numbers just now; nothing was imported.");
     return json({ ...base, imported: n, skipped: report.errors.length }, 201);
   },
 

@@ -2,10 +2,8 @@ import "server-only";
 import { z } from "zod";
 import type { NextRequest } from "next/server";
 import { parseBody } from "./http";
-import { ApiError } from "./errors";
 import { getObjectStream } from "./storage";
-import { getLinkage } from "@/db/linkages";
-import { notFound } from "./errors";
+import { fieldError, notFound } from "./errors";
 
 /** Upload routes take multipart/form-data (or a raw image); a JSON body is answered with a 400 that says so. */
 const noJson = z.object({ file: z.never({ error: "send the file as multipart/form-data in a field named \"file\"" }) });
@@ -13,7 +11,7 @@ const noJson = z.object({ file: z.never({ error: "send the file as multipart/for
 export async function refuseJsonUpload(req: NextRequest) {
   if ((req.headers.get("content-type") || "").includes("application/json")) {
     await parseBody(req, noJson);
-    throw new ApiError(400, "invalid_input", "Send the file as multipart/form-data.", { file: "not a file upload" });
+    throw fieldError("file", "not a file upload", "Send the file as multipart/form-data.");
   }
 }
 
@@ -33,13 +31,6 @@ export async function streamObject(key: string, o: { contentType: string; name: 
 }
 
 export const jointIdParam = z.string().min(1).max(64).regex(/^[A-Za-z0-9._:-]+$/);
-
-export async function requireLinkage(buildId: string, linkageId: string) {
-  if (!z.string().uuid().safeParse(linkageId).success) throw notFound("linkage");
-  const l = await getLinkage(buildId, linkageId);
-  if (!l) throw notFound("linkage");
-  return l;
-}
 
 export const csvResponse = (csv: string, filename: string) =>
   new Response(csv, { status: 200, headers: { "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${filename}"`, "x-content-type-options": "nosniff" } });

@@ -1,7 +1,6 @@
 import "server-only";
-/** What the review routes share: the linkage and revision they act on, names of subjects, hooks after a save. */
-import { notFound } from "./errors";
-import { getLinkage, getRevision, type RevisionView } from "@/db/linkages";
+/** What the review routes share: the report of a revision, names of subjects, hooks after a save. */
+import type { Linkage, RevisionView } from "@/db/linkages";
 import { buildOwners, claimNewlyStaleSignoffs } from "@/db/review";
 import type { Build } from "@/db/builds";
 import type { SessionUser } from "./auth";
@@ -9,18 +8,6 @@ import { analyze } from "@/shared/analysis";
 import type { Report, Subject } from "@/shared/analysis/types";
 import type { LinkageGraph } from "@/shared/linkage/schema";
 import { notifyStale } from "./review-mail";
-
-export async function requireLinkage(buildId: string, linkageId: string) {
-  const linkage = await getLinkage(buildId, linkageId);
-  if (!linkage) throw notFound("linkage");
-  return linkage;
-}
-
-export async function requireRevision(linkageId: string, revision?: number) {
-  const rev = await getRevision(linkageId, revision);
-  if (!rev) throw notFound("revision");
-  return rev;
-}
 
 /** The analysis stored with a revision; revisions saved before the engine ran get it computed now. */
 export function reportOf(build: Build, rev: RevisionView): Report {
@@ -48,19 +35,18 @@ export function subjectExists(graph: LinkageGraph, s: Subject, linkageId: string
 }
 
 /** After a new revision is saved: sign-offs of earlier revisions are stale; tell the owners once. */
-export async function afterRevisionSaved(build: Build, user: SessionUser, linkageId: string, revision: number) {
+export async function afterRevisionSaved(build: Build, user: SessionUser, linkage: Linkage, revision: number) {
   try {
-    const stale = await claimNewlyStaleSignoffs(linkageId, revision);
+    const stale = await claimNewlyStaleSignoffs(linkage.id, revision);
     if (stale.length === 0) return;
-    const linkage = await getLinkage(build.id, linkageId);
     await notifyStale({
       owners: await buildOwners(build.id),
       editorId: user.id,
       editorName: user.name,
       buildId: build.id,
       buildName: build.name,
-      linkageId,
-      linkageName: linkage?.name ?? "linkage",
+      linkageId: linkage.id,
+      linkageName: linkage.name,
       signed: stale,
       newRevision: revision,
     });

@@ -29,10 +29,10 @@ export async function readUpload(req: NextRequest, maxBytes = PDF_MAX_BYTES): Pr
     try {
       form = await req.formData();
     } catch {
-      throw new ApiError(400, "invalid_upload", "The upload could not be read as a form.", { file: "missing or unreadable" });
+      throw new ApiError("invalid_upload", "The upload could not be read as a form.", { file: "missing or unreadable" });
     }
     const file = form.get("file");
-    if (!file || typeof file === "string") throw new ApiError(400, "invalid_upload", "Choose a file to upload.", { file: "no file in the form's \"file\" field" });
+    if (!file || typeof file === "string") throw new ApiError("invalid_upload", "Choose a file to upload.", { file: "no file in the form's \"file\" field" });
     if (file.size > maxBytes) throw tooLarge(maxBytes);
     const fields: Record<string, string> = {};
     for (const [k, v] of form.entries()) if (typeof v === "string") fields[k] = v;
@@ -40,11 +40,11 @@ export async function readUpload(req: NextRequest, maxBytes = PDF_MAX_BYTES): Pr
   }
   const bytes = Buffer.from(await req.arrayBuffer());
   if (bytes.length > maxBytes) throw tooLarge(maxBytes);
-  if (!bytes.length) throw new ApiError(400, "invalid_upload", "The upload is empty.", { file: "empty" });
+  if (!bytes.length) throw new ApiError("invalid_upload", "The upload is empty.", { file: "empty" });
   return { bytes, name: req.headers.get("x-file-name") || "", fields: {} };
 }
 
-const tooLarge = (max: number) => new ApiError(413, "too_large", `The file is larger than ${Math.round(max / 1024 / 1024)} MB.`, { file: "too large" });
+const tooLarge = (max: number) => new ApiError("too_large", `The file is larger than ${Math.round(max / 1024 / 1024)} MB.`, { file: "too large" });
 
 /**
  * A display name safe to keep and to send back in Content-Disposition: no path parts, no control
@@ -53,7 +53,7 @@ const tooLarge = (max: number) => new ApiError(413, "too_large", `The file is la
 export function sanitizeName(raw: string, ext: string): string {
   const name = raw.normalize("NFC");
   if (/[\/\\\u0000]/.test(name) || /(^|[\/\\])\.\.([\/\\]|$)/.test(name) || name === "..") {
-    throw new ApiError(400, "invalid_name", "The file name contains a path; upload the file under its own name.", { file: "name has a path in it" });
+    throw new ApiError("invalid_name", "The file name contains a path; upload the file under its own name.", { file: "name has a path in it" });
   }
   let base = name.replace(/[\u0000-\u001f\u007f]/g, "").replace(/[^\p{L}\p{N} ._()+,-]/gu, "_").replace(/\s+/g, " ").replace(/^[.\s]+/, "").trim();
   base = base.replace(/\.[A-Za-z0-9]{1,5}$/, "");
@@ -70,9 +70,9 @@ export async function detectType(bytes: Buffer): Promise<Detected> {
   if (t && PHOTO_TYPES[t.mime]) return { kind: "photo", mime: t.mime, ext: PHOTO_TYPES[t.mime] };
   if (t?.mime === "application/pdf") return { kind: "pdf", mime: t.mime, ext: "pdf" };
   if (t && (t.mime === "image/heic" || t.mime === "image/heif" || t.ext === "heic")) {
-    throw new ApiError(415, "unsupported_type", "HEIC photos cannot be read here. Export the photo as JPEG (on a phone: share it as JPEG or set the camera to “most compatible”) and upload that.", { file: "HEIC is not accepted" });
+    throw new ApiError("unsupported_type", "HEIC photos cannot be read here. Export the photo as JPEG (on a phone: share it as JPEG or set the camera to “most compatible”) and upload that.", { file: "HEIC is not accepted" });
   }
-  throw new ApiError(415, "unsupported_type", `This file is ${t ? `a ${t.ext.toUpperCase()} file` : "not a recognised photo or PDF"}. Upload a JPEG, PNG or WebP photo, or a PDF.`, { file: "not a JPEG, PNG, WebP or PDF" });
+  throw new ApiError("unsupported_type", `This file is ${t ? `a ${t.ext.toUpperCase()} file` : "not a recognised photo or PDF"}. Upload a JPEG, PNG or WebP photo, or a PDF.`, { file: "not a JPEG, PNG, WebP or PDF" });
 }
 
 /**
@@ -91,7 +91,7 @@ export async function storeUpload(o: {
   const { bytes } = o.upload;
   const t = await detectType(bytes);
   if (!o.accept.includes(t.kind)) {
-    throw new ApiError(415, "unsupported_type", o.accept.includes("photo") ? "Upload a JPEG, PNG or WebP image here." : "Upload a PDF here.", { file: `a ${t.kind} is not accepted here` });
+    throw new ApiError("unsupported_type", o.accept.includes("photo") ? "Upload a JPEG, PNG or WebP image here." : "Upload a PDF here.", { file: `a ${t.kind} is not accepted here` });
   }
   const cap = t.kind === "pdf" ? PDF_MAX_BYTES : PHOTO_MAX_BYTES;
   if (bytes.length > cap) throw tooLarge(cap);
@@ -112,7 +112,7 @@ export async function storeUpload(o: {
       height = meta.autoOrient?.height ?? meta.height ?? null;
       thumb = await img.resize(THUMB_SIZE, THUMB_SIZE, { fit: "inside", withoutEnlargement: true }).jpeg({ quality: 78 }).toBuffer();
     } catch {
-      throw new ApiError(415, "unreadable_image", "The image is damaged or cannot be decoded.", { file: "cannot be decoded" });
+      throw new ApiError("unreadable_image", "The image is damaged or cannot be decoded.", { file: "cannot be decoded" });
     }
     thumbKey = `builds/${o.buildId}/thumbs/${id}.jpg`;
   }

@@ -1,5 +1,5 @@
 import { withSiteAdmin, parseBody, parseParams, json } from "@/lib/http";
-import { ApiError, notFound } from "@/lib/errors";
+import { lastAdmin, notFound } from "@/lib/errors";
 import { adminUserPatch, uuidParam } from "@/shared/api";
 import { setSiteAdmin } from "@/db/users";
 import { audit } from "@/db/audit";
@@ -9,7 +9,7 @@ export const PATCH = withSiteAdmin<{ userId: string }>(async ({ req, user, param
   const body = await parseBody(req, adminUserPatch);
   const r = await setSiteAdmin(id, body.isSiteAdmin);
   if (r === "missing") throw notFound("user");
-  if (r === "last_admin") throw new ApiError(409, "last_admin", "The site needs at least one admin.");
+  if (r === "last_admin") throw lastAdmin("The site needs at least one admin.");
   await audit({ buildId: null, userId: user.id, action: "admin.site-admin", detail: { target: id, isSiteAdmin: body.isSiteAdmin } });
   return json({ id, isSiteAdmin: body.isSiteAdmin });
 });

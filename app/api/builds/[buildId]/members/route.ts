@@ -1,5 +1,5 @@
 import { withBuild, parseBody, json } from "@/lib/http";
-import { ApiError } from "@/lib/errors";
+import { alreadyMember } from "@/lib/errors";
 import { memberAdd } from "@/shared/api";
 import { addMember, createInvitation, listMembers } from "@/db/builds";
 import { findUserByEmail } from "@/db/users";
@@ -18,7 +18,7 @@ export const POST = withBuild("manage", async ({ req, user, build }) => {
   if (existing) {
     const members = await listMembers(build.id);
     if (members.some((m) => m.userId === existing.id))
-      throw new ApiError(409, "already_member", `${existing.name} is already a member of this build.`, { email: "Already a member" });
+      throw alreadyMember(`${existing.name} is already a member of this build.`, { email: "Already a member" });
     await addMember(build.id, existing.id, body.role, user.id);
     return json({ added: { userId: existing.id, name: existing.name, role: body.role } }, 201);
   }

@@ -1,8 +1,5 @@
 import type { Metadata } from "next";
-import { notFound } from "next/navigation";
-import { requirePageBuild } from "@/lib/page-access";
-import { UUID_RE } from "@/lib/http";
-import { getLinkage } from "@/db/linkages";
+import { requirePageLinkage } from "@/lib/page-access";
 import { BuildNav } from "@/components/BuildNav";
 import { can } from "@/shared/roles";
 import { ChecklistScreen } from "./ChecklistScreen";
@@ -12,10 +9,7 @@ export const metadata: Metadata = { title: "Checklist" };
 export default async function LinkageChecklist({ params, searchParams }: { params: Promise<{ buildId: string; linkageId: string }>; searchParams: Promise<{ revision?: string }> }) {
   const { buildId, linkageId } = await params;
   const { revision } = await searchParams;
-  const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}/checklist/${linkageId}`);
-  if (!UUID_RE.test(linkageId)) notFound();
-  const linkage = await getLinkage(build.id, linkageId);
-  if (!linkage) notFound();
+  const { build, role, linkage } = await requirePageLinkage(buildId, linkageId, `/builds/${buildId}/checklist/${linkageId}`);
   const rev = revision && /^\d+$/.test(revision) ? Number(revision) : undefined;
   return (
     <>

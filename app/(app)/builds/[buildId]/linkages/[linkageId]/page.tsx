@@ -1,8 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
-import { requirePageBuild } from "@/lib/page-access";
-import { UUID_RE } from "@/lib/http";
-import { getLinkage, getRevision } from "@/db/linkages";
+import { requirePageLinkage } from "@/lib/page-access";
+import { getRevision } from "@/db/linkages";
 import { can } from "@/shared/roles";
 import { settingsSchema } from "@/shared/analysis/types";
 import { EditorScreen } from "./EditorScreen";
@@ -11,10 +10,7 @@ export const metadata: Metadata = { title: "Linkage" };
 
 export default async function LinkagePage({ params }: { params: Promise<{ buildId: string; linkageId: string }> }) {
   const { buildId, linkageId } = await params;
-  const { build, role, user } = await requirePageBuild(buildId, `/builds/${buildId}/linkages/${linkageId}`);
-  if (!UUID_RE.test(linkageId)) notFound();
-  const linkage = await getLinkage(build.id, linkageId);
-  if (!linkage) notFound();
+  const { build, role, user, linkage } = await requirePageLinkage(buildId, linkageId, `/builds/${buildId}/linkages/${linkageId}`);
   const rev = await getRevision(linkage.id);
   if (!rev) notFound();
   return (

@@ -1,26 +1,18 @@
-import { withBuild, parseBody, parseParams, json } from "@/lib/http";
+import { withLinkage, parseBody, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
-import { linkagePatch, uuidParam } from "@/shared/api";
-import { deleteLinkage, getLinkage, updateLinkage } from "@/db/linkages";
+import { linkagePatch } from "@/shared/api";
+import { deleteLinkage, updateLinkage } from "@/db/linkages";
 
-type P = { buildId: string; linkageId: string };
+export const GET = withLinkage("read", async ({ linkage }) => json({ linkage }));
 
-export const GET = withBuild<P>("read", async ({ build, params }) => {
-  const linkage = await getLinkage(build.id, parseParams(params.linkageId, uuidParam));
-  if (!linkage) throw notFound("linkage");
-  return json({ linkage });
-});
-
-export const PATCH = withBuild<P>("edit", async ({ req, user, build, params }) => {
-  const id = parseParams(params.linkageId, uuidParam);
+export const PATCH = withLinkage("edit", async ({ req, user, build, linkage: { id } }) => {
   const body = await parseBody(req, linkagePatch);
   const linkage = await updateLinkage(build.id, id, user.id, body);
-  if (!linkage) throw notFound("linkage");
+  if (!linkage) throw notFound("linkage"); // deleted while this request ran
   return json({ linkage });
 });
 
-export const DELETE = withBuild<P>("edit", async ({ user, build, params }) => {
-  const id = parseParams(params.linkageId, uuidParam);
+export const DELETE = withLinkage("edit", async ({ user, build, linkage: { id } }) => {
   if (!(await deleteLinkage(build.id, id, user.id))) throw notFound("linkage");
   return json({ deleted: id });
 });

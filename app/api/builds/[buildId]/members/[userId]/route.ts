@@ -1,17 +1,17 @@
 import { withBuild, parseBody, parseParams, json } from "@/lib/http";
-import { ApiError, notFound } from "@/lib/errors";
+import { lastOwner, notFound } from "@/lib/errors";
 import { memberPatch, uuidParam } from "@/shared/api";
 import { removeMember, setMemberRole } from "@/db/builds";
 
 type P = { buildId: string; userId: string };
-const LAST_OWNER = new ApiError(409, "last_owner", "A build needs at least one owner. Make someone else owner first.");
+const LAST_OWNER = "A build needs at least one owner. Make someone else owner first.";
 
 export const PATCH = withBuild<P>("manage", async ({ req, user, build, params }) => {
   const userId = parseParams(params.userId, uuidParam);
   const body = await parseBody(req, memberPatch);
   const r = await setMemberRole(build.id, userId, body.role, user.id);
   if (r === "missing") throw notFound("member");
-  if (r === "last_owner") throw LAST_OWNER;
+  if (r === "last_owner") throw lastOwner(LAST_OWNER);
   return json({ userId, role: body.role });
 });
 
@@ -19,6 +19,6 @@ export const DELETE = withBuild<P>("manage", async ({ user, build, params }) => 
   const userId = parseParams(params.userId, uuidParam);
   const r = await removeMember(build.id, userId, user.id);
   if (r === "missing") throw notFound("member");
-  if (r === "last_owner") throw LAST_OWNER;
+  if (r === "last_owner") throw lastOwner(LAST_OWNER);
   return json({ removed: userId });
 });

@@ -1,18 +1,13 @@
-import { withBuild, parseBody, parseParams, json } from "@/lib/http";
-import { ApiError } from "@/lib/errors";
-import { uuidParam } from "@/shared/api";
+import { withLinkage, parseBody, json } from "@/lib/http";
+import { fieldError } from "@/lib/errors";
 import { acknowledgementCreate } from "@/shared/review-api";
 import { createAcknowledgement, listAcknowledgements } from "@/db/review";
-import { reportOf, requireLinkage, requireRevision } from "@/lib/review";
+import { reportOf } from "@/lib/review";
 import { fingerprint } from "@/shared/review/fingerprint";
 import { ackFor, findingStates } from "@/shared/review/hazards";
 
-type P = { buildId: string; linkageId: string };
-
 /** The findings of the current revision with the acknowledgement that covers each, and every acknowledgement ever written. */
-export const GET = withBuild<P>("read", async ({ build, params }) => {
-  const linkage = await requireLinkage(build.id, parseParams(params.linkageId, uuidParam));
-  const rev = await requireRevision(linkage.id);
+export const GET = withLinkage("read", { revision: "current" }, async ({ build, linkage, revision: rev }) => {
   const acks = await listAcknowledgements(linkage.id);
   const findings = findingStates(reportOf(build, rev), rev.graph, acks);
   const withStatus = acks.map((a) => {
@@ -23,13 +18,10 @@ export const GET = withBuild<P>("read", async ({ build, params }) => {
 });
 
 /** A reviewer or the owner acknowledges a finding of the current revision, with a reason. */
-export const POST = withBuild<P>("acknowledge", async ({ req, user, build, params }) => {
-  const linkageId = parseParams(params.linkageId, uuidParam);
+export const POST = withLinkage("acknowledge", { revision: "current" }, async ({ req, user, build, linkage, revision: rev }) => {
   const body = await parseBody(req, acknowledgementCreate);
-  const linkage = await requireLinkage(build.id, linkageId);
-  const rev = await requireRevision(linkage.id);
   const finding = reportOf(build, rev).findings.find((f) => f.code === body.code && f.subject.type === body.subject.type && f.subject.id === body.subject.id);
-  if (!finding) throw new ApiError(400, "invalid_input", "Some fields need attention.", { code: `No finding "${body.code}" on that subject in revision ${rev.revision}` });
+  if (!finding) throw fieldError("code", `No finding "${body.code}" on that subject in revision ${rev.revision}`);
   const acknowledgement = await createAcknowledgement({
     buildId: build.id,
     linkageId: linkage.id,

@@ -1,18 +1,13 @@
-import { withBuild, parseBody, json, requestedRevision } from "@/lib/http";
-import { ApiError } from "@/lib/errors";
+import { withLinkage, parseBody, json } from "@/lib/http";
+import { fieldError } from "@/lib/errors";
 import { getRevision } from "@/db/linkages";
 import { listTicks, setTick } from "@/db/checklist";
 import { audit } from "@/db/audit";
 import { checklistFor } from "@/shared/records/checklist";
 import { checklistTick } from "@/shared/records-api";
-import { requireLinkage } from "@/lib/records-http";
-
-type P = { buildId: string; linkageId: string };
 
 /** The checklist generated from a revision (current by default, `?revision=N`), with its ticks and notes. */
-export const GET = withBuild<P>("read", async ({ req, build, params }) => {
-  const linkage = await requireLinkage(build.id, params.linkageId);
-  const rev = await requestedRevision(req, linkage.id);
+export const GET = withLinkage("read", { revision: "requested" }, async ({ linkage, revision: rev }) => {
   const ticks = await listTicks(linkage.id, rev.revision);
   const byKey = new Map(ticks.map((t) => [`${t.jointId}|${t.code}`, t]));
   const items = checklistFor(rev.graph).map((i) => {
@@ -23,13 +18,12 @@ export const GET = withBuild<P>("read", async ({ req, build, params }) => {
 });
 
 /** Tick or untick one item, with an optional note. Owner, builders and reviewers tick. */
-export const PUT = withBuild<P>("comment", async ({ req, user, build, params }) => {
-  const linkage = await requireLinkage(build.id, params.linkageId);
+export const PUT = withLinkage("comment", async ({ req, user, build, linkage }) => {
   const t = await parseBody(req, checklistTick);
   const rev = await getRevision(linkage.id, t.revision);
-  if (!rev) throw new ApiError(400, "invalid_input", "No such revision of this linkage.", { revision: "no such revision" });
+  if (!rev) throw fieldError("revision", "no such revision", "No such revision of this linkage.");
   if (!checklistFor(rev.graph).some((i) => i.jointId === t.jointId && i.code === t.code)) {
-    throw new ApiError(400, "invalid_input", "That item is not on this revision's checklist.", { code: "not on this checklist" });
+    throw fieldError("code", "not on this checklist", "That item is not on this revision's checklist.");
   }
   await setTick(linkage.id, t.revision, t.jointId, t.code, t.ticked, t.note, user.id);
   await audit({ buildId: build.id, userId: user.id, action: "checklist.tick", detail: { linkageId: linkage.id, revision: t.revision, jointId: t.jointId, code: t.code, ticked: t.ticked } });

@@ -1,18 +1,14 @@
-import { withBuild, parseBody, parseParams, json } from "@/lib/http";
-import { ApiError } from "@/lib/errors";
-import { uuidParam } from "@/shared/api";
+import { withLinkage, parseBody, parseParams, json } from "@/lib/http";
+import { fieldError } from "@/lib/errors";
 import { commentCreate, COMMENT_EDIT_MINUTES, subjectSchema } from "@/shared/review-api";
 import { createComment, getComment, linkageAudience, listComments, unresolvedCounts, type ReviewComment } from "@/db/review";
-import { requireLinkage, requireRevision, subjectExists, subjectLabel } from "@/lib/review";
+import { subjectExists, subjectLabel } from "@/lib/review";
 import { notifyComment } from "@/lib/review-mail";
-
-type P = { buildId: string; linkageId: string };
 
 const withWindow = (c: ReviewComment) => ({ ...c, editableUntil: new Date(Date.parse(c.createdAt) + COMMENT_EDIT_MINUTES * 60_000).toISOString() });
 
 /** Every comment of the linkage (or of one subject: `?subjectType=joint&subjectId=j1`), oldest first, and open-thread counts. */
-export const GET = withBuild<P>("read", async ({ req, build, params }) => {
-  const linkage = await requireLinkage(build.id, parseParams(params.linkageId, uuidParam));
+export const GET = withLinkage("read", async ({ req, linkage }) => {
   const sp = req.nextUrl.searchParams;
   const subject = sp.has("subjectType") ? parseParams({ type: sp.get("subjectType"), id: sp.get("subjectId") }, subjectSchema) : undefined;
   const [comments, unresolved] = await Promise.all([listComments(linkage.id, subject), unresolvedCounts(linkage.id)]);
@@ -20,22 +16,17 @@ export const GET = withBuild<P>("read", async ({ req, build, params }) => {
 });
 
 /** A new thread on a node, a joint or the linkage, or a reply (`parentId`) in an existing thread. */
-export const POST = withBuild<P>("comment", async ({ req, user, build, params }) => {
-  const linkageId = parseParams(params.linkageId, uuidParam);
+export const POST = withLinkage("comment", { revision: "current" }, async ({ req, user, build, linkage, revision: rev }) => {
   const body = await parseBody(req, commentCreate);
-  const linkage = await requireLinkage(build.id, linkageId);
-  const rev = await requireRevision(linkage.id);
   let subject = body.subject;
   let parentId: string | null = null;
   if (body.parentId) {
     const parent = await getComment(linkage.id, body.parentId);
-    if (!parent) throw new ApiError(400, "invalid_input", "Some fields need attention.", { parentId: "No such comment on this linkage" });
+    if (!parent) throw fieldError("parentId", "No such comment on this linkage");
     parentId = parent.parentId ?? parent.id; // replies stay one level deep, under the thread's first comment
     subject = parent.subject;
   } else if (!subjectExists(rev.graph, subject, linkage.id)) {
-    throw new ApiError(400, "invalid_input", "Some fields need attention.", {
-      "subject.id": subject.type === "linkage" ? "For the whole linkage, the subject id is the linkage's id" : `No ${subject.type} "${subject.id}" in revision ${rev.revision}`,
-    });
+    throw fieldError("subject.id", subject.type === "linkage" ? "For the whole linkage, the subject id is the linkage's id" : `No ${subject.type} "${subject.id}" in revision ${rev.revision}`);
   }
   const comment = await createComment({ buildId: build.id, linkageId: linkage.id, subject, parentId, authorId: user.id, body: body.body, revision: rev.revision });
   const notified = await notifyComment({

@@ -1,14 +1,12 @@
-import { withBuild, parseParams, json } from "@/lib/http";
+import { withLinkage, parseParams, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
 import { uuidParam } from "@/shared/api";
 import { deleteAcknowledgement } from "@/db/review";
-import { requireLinkage } from "@/lib/review";
 
 type P = { buildId: string; linkageId: string; ackId: string };
 
 /** Withdraw an acknowledgement (the finding counts as open again). */
-export const DELETE = withBuild<P>("acknowledge", async ({ user, build, params }) => {
-  const linkage = await requireLinkage(build.id, parseParams(params.linkageId, uuidParam));
+export const DELETE = withLinkage<P>("acknowledge", async ({ user, build, linkage, params }) => {
   const ackId = parseParams(params.ackId, uuidParam);
   if (!(await deleteAcknowledgement(build.id, linkage.id, ackId, user.id))) throw notFound("acknowledgement");
   return json({ deleted: ackId });

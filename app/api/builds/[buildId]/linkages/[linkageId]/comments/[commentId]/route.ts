@@ -1,9 +1,8 @@
-import { withBuild, parseBody, parseParams, json } from "@/lib/http";
-import { ApiError, forbidden, notFound } from "@/lib/errors";
+import { withLinkage, parseBody, parseParams, json } from "@/lib/http";
+import { editWindowClosed, forbidden, notFound } from "@/lib/errors";
 import { uuidParam } from "@/shared/api";
 import { commentPatch, COMMENT_EDIT_MINUTES } from "@/shared/review-api";
 import { getComment, setThreadResolved, updateCommentBody } from "@/db/review";
-import { requireLinkage } from "@/lib/review";
 
 type P = { buildId: string; linkageId: string; commentId: string };
 
@@ -11,17 +10,15 @@ type P = { buildId: string; linkageId: string; commentId: string };
  * `{body}`: the author changes their own comment within the edit window.
  * `{resolved}`: anyone who may comment resolves or reopens the comment's thread.
  */
-export const PATCH = withBuild<P>("comment", async ({ req, user, build, params }) => {
-  const linkageId = parseParams(params.linkageId, uuidParam);
+export const PATCH = withLinkage<P>("comment", async ({ req, user, build, linkage, params }) => {
   const commentId = parseParams(params.commentId, uuidParam);
   const patch = await parseBody(req, commentPatch);
-  const linkage = await requireLinkage(build.id, linkageId);
   let comment = await getComment(linkage.id, commentId);
   if (!comment) throw notFound("comment");
   if (patch.body !== undefined) {
     if (comment.author.id !== user.id) throw forbidden("You can change only your own comments.");
     if (Date.now() - Date.parse(comment.createdAt) > COMMENT_EDIT_MINUTES * 60_000)
-      throw new ApiError(403, "edit_window_closed", `A comment can be changed for ${COMMENT_EDIT_MINUTES} minutes after it is written. Add a reply instead.`);
+      throw editWindowClosed(`A comment can be changed for ${COMMENT_EDIT_MINUTES} minutes after it is written. Add a reply instead.`);
     comment = (await updateCommentBody(build.id, linkage.id, comment.id, user.id, patch.body))!;
   }
   if (patch.resolved !== undefined) {
