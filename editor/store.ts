@@ -18,6 +18,7 @@ import {
   type NodeKind,
 } from "@/shared/linkage/schema";
 import type { AnalysisSettings, Finding, Report, Severity } from "@/shared/analysis/types";
+import { defaultProps, KIND_NAMES } from "@/shared/linkage/kinds";
 
 export type XY = { x: number; y: number };
 export type Viewport = { x: number; y: number; zoom: number };
@@ -50,36 +51,8 @@ export function worse(a: Severity | undefined, b: Severity): Severity {
 }
 export const subjectKey = (s: SubjectRef) => `${s.type}:${s.id}`;
 
-export const KIND_NAMES: Record<NodeKind, string> = {
-  stick: "Control stick",
-  pedal: "Rudder pedal",
-  torqueTube: "Torque tube",
-  bellcrank: "Bellcrank",
-  idlerArm: "Idler arm",
-  pushrod: "Pushrod",
-  controlHorn: "Control horn",
-  controlSurface: "Control surface",
-  structureMount: "Structure mount",
-  travelStop: "Travel stop",
-};
-
-/** Props a freshly placed part starts with: plausible light-aircraft numbers the builder then corrects. */
-export function defaultProps(kind: NodeKind, system: ControlSystem = "other"): LinkageNode["props"] {
-  const raw: Record<NodeKind, Record<string, unknown>> = {
-    stick: { gripArm: 18, attachArm: 4, axis: system === "roll" ? "roll" : "pitch" },
-    pedal: { pedalArm: 8, attachArm: 3 },
-    torqueTube: { inputArm: 3, outputArm: 3 },
-    bellcrank: { inputArm: 3, outputArm: 3 },
-    idlerArm: { inputArm: 3, outputArm: 3 },
-    pushrod: { material: "4130N", outsideDiameter: 0.5, wall: 0.035, length: 36 },
-    controlHorn: { hornArm: 2.5 },
-    controlSurface: {},
-    structureMount: { note: "" },
-    travelStop: {},
-  };
-  const parsed = nodeSchema.parse({ id: "x", kind, label: "", position: { x: 0, y: 0 }, props: raw[kind] });
-  return parsed.props;
-}
+/** Display names and starting props of each kind live in the kind registry (shared/linkage/kinds). */
+export { KIND_NAMES, defaultProps };
 
 export type EditorState = {
   meta: { name: string; system: ControlSystem };

@@ -4,23 +4,11 @@
  * port positions of the parts outside it to draw the joints that run off screen, to fit the view and to
  * draw the picture export. A browser test checks these numbers against the measured DOM.
  */
-import type { NodeKind } from "@/shared/linkage/schema";
+import { PORT_SIDES, type NodeKind, type Side } from "@/shared/linkage/kinds";
 
-export type Side = "left" | "right" | "top" | "bottom";
-
-/** Where each port sits on the card. */
-export const PORT_SIDES: Record<NodeKind, Record<string, Side>> = {
-  stick: { attach: "right", pivot: "bottom" },
-  pedal: { attach: "right", pivot: "bottom" },
-  torqueTube: { in: "left", out: "right", pivot: "bottom" },
-  bellcrank: { in: "left", out: "right", pivot: "bottom" },
-  idlerArm: { in: "left", out: "right", pivot: "bottom" },
-  pushrod: { a: "left", b: "right" },
-  controlHorn: { attach: "left", surface: "right" },
-  controlSurface: { horn: "left", hinge: "bottom" },
-  structureMount: { mount: "top" },
-  travelStop: { contact: "top" },
-};
+export type { Side };
+/** Where each port sits on the card (from the kind's ports, shared/linkage/kinds/). */
+export { PORT_SIDES };
 
 /** Card: `w-[148px] border-2 py-1.5`, a 16 px title row and one 16 px row per key-number line. */
 export const CARD_WIDTH = 148;

@@ -8,9 +8,10 @@ import { Handle, Position, type Node, type NodeHandle, type NodeProps } from "@x
 import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
 import type { Severity } from "@/shared/analysis/types";
 import { useEditorConfig, useEditorValue } from "../context";
-import { KIND_NAMES } from "../store";
-import { fmt, toDisplay, unitLabel, type UnitSystem } from "../units";
+import { KIND_NAMES } from "@/shared/linkage/kinds";
+import type { UnitSystem } from "../units";
 import { KindGlyph } from "./glyphs";
+import { EDITOR_KIND_LIST, EDITOR_KINDS } from "./kinds";
 import { CARD_WIDTH, cardHeight, PORT_SIDES, portBoxes, portFraction, type Side } from "./geometry";
 
 export type PartNodeData = { node: LinkageNode };
@@ -96,18 +97,9 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
   );
 }
 
-/** A bare number in display units, trimmed: 18, 0.5, 0.035 (in) or 457, 12.7 (mm). */
-const n = (v: number, u: UnitSystem) => {
-  const d = toDisplay(v, "length", u);
-  const s = d.toFixed(u === "SI" ? (d < 10 ? 1 : 0) : 3);
-  return s.includes(".") ? s.replace(/0+$/, "").replace(/\.$/, "") : s;
-};
-const lu = (u: UnitSystem) => unitLabel("length", u);
-
-const LINES: Partial<Record<NodeKind, (props: never, u: UnitSystem) => string[]>> = {};
 /** The key-number lines a part's card shows (also drawn by the picture export). */
 export function nodeLines(node: LinkageNode, u: UnitSystem): string[] {
-  return LINES[node.kind]?.(node.props as never, u) ?? [];
+  return EDITOR_KINDS[node.kind]?.lines(node.props as never, u) ?? [];
 }
 
 /** A part card's size as laid out (editor/nodes/geometry.ts); the line count does not depend on units. */
@@ -120,41 +112,16 @@ export function layoutHandles(kind: NodeKind, size: { width: number; height: num
   return portBoxes(kind, size).map((b) => ({ id: b.id, type: "source", position: POS[b.side], x: b.x, y: b.y, width: b.width, height: b.height }));
 }
 
-function makeNode<K extends NodeKind>(kind: K, lines: (props: Extract<LinkageNode, { kind: K }>["props"], u: UnitSystem) => string[]) {
-  LINES[kind] = lines as (props: never, u: UnitSystem) => string[];
+function makeNode(kind: NodeKind) {
+  const lines = EDITOR_KINDS[kind].lines as (props: LinkageNode["props"], u: UnitSystem) => string[];
   const C = memo(function PartNode({ id, data, selected }: NodeProps<PartFlowNode>) {
     const { unitSystem } = useEditorConfig();
-    const node = data.node as Extract<LinkageNode, { kind: K }>;
-    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props as never, unitSystem)} selected={!!selected} />;
+    const node = data.node;
+    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props, unitSystem)} selected={!!selected} />;
   });
   C.displayName = `${kind}Node`;
   return C;
 }
 
-const ratio = (a: number, b: number) => (a > 0 ? `×${(b / a).toFixed(2)}` : "");
-const arms = (a: number, b: number, u: UnitSystem, names = ["in", "out"]) => `${names[0]} ${n(a, u)} · ${names[1]} ${n(b, u)} ${lu(u)}`;
-
-export const StickNode = makeNode("stick", (p, u) => [arms(p.gripArm, p.attachArm, u, ["grip", "link"]), `${p.axis} · ${p.travelFwd}°/${p.travelAft}°${p.designForce ? ` · ${fmt(p.designForce, "force", u)}` : ""}`]);
-export const PedalNode = makeNode("pedal", (p, u) => [arms(p.pedalArm, p.attachArm, u, ["pedal", "link"]), `travel ${p.travel}°${p.designForce ? ` · ${fmt(p.designForce, "force", u)}` : ""}`]);
-export const TorqueTubeNode = makeNode("torqueTube", (p, u) => [arms(p.inputArm, p.outputArm, u), `ratio ${ratio(p.inputArm, p.outputArm)}`]);
-export const BellcrankNode = makeNode("bellcrank", (p, u) => [arms(p.inputArm, p.outputArm, u), `${p.armAngle}° apart · ${ratio(p.inputArm, p.outputArm)}`]);
-export const IdlerArmNode = makeNode("idlerArm", (p, u) => [arms(p.inputArm, p.outputArm, u), `ratio ${ratio(p.inputArm, p.outputArm)}`]);
-export const PushrodNode = makeNode("pushrod", (p, u) => [`Ø${n(p.outsideDiameter, u)} × ${n(p.wall, u)} ${lu(u)}`, `${n(p.length, u)} ${lu(u)} · ${p.material}`]);
-export const ControlHornNode = makeNode("controlHorn", (p, u) => [`arm ${n(p.hornArm, u)} ${lu(u)} · ${p.linkAngle}°`]);
-export const ControlSurfaceNode = makeNode("controlSurface", (p) => [`up ${p.travelUp}° · down ${p.travelDown}°`]);
-export const StructureMountNode = makeNode("structureMount", (p) => (p.note ? [p.note] : ["fixed to structure"]));
-export const TravelStopNode = makeNode("travelStop", (p) => [`contacts at ${p.stopAt}°`]);
-
-/** Module-level, so React Flow never sees a new object. */
-export const nodeTypes = {
-  stick: StickNode,
-  pedal: PedalNode,
-  torqueTube: TorqueTubeNode,
-  bellcrank: BellcrankNode,
-  idlerArm: IdlerArmNode,
-  pushrod: PushrodNode,
-  controlHorn: ControlHornNode,
-  controlSurface: ControlSurfaceNode,
-  structureMount: StructureMountNode,
-  travelStop: TravelStopNode,
-};
+/** One memoised component per registered kind; module-level, so React Flow never sees a new object. */
+export const nodeTypes = Object.fromEntries(EDITOR_KIND_LIST.map((d) => [d.kind, makeNode(d.kind)])) as Record<NodeKind, ReturnType<typeof makeNode>>;

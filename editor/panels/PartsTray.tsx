@@ -1,24 +1,10 @@
 "use client";
 /** The parts tray: drag a kind onto the canvas, or press its button to place it in view (keyboard friendly). */
 import { useReactFlow } from "@xyflow/react";
-import { NODE_KINDS, type NodeKind } from "@/shared/linkage/schema";
+import { KIND_LIST, type NodeKind } from "@/shared/linkage/kinds";
 import { useEditorConfig, useEditorStoreApi } from "../context";
-import { KIND_NAMES } from "../store";
 import { KindGlyph } from "../nodes/glyphs";
 import { GRID, KIND_MIME } from "../Canvas";
-
-const HINTS: Record<NodeKind, string> = {
-  stick: "pilot input, pitch or roll",
-  pedal: "pilot input, yaw",
-  torqueTube: "turns one arm into another",
-  bellcrank: "changes direction and ratio",
-  idlerArm: "supports and guides a run",
-  pushrod: "push–pull tube, two ends",
-  controlHorn: "arm on the surface",
-  controlSurface: "the end of the run",
-  structureMount: "pivot or bracket on the airframe",
-  travelStop: "limits deflection",
-};
 
 export default function PartsTray() {
   const api = useEditorStoreApi();
@@ -41,7 +27,7 @@ export default function PartsTray() {
         <p className="px-3 py-2 text-xs text-ink-soft">You can inspect this linkage; editing is for the build&apos;s owner and builders.</p>
       ) : (
         <ul className="flex-1 overflow-y-auto py-1">
-          {NODE_KINDS.map((kind) => (
+          {KIND_LIST.map(({ kind, name, hint }) => (
             <li key={kind}>
               <button
                 type="button"
@@ -53,12 +39,12 @@ export default function PartsTray() {
                 }}
                 onClick={() => placeInView(kind)}
                 className="group flex w-full cursor-grab items-start gap-2 px-3 py-1.5 text-left hover:bg-white focus:bg-white focus:outline-none focus-visible:ring-2 focus-visible:ring-inset focus-visible:ring-ink active:cursor-grabbing"
-                title={`Drag onto the canvas, or press to place a ${KIND_NAMES[kind].toLowerCase()} in view`}
+                title={`Drag onto the canvas, or press to place a ${name.toLowerCase()} in view`}
               >
                 <KindGlyph kind={kind} className="mt-0.5 h-4 w-4 shrink-0 text-ink" />
                 <span className="min-w-0">
-                  <span className="block text-[12px] font-medium leading-4 text-ink">{KIND_NAMES[kind]}</span>
-                  <span className="block text-[10px] leading-3 text-ink-soft">{HINTS[kind]}</span>
+                  <span className="block text-[12px] font-medium leading-4 text-ink">{name}</span>
+                  <span className="block text-[10px] leading-3 text-ink-soft">{hint}</span>
                 </span>
               </button>
             </li>

@@ -1,60 +1,13 @@
-/** The fields of the node properties form and the joint card, section by section. */
-import { AN_BOLTS, NUT_TYPES, THREADS, TUBE_MATERIALS, type NodeKind } from "@/shared/linkage/schema";
+/** The fields of the node properties form (each kind's own, editor/nodes/kinds/) and the joint card, section by section. */
+import { AN_BOLTS, NUT_TYPES, THREADS, type NodeKind } from "@/shared/linkage/schema";
+import { EDITOR_KINDS } from "../nodes/kinds";
+import { opts } from "../nodes/kinds/format";
 import type { SectionSpec } from "./SchemaForm";
-
-const opts = <T extends string>(xs: readonly T[], names?: Partial<Record<T, string>>) => xs.map((x) => [x, names?.[x] ?? x] as const);
-
-const PROPS: Record<NodeKind, SectionSpec["fields"]> = {
-  stick: [
-    { type: "number", path: "props.gripArm", label: "Grip arm", q: "length", required: true, hint: "pivot to hand-grip centre" },
-    { type: "number", path: "props.attachArm", label: "Link arm", q: "length", required: true, hint: "pivot to the pushrod hole" },
-    { type: "enum", path: "props.axis", label: "Axis", options: opts(["pitch", "roll"] as const), required: true, default: "pitch" },
-    { type: "number", path: "props.designForce", label: "Design force override", q: "force", hint: "empty = the build setting" },
-    { type: "number", path: "props.travelFwd", label: "Forward travel", q: "angle" },
-    { type: "number", path: "props.travelAft", label: "Aft travel", q: "angle" },
-  ],
-  pedal: [
-    { type: "number", path: "props.pedalArm", label: "Pedal arm", q: "length", required: true },
-    { type: "number", path: "props.attachArm", label: "Link arm", q: "length", required: true },
-    { type: "number", path: "props.designForce", label: "Design force override", q: "force", hint: "empty = the build setting" },
-    { type: "number", path: "props.travel", label: "Travel", q: "angle" },
-  ],
-  torqueTube: [
-    { type: "number", path: "props.inputArm", label: "Input arm", q: "length", required: true },
-    { type: "number", path: "props.outputArm", label: "Output arm", q: "length", required: true },
-  ],
-  bellcrank: [
-    { type: "number", path: "props.inputArm", label: "Input arm", q: "length", required: true },
-    { type: "number", path: "props.outputArm", label: "Output arm", q: "length", required: true },
-    { type: "number", path: "props.armAngle", label: "Angle between arms", q: "angle" },
-  ],
-  idlerArm: [
-    { type: "number", path: "props.inputArm", label: "Input arm", q: "length", required: true },
-    { type: "number", path: "props.outputArm", label: "Output arm", q: "length", required: true },
-  ],
-  pushrod: [
-    { type: "enum", path: "props.material", label: "Tube material", options: opts(TUBE_MATERIALS), required: true, default: "4130N" },
-    { type: "number", path: "props.outsideDiameter", label: "Outside diameter", q: "length", required: true },
-    { type: "number", path: "props.wall", label: "Wall thickness", q: "length", required: true },
-    { type: "number", path: "props.length", label: "Length, ball to ball", q: "length", required: true },
-  ],
-  controlHorn: [
-    { type: "number", path: "props.hornArm", label: "Horn arm", q: "length", required: true, hint: "hinge line to the pushrod hole" },
-    { type: "number", path: "props.linkAngle", label: "Link angle at neutral", q: "angle", hint: "90 = pushrod square to the arm" },
-  ],
-  controlSurface: [
-    { type: "number", path: "props.travelUp", label: "Up travel", q: "angle" },
-    { type: "number", path: "props.travelDown", label: "Down travel", q: "angle" },
-    { type: "number", path: "props.hingeMoment", label: "Hinge moment", q: "torque", hint: "if the designer gives one" },
-  ],
-  structureMount: [{ type: "text", path: "props.note", label: "Where it is fixed", placeholder: "e.g. seat-pan rib, station 62" }],
-  travelStop: [{ type: "number", path: "props.stopAt", label: "Contacts at", q: "angle" }],
-};
 
 export function nodeSections(kind: NodeKind): SectionSpec[] {
   return [
     { title: "Name", fields: [{ type: "text", path: "label", label: "Label", placeholder: "e.g. aft pushrod" }] },
-    { title: "Dimensions", fields: PROPS[kind] },
+    { title: "Dimensions", fields: EDITOR_KINDS[kind].fields },
   ];
 }
 

@@ -4,6 +4,7 @@
  * Tolerant of graphs that did not pass the schema: a joint whose end names a missing node gets -1.
  */
 import type { Joint, LinkageGraph, LinkageNode } from "../linkage/schema";
+import { roleOf as kindRole, type Role } from "../linkage/kinds";
 import type { JointRole } from "./types";
 
 export type PortMap = Record<string, number[]>;
@@ -19,6 +20,8 @@ export type Ctx = {
   jFrom: Int32Array;
   jTo: Int32Array;
   roles: JointRole[];
+  /** Per node: its kind's role in the run (shared/linkage/kinds); undefined for a kind the registry does not know. */
+  nodeRole: (Role | undefined)[];
   /** Per node: number of joints touching it. */
   degree: Int32Array;
 };
@@ -35,6 +38,8 @@ export function buildContext(graph: LinkageGraph): Ctx {
   const jTo = new Int32Array(joints.length);
   const degree = new Int32Array(nodes.length);
   const roles: JointRole[] = new Array(joints.length);
+  const nodeRole: (Role | undefined)[] = new Array(nodes.length);
+  for (let i = 0; i < nodes.length; i++) nodeRole[i] = kindRole(nodes[i].kind);
   for (let j = 0; j < joints.length; j++) {
     const jt = joints[j];
     const f = nodeIndex.get(jt.from?.node) ?? -1;
@@ -43,9 +48,9 @@ export function buildContext(graph: LinkageGraph): Ctx {
     jTo[j] = t;
     if (f >= 0) addPort(ports, degree, f, jt.from.port, j);
     if (t >= 0 && t !== f) addPort(ports, degree, t, jt.to.port, j);
-    roles[j] = f >= 0 && t >= 0 ? roleOf(nodes[f], jt.from.port, nodes[t], jt.to.port) : "other";
+    roles[j] = f >= 0 && t >= 0 ? jointRole(nodeRole[f], jt.from.port, nodeRole[t], jt.to.port) : "other";
   }
-  return { graph, nodes, joints, nodeIndex, ports, jFrom, jTo, roles, degree };
+  return { graph, nodes, joints, nodeIndex, ports, jFrom, jTo, roles, nodeRole, degree };
 }
 
 function addPort(ports: (PortMap | undefined)[], degree: Int32Array, n: number, port: string, j: number) {
@@ -73,21 +78,21 @@ export function otherPort(ctx: Ctx, j: number, n: number): string {
   return ctx.jFrom[j] === n ? jt.to.port : jt.from.port;
 }
 
-/** The pushrod end (node index and port) on joint j, if one end is a pushrod. */
+/** The link end (node index and port) on joint j, if one end is a link (a pushrod). */
 export function pushrodEndOf(ctx: Ctx, j: number): [number, string] | null {
   const f = ctx.jFrom[j];
   const t = ctx.jTo[j];
-  if (f >= 0 && ctx.nodes[f].kind === "pushrod") return [f, ctx.joints[j].from.port];
-  if (t >= 0 && ctx.nodes[t].kind === "pushrod") return [t, ctx.joints[j].to.port];
+  if (f >= 0 && ctx.nodeRole[f] === "link") return [f, ctx.joints[j].from.port];
+  if (t >= 0 && ctx.nodeRole[t] === "link") return [t, ctx.joints[j].to.port];
   return null;
 }
 
-function roleOf(a: LinkageNode, pa: string, b: LinkageNode, pb: string): JointRole {
-  if (a.kind === "travelStop" || b.kind === "travelStop") return "stop";
+function jointRole(a: Role | undefined, pa: string, b: Role | undefined, pb: string): JointRole {
+  if (a === "stop" || b === "stop") return "stop";
   if (pa === "pivot" || pb === "pivot") return "pivot";
-  if ((a.kind === "controlSurface" && pa === "hinge") || (b.kind === "controlSurface" && pb === "hinge")) return "hinge";
-  if ((a.kind === "controlHorn" && pa === "surface") || (b.kind === "controlHorn" && pb === "surface")) return "hornMount";
-  if (a.kind === "structureMount" || b.kind === "structureMount") return "other";
+  if ((a === "surface" && pa === "hinge") || (b === "surface" && pb === "hinge")) return "hinge";
+  if ((a === "horn" && pa === "surface") || (b === "horn" && pb === "surface")) return "hornMount";
+  if (a === "mount" || b === "mount") return "other";
   return "link";
 }
 

@@ -60,7 +60,7 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
     if (node.kind === "pushrod") {
       pushrods.push(pushrodResult(node, loads.pushrodAxial[n], loads.driven[n] === 1, s));
       pushrodNodes.push(n);
-    } else if (node.kind === "controlSurface") {
+    } else if (ctx.nodeRole[n] === "surface") {
       surfaces.push({ nodeId: node.id, hingeMomentLimit: loads.surfaceMoment[n], driven: loads.driven[n] === 1 });
     }
   }

@@ -21,6 +21,8 @@
  * Each joint is traversed at most once per input, so loops end (and are reported by structure.ts).
  */
 import type { LinkageGraph, LinkageNode } from "../linkage/schema";
+import { ENGINE, roleOf, type EngineInfo } from "../linkage/kinds";
+import { bellcrankPivotLoad } from "../linkage/kinds/bellcrank";
 import type { AnalysisSettings } from "./types";
 import { type Ctx, jointsAt, otherNode, otherPort } from "./context";
 
@@ -40,26 +42,16 @@ export type Loads = {
 
 export const DUAL_CONTROL_SHARE = 0.75; // Part 23 appendix A
 
-/** The design pilot force at an input's grip or pedal, limit, lbf. */
+/** The design pilot force at an input's grip or pedal, limit, lbf (0 for a part that is not an input). */
 export function designForce(node: LinkageNode, graph: LinkageGraph, settings: AnalysisSettings): number {
-  let f: number;
-  if (node.kind === "stick") {
-    const p = node.props;
-    if (p.designForce) f = p.designForce;
-    else if (graph.system === "flap" || graph.system === "trim") f = settings.pilotForce.other;
-    else if (graph.system === "roll" || (graph.system !== "pitch" && p.axis === "roll")) f = settings.pilotForce.rollStick;
-    else f = settings.pilotForce.pitchStick;
-  } else if (node.kind === "pedal") {
-    const p = node.props;
-    if (p.designForce) f = p.designForce;
-    else if (graph.system === "flap" || graph.system === "trim") f = settings.pilotForce.other;
-    else f = settings.pilotForce.yawPedal;
-  } else return 0;
+  const e = ENGINE[node.kind];
+  if (!e || e.role !== "input") return 0;
+  const f = e.pilotForce(node.props, graph.system, settings.pilotForce);
   return settings.dualControls ? f * DUAL_CONTROL_SHARE : f;
 }
 
 export function isInput(n: LinkageNode): boolean {
-  return n.kind === "stick" || n.kind === "pedal";
+  return roleOf(n.kind) === "input";
 }
 
 function ratio(num: number, den: number): number {
@@ -67,16 +59,12 @@ function ratio(num: number, den: number): number {
   return Number.isFinite(r) && r >= 0 ? r : 0;
 }
 
-/** Resultant on a bellcrank pivot of two arm loads, arms at alpha degrees. */
-export function bellcrankPivotLoad(fi: number, fo: number, alphaDeg: number): number {
-  const c = Math.cos((alphaDeg * Math.PI) / 180);
-  return Math.sqrt(Math.max(0, fi * fi + fo * fo - 2 * fi * fo * c));
-}
+export { bellcrankPivotLoad };
 
-function inputArms(n: LinkageNode): [number, number] {
-  if (n.kind === "stick") return [n.props.gripArm, n.props.attachArm];
-  if (n.kind === "pedal") return [n.props.pedalArm, n.props.attachArm];
-  return [0, 0];
+/** [grip, attach] arms of an input; [in, out] arms of a crank. */
+function arms(n: LinkageNode): [number, number] {
+  const e = ENGINE[n.kind];
+  return e && (e.role === "input" || e.role === "crank") ? e.arms(n.props) : [0, 0];
 }
 
 export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
@@ -122,10 +110,10 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
   let stamp = 0;
   for (let i = 0; i < N; i++) {
     const inp = nodes[i];
-    if (!isInput(inp)) continue;
+    if (ctx.nodeRole[i] !== "input") continue;
     stamp++;
     const fg = designForce(inp, ctx.graph, settings);
-    const [grip, attach] = inputArms(inp);
+    const [grip, attach] = arms(inp);
     const fp = fg * ratio(grip, attach);
     let reaches = false;
     driven[i] = 1;
@@ -143,8 +131,8 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
       const port = otherPort(ctx, j, from);
       const node = nodes[n];
       if (!driven[n]) driven[n] = 1;
-      switch (node.kind) {
-        case "pushrod": {
+      switch (ctx.nodeRole[n]) {
+        case "link": {
           if (wA[n] === 0 && f > 0) touchedN.push(n);
           if (f > wA[n]) wA[n] = f;
           forwardSamePort(j, n, port, f);
@@ -152,36 +140,33 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
           if (exit) for (const k of jointsAt(ctx, n, exit)) push(k, n, f, 0);
           break;
         }
-        case "bellcrank":
-        case "idlerArm":
-        case "torqueTube": {
+        case "crank": {
           if (port !== "in" && port !== "out") break; // a link on the pivot port: reacted there
           forwardSamePort(j, n, port, f);
-          const p = node.props;
-          const fo = port === "in" ? f * ratio(p.inputArm, p.outputArm) : f * ratio(p.outputArm, p.inputArm);
-          const r = node.kind === "bellcrank" ? bellcrankPivotLoad(f, fo, node.props.armAngle ?? 90) : f + fo;
-          recPivot(n, r);
+          const [inArm, outArm] = arms(node);
+          const fo = port === "in" ? f * ratio(inArm, outArm) : f * ratio(outArm, inArm);
+          const crank = ENGINE[node.kind] as Extract<EngineInfo<unknown>, { role: "crank" }>;
+          recPivot(n, crank.pivotLoad(f, fo, node.props));
           for (const k of jointsAt(ctx, n, port === "in" ? "out" : "in")) push(k, n, fo, 0);
           break;
         }
-        case "stick":
-        case "pedal": {
+        case "input": {
           if (port !== "attach") break;
           // Held by its pilot: the grip reacts F·attach/grip; the pivot carries both.
-          const [g, a] = inputArms(node);
+          const [g, a] = arms(node);
           recPivot(n, f + f * ratio(a, g));
           forwardSamePort(j, n, port, f);
           break;
         }
-        case "controlHorn": {
+        case "horn": {
           if (port !== "attach") break;
           forwardSamePort(j, n, port, f);
-          const p = node.props;
-          const m = f * p.hornArm * Math.abs(Math.sin(((p.linkAngle ?? 90) * Math.PI) / 180));
+          const horn = ENGINE[node.kind] as Extract<EngineInfo<unknown>, { role: "horn" }>;
+          const m = f * horn.effectiveArm(node.props);
           for (const k of jointsAt(ctx, n, "surface")) push(k, n, f, m);
           break;
         }
-        case "controlSurface": {
+        case "surface": {
           reaches = true;
           if (wM[n] === 0 && moment > 0) touchedN.push(n);
           if (moment > wM[n]) wM[n] = moment;
@@ -189,7 +174,7 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
           break;
         }
         default:
-          break; // structure mount, travel stop: the load is reacted here
+          break; // mount, stop: the load is reacted here
       }
     }
     inputs.push({ node: i, gripForce: fg, linkForce: fp, reachesSurface: reaches });

@@ -5,14 +5,16 @@
  * airframe closes a "loop" through it (that is how a linkage works, not a fault).
  */
 import { PORTS } from "../linkage/schema";
+import type { Role } from "../linkage/kinds";
 import { SRC } from "../hardware";
 import type { Finding } from "./types";
 import { type Ctx, jointsAt, nodeLabel, otherNode } from "./context";
 import type { Loads } from "./loads";
 import { finding, jointSubject, linkageSubject, nodeSubject } from "./format";
 
-const PIVOTED = new Set(["stick", "pedal", "bellcrank", "idlerArm", "torqueTube"]);
-const LOAD_PATH = new Set(["pushrod", "bellcrank", "idlerArm", "torqueTube", "controlHorn", "controlSurface"]);
+/** Roles that turn on a pivot (and so need one joined to a mount), and roles that carry the run's load. */
+const PIVOTED = new Set<Role | undefined>(["input", "crank"]);
+const LOAD_PATH = new Set<Role | undefined>(["link", "crank", "horn", "surface"]);
 
 function hasHardware(hw: Ctx["joints"][number]["hardware"] | undefined): boolean {
   return !!hw && !!(hw.rodEnd || hw.bolt || hw.nut || hw.bearing || hw.jamNut || hw.washerUnderHead || hw.washerUnderNut);
@@ -45,23 +47,24 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
   let inputCount = 0;
   for (let n = 0; n < nodes.length; n++) {
     const node = nodes[n];
-    if (node.kind === "stick" || node.kind === "pedal") inputCount++;
+    const role = ctx.nodeRole[n];
+    if (role === "input") inputCount++;
     if (ctx.degree[n] === 0) {
       out.push(finding("part-unconnected", "caution", nodeSubject(node.id), `${nodeLabel(node)} is not joined to anything. Connect it or remove it.`, SRC.structure));
       continue;
     }
-    if (node.kind === "pushrod") {
+    if (role === "link") {
       for (const end of ["a", "b"]) {
         if (jointsAt(ctx, n, end).length === 0)
           out.push(finding("pushrod-end-open", "caution", nodeSubject(node.id),
             `Pushrod ${nodeLabel(node)} has nothing on its ${end} end. A pushrod carries load only between two joints; connect both ends.`, SRC.structure));
       }
     }
-    if (PIVOTED.has(node.kind)) {
+    if (PIVOTED.has(role)) {
       let mounted = false;
       for (const k of jointsAt(ctx, n, "pivot")) {
         const far = otherNode(ctx, k, n);
-        if (far >= 0 && nodes[far].kind === "structureMount") { mounted = true; break; }
+        if (far >= 0 && ctx.nodeRole[far] === "mount") { mounted = true; break; }
       }
       if (!mounted)
         out.push(finding("pivot-unmounted", "caution", nodeSubject(node.id),
@@ -84,7 +87,7 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
   if (inputCount > 0) {
     for (let n = 0; n < nodes.length; n++) {
       const node = nodes[n];
-      if (!loads.driven[n] && ctx.degree[n] > 0 && LOAD_PATH.has(node.kind))
+      if (!loads.driven[n] && ctx.degree[n] > 0 && LOAD_PATH.has(ctx.nodeRole[n]))
         out.push(finding("part-not-driven", "advisory", nodeSubject(node.id),
           `No input drives ${nodeLabel(node)}, so its loads are shown as zero, not computed. Connect it to the run or check the joints leading to it.`, SRC.structure));
     }
@@ -100,7 +103,7 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
   for (let j = 0; j < joints.length; j++) {
     const f = ctx.jFrom[j], t = ctx.jTo[j];
     if (f < 0 || t < 0 || f === t) continue;
-    if (nodes[f].kind === "structureMount" || nodes[t].kind === "structureMount") continue;
+    if (ctx.nodeRole[f] === "mount" || ctx.nodeRole[t] === "mount") continue;
     const a = find(f), b = find(t);
     if (a === b)
       out.push(finding("linkage-loop", "caution", jointSubject(joints[j].id),

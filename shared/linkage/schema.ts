@@ -5,113 +5,30 @@
  * See README.md beside this file for the fields and an example.
  */
 import { z } from "zod";
+import { inches, force, systemSchema, type ControlSystem } from "./fields";
+import { KIND_LIST, PORTS, type KindDef } from "./kinds";
 
 export const FORMAT_VERSION = 1 as const;
 
 const id = z.string().min(1, "id is empty").max(64, "id is longer than 64 characters");
-const inches = (what: string) =>
-  z.number({ error: `${what} must be a number (in)` }).positive(`${what} must be greater than 0 in`).max(1000, `${what} over 1000 in is not a control part`);
-const degrees = (what: string) =>
-  z.number({ error: `${what} must be a number (°)` }).min(-360, `${what} below −360°`).max(360, `${what} above 360°`);
-const force = (what: string) =>
-  z.number({ error: `${what} must be a number (lbf)` }).positive(`${what} must be greater than 0 lbf`).max(1_000_000, `${what} is out of range`);
 
-export const SYSTEMS = ["pitch", "roll", "yaw", "flap", "trim", "other"] as const;
-export const systemSchema = z.enum(SYSTEMS);
-export type ControlSystem = z.infer<typeof systemSchema>;
-
-export const TUBE_MATERIALS = ["4130N", "6061-T6", "2024-T3"] as const;
-export const tubeMaterialSchema = z.enum(TUBE_MATERIALS);
-
-/** Props of each part kind. Arms are measured pivot centre to attach-hole centre. */
-export const stickProps = z.object({
-  gripArm: inches("grip arm"),
-  attachArm: inches("attach arm"),
-  axis: z.enum(["pitch", "roll"]).default("pitch"),
-  /** Override of the design pilot force at the grip; absent = the build's setting for the axis. */
-  designForce: force("design force").optional(),
-  travelFwd: degrees("forward travel").default(15),
-  travelAft: degrees("aft travel").default(15),
-});
-export const pedalProps = z.object({
-  pedalArm: inches("pedal arm"),
-  attachArm: inches("attach arm"),
-  designForce: force("design force").optional(),
-  travel: degrees("travel").default(20),
-});
-export const torqueTubeProps = z.object({
-  inputArm: inches("input arm"),
-  outputArm: inches("output arm"),
-});
-export const bellcrankProps = z.object({
-  inputArm: inches("input arm"),
-  outputArm: inches("output arm"),
-  /** Angle between the two arms at the pivot. */
-  armAngle: degrees("arm angle").default(90),
-});
-export const idlerArmProps = z.object({
-  inputArm: inches("input arm"),
-  outputArm: inches("output arm"),
-});
-export const pushrodProps = z.object({
-  material: tubeMaterialSchema.default("4130N"),
-  outsideDiameter: inches("outside diameter"),
-  wall: inches("wall thickness"),
-  /** Centre to centre of the rod-end balls. */
-  length: inches("length"),
-});
-export const controlHornProps = z.object({
-  hornArm: inches("horn arm"),
-  /** Angle between the pushrod and the horn arm at neutral; 90 = perpendicular. */
-  linkAngle: degrees("link angle").default(90),
-});
-export const controlSurfaceProps = z.object({
-  travelUp: degrees("up travel").default(25),
-  travelDown: degrees("down travel").default(20),
-  /** Hinge moment at design condition, in·lbf, if the designer gives one. */
-  hingeMoment: z.number().positive().optional(),
-});
-export const structureMountProps = z.object({ note: z.string().max(200).default("") });
-export const travelStopProps = z.object({
-  /** The deflection at which the stop contacts, degrees of the part it stops. */
-  stopAt: degrees("stop angle").default(15),
-});
+export { SYSTEMS, systemSchema, TUBE_MATERIALS, tubeMaterialSchema, type ControlSystem } from "./fields";
+export { NODE_KINDS, PORTS, KINDS, type NodeKind, type PropsOf } from "./kinds";
 
 const position = z.object({ x: z.number().finite(), y: z.number().finite() });
 const label = z.string().max(80, "label is longer than 80 characters").default("");
 
-const node = <K extends string, P extends z.ZodTypeAny>(kind: K, props: P) =>
+/** The node schema of one kind: the common fields and that kind's props (shared/linkage/kinds/). */
+const node = <K extends string, P extends z.ZodObject>(kind: K, props: P) =>
   z.object({ id, kind: z.literal(kind), label, position, props });
+type NodeSchemaOf<D> = D extends KindDef<infer K, infer P> ? ReturnType<typeof node<K, P>> : never;
+type AnyNodeSchema = NodeSchemaOf<(typeof KIND_LIST)[number]>;
 
-export const nodeSchema = z.discriminatedUnion("kind", [
-  node("stick", stickProps),
-  node("pedal", pedalProps),
-  node("torqueTube", torqueTubeProps),
-  node("bellcrank", bellcrankProps),
-  node("idlerArm", idlerArmProps),
-  node("pushrod", pushrodProps),
-  node("controlHorn", controlHornProps),
-  node("controlSurface", controlSurfaceProps),
-  node("structureMount", structureMountProps),
-  node("travelStop", travelStopProps),
-]);
+export const nodeSchema = z.discriminatedUnion(
+  "kind",
+  KIND_LIST.map((d) => node(d.kind, d.props as z.ZodObject)) as unknown as [AnyNodeSchema, ...AnyNodeSchema[]],
+);
 export type LinkageNode = z.infer<typeof nodeSchema>;
-export type NodeKind = LinkageNode["kind"];
-export const NODE_KINDS = nodeSchema.options.map((o) => o.shape.kind.value) as NodeKind[];
-
-/** Where joints attach on each kind. `pivot` joins a part to its mount; others carry links. */
-export const PORTS: Record<NodeKind, readonly string[]> = {
-  stick: ["attach", "pivot"],
-  pedal: ["attach", "pivot"],
-  torqueTube: ["in", "out", "pivot"],
-  bellcrank: ["in", "out", "pivot"],
-  idlerArm: ["in", "out", "pivot"],
-  pushrod: ["a", "b"],
-  controlHorn: ["attach", "surface"],
-  controlSurface: ["horn", "hinge"],
-  structureMount: ["mount"],
-  travelStop: ["contact"],
-};
 
 export const THREADS = ["10-32", "1/4-28", "5/16-24", "3/8-24", "7/16-20", "1/2-20"] as const;
 export const threadSchema = z.enum(THREADS);

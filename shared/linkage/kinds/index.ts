@@ -1,0 +1,63 @@
+/**
+ * The registry of part kinds: one list, one file per kind beside this one. The node schema, NodeKind, PORTS,
+ * port sides and names, display names, hints, default props and the engine's roles all come from here.
+ * To add a kind: write `<kind>.ts` with `defineKind`, add it to KIND_LIST, then its editor file
+ * (editor/nodes/kinds/) — see DEVELOPERS.md "Add a part kind".
+ */
+import type { z } from "zod";
+import type { ControlSystem } from "../fields";
+import type { EngineInfo, KindDef, PortDef, Role, Side } from "./types";
+import { stick } from "./stick";
+import { pedal } from "./pedal";
+import { torqueTube } from "./torqueTube";
+import { bellcrank } from "./bellcrank";
+import { idlerArm } from "./idlerArm";
+import { pushrod } from "./pushrod";
+import { controlHorn } from "./controlHorn";
+import { controlSurface } from "./controlSurface";
+import { structureMount } from "./structureMount";
+import { travelStop } from "./travelStop";
+
+export { defineKind, ROLE_PORTS } from "./types";
+export type { EngineInfo, KindDef, PilotForces, PortDef, Role, Side } from "./types";
+
+/** Every part kind, in the order the parts tray lists them. */
+export const KIND_LIST = [stick, pedal, torqueTube, bellcrank, idlerArm, pushrod, controlHorn, controlSurface, structureMount, travelStop] as const;
+
+type Def = (typeof KIND_LIST)[number];
+export type NodeKind = Def["kind"];
+export type KindOf<K extends NodeKind> = Extract<Def, { kind: K }>;
+/** The props of a part of kind K, after defaults. */
+export type PropsOf<K extends NodeKind> = z.output<KindOf<K>["props"]>;
+
+export const NODE_KINDS: NodeKind[] = KIND_LIST.map((d) => d.kind);
+export const KINDS = Object.fromEntries(KIND_LIST.map((d) => [d.kind, d])) as { [K in NodeKind]: KindOf<K> };
+
+const each = <T>(f: (d: KindDef) => T) => Object.fromEntries(KIND_LIST.map((d) => [d.kind, f(d as unknown as KindDef)])) as Record<NodeKind, T>;
+
+/** Where joints attach on each kind. `pivot` joins a part to its mount; others carry links. */
+export const PORTS: Record<NodeKind, readonly string[]> = each((d) => Object.keys(d.ports));
+/** Where each port sits on the part's card. */
+export const PORT_SIDES: Record<NodeKind, Record<string, Side>> = each((d) => Object.fromEntries(Object.entries(d.ports).map(([p, v]) => [p, v.side])));
+export const KIND_NAMES: Record<NodeKind, string> = each((d) => d.name);
+export const KIND_HINTS: Record<NodeKind, string> = each((d) => d.hint);
+/** The engine's view of each kind, typed loosely so a loop over mixed parts can call it. */
+export const ENGINE: Record<NodeKind, EngineInfo<any>> = each((d) => d.engine as EngineInfo<any>); // eslint-disable-line @typescript-eslint/no-explicit-any
+export const ROLES: Record<NodeKind, Role> = each((d) => d.engine.role);
+
+/** A kind's role, or undefined for a kind the registry does not know (graphs that skipped the schema). */
+export function roleOf(kind: string): Role | undefined {
+  return (ROLES as Record<string, Role | undefined>)[kind];
+}
+
+/** A port of a kind, or undefined when the kind has no such port. */
+export function portDef(kind: string, port: string): PortDef | undefined {
+  const d = (KINDS as Record<string, KindDef | undefined>)[kind];
+  return d && Object.prototype.hasOwnProperty.call(d.ports, port) ? d.ports[port] : undefined;
+}
+
+/** Props a freshly placed part of `kind` starts with, defaults applied. */
+export function defaultProps<K extends NodeKind>(kind: K, system: ControlSystem = "other"): PropsOf<K> {
+  const d = KINDS[kind] as unknown as KindDef;
+  return d.props.parse(d.defaults(system)) as PropsOf<K>;
+}

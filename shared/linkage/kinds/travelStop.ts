@@ -1,0 +1,16 @@
+import { z } from "zod";
+import { degrees } from "../fields";
+import { defineKind } from "./types";
+
+export const travelStop = defineKind({
+  kind: "travelStop",
+  name: "Travel stop",
+  hint: "limits deflection",
+  props: z.object({
+    /** The deflection at which the stop contacts, degrees of the part it stops. */
+    stopAt: degrees("stop angle").default(15),
+  }),
+  ports: { contact: { side: "top", name: "contact" } },
+  defaults: () => ({}),
+  engine: { role: "stop" },
+});
