@@ -78,7 +78,7 @@ describe("the part-kind registry", () => {
         const html = renderToStaticMarkup(
           createElement(ReactFlowProvider, null,
             createElement(EditorStoreContext.Provider, { value: store },
-              createElement(Card, { id, data: { node }, selected: false, type: def.kind }))),
+              createElement(Card as never, { id, data: { node }, selected: false, type: def.kind } as never))),
         );
         expect(html).toContain(`data-testid="node-${id}"`);
         expect(html).toContain(`data-kind="${def.kind}"`);
