@@ -1,19 +1,23 @@
 // `npm start`: everything a fresh clone needs, then the app on http://127.0.0.1:3000.
 import { spawn } from "node:child_process";
-import { ROOT, authSecret, dbUrl, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
+import { PG_PORT, ROOT, authSecret, dbUrl, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
 
 const PORT = Number(process.env.PORT || 3000);
 const URL = `http://127.0.0.1:${PORT}`;
+const APP_DB = process.env.LW_APP_DB || "linkwright";
 
 ensurePackages();
-startPostgres();
-migrate(process.env.LW_APP_DB || "linkwright");
+// With DATABASE_URL set, that database is migrated and served; the local cluster starts only when it is the target.
+const given = process.env.DATABASE_URL ? new globalThis.URL(process.env.DATABASE_URL) : null;
+if (!given || (["127.0.0.1", "localhost"].includes(given.hostname) && Number(given.port) === PG_PORT)) startPostgres();
+const databaseUrl = process.env.DATABASE_URL || dbUrl(APP_DB);
+migrate(databaseUrl, { label: given ? `the database in DATABASE_URL (${given.host}${given.pathname})` : `${APP_DB}` });
 
 const env = {
   ...process.env,
   NEXT_TELEMETRY_DISABLED: "1",
   NODE_ENV: "production",
-  DATABASE_URL: process.env.DATABASE_URL || dbUrl(process.env.LW_APP_DB || "linkwright"),
+  DATABASE_URL: databaseUrl,
   NEXTAUTH_URL: process.env.NEXTAUTH_URL || URL,
   NEXTAUTH_SECRET: authSecret(),
 };

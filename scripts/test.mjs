@@ -1,8 +1,8 @@
-// `npm test`: the same set-up as `npm start` against a separate, fresh test database, then every test.
+// `npm test`: the same set-up as `npm start` on a cluster of its own (LW_TEST_PG_PORT, fsync off) with a fresh test database, then every test.
 import { spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync } from "node:fs";
 import path from "node:path";
-import { ROOT, authSecret, dbUrl, ensureDebianPackage, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
+import { ROOT, TEST_PG_PORT, authSecret, dbUrl, ensureDebianPackage, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
 
 // Two `npm test` runs in one checkout would share the test database, port and build folder:
 // the second waits for the first (flock from util-linux).
@@ -21,16 +21,16 @@ const started = Date.now();
 ensurePackages();
 ensureDebianPackage("/usr/bin/chromium", "chromium");
 ensureDebianPackage("/usr/bin/pdftoppm", "poppler-utils");
-startPostgres();
+startPostgres("test");
 
-step(`Recreating the test database ${TEST_DB}`);
+step(`Recreating the test database ${TEST_DB} (test cluster, port ${TEST_PG_PORT})`);
 run(process.execPath, ["--import", "tsx", "scripts/reset-db.ts", TEST_DB]);
-migrate(TEST_DB);
+migrate(dbUrl(TEST_DB, "test"), { label: TEST_DB });
 
 const env = {
   NODE_ENV: "production",
   NEXT_DIST_DIR: process.env.NEXT_DIST_DIR || ".next-test",
-  DATABASE_URL: dbUrl(TEST_DB),
+  DATABASE_URL: dbUrl(TEST_DB, "test"),
   NEXTAUTH_SECRET: authSecret(),
 };
 step("Building the app for the browser and route tests (.next-test)");

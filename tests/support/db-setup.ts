@@ -32,9 +32,8 @@ export async function prepareTestDatabase() {
   const secret = process.env.NEXTAUTH_SECRET || "test-secret-not-for-production-use-only";
   const env = { DATABASE_URL: TEST_DB_URL, NEXT_DIST_DIR: DIST_DIR, NEXTAUTH_SECRET: secret };
   if (process.env.LW_BUILT !== "1") {
-    sh(["--import", "tsx", "db/pg.ts", "up"], { LW_TEST_DB: TEST_DB });
-    sh(["--import", "tsx", "node_modules/knex/bin/cli.js", "migrate:latest"], env);
-    sh(["--import", "tsx", "node_modules/knex/bin/cli.js", "seed:run"], env);
+    sh(["--import", "tsx", "db/pg.ts", "up", "test"], { LW_TEST_DB: TEST_DB });
+    sh(["--import", "tsx", "scripts/migrate.ts", "--seed"], env);
     if (!existsSync(path.join(ROOT, DIST_DIR, "BUILD_ID"))) sh(["node_modules/next/dist/bin/next", "build"], { ...env, NODE_ENV: "production" });
   }
   if (process.env.LW_NO_SERVER === "1") return;
