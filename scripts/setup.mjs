@@ -2,7 +2,7 @@
 // Plain Node (no packages): it runs before anything is installed.
 import { spawnSync } from "node:child_process";
 import { createHash, randomBytes } from "node:crypto";
-import { existsSync, mkdirSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 
@@ -37,6 +37,7 @@ export function ensurePackages() {
   if (existsSync(stamp) && readFileSync(stamp, "utf8") === hash) return;
   step("Installing packages (npm ci)");
   run("npm", ["ci", "--no-audit", "--no-fund"], { env: { PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD: "1" } });
+  rmSync(stamp, { force: true }); // a new file, not a write through a hard link another checkout's node_modules may share
   writeFileSync(stamp, hash);
 }
 
