@@ -9,7 +9,11 @@ const APP_DB = process.env.LW_APP_DB || "linkwright";
 ensurePackages();
 // With DATABASE_URL set, that database is migrated and served; the local cluster starts only when it is the target.
 const given = process.env.DATABASE_URL ? new globalThis.URL(process.env.DATABASE_URL) : null;
-if (!given || (["127.0.0.1", "localhost"].includes(given.hostname) && Number(given.port) === PG_PORT)) startPostgres();
+if (!given || (["127.0.0.1", "localhost"].includes(given.hostname) && Number(given.port) === PG_PORT)) {
+  // A password in DATABASE_URL becomes the app role's password on the local cluster.
+  if (given?.password && !process.env.LW_PG_PASSWORD) process.env.LW_PG_PASSWORD = decodeURIComponent(given.password);
+  startPostgres();
+}
 const databaseUrl = process.env.DATABASE_URL || dbUrl(APP_DB);
 migrate(databaseUrl, { label: given ? `the database in DATABASE_URL (${given.host}${given.pathname})` : `${APP_DB}` });
 

@@ -6,7 +6,7 @@
 import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { existsSync, mkdirSync, openSync } from "node:fs";
 import path from "node:path";
-import { APP_URL, DIST_DIR, TEST_DB, TEST_DB_URL, TEST_PORT } from "./env";
+import { APP_URL, DIST_DIR, TEST_DB, TEST_DB_URL, TEST_PORT, TEST_SECRET } from "./env";
 
 const ROOT = path.resolve(__dirname, "../..");
 let server: ChildProcess | null = null;
@@ -29,7 +29,7 @@ async function waitFor(url: string, ms: number) {
 }
 
 export async function prepareTestDatabase() {
-  const secret = process.env.NEXTAUTH_SECRET || "test-secret-not-for-production-use-only";
+  const secret = TEST_SECRET;
   const env = { DATABASE_URL: TEST_DB_URL, NEXT_DIST_DIR: DIST_DIR, NEXTAUTH_SECRET: secret };
   if (process.env.LW_BUILT !== "1") {
     sh(["--import", "tsx", "db/pg.ts", "up", "test"], { LW_TEST_DB: TEST_DB });

@@ -6,12 +6,12 @@ export type Client = {
   request(method: string, path: string, body?: unknown, raw?: string): Promise<{ status: number; body: any }>;
 };
 
-/** Signs in through next-auth's credentials provider, the way the sign-in page does. */
-export async function signIn(email: string, password = TEST_PASSWORD): Promise<Client> {
-  const csrfRes = await fetch(`${APP_URL}/api/auth/csrf`);
+/** Signs in through next-auth's credentials provider, the way the sign-in page does (on another app instance with `base`). */
+export async function signIn(email: string, password = TEST_PASSWORD, base = APP_URL): Promise<Client> {
+  const csrfRes = await fetch(`${base}/api/auth/csrf`);
   const csrfCookie = (csrfRes.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).join("; ");
   const { csrfToken } = await csrfRes.json();
-  const res = await fetch(`${APP_URL}/api/auth/callback/credentials`, {
+  const res = await fetch(`${base}/api/auth/callback/credentials`, {
     method: "POST",
     redirect: "manual",
     headers: { "content-type": "application/x-www-form-urlencoded", cookie: csrfCookie },
@@ -19,14 +19,14 @@ export async function signIn(email: string, password = TEST_PASSWORD): Promise<C
   });
   const session = (res.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).find((c) => c.startsWith("next-auth.session-token="));
   if (!session) throw new Error(`sign-in failed for ${email}: HTTP ${res.status}`);
-  return client(session);
+  return client(session, base);
 }
 
-export function client(cookie = ""): Client {
+export function client(cookie = "", base = APP_URL): Client {
   return {
     cookie,
     async request(method, path, body, raw) {
-      const res = await fetch(`${APP_URL}${path}`, {
+      const res = await fetch(`${base}${path}`, {
         method,
         redirect: "manual",
         headers: { ...(cookie ? { cookie } : {}), ...(body !== undefined || raw !== undefined ? { "content-type": "application/json" } : {}) },
