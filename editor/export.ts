@@ -8,7 +8,7 @@ import type { Severity, Summary } from "@/shared/analysis/types";
 import type { Joint, LinkageNode } from "@/shared/linkage/schema";
 import { cardSize, PORT_SIDES } from "./nodes";
 import { hardwareChips, SEVERITY_HEX } from "./joints/JointEdge";
-import { KIND_NAMES } from "./store";
+import { partName } from "@/shared/linkage/names";
 
 export const EXPORT_WIDTH = 1600;
 export const EXPORT_DIAGRAM_HEIGHT = 1000;
@@ -188,7 +188,7 @@ function drawScene(ctx: CanvasRenderingContext2D, nodes: Node[], scene: VectorSc
     ctx.stroke();
     ctx.fillStyle = INK;
     ctx.font = "600 12px Inter, system-ui, sans-serif";
-    ctx.fillText(clip(ctx, n.label || KIND_NAMES[n.kind], box.w - 36), box.x + 8, box.y + 17);
+    ctx.fillText(clip(ctx, partName(n), box.w - 36), box.x + 8, box.y + 17);
     ctx.fillStyle = "#4b5563";
     ctx.font = "11px Inter, system-ui, sans-serif";
     scene.lines(n).forEach((l, i) => ctx.fillText(clip(ctx, l, box.w - 16), box.x + 8, box.y + 32 + i * 16));

@@ -19,6 +19,7 @@ import {
 } from "@/shared/linkage/schema";
 import type { AnalysisSettings, Finding, Report, Severity } from "@/shared/analysis/types";
 import { defaultProps, KIND_NAMES } from "@/shared/linkage/kinds";
+import { indexById, jointName, partName } from "@/shared/linkage/names";
 
 export type XY = { x: number; y: number };
 export type Viewport = { x: number; y: number; zoom: number };
@@ -575,28 +576,5 @@ function sameList(a: string[], b: string[]) {
   return a.length === b.length && a.every((x, i) => x === b[i]);
 }
 
-const indexes = new WeakMap<readonly { id: string }[], Map<string, { id: string }>>();
-/**
- * id → item of a parts or joints array (the first with that id, as `find` would), built once per array.
- * Store arrays are replaced, never mutated, so selectors that look names up for many findings on every
- * store change (every drag frame) do one pass per new array instead of one per finding.
- */
-export function indexById<T extends { id: string }>(list: readonly T[]): Map<string, T> {
-  let m = indexes.get(list);
-  if (!m) {
-    m = new Map();
-    for (const x of list) if (!m.has(x.id)) m.set(x.id, x);
-    indexes.set(list, m);
-  }
-  return m as Map<string, T>;
-}
-
-/** A readable name for a joint: "Pushrod 1 · a ↔ Bellcrank 1 · in". */
-export function jointName(j: Joint, nodes: LinkageNode[]): string {
-  const index = indexById(nodes);
-  const label = (id: string) => {
-    const n = index.get(id);
-    return n ? n.label || KIND_NAMES[n.kind] : id;
-  };
-  return `${label(j.from.node)} · ${j.from.port} ↔ ${label(j.to.node)} · ${j.to.port}`;
-}
+/** How parts and joints are named, and the id index behind it, live in shared/linkage/names.ts. */
+export { indexById, jointName, partName };

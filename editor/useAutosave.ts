@@ -9,7 +9,8 @@ import { useMutation } from "@tanstack/react-query";
 import { useStore } from "zustand";
 import type { LinkageGraph } from "@/shared/linkage/schema";
 import type { Report } from "@/shared/analysis/types";
-import { jointName, KIND_NAMES, toGraph, type EditorStore, type Snapshot } from "./store";
+import { jointName, partName } from "@/shared/linkage/names";
+import { toGraph, type EditorStore, type Snapshot } from "./store";
 
 export const AUTOSAVE_DELAY = 1500;
 
@@ -50,10 +51,6 @@ export type Difference = {
 
 /** What differs between my graph and theirs, by name. */
 export function diffGraphs(mine: Snapshot, theirs: Snapshot): Difference {
-  const nodeName = (s: Snapshot, id: string) => {
-    const n = s.nodes.find((x) => x.id === id);
-    return n ? n.label || KIND_NAMES[n.kind] : id;
-  };
   const side = <T extends { id: string }>(a: T[], b: T[], name: (side: "mine" | "theirs", x: T) => string) => {
     const ma = new Map(a.map((x) => [x.id, x]));
     const mb = new Map(b.map((x) => [x.id, x]));
@@ -64,8 +61,8 @@ export function diffGraphs(mine: Snapshot, theirs: Snapshot): Difference {
     };
   };
   return {
-    parts: side(mine.nodes, theirs.nodes, (_s, n) => n.label || KIND_NAMES[n.kind]),
-    joints: side(mine.joints, theirs.joints, (s, j) => jointName(j, s === "mine" ? mine.nodes : theirs.nodes) || `${nodeName(mine, j.from.node)}`),
+    parts: side(mine.nodes, theirs.nodes, (_s, n) => partName(n)),
+    joints: side(mine.joints, theirs.joints, (s, j) => jointName(j, s === "mine" ? mine.nodes : theirs.nodes)),
   };
 }
 

@@ -187,7 +187,7 @@ export async function checklistPdf(build: Build, linkage: Linkage, revision: num
     if (i.where !== where) {
       where = i.where;
       doc.ensure(40);
-      doc.text(i.jointId ? `Joint ${i.jointId}: ${i.where}` : i.where, { size: 10, bold: true, gap: 3 });
+      doc.text(i.where, { size: 10, bold: true, gap: 3 });
     }
     const t = byKey.get(`${i.jointId}|${i.code}`);
     doc.ensure(24);

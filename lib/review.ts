@@ -14,20 +14,6 @@ export function reportOf(build: Build, rev: RevisionView): Report {
   return rev.analysis ?? analyze(rev.graph, build.analysisSettings);
 }
 
-/** A subject named the way a person reads it: "the joint Aft pushrod – Elevator horn". */
-export function subjectLabel(graph: LinkageGraph, s: Subject): string {
-  const nodeName = (id: string) => {
-    const n = graph.nodes.find((x) => x.id === id);
-    return n ? n.label || n.kind : id;
-  };
-  if (s.type === "node") return `the part ${nodeName(s.id)}`;
-  if (s.type === "joint") {
-    const j = graph.joints.find((x) => x.id === s.id);
-    return j ? `the joint ${nodeName(j.from.node)} – ${nodeName(j.to.node)}` : `the joint ${s.id}`;
-  }
-  return "the linkage";
-}
-
 export function subjectExists(graph: LinkageGraph, s: Subject, linkageId: string) {
   if (s.type === "node") return graph.nodes.some((n) => n.id === s.id);
   if (s.type === "joint") return graph.joints.some((j) => j.id === s.id);

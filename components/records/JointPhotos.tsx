@@ -1,14 +1,15 @@
 "use client";
 /**
  * Photos that prove a joint (witness hole, jam nut, washer): thumbnails and an upload button.
- * Used on the checklist; the editor's joint card can host it too (props: buildId, linkageId, jointId).
+ * Used on the checklist; the editor's joint card can host it too (props: buildId, linkageId, jointId, and the
+ * joint's name from shared/linkage/names.ts for the labels).
  */
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useRef, useState } from "react";
 import { api } from "@/components/api-client";
 import { ACCEPT_PHOTOS, uploadFile, type StoredFile } from "./upload-client";
 
-export function JointPhotos({ buildId, linkageId, jointId, canEdit, canRemove = false }: { buildId: string; linkageId: string; jointId: string; canEdit: boolean; canRemove?: boolean }) {
+export function JointPhotos({ buildId, linkageId, jointId, jointName, canEdit, canRemove = false }: { buildId: string; linkageId: string; jointId: string; jointName: string; canEdit: boolean; canRemove?: boolean }) {
   const url = `/api/builds/${buildId}/linkages/${linkageId}/joints/${encodeURIComponent(jointId)}/photos`;
   const key = ["joint-photos", linkageId, jointId];
   const qc = useQueryClient();
@@ -33,10 +34,10 @@ export function JointPhotos({ buildId, linkageId, jointId, canEdit, canRemove = 
         <span key={p.id} className="relative">
           <a href={p.url} target="_blank" rel="noreferrer" title={`${p.name}${p.uploadedBy ? ` — ${p.uploadedBy}` : ""}`} className="block rounded border border-ink/15 hover:border-advisory focus:outline-2 focus:outline-advisory">
             {/* eslint-disable-next-line @next/next/no-img-element */}
-            <img src={p.thumbUrl ?? p.url} alt={`Photo of joint ${jointId}: ${p.name}`} className="h-14 w-auto rounded" loading="lazy" data-testid="joint-photo-thumb" />
+            <img src={p.thumbUrl ?? p.url} alt={`Photo of the joint ${jointName}: ${p.name}`} className="h-14 w-auto rounded" loading="lazy" data-testid="joint-photo-thumb" />
           </a>
           {canEdit && canRemove ? (
-            <button type="button" onClick={() => remove.mutate(p.id)} disabled={remove.isPending} aria-label={`Remove ${p.name} from joint ${jointId}`} title="Remove from this joint (the file stays in the build's uploads)"
+            <button type="button" onClick={() => remove.mutate(p.id)} disabled={remove.isPending} aria-label={`Remove ${p.name} from the joint ${jointName}`} title="Remove from this joint (the file stays in the build's uploads)"
               className="absolute -right-1.5 -top-1.5 flex h-4 w-4 items-center justify-center rounded-full bg-ink text-[10px] leading-none text-white hover:bg-hazard" data-testid="joint-photo-remove">×</button>
           ) : null}
         </span>
@@ -44,7 +45,7 @@ export function JointPhotos({ buildId, linkageId, jointId, canEdit, canRemove = 
       {list.length === 0 && !photos.isLoading ? <span className="text-xs text-ink-soft">No photo yet — a close-up of the witness hole, jam nut and washer is the evidence an inspector asks for.</span> : null}
       {canEdit ? (
         <>
-          <input ref={input} type="file" accept={ACCEPT_PHOTOS} multiple className="sr-only" id={`photo-${linkageId}-${jointId}`} aria-label={`Add a photo of joint ${jointId}`}
+          <input ref={input} type="file" accept={ACCEPT_PHOTOS} multiple className="sr-only" id={`photo-${linkageId}-${jointId}`} aria-label={`Add a photo of the joint ${jointName}`}
             onChange={(e) => { const files = [...(e.target.files ?? [])]; e.target.value = ""; if (files.length) add.mutate(files); }} />
           <label htmlFor={`photo-${linkageId}-${jointId}`} className="cursor-pointer rounded border border-dashed border-ink/30 px-2 py-1 text-xs text-ink-soft hover:border-ink hover:text-ink focus-within:outline">
             {add.isPending ? "Uploading…" : "+ Photo"}

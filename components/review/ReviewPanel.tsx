@@ -12,7 +12,7 @@ const when = (iso: string) => new Date(iso).toLocaleString("en-CA", { dateStyle:
 const box = "w-full rounded border border-ink/20 bg-white px-2 py-1 text-[12px] text-ink focus:border-advisory focus:outline-none";
 const heading = "text-[11px] font-semibold uppercase tracking-wide text-ink-soft";
 
-type Hazard = { code: string; subject: { type: string; id: string }; message: string; lapsed: boolean };
+type Hazard = { code: string; subject: { type: string; id: string }; subjectName: string; message: string; lapsed: boolean };
 
 function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId: string; me: ReviewMe }) {
   const s = useSignoffs(buildId, linkageId);
@@ -42,7 +42,7 @@ function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId
           <ul className="list-disc pl-4">
             {blocking.map((f, i) => (
               <li key={i}>
-                <span className="font-mono">{f.code}</span> on {f.subject.type} {f.subject.id}
+                <span className="font-mono">{f.code}</span> on {f.subjectName}
                 {f.lapsed ? " (acknowledgement lapsed)" : ""}
               </li>
             ))}
@@ -77,7 +77,7 @@ function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId
               {refused.hazards.length > 0 && (
                 <ul className="list-disc pl-4">
                   {refused.hazards.map((h, i) => (
-                    <li key={i}>{h.code} on {h.subject.type} {h.subject.id}: {h.message}</li>
+                    <li key={i}>{h.code} on {h.subjectName}: {h.message}</li>
                   ))}
                 </ul>
               )}

@@ -21,7 +21,7 @@ export type CommentView = {
   resolvedBy: Person | null;
 };
 export type AckView = { id: string; code: string; subject: Subject; reason: string; by: Person; revision: number; createdAt: string; status: "active" | "lapsed" };
-export type FindingView = Finding & { acknowledgement: AckView | null; lapsed: AckView | null };
+export type FindingView = Finding & { subjectName: string; acknowledgement: AckView | null; lapsed: AckView | null };
 export type SignoffView = { id: string; revision: number; reviewer: Person; statement: string; createdAt: string; stale: boolean };
 export type RevisionRow = { revision: number; author: Person; createdAt: string; summary: { hazard: number; caution: number; advisory: number } | null };
 

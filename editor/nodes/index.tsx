@@ -8,7 +8,7 @@ import { Handle, Position, type Node, type NodeHandle, type NodeProps } from "@x
 import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
 import type { Severity } from "@/shared/analysis/types";
 import { useEditorConfig, useEditorValue } from "../context";
-import { KIND_NAMES } from "@/shared/linkage/kinds";
+import { partName } from "@/shared/linkage/names";
 import type { UnitSystem } from "../units";
 import { KindGlyph } from "./glyphs";
 import { EDITOR_KIND_LIST, EDITOR_KINDS } from "./kinds";
@@ -49,7 +49,7 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
       <div className="flex items-center gap-1.5">
         <KindGlyph kind={kind} className="h-4 w-4 shrink-0 text-ink-soft" />
         <div className="min-w-0 flex-1 truncate text-[12px] font-semibold leading-4" title={label}>
-          {label || KIND_NAMES[kind]}
+          {partName({ kind, label })}
         </div>
         {worst && (
           <span className={`rounded px-1 text-[10px] font-bold leading-4 text-white ${SEVERITY_BG[worst]}`} title={`${count} finding(s), worst: ${worst}`}>

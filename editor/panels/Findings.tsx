@@ -5,7 +5,7 @@ import { SEVERITIES, type AnalysisSettings, type Finding, type Severity } from "
 import type { ControlSystem } from "@/shared/linkage/schema";
 import { useEditorConfig, useEditorStore } from "../context";
 import { useFocusSubject } from "../Canvas";
-import { indexById, jointName, KIND_NAMES, type EditorState } from "../store";
+import { subjectName } from "@/shared/linkage/names";
 import { fmt, fmtUnit } from "../units";
 import { SEVERITY_BG, SEVERITY_TEXT } from "../nodes";
 
@@ -14,18 +14,6 @@ export const CAUTION =
 
 export const SEVERITY_NAMES: Record<Severity, string> = { hazard: "Hazard", caution: "Caution", advisory: "Advisory" };
 const SOURCE_NAMES = { published: "published", commonPractice: "common practice", fromMemory: "recalled value, check it" } as const;
-
-export function subjectName(s: Pick<EditorState, "nodes" | "joints">, subject: Finding["subject"]): string {
-  if (subject.type === "node") {
-    const n = indexById(s.nodes).get(subject.id);
-    return n ? n.label || KIND_NAMES[n.kind] : subject.id;
-  }
-  if (subject.type === "joint") {
-    const j = indexById(s.joints).get(subject.id);
-    return j ? jointName(j, s.nodes) : subject.id;
-  }
-  return "whole linkage";
-}
 
 export const FindingItem = memo(function FindingItem({ f, compact, onPick }: { f: Finding; compact?: boolean; onPick?: (f: Finding) => void }) {
   const { unitSystem } = useEditorConfig();

@@ -11,6 +11,7 @@ import type { PartSpec } from "@/shared/records/parts";
 import type { SuggestResult, Suggestion } from "@/shared/records/suggest";
 import { api } from "@/components/api-client";
 import { JointPhotos } from "@/components/records/JointPhotos";
+import { indexById, jointName } from "@/shared/linkage/names";
 import { useEditorConfig, useEditorStore, useEditorStoreApi } from "../context";
 import { fmt } from "../units";
 
@@ -31,6 +32,10 @@ function useSavedState(jointId: string) {
 export function JointEvidence({ target, jointId }: { target: RecordsTarget; jointId: string }) {
   const { readOnly } = useEditorConfig();
   const { inSaved } = useSavedState(jointId);
+  const name = useEditorStore((s) => {
+    const j = indexById(s.joints).get(jointId);
+    return j ? jointName(j, s.nodes) : "";
+  });
   return (
     <section className="relative rounded border border-ink/10 bg-white" data-testid="joint-evidence">
       <header className="border-b border-ink/5 px-2 py-1">
@@ -38,7 +43,7 @@ export function JointEvidence({ target, jointId }: { target: RecordsTarget; join
       </header>
       <div className="p-2">
         {inSaved ? (
-          <JointPhotos buildId={target.buildId} linkageId={target.linkageId} jointId={jointId} canEdit={!readOnly} canRemove />
+          <JointPhotos buildId={target.buildId} linkageId={target.linkageId} jointId={jointId} jointName={name} canEdit={!readOnly} canRemove />
         ) : (
           <p className="text-[11px] text-ink-soft" data-testid="joint-evidence-unsaved">
             This joint is not saved yet; photos attach once it is (autosave runs a moment after the last change, or press Save).

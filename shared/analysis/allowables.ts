@@ -15,7 +15,7 @@ import {
 } from "../hardware";
 import type { JointHardware } from "../linkage/schema";
 import type { AnalysisSettings, Finding, JointResult, PushrodResult } from "./types";
-import { type Ctx, nodeLabel } from "./context";
+import { type Ctx, jointLabel, nodeLabel } from "./context";
 import type { Loads } from "./loads";
 import { finding, fmt, fmtMargin, jointSubject, nodeSubject, num } from "./format";
 
@@ -161,27 +161,27 @@ export function strengthFindings(ctx: Ctx, pushrodNodes: number[], pushrods: Pus
     if (hw?.rodEnd) {
       if (r.rodEndRating === null) {
         out.push(finding("rod-end-rating-missing", "caution", subj,
-          `The rod end at joint ${r.jointId} has no rated ultimate radial load on its card, so it cannot be checked against the ${fmt(r.radialUltimate)} lbf it must carry (${factorText(settings, r.specialFactor)}). Enter the maker's rating.`,
+          `The rod end at joint ${jointLabel(ctx, j)} has no rated ultimate radial load on its card, so it cannot be checked against the ${fmt(r.radialUltimate)} lbf it must carry (${factorText(settings, r.specialFactor)}). Enter the maker's rating.`,
           SRC.rodEndRating, [num("required ultimate", r.radialUltimate, "lbf")]));
       } else if (r.rodEndMargin !== null && r.rodEndMargin < 0) {
         out.push(finding("rod-end-underrated", "hazard", subj,
-          `The rod end at joint ${r.jointId} is rated ${fmt(r.rodEndRating)} lbf but must carry ${fmt(r.radialUltimate)} lbf ultimate (${fmt(r.radialLimit)} lbf limit, ${factorText(settings, r.specialFactor)}) — margin ${fmtMargin(r.rodEndMargin)}. Use a rod end with a higher rating.`,
+          `The rod end at joint ${jointLabel(ctx, j)} is rated ${fmt(r.rodEndRating)} lbf but must carry ${fmt(r.radialUltimate)} lbf ultimate (${fmt(r.radialLimit)} lbf limit, ${factorText(settings, r.specialFactor)}) — margin ${fmtMargin(r.rodEndMargin)}. Use a rod end with a higher rating.`,
           SRC.rodEndRating, [num("required ultimate", r.radialUltimate, "lbf"), num("rating", r.rodEndRating, "lbf"), num("margin", r.rodEndMargin, "")]));
       }
       if (hw.shear === "single") {
         out.push(finding("rod-end-single-shear", "caution", subj,
-          `The rod end at joint ${r.jointId} hangs on one side of its arm, so the bolt works in single shear with bending. Double shear (a clevis or a bolt supported on both sides) is better; if single shear is the design, check the bolt for bending and keep the retaining washer.`,
+          `The rod end at joint ${jointLabel(ctx, j)} hangs on one side of its arm, so the bolt works in single shear with bending. Double shear (a clevis or a bolt supported on both sides) is better; if single shear is the design, check the bolt for bending and keep the retaining washer.`,
           SRC.singleShear));
       }
     }
     if (hw?.bolt) {
       if (r.boltShearAllowable === null) {
         out.push(finding("bolt-diameter-unknown", "caution", subj,
-          `The custom bolt at joint ${r.jointId} has no diameter recorded, so its shear strength cannot be checked. Enter the shank diameter.`,
+          `The custom bolt at joint ${jointLabel(ctx, j)} has no diameter recorded, so its shear strength cannot be checked. Enter the shank diameter.`,
           SRC.anBolts));
       } else if (r.boltMargin !== null && r.boltMargin < 0) {
         out.push(finding("bolt-shear-weak", "hazard", subj,
-          `The bolt at joint ${r.jointId} is too small: in ${hw.shear} shear it holds ${fmt(r.boltShearAllowable)} lbf but must carry ${fmt(r.radialUltimate)} lbf ultimate (${factorText(settings, r.specialFactor)}) — margin ${fmtMargin(r.boltMargin)}. Use a larger bolt or double shear.`,
+          `The bolt at joint ${jointLabel(ctx, j)} is too small: in ${hw.shear} shear it holds ${fmt(r.boltShearAllowable)} lbf but must carry ${fmt(r.radialUltimate)} lbf ultimate (${factorText(settings, r.specialFactor)}) — margin ${fmtMargin(r.boltMargin)}. Use a larger bolt or double shear.`,
           hw.bolt.material === "aluminium" ? SRC.aluminiumBolts : SRC.anBolts,
           [num("required ultimate", r.radialUltimate, "lbf"), num("bolt shear allowable", r.boltShearAllowable, "lbf"), num("margin", r.boltMargin, "")]));
       }

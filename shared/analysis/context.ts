@@ -5,6 +5,7 @@
  */
 import type { Joint, LinkageGraph, LinkageNode } from "../linkage/schema";
 import { roleOf as kindRole, type Role } from "../linkage/kinds";
+import { jointName, partName } from "../linkage/names";
 import type { JointRole } from "./types";
 
 export type PortMap = Record<string, number[]>;
@@ -96,7 +97,12 @@ function jointRole(a: Role | undefined, pa: string, b: Role | undefined, pb: str
   return "link";
 }
 
-/** How a message names a part: its label as the builder typed it (the finding's subject carries the id). */
+/** How a message names a part: its name (shared/linkage/names.ts) in quotes; the finding's subject carries the id. */
 export function nodeLabel(n: LinkageNode): string {
-  return n.label ? `"${n.label}"` : n.id;
+  return `"${partName(n)}"`;
+}
+
+/** How a message names joint j: "Aft pushrod B ↔ Elevator horn, attach" (shared/linkage/names.ts). */
+export function jointLabel(ctx: Ctx, j: number): string {
+  return jointName(ctx.joints[j], ctx.nodes);
 }

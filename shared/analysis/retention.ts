@@ -7,7 +7,7 @@
 import { AN_BOLTS_BY_SIZE, MIN_BOLT_DIAMETER, SRC as SRC_, THREADS_BY_NAME, TORQUE_BY_THREAD, TUBE_MATERIALS_BY_NAME } from "../hardware";
 import type { Joint } from "../linkage/schema";
 import type { Finding } from "./types";
-import { type Ctx, jointsAt, nodeLabel, pushrodEndOf } from "./context";
+import { type Ctx, jointLabel, jointsAt, nodeLabel, pushrodEndOf } from "./context";
 import { boltDiameter } from "./allowables";
 import { finding, fmt, jointSubject, nodeSubject, num } from "./format";
 
@@ -43,11 +43,11 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       // Rule 1: jam nut fitted and tightened.
       if (!hw.jamNut || !hw.jamNut.fitted) {
         out.push(finding("jam-nut-missing", "hazard", jointSubject(jt.id),
-          `The threaded rod end at joint ${jt.id} has no jam nut. Without a jam nut tightened against the fitting, the reversing push-pull load works on the threads alone and the rod end can turn and unscrew. Fit a jam nut and tighten it.`,
+          `The threaded rod end at joint ${jointLabel(ctx, j)} has no jam nut. Without a jam nut tightened against the fitting, the reversing push-pull load works on the threads alone and the rod end can turn and unscrew. Fit a jam nut and tighten it.`,
           SRC.jamNut));
       } else if (!hw.jamNut.tightened) {
         out.push(finding("jam-nut-loose", "hazard", jointSubject(jt.id),
-          `The jam nut at joint ${jt.id} is fitted but not recorded as tightened. A loose jam nut does not lock the rod end; tighten it against the fitting (and torque-stripe it).`,
+          `The jam nut at joint ${jointLabel(ctx, j)} is fitted but not recorded as tightened. A loose jam nut does not lock the rod end; tighten it against the fitting (and torque-stripe it).`,
           SRC.jamNut));
       }
 
@@ -74,13 +74,13 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         if (!verified) {
           if (len !== undefined && len < required) {
             out.push(finding("thread-engagement-short", "hazard", jointSubject(jt.id),
-              `The rod end at joint ${jt.id} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${why}). Screw it in further and re-adjust the other end.`,
+              `The rod end at joint ${jointLabel(ctx, j)} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${why}). Screw it in further and re-adjust the other end.`,
               SRC.engagement, [num("engaged length", len, "in"), num("required", required, "in")]));
           } else if (len === undefined) {
             out.push(finding("thread-engagement-unverified", "caution", jointSubject(jt.id),
               re.hasWitnessHole !== false
-                ? `The thread engagement at joint ${jt.id} is not verified: check that a wire will not pass through the witness hole, or record the engaged length (at least ${fmt(required, 3)} in, ${k}×D).`
-                : `The rod end at joint ${jt.id} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${why}).`,
+                ? `The thread engagement at joint ${jointLabel(ctx, j)} is not verified: check that a wire will not pass through the witness hole, or record the engaged length (at least ${fmt(required, 3)} in, ${k}×D).`
+                : `The rod end at joint ${jointLabel(ctx, j)} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${why}).`,
               SRC.engagement, [num("required", required, "in")]));
           }
         }
@@ -89,7 +89,7 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       // Rule 3a: the bolt clamps the ball; it must not turn in it.
       if (hw.fit === "freeToRotate") {
         out.push(finding("bolt-turns-in-ball", "hazard", jointSubject(jt.id),
-          `The bolt at joint ${jt.id} is set loose so it turns in the rod-end ball. Clamp the ball's inner race tight between the fitting and washers so the bearing does the moving; a bolt turning in the ball wears the bore and can loosen the nut.`,
+          `The bolt at joint ${jointLabel(ctx, j)} is set loose so it turns in the rod-end ball. Clamp the ball's inner race tight between the fitting and washers so the bearing does the moving; a bolt turning in the ball wears the bore and can loosen the nut.`,
           SRC.boltClamped));
       }
 
@@ -99,15 +99,15 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         const w = hw.washerUnderHead;
         if (!w) {
           out.push(finding("retaining-washer-missing", "hazard", jointSubject(jt.id),
-            `The rod end at joint ${jt.id} is in single shear with no retaining washer under the bolt head. If the ball comes out of its housing nothing holds the eye on the bolt: fit a washer whose outside diameter is larger than the housing bore${bore ? ` (over ${fmt(bore, 3)} in)` : ""}.`,
+            `The rod end at joint ${jointLabel(ctx, j)} is in single shear with no retaining washer under the bolt head. If the ball comes out of its housing nothing holds the eye on the bolt: fit a washer whose outside diameter is larger than the housing bore${bore ? ` (over ${fmt(bore, 3)} in)` : ""}.`,
             SRC.retainingWasher, bore ? [num("housing bore", bore, "in")] : []));
         } else if (bore === undefined) {
           out.push(finding("retaining-washer-unverifiable", "caution", jointSubject(jt.id),
-            `The rod end at joint ${jt.id} is in single shear, but neither its housing bore nor its ball diameter is recorded, so the ${fmt(w.outsideDiameter, 3)} in retaining washer cannot be checked. Record the housing bore.`,
+            `The rod end at joint ${jointLabel(ctx, j)} is in single shear, but neither its housing bore nor its ball diameter is recorded, so the ${fmt(w.outsideDiameter, 3)} in retaining washer cannot be checked. Record the housing bore.`,
             SRC.retainingWasher, [num("washer outside diameter", w.outsideDiameter, "in")]));
         } else if (!(w.outsideDiameter > bore)) {
           out.push(finding("retaining-washer-small", "hazard", jointSubject(jt.id),
-            `The washer under the bolt head at joint ${jt.id} is ${fmt(w.outsideDiameter, 3)} in across, no larger than the ${fmt(bore, 3)} in ${re.housingBore !== undefined ? "housing bore" : "ball (no housing bore recorded)"} of the rod end. If the ball falls out the eye slides off over it. Fit a larger-diameter washer.`,
+            `The washer under the bolt head at joint ${jointLabel(ctx, j)} is ${fmt(w.outsideDiameter, 3)} in across, no larger than the ${fmt(bore, 3)} in ${re.housingBore !== undefined ? "housing bore" : "ball (no housing bore recorded)"} of the rod end. If the ball falls out the eye slides off over it. Fit a larger-diameter washer.`,
             SRC.retainingWasher, [num("washer outside diameter", w.outsideDiameter, "in"), num("housing bore", bore, "in")]));
         }
       }
@@ -115,7 +115,7 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       // Rule 10: misalignment rating.
       if (re.ratedMisalignment === undefined) {
         out.push(finding("misalignment-rating-unknown", "caution", jointSubject(jt.id),
-          `The rod end at joint ${jt.id} has no rated misalignment on its card. Record the maker's rating and check at full travel, both ways, that the ball does not reach it (typical ratings ±6° to ±14°). The drawing is planar, so the check cannot measure this for you.`,
+          `The rod end at joint ${jointLabel(ctx, j)} has no rated misalignment on its card. Record the maker's rating and check at full travel, both ways, that the ball does not reach it (typical ratings ±6° to ±14°). The drawing is planar, so the check cannot measure this for you.`,
           SRC.misalignment));
       }
     }
@@ -126,7 +126,7 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
     if (nut && (nut.type === "selfLockingMetal" || nut.type === "selfLockingInsert") && rotating) {
       const why = hw.fit === "freeToRotate" ? "the bolt is set free to rotate" : `the part turns on the bolt (${hw.bearing === "clevisPin" ? "clevis pin" : "plain bushing"})`;
       out.push(finding("self-locking-nut-on-turning-bolt", "hazard", jointSubject(jt.id),
-        `A self-locking nut is used at joint ${jt.id}, where ${why}. Rotation can back a self-locking nut off; use a castellated nut with a new cotter pin, or clamp the bolt so it cannot turn.`,
+        `A self-locking nut is used at joint ${jointLabel(ctx, j)}, where ${why}. Rotation can back a self-locking nut off; use a castellated nut with a new cotter pin, or clamp the bolt so it cannot turn.`,
         SRC.selfLockingRotation));
     }
 
@@ -134,10 +134,10 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
     if (nut?.type === "castellatedCotter") {
       if (nut.cotterPinNew === false) {
         out.push(finding("cotter-pin-reused", "hazard", jointSubject(jt.id),
-          `The cotter pin at joint ${jt.id} is not new. A cotter pin is bent once and never reused; fit a new one.`, SRC.cotter));
+          `The cotter pin at joint ${jointLabel(ctx, j)} is not new. A cotter pin is bent once and never reused; fit a new one.`, SRC.cotter));
       } else if (nut.cotterPinNew === undefined) {
         out.push(finding("cotter-pin-unrecorded", "caution", jointSubject(jt.id),
-          `The castellated nut at joint ${jt.id} does not record a new cotter pin. Fit a new cotter pin (never reuse one) and tick it on the joint card.`, SRC.cotter));
+          `The castellated nut at joint ${jointLabel(ctx, j)} does not record a new cotter pin. Fit a new cotter pin (never reuse one) and tick it on the joint card.`, SRC.cotter));
       }
     }
 
@@ -148,20 +148,20 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
     // Nut present and locked (14 CFR 23.607, beyond the ten rules).
     if (!nut) {
       out.push(finding("nut-missing", "caution", jointSubject(jt.id),
-        `The bolt at joint ${jt.id} has no nut recorded. Record the nut and how it is locked.`, SRC.nutLocking));
+        `The bolt at joint ${jointLabel(ctx, j)} has no nut recorded. Record the nut and how it is locked.`, SRC.nutLocking));
     } else if (nut.type === "none") {
       out.push(finding("nut-missing", "hazard", jointSubject(jt.id),
-        `The bolt at joint ${jt.id} has no nut: nothing holds it in the joint. Fit a locked nut.`, SRC.nutLocking));
+        `The bolt at joint ${jointLabel(ctx, j)} has no nut: nothing holds it in the joint. Fit a locked nut.`, SRC.nutLocking));
     } else if (nut.type === "plain") {
       out.push(finding("nut-not-locked", "hazard", jointSubject(jt.id),
-        `The plain nut at joint ${jt.id} has no locking device. In a control run every nut must be locked: use a self-locking nut where the bolt is clamped, or a castellated nut with a cotter pin, or safety wire.`,
+        `The plain nut at joint ${jointLabel(ctx, j)} has no locking device. In a control run every nut must be locked: use a self-locking nut where the bolt is clamped, or a castellated nut with a cotter pin, or safety wire.`,
         SRC.nutLocking));
     }
 
     // Rule 8: no bolt under 10-32.
     if (d !== null && d < MIN_D - 1e-9) {
       out.push(finding("bolt-too-small", "hazard", jointSubject(jt.id),
-        `The bolt at joint ${jt.id} is ${fmt(d, 3)} in in diameter; nothing smaller than a 10-32 (AN3, 0.190 in) belongs in a control run. Use an AN3 or larger.`,
+        `The bolt at joint ${jointLabel(ctx, j)} is ${fmt(d, 3)} in in diameter; nothing smaller than a 10-32 (AN3, 0.190 in) belongs in a control run. Use an AN3 or larger.`,
         SRC.minBolt, [num("bolt diameter", d, "in"), num("minimum", MIN_D, "in")]));
     }
 
@@ -170,10 +170,10 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
     if (hasNut) {
       if (bolt.threadsProtruding === undefined) {
         out.push(finding("bolt-protrusion-unrecorded", "advisory", jointSubject(jt.id),
-          `Record how many threads of the bolt at joint ${jt.id} show past the nut: at least one full thread must.`, SRC.protrusion));
+          `Record how many threads of the bolt at joint ${jointLabel(ctx, j)} show past the nut: at least one full thread must.`, SRC.protrusion));
       } else if (bolt.threadsProtruding < 1) {
         out.push(finding("bolt-thread-short", "hazard", jointSubject(jt.id),
-          `The bolt at joint ${jt.id} does not show a full thread past the nut (${fmt(bolt.threadsProtruding, 1)}), so the nut's locking does not fully engage. Use the next longer bolt.`,
+          `The bolt at joint ${jointLabel(ctx, j)} does not show a full thread past the nut (${fmt(bolt.threadsProtruding, 1)}), so the nut's locking does not fully engage. Use the next longer bolt.`,
           SRC.protrusion, [num("threads protruding", bolt.threadsProtruding, "threads"), num("minimum", 1, "threads")]));
       }
     }
@@ -181,11 +181,11 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       const underNut = hw.washerUnderNut?.thickness ?? 0;
       if (bolt.grip > bolt.stack + GRIP_TOLERANCE) {
         out.push(finding("bolt-grip-long", "caution", jointSubject(jt.id),
-          `The grip of the bolt at joint ${jt.id} (${fmt(bolt.grip, 3)} in) is longer than the stack it clamps (${fmt(bolt.stack, 3)} in): the nut can run out of thread and stop on the shank before it clamps. Use a shorter grip or add a washer under the nut.`,
+          `The grip of the bolt at joint ${jointLabel(ctx, j)} (${fmt(bolt.grip, 3)} in) is longer than the stack it clamps (${fmt(bolt.stack, 3)} in): the nut can run out of thread and stop on the shank before it clamps. Use a shorter grip or add a washer under the nut.`,
           SRC.grip, [num("grip", bolt.grip, "in"), num("stack", bolt.stack, "in")]));
       } else if (bolt.grip < bolt.stack - underNut - GRIP_TOLERANCE) {
         out.push(finding("bolt-threads-in-bearing", "caution", jointSubject(jt.id),
-          `The grip of the bolt at joint ${jt.id} (${fmt(bolt.grip, 3)} in) is shorter than the stack it clamps (${fmt(bolt.stack, 3)} in${underNut ? `, less ${fmt(underNut, 3)} in of washer under the nut` : ""}), so threads bear in the joint. Use the next longer grip.`,
+          `The grip of the bolt at joint ${jointLabel(ctx, j)} (${fmt(bolt.grip, 3)} in) is shorter than the stack it clamps (${fmt(bolt.stack, 3)} in${underNut ? `, less ${fmt(underNut, 3)} in of washer under the nut` : ""}), so threads bear in the joint. Use the next longer grip.`,
           SRC.grip, [num("grip", bolt.grip, "in"), num("stack", bolt.stack, "in")]));
       }
     }
@@ -204,17 +204,17 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
           const selfLocking = nut.type === "selfLockingMetal" || nut.type === "selfLockingInsert";
           if (tq === undefined) {
             out.push(finding("torque-unrecorded", "advisory", jointSubject(jt.id),
-              `Record the torque applied at joint ${jt.id}: ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${nut.pattern ?? "tension"} nut, plus the nut's drag torque.`, source));
+              `Record the torque applied at joint ${jointLabel(ctx, j)}: ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${nut.pattern ?? "tension"} nut, plus the nut's drag torque.`, source));
           } else if (tq < range.min) {
             out.push(finding("torque-low", "caution", jointSubject(jt.id),
-              `The nut at joint ${jt.id} is torqued to ${fmt(tq, 0)} in·lbf, below the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${nut.pattern ?? "tension"} nut (plus drag torque). Re-torque it.`, source, torqueNumbers(tq, range.min, range.max)));
+              `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, below the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${nut.pattern ?? "tension"} nut (plus drag torque). Re-torque it.`, source, torqueNumbers(tq, range.min, range.max)));
           } else if (tq > range.max) {
             if (selfLocking)
               out.push(finding("torque-check-drag", "advisory", jointSubject(jt.id),
-                `The nut at joint ${jt.id} is torqued to ${fmt(tq, 0)} in·lbf, above the table's ${fmt(range.max, 0)} in·lbf for a ${row.thread} ${nut.pattern ?? "tension"} nut. That is right only if the excess is the self-locking nut's drag torque: measure the drag and confirm.`, source, torqueNumbers(tq, range.min, range.max)));
+                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the table's ${fmt(range.max, 0)} in·lbf for a ${row.thread} ${nut.pattern ?? "tension"} nut. That is right only if the excess is the self-locking nut's drag torque: measure the drag and confirm.`, source, torqueNumbers(tq, range.min, range.max)));
             else
               out.push(finding("torque-high", "caution", jointSubject(jt.id),
-                `The nut at joint ${jt.id} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${nut.pattern ?? "tension"} nut. Over-torque stretches the bolt; replace the bolt and nut and torque within the range.`, source, torqueNumbers(tq, range.min, range.max)));
+                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${nut.pattern ?? "tension"} nut. Over-torque stretches the bolt; replace the bolt and nut and torque within the range.`, source, torqueNumbers(tq, range.min, range.max)));
           }
         }
       }

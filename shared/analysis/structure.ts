@@ -5,10 +5,11 @@
  * airframe closes a "loop" through it (that is how a linkage works, not a fault).
  */
 import { PORTS } from "../linkage/schema";
-import type { Role } from "../linkage/kinds";
+import { KIND_NAMES, type Role } from "../linkage/kinds";
+import { endName, portName } from "../linkage/names";
 import { SRC } from "../hardware";
 import type { Finding } from "./types";
-import { type Ctx, jointsAt, nodeLabel, otherNode } from "./context";
+import { type Ctx, jointLabel, jointsAt, nodeLabel, otherNode } from "./context";
 import type { Loads } from "./loads";
 import { finding, jointSubject, linkageSubject, nodeSubject } from "./format";
 
@@ -29,18 +30,20 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
     const jt = joints[j];
     const f = ctx.jFrom[j], t = ctx.jTo[j];
     if (f < 0 || t < 0) {
-      out.push(finding("joint-end-missing", "caution", jointSubject(jt.id), `Joint ${jt.id} refers to a part that is not in the drawing; it is left out of the check.`, SRC.structure));
+      out.push(finding("joint-end-missing", "caution", jointSubject(jt.id), f < 0 && t < 0
+        ? "A joint between two parts that are not in the drawing is left out of the check."
+        : `A joint from ${f < 0 ? endName(nodes[t], jt.to.port) : endName(nodes[f], jt.from.port)} to a part that is not in the drawing is left out of the check.`, SRC.structure));
       continue;
     }
     if (f === t) {
-      out.push(finding("joint-to-itself", "caution", jointSubject(jt.id), `Joint ${jt.id} joins a part to itself; it is left out of the check.`, SRC.structure));
+      out.push(finding("joint-to-itself", "caution", jointSubject(jt.id), `The joint ${jointLabel(ctx, j)} joins a part to itself; it is left out of the check.`, SRC.structure));
       continue;
     }
-    checkPort(nodes[f], jt.from.port, jt.id, out);
-    checkPort(nodes[t], jt.to.port, jt.id, out);
+    checkPort(ctx, j, nodes[f], jt.from.port, out);
+    checkPort(ctx, j, nodes[t], jt.to.port, out);
     if (!hasHardware(jt.hardware)) {
       out.push(finding("joint-hardware-missing", "caution", jointSubject(jt.id),
-        `Joint ${jt.id} has no hardware recorded (no bolt, nut, rod end or bearing), so nothing about it can be checked. Fill in its joint card.`, SRC.structure));
+        `The joint ${jointLabel(ctx, j)} has no hardware recorded (no bolt, nut, rod end or bearing), so nothing about it can be checked. Fill in its joint card.`, SRC.structure));
     }
   }
 
@@ -57,7 +60,7 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
       for (const end of ["a", "b"]) {
         if (jointsAt(ctx, n, end).length === 0)
           out.push(finding("pushrod-end-open", "caution", nodeSubject(node.id),
-            `Pushrod ${nodeLabel(node)} has nothing on its ${end} end. A pushrod carries load only between two joints; connect both ends.`, SRC.structure));
+            `Pushrod ${nodeLabel(node)} has nothing on its ${portName(node.kind, end)} end. A pushrod carries load only between two joints; connect both ends.`, SRC.structure));
       }
     }
     if (PIVOTED.has(role)) {
@@ -107,13 +110,13 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
     const a = find(f), b = find(t);
     if (a === b)
       out.push(finding("linkage-loop", "caution", jointSubject(joints[j].id),
-        `Joint ${joints[j].id} closes a loop in the run. Loads in a closed loop share out by stiffness, which this check does not model: each path is taken to carry the full force, and the result should be checked by hand.`, SRC.structure));
+        `The joint ${jointLabel(ctx, j)} closes a loop in the run. Loads in a closed loop share out by stiffness, which this check does not model: each path is taken to carry the full force, and the result should be checked by hand.`, SRC.structure));
     else parent[a] = b;
   }
 }
 
-function checkPort(node: Ctx["nodes"][number], port: string, jointId: string, out: Finding[]) {
+function checkPort(ctx: Ctx, j: number, node: Ctx["nodes"][number], port: string, out: Finding[]) {
   const ports = PORTS[node.kind];
   if (ports && !ports.includes(port))
-    out.push(finding("joint-port-unknown", "caution", jointSubject(jointId), `Joint ${jointId} attaches to "${port}" of ${nodeLabel(node)}, which a ${node.kind} does not have; that end carries no load in the check.`, SRC.structure));
+    out.push(finding("joint-port-unknown", "caution", jointSubject(ctx.joints[j].id), `The joint ${jointLabel(ctx, j)} attaches to "${port}" of ${nodeLabel(node)}, which a ${KIND_NAMES[node.kind].toLowerCase()} does not have; that end carries no load in the check.`, SRC.structure));
 }

@@ -4,7 +4,8 @@
  * An item's key is (jointId, code); jointId is "" for items of the whole linkage.
  */
 import { AN_BOLTS_BY_SIZE, SRC, THREADS_BY_NAME, type AnBoltSize } from "../hardware";
-import type { Joint, LinkageGraph, LinkageNode } from "../linkage/schema";
+import type { Joint, LinkageGraph } from "../linkage/schema";
+import { jointName, partName } from "../linkage/names";
 import type { SourceTag } from "../analysis/types";
 
 export const ITEM_CODES = [
@@ -15,7 +16,7 @@ export type ItemCode = (typeof ITEM_CODES)[number];
 
 export type ChecklistItem = {
   jointId: string;
-  /** Where, in words: "Forward pushrod · b ↔ Bellcrank under the seat · in", or "Whole linkage". */
+  /** Where, in words: the joint's name ("Forward pushrod B ↔ Bellcrank under the seat, in"), or "Whole linkage". */
   where: string;
   code: ItemCode;
   text: string;
@@ -23,11 +24,6 @@ export type ChecklistItem = {
 };
 
 const fmt = (v: number) => String(Number(v.toFixed(3)));
-
-export function jointWhere(j: Joint, nodes: Map<string, LinkageNode>): string {
-  const side = (e: Joint["from"]) => `${nodes.get(e.node)?.label || e.node} · ${e.port}`;
-  return `${side(j.from)} ↔ ${side(j.to)}`;
-}
 
 export function jointItems(j: Joint, where: string): ChecklistItem[] {
   const hw = j.hardware;
@@ -66,7 +62,7 @@ export function linkageItems(g: LinkageGraph): ChecklistItem[] {
   const surfaces = g.nodes.filter((n) => n.kind === "controlSurface");
   const stops = g.nodes.filter((n) => n.kind === "travelStop");
   const limits = surfaces
-    .map((s) => (s.kind === "controlSurface" ? `${s.label || s.id} ${s.props.travelUp}° up / ${s.props.travelDown}° down` : ""))
+    .map((s) => (s.kind === "controlSurface" ? `${partName(s)} ${s.props.travelUp}° up / ${s.props.travelDown}° down` : ""))
     .join("; ");
   const items: ChecklistItem[] = [
     { jointId: "", where, code: "full-free-travel", text: "Full and free travel from stop to stop with the controls moved by hand: no binding, rubbing or contact with structure or wiring, at every position.", source: { kind: "commonPractice", text: "control-system inspection" } },
@@ -74,7 +70,7 @@ export function linkageItems(g: LinkageGraph): ChecklistItem[] {
   if (surfaces.length || stops.length) {
     items.push({
       jointId: "", where, code: "stops-before-limits",
-      text: `The stops${stops.length ? ` (${stops.map((s) => s.label || s.id).join(", ")})` : ""} contact before the surface reaches its limits${limits ? ` — ${limits}` : ""}; nothing else in the run acts as the stop.`,
+      text: `The stops${stops.length ? ` (${stops.map((s) => partName(s)).join(", ")})` : ""} contact before the surface reaches its limits${limits ? ` — ${limits}` : ""}; nothing else in the run acts as the stop.`,
       source: { kind: "commonPractice", text: "control-system inspection: stops take the load, not the surface" },
     });
   }
@@ -83,6 +79,5 @@ export function linkageItems(g: LinkageGraph): ChecklistItem[] {
 
 /** Every item of a revision, joints in graph order, then the whole-linkage items. */
 export function checklistFor(g: LinkageGraph): ChecklistItem[] {
-  const nodes = new Map(g.nodes.map((n) => [n.id, n]));
-  return [...g.joints.flatMap((j) => jointItems(j, jointWhere(j, nodes))), ...linkageItems(g)];
+  return [...g.joints.flatMap((j) => jointItems(j, jointName(j, g.nodes))), ...linkageItems(g)];
 }

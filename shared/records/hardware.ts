@@ -4,7 +4,7 @@
  */
 import { AN_BOLTS_BY_SIZE, type AnBoltSize } from "../hardware";
 import type { Joint, LinkageGraph } from "../linkage/schema";
-import { jointWhere } from "./checklist";
+import { jointName } from "../linkage/names";
 
 export const HARDWARE_STATES = ["to_order", "ordered", "received", "installed", "inspected"] as const;
 export type HardwareState = (typeof HARDWARE_STATES)[number];
@@ -70,9 +70,8 @@ export function jointParts(j: Joint): [string, HardwareKind, string, string | nu
 export function hardwareList(linkages: { id: string; name: string; graph: LinkageGraph }[]): HardwareLine[] {
   const lines = new Map<string, HardwareLine>();
   for (const l of linkages) {
-    const nodes = new Map(l.graph.nodes.map((n) => [n.id, n]));
     for (const j of l.graph.joints) {
-      const where = jointWhere(j, nodes);
+      const where = jointName(j, l.graph.nodes);
       for (const [key, kind, description, partNumber, count] of jointParts(j)) {
         let line = lines.get(key);
         if (!line) lines.set(key, (line = { key, kind, description, partNumber, quantity: 0, usedIn: [] }));

@@ -6,9 +6,11 @@
 import type { Finding, Report, Subject } from "../analysis/types";
 import type { LinkageGraph } from "../linkage/schema";
 import { fingerprint } from "./fingerprint";
+import { subjectName } from "../linkage/names";
 
 export type AckLike = { id: string; code: string; subject: Subject; fingerprint: string; createdAt: string };
-export type FindingState = Finding & { acknowledgement: AckLike | null; lapsed: AckLike | null };
+/** A finding with its subject named (shared/linkage/names.ts) and the acknowledgement that covers it. */
+export type FindingState = Finding & { subjectName: string; acknowledgement: AckLike | null; lapsed: AckLike | null };
 
 const sameSubject = (a: Subject, b: Subject) => a.type === b.type && a.id === b.id;
 
@@ -24,7 +26,7 @@ export function ackFor(f: Pick<Finding, "code" | "subject">, graph: LinkageGraph
 export function findingStates(report: Report, graph: LinkageGraph, acks: AckLike[]): FindingState[] {
   return report.findings.map((f) => {
     const { active, lapsed } = ackFor(f, graph, acks);
-    return { ...f, acknowledgement: active, lapsed };
+    return { ...f, subjectName: subjectName(graph, f.subject), acknowledgement: active, lapsed };
   });
 }
 

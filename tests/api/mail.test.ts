@@ -94,7 +94,7 @@ describe("comment e-mail", () => {
     const r = await c.builder.request("POST", `${L()}/comments`, { subject: WRONG, body });
     expect(r.status).toBe(201);
     const [m] = await mailTo(u.owner.email);
-    expect(m.subject).toMatch(/^Comment on the joint Aft pushrod – Elevator horn/);
+    expect(m.subject).toMatch(/^Comment on the joint Aft pushrod B ↔ Elevator horn, attach — /);
     expect(m.text).toContain("> Washer looks small <script>alert(1)</script>");
     expect(m.text).toContain(`${APP_URL}/builds/${buildId}/linkages/${linkageId}?focus=joint:${DEMO_WRONG_JOINT}`);
     expect(m.html).not.toContain("<script>");

@@ -275,7 +275,7 @@ describe("hardware list and checklist", () => {
     const after = (await viewer.request("GET", `${B()}/hardware`)).body.lines.find((l: { key: string }) => l.key === jam.key);
     expect(after.state).toBe("received");
     const csv = await (await fetch(`${APP_URL}${B()}/hardware/export`, { headers: { cookie: viewer.cookie } })).text();
-    expect(csv).toContain("jamNut,Jam nut 1/4-28 LH,,1,Received,Pitch run: Forward pushrod · b ↔ Bellcrank under the seat · in");
+    expect(csv).toContain('jamNut,Jam nut 1/4-28 LH,,1,Received,"Pitch run: Forward pushrod B ↔ Bellcrank under the seat, in"');
   });
 
   it("ticks checklist items with person and time, keeps a note, and prints a PDF", async () => {

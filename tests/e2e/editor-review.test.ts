@@ -90,7 +90,7 @@ describe("the reviewer in the editor", () => {
     await open(samPage, editorUrl(demoLinkageId, "?select=j-stick-fwd"));
     const card = samPage.getByTestId("joint-card");
     await card.waitFor();
-    expect(await card.textContent()).toContain("Control stick · attach ↔ Forward pushrod · a");
+    expect(await card.textContent()).toContain("Control stick, attach ↔ Forward pushrod A");
     const badge = await samPage.getByTestId("joint-j-stick-fwd").boundingBox();
     const c = await samPage.getByTestId("canvas").boundingBox();
     expect(Math.abs(badge!.x + badge!.width / 2 - (c!.x + c!.width / 2))).toBeLessThan(40);
@@ -247,7 +247,7 @@ describe("the builder's records from the editor", () => {
     await open(danaPage, editorUrl(linkageId, `?select=${jointId}`));
     const card = danaPage.getByTestId("joint-card");
     await card.getByTestId("joint-evidence").waitFor();
-    await card.getByLabel(`Add a photo of joint ${jointId}`).setInputFiles({ name: "witness-hole.jpg", mimeType: "image/jpeg", buffer: await testImage("jpeg", 800, 600) });
+    await card.getByLabel(/^Add a photo of the joint .+ ↔ .+/).setInputFiles({ name: "witness-hole.jpg", mimeType: "image/jpeg", buffer: await testImage("jpeg", 800, 600) });
     const thumb = card.getByTestId("joint-photo-thumb");
     await thumb.waitFor({ timeout: 15_000 });
     await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);

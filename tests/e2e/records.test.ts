@@ -30,7 +30,7 @@ describe("build records in the browser", () => {
     const joint = page.getByTestId("checklist-joint-j-stick-fwd");
     await joint.waitFor();
     expect(await page.getByTestId("checklist-item").count()).toBe(33); // the demo linkage's checklist (tests/records)
-    await joint.getByLabel("Add a photo of joint j-stick-fwd").setInputFiles({ name: "jam-nut.jpg", mimeType: "image/jpeg", buffer: await testImage("jpeg", 1000, 750) });
+    await joint.getByLabel("Add a photo of the joint Control stick, attach ↔ Forward pushrod A").setInputFiles({ name: "jam-nut.jpg", mimeType: "image/jpeg", buffer: await testImage("jpeg", 1000, 750) });
     const thumb = joint.getByTestId("joint-photo-thumb");
     await thumb.waitFor({ timeout: 15_000 });
     await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320); // server thumbnail, 320 px box
@@ -70,7 +70,7 @@ describe("build records in the browser", () => {
 
     await page.goto(`${APP_URL}/builds/${buildId}/hardware`);
     await page.getByTestId("hardware-row").first().waitFor();
-    const link = page.getByRole("link", { name: /Pitch run: Control stick · attach ↔ Forward pushrod · a/ }).first();
+    const link = page.getByRole("link", { name: /Pitch run: Control stick, attach ↔ Forward pushrod A/ }).first();
     expect(await link.getAttribute("href")).toBe(`/builds/${buildId}/linkages/${linkageId}?select=j-stick-fwd`);
     await shot(page, "records-04-hardware");
     expect(errors).toEqual([]);

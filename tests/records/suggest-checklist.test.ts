@@ -80,7 +80,7 @@ describe("inspection checklist", () => {
     });
     const washer = items.find((i) => i.jointId === DEMO_WRONG_JOINT && i.code === "retaining-washer")!;
     expect(washer.text).toContain("over 0.5 in"); // the demo rod end's housing bore, 0.500 in (shared/demo.ts, invented part)
-    expect(washer.where).toBe("Aft pushrod · b ↔ Elevator horn · attach");
+    expect(washer.where).toBe("Aft pushrod B ↔ Elevator horn, attach"); // the joint's one name (shared/linkage/names.ts)
     expect(items.find((i) => i.jointId === "j-bellcrank-pivot" && i.code === "torque")!.text).toContain("120 in·lbf"); // demo value
     expect(items.find((i) => i.code === "stops-before-limits")!.text).toContain("Elevator 25° up / 20° down"); // demo travel
     for (const i of items) expect(i.source.text.length).toBeGreaterThan(0);

@@ -58,13 +58,13 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
       {groups.map((g) => (
         <section key={g.jointId || "whole"} className="rounded-lg border border-ink/10 bg-white" data-testid={`checklist-joint-${g.jointId || "linkage"}`}>
           <header className="flex flex-wrap items-center justify-between gap-2 border-b border-ink/10 px-4 py-2">
-            <h2 className="text-sm font-semibold">{g.jointId ? <>Joint <span className="font-mono">{g.jointId}</span> · {g.where}</> : g.where}</h2>
+            <h2 className="text-sm font-semibold">{g.where}</h2>
             {g.jointId ? <Link className="no-print text-xs text-advisory hover:underline" href={`/builds/${p.buildId}/linkages/${p.linkageId}?select=${encodeURIComponent(g.jointId)}`}>Open in the editor</Link> : null}
           </header>
           <ul className="divide-y divide-ink/5">
             {g.items.map((i) => <ItemRow key={i.code} i={i} canTick={p.canTick} onChange={(v) => tick.mutate({ jointId: i.jointId, code: i.code, ...v })} />)}
           </ul>
-          {g.jointId ? <div className="border-t border-ink/10 px-4 py-2"><JointPhotos buildId={p.buildId} linkageId={p.linkageId} jointId={g.jointId} canEdit={p.canEdit} /></div> : null}
+          {g.jointId ? <div className="border-t border-ink/10 px-4 py-2"><JointPhotos buildId={p.buildId} linkageId={p.linkageId} jointId={g.jointId} jointName={g.where} canEdit={p.canEdit} /></div> : null}
         </section>
       ))}
       <Caution />

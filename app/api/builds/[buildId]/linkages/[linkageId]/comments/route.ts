@@ -2,7 +2,8 @@ import { withLinkage, parseBody, parseParams, json } from "@/lib/http";
 import { fieldError } from "@/lib/errors";
 import { commentCreate, COMMENT_EDIT_MINUTES, subjectSchema } from "@/shared/review-api";
 import { createComment, getComment, linkageAudience, listComments, unresolvedCounts, type ReviewComment } from "@/db/review";
-import { subjectExists, subjectLabel } from "@/lib/review";
+import { subjectExists } from "@/lib/review";
+import { subjectPhrase } from "@/shared/linkage/names";
 import { notifyComment } from "@/lib/review-mail";
 
 const withWindow = (c: ReviewComment) => ({ ...c, editableUntil: new Date(Date.parse(c.createdAt) + COMMENT_EDIT_MINUTES * 60_000).toISOString() });
@@ -38,7 +39,7 @@ export const POST = withLinkage("comment", { revision: "current" }, async ({ req
     linkageId: linkage.id,
     linkageName: linkage.name,
     subject,
-    subjectLabel: subjectLabel(rev.graph, subject),
+    subjectLabel: subjectPhrase(rev.graph, subject),
     body: body.body,
     isReply: parentId !== null,
   }).catch((e) => (console.error("[review] comment mail failed", e), [] as string[]));
