@@ -11,7 +11,9 @@ import knex from "knex";
 import { afterAll, describe, expect, it } from "vitest";
 import { adminSql, asPg, ensureBinaries, stop, up, type Cluster } from "@/db/pg";
 import { PASSWORD_FILE, localDbUrl } from "@/db/local-cluster.cjs";
-import { TEST_CLUSTER, testClusterSetting } from "../support/cluster";
+import { TEST_CLUSTER, restartTestCluster, testClusterRunning, testClusterSetting } from "../support/cluster";
+import { makeUser } from "../support/db";
+import { signIn } from "../support/http";
 
 const ROOT = path.resolve(__dirname, "../..");
 const isRoot = process.getuid?.() === 0;
@@ -47,6 +49,18 @@ describe("the test cluster", () => {
     const read = spawnSync("runuser", ["-u", "nobody", "--", "cat", PASSWORD_FILE], { encoding: "utf8" });
     expect(read.status).not.toBe(0);
     expect(statSync(PASSWORD_FILE).mode & 0o777).toBe(0o600);
+  });
+});
+
+describe("restarting the test cluster from a test", () => {
+  it("stops and starts it with its settings, and the app serves again", async () => {
+    const u = await makeUser("restart");
+    const me = await signIn(u.email);
+    restartTestCluster();
+    expect(testClusterRunning()).toBe(true);
+    expect([testClusterSetting("fsync"), testClusterSetting("port")]).toEqual(["off", String(TEST_CLUSTER.port)]);
+    const r = await me.request("GET", "/api/me");
+    expect([r.status, r.body.user?.id]).toEqual([200, u.id]);
   });
 });
 
