@@ -85,7 +85,7 @@ export function dataDir(port: number, kind: "app" | "test" = "app"): string {
   if (postgresCanUse(ROOT)) return path.join(ROOT, ".data", folder);
   const tag = createHash("sha1").update(ROOT).digest("hex").slice(0, 8);
   const base = isRoot ? "/var/lib/postgresql" : os.tmpdir();
-  return path.join(base, `linkwright-${tag}-${folder}`);
+  return path.join(base, kind === "app" ? `linkwright-${tag}-${port}` : `linkwright-${tag}-test-${port}`); // the app's name is the one earlier versions used
 }
 
 export const appCluster = (): Cluster => ({ name: "app", port: PG_PORT, dir: dataDir(PG_PORT, "app"), durable: true });
