@@ -7,6 +7,9 @@ import { refreshCurrentAnalyses } from "./linkages";
 import type { LinkageGraph } from "@/shared/linkage/schema";
 import type { Report } from "@/shared/analysis/types";
 import type { Role } from "@/shared/roles";
+import type { Build, BuildListItem } from "@/shared/schemas/builds";
+import type { Invitation, Member } from "@/shared/schemas/members";
+import type { Recipient } from "./users";
 
 export type BuildRow = {
   id: string;
@@ -19,7 +22,7 @@ export type BuildRow = {
   updated_at: Date;
 };
 
-export const toBuild = (b: BuildRow) => ({
+export const toBuild = (b: BuildRow): Build => ({
   id: b.id,
   name: b.name,
   model: b.model,
@@ -28,7 +31,7 @@ export const toBuild = (b: BuildRow) => ({
   createdAt: b.created_at.toISOString(),
   updatedAt: b.updated_at.toISOString(),
 });
-export type Build = ReturnType<typeof toBuild>;
+export type { Build };
 
 export async function getMembership(buildId: string, userId: string) {
   const row = await db("memberships as m")
@@ -51,7 +54,7 @@ export async function listBuildsForUser(userId: string) {
       db.raw("(select count(*)::int from memberships mm where mm.build_id = b.id) as member_count"),
     )
     .orderBy("b.updated_at", "desc");
-  return rows.map((r: BuildRow & { role: Role; linkage_count: number; member_count: number }) => ({
+  return rows.map((r: BuildRow & { role: Role; linkage_count: number; member_count: number }): BuildListItem => ({
     ...toBuild(r),
     role: r.role,
     linkageCount: r.linkage_count,
@@ -113,7 +116,7 @@ export async function listMembers(buildId: string) {
     .where("m.build_id", buildId)
     .select("u.id", "u.name", "u.email", "m.role", "m.created_at")
     .orderByRaw("case m.role when 'owner' then 0 when 'builder' then 1 when 'reviewer' then 2 else 3 end, u.name");
-  return rows.map((r: { id: string; name: string; email: string; role: Role; created_at: Date }) => ({
+  return rows.map((r: { id: string; name: string; email: string; role: Role; created_at: Date }): Member => ({
     userId: r.id,
     name: r.name,
     email: r.email,
@@ -182,7 +185,7 @@ export async function createInvitation(buildId: string, email: string, role: Rol
 }
 
 type InvitationRow = { id: string; email: string; role: Role; expires_at: Date; created_at: Date; accepted_at?: Date | null };
-const toInvitation = (r: InvitationRow) => ({
+const toInvitation = (r: InvitationRow): Invitation => ({
   id: r.id,
   email: r.email,
   role: r.role,
@@ -223,4 +226,9 @@ export async function acceptInvitation(token: string, userId: string) {
     await audit({ buildId: inv.build_id, userId, action: "invitation.accept", detail: { role: inv.role } }, trx);
     return { buildId: inv.build_id as string, role: (existing?.role ?? inv.role) as Role };
   });
+}
+
+/** The owners of a build, who hear about sign-offs and stale ones. */
+export async function buildOwners(buildId: string): Promise<Recipient[]> {
+  return db("memberships as m").join("users as u", "u.id", "m.user_id").where({ "m.build_id": buildId, "m.role": "owner" }).select("u.id", "u.email", "u.name", "u.notify", "m.role");
 }

@@ -1,13 +1,15 @@
 import "server-only";
 import { db } from "./index";
 
-export type Tick = { jointId: string; code: string; tickedBy: string | null; tickedAt: string | null; note: string };
+import { personName } from "./people";
+import type { Tick } from "@/shared/schemas/checklist";
+export type { Tick };
 
 export async function listTicks(linkageId: string, revision: number): Promise<Tick[]> {
   const rows = await db("checklist_items as c").leftJoin("users as u", "u.id", "c.ticked_by").where({ "c.linkage_id": linkageId, "c.revision": revision })
     .select("c.joint_id", "c.item_code", "c.ticked_at", "c.note", "u.name");
   return rows.map((r: { joint_id: string; item_code: string; ticked_at: Date | null; note: string; name: string | null }) => ({
-    jointId: r.joint_id, code: r.item_code, tickedBy: r.ticked_at ? r.name ?? "former member" : null, tickedAt: r.ticked_at ? r.ticked_at.toISOString() : null, note: r.note,
+    jointId: r.joint_id, code: r.item_code, tickedBy: r.ticked_at ? personName(r.name) : null, tickedAt: r.ticked_at ? r.ticked_at.toISOString() : null, note: r.note,
   }));
 }
 

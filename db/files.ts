@@ -2,14 +2,15 @@ import "server-only";
 import type { Knex } from "knex";
 import { db } from "./index";
 
-export type FileKind = "photo" | "pdf" | "linkage-picture";
+import type { FileKind, JointPhoto, StoredFile } from "@/shared/schemas/files";
+export type { FileKind, StoredFile };
 type FileRow = {
   id: string; build_id: string; key: string; kind: FileKind; content_type: string; size: number; name: string;
   thumb_key: string | null; width: number | null; height: number | null; uploaded_by: string | null; created_at: Date;
   uploader_name?: string | null;
 };
 
-export const toFile = (r: FileRow) => ({
+export const toFile = (r: FileRow): StoredFile => ({
   id: r.id,
   buildId: r.build_id,
   kind: r.kind,
@@ -24,7 +25,6 @@ export const toFile = (r: FileRow) => ({
   url: `/api/builds/${r.build_id}/files/${r.id}`,
   thumbUrl: r.thumb_key ? `/api/builds/${r.build_id}/files/${r.id}?thumb=1` : null,
 });
-export type StoredFile = ReturnType<typeof toFile>;
 
 export async function insertFile(
   f: { id: string; buildId: string; key: string; kind: FileKind; contentType: string; size: number; name: string; thumbKey: string | null; width: number | null; height: number | null; uploadedBy: string },
@@ -81,7 +81,7 @@ export async function listJointPhotos(buildId: string, linkageId: string, jointI
   const q = withUploader().join("joint_photos as jp", "jp.file_id", "f.id").where({ "f.build_id": buildId, "jp.linkage_id": linkageId }).select("jp.joint_id").orderBy("jp.created_at");
   if (jointId !== undefined) q.where("jp.joint_id", jointId);
   const rows = await q;
-  return rows.map((r: FileRow & { joint_id: string }) => ({ ...toFile(r), jointId: r.joint_id }));
+  return rows.map((r: FileRow & { joint_id: string }): JointPhoto => ({ ...toFile(r), jointId: r.joint_id }));
 }
 
 // ---- revision pictures ----------------------------------------------------------------------

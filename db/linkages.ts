@@ -2,8 +2,11 @@ import "server-only";
 import type { Knex } from "knex";
 import { db } from "./index";
 import { audit } from "./audit";
+import { person } from "./people";
 import { emptyGraph, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
 import type { Report } from "@/shared/analysis/types";
+import type { Linkage, RevisionRow } from "@/shared/schemas/linkages";
+import type { Revision } from "@/shared/schemas/graph";
 
 type LinkageRow = {
   id: string;
@@ -15,7 +18,7 @@ type LinkageRow = {
   updated_at: Date;
 };
 
-const toLinkage = (r: LinkageRow & { author_name?: string | null; summary?: Report["summary"] | null }) => ({
+const toLinkage = (r: LinkageRow & { author_name?: string | null; summary?: Report["summary"] | null }): Linkage => ({
   id: r.id,
   buildId: r.build_id,
   name: r.name,
@@ -26,7 +29,7 @@ const toLinkage = (r: LinkageRow & { author_name?: string | null; summary?: Repo
   lastAuthor: r.author_name ?? null,
   summary: r.summary ?? null,
 });
-export type Linkage = ReturnType<typeof toLinkage>;
+export type { Linkage, Revision };
 
 export async function listLinkages(buildId: string) {
   const rows = await db("linkages as l")
@@ -83,15 +86,7 @@ export async function deleteLinkage(buildId: string, linkageId: string, userId: 
   return n > 0;
 }
 
-export type RevisionView = {
-  revision: number;
-  graph: LinkageGraph;
-  analysis: Report | null;
-  author: { id: string | null; name: string };
-  createdAt: string;
-};
-
-export async function getRevision(linkageId: string, revision?: number): Promise<RevisionView | null> {
+export async function getRevision(linkageId: string, revision?: number): Promise<Revision | null> {
   const q = db("linkage_revisions as r")
     .join("linkages as l", "l.id", "r.linkage_id")
     .leftJoin("users as u", "u.id", "r.author_id")
@@ -104,7 +99,7 @@ export async function getRevision(linkageId: string, revision?: number): Promise
     revision: row.revision,
     graph: row.graph,
     analysis: row.analysis,
-    author: { id: row.author_id, name: row.author_name ?? "former member" },
+    author: person(row.author_id, row.author_name),
     createdAt: row.created_at.toISOString(),
   };
 }
@@ -142,6 +137,21 @@ export async function saveRevision(
     await trx("builds").where({ id: buildId }).update({ updated_at: trx.fn.now() });
     return { revision: rev.revision as number, createdAt: (rev.created_at as Date).toISOString() };
   });
+}
+
+/** The revision history, newest first, with the findings counts stored with each. */
+export async function listRevisions(linkageId: string) {
+  const rows = await db("linkage_revisions as r")
+    .leftJoin("users as u", "u.id", "r.author_id")
+    .where("r.linkage_id", linkageId)
+    .orderBy("r.revision", "desc")
+    .select("r.revision", "r.author_id", "u.name as author_name", "r.created_at", db.raw("r.analysis -> 'summary' as summary"));
+  return rows.map((r: { revision: number; author_id: string | null; author_name: string | null; created_at: Date; summary: Report["summary"] | null }): RevisionRow => ({
+    revision: r.revision,
+    author: person(r.author_id, r.author_name),
+    createdAt: r.created_at.toISOString(),
+    summary: r.summary ? { hazard: r.summary.hazard, caution: r.summary.caution, advisory: r.summary.advisory } : null,
+  }));
 }
 
 export async function countRevisions(linkageId: string) {

@@ -3,6 +3,8 @@ import { db } from "./index";
 import { audit } from "./audit";
 import { filesByIds, type StoredFile } from "./files";
 import type { ControlSystem } from "@/shared/linkage/schema";
+import type { LogEntry, LogFilter, LogTotals } from "@/shared/schemas/log";
+export type { LogEntry, LogFilter };
 
 type EntryRow = {
   id: string; build_id: string; date: string | Date; hours: string; title: string; text: string; systems: ControlSystem[];
@@ -13,7 +15,7 @@ type EntryRow = {
 
 const isoDay = (d: string | Date) => (typeof d === "string" ? d.slice(0, 10) : `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`);
 
-const toEntry = (r: EntryRow, files: StoredFile[] = []) => ({
+const toEntry = (r: EntryRow, files: StoredFile[] = []): LogEntry => ({
   id: r.id,
   date: isoDay(r.date),
   hours: Number(r.hours),
@@ -30,9 +32,7 @@ const toEntry = (r: EntryRow, files: StoredFile[] = []) => ({
   updatedAt: r.updated_at.toISOString(),
   files,
 });
-export type LogEntry = ReturnType<typeof toEntry>;
 
-export type LogFilter = { system?: ControlSystem; from?: string; to?: string; q?: string };
 
 function filtered(buildId: string, f: LogFilter) {
   const q = db("log_entries as e").where("e.build_id", buildId);
@@ -68,7 +68,7 @@ export async function listEntries(buildId: string, f: LogFilter = {}) {
 }
 
 /** Hours by system and by month over the filtered entries. An entry with several systems counts toward each. */
-export async function hourTotals(buildId: string, f: LogFilter = {}) {
+export async function hourTotals(buildId: string, f: LogFilter = {}): Promise<LogTotals> {
   const rows = await filtered(buildId, f).select("e.date", "e.hours", "e.systems");
   const bySystem: Record<string, number> = {};
   const byMonth: Record<string, Record<string, number>> = {};

@@ -1,6 +1,7 @@
 import "server-only";
 import { db } from "./index";
-import type { Part, PartInput } from "@/shared/records/parts";
+import type { PartInput } from "@/shared/records/parts";
+import type { Part } from "@/shared/schemas/parts";
 
 /** A parts library: a user's own, or a build's. */
 export type Library = { userId: string } | { buildId: string };

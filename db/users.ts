@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "./index";
+import type { NotifyPref, PublicUser } from "@/shared/schemas/users";
 
 export type UserRow = {
   id: string;
@@ -10,7 +11,7 @@ export type UserRow = {
   unit_system: "US" | "SI";
   created_at: Date;
 };
-export type PublicUser = { id: string; email: string; name: string; isSiteAdmin: boolean; unitSystem: "US" | "SI" };
+export type { PublicUser };
 
 export const toPublicUser = (u: UserRow): PublicUser => ({
   id: u.id,
@@ -71,3 +72,14 @@ export async function setSiteAdmin(id: string, isSiteAdmin: boolean) {
     return n ? ("ok" as const) : ("missing" as const);
   });
 }
+
+// ---- review e-mail -----------------------------------------------------------------------------
+
+/** Someone a review e-mail may go to, with their choice of which ones they get. */
+export type Recipient = { id: string; email: string; name: string; notify: NotifyPref; role: string };
+
+export async function getNotify(userId: string): Promise<NotifyPref> {
+  const row = await db("users").where({ id: userId }).first("notify");
+  return (row?.notify as NotifyPref) ?? "all";
+}
+export const setNotify = (userId: string, notify: NotifyPref) => db("users").where({ id: userId }).update({ notify });

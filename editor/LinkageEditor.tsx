@@ -25,7 +25,7 @@ import { downloadBlob, exportLinkagePng, fileSafe } from "./export";
 import { ConflictDialog } from "./panels/ConflictDialog";
 import { ShortcutsSheet } from "./panels/ShortcutsSheet";
 import { readDeepLink } from "./view";
-import { uploadFile } from "@/components/records/upload-client";
+import { uploadFile } from "@/components/api-client";
 
 export type LinkageEditorProps = {
   buildId: string;

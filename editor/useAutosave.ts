@@ -5,10 +5,12 @@
  * and on a 409 keeps the newer revision so the user can load it or keep theirs as a new revision.
  */
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
-import { useMutation } from "@tanstack/react-query";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useStore } from "zustand";
 import type { LinkageGraph } from "@/shared/linkage/schema";
-import type { Report } from "@/shared/analysis/types";
+import { api, ApiFailure } from "@/components/api-client";
+import { linkageKeys } from "@/components/query-keys";
+import type { GraphSaved, Revision } from "@/shared/schemas/graph";
 import { jointName, partName } from "@/shared/linkage/names";
 import { toGraph, type EditorStore, type Snapshot } from "./store";
 
@@ -16,32 +18,10 @@ export const AUTOSAVE_DELAY = 1500;
 
 export type SaveStatus = "saved" | "saving" | "unsaved" | "offline" | "conflict" | "error" | "readonly";
 
-export type RemoteRevision = { revision: number; graph: LinkageGraph; author: { id: string; name: string }; createdAt: string };
-
-export class SaveError extends Error {
-  constructor(
-    public status: number,
-    public code: string,
-    message: string,
-    public body: unknown,
-  ) {
-    super(message);
-  }
-}
-
-type PutResult = { revision: number; analysis?: Report; createdAt: string };
+export type RemoteRevision = Revision;
 
 export function graphUrl(buildId: string, linkageId: string) {
   return `/api/builds/${encodeURIComponent(buildId)}/linkages/${encodeURIComponent(linkageId)}/graph`;
-}
-
-async function putGraph(url: string, body: { baseRevision: number; graph: LinkageGraph }): Promise<PutResult> {
-  const res = await fetch(url, { method: "PUT", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-  const json = (await res.json().catch(() => null)) as { error?: { code?: string; message?: string } } | null;
-  if (!res.ok) {
-    throw new SaveError(res.status, json?.error?.code ?? "http_error", json?.error?.message ?? `The server answered ${res.status}`, json);
-  }
-  return json as unknown as PutResult;
 }
 
 export type Difference = {
@@ -80,7 +60,12 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
   const conflictRef = useRef<RemoteRevision | null>(null);
   conflictRef.current = conflict;
 
-  const mutation = useMutation({ mutationFn: (body: { baseRevision: number; graph: LinkageGraph }) => putGraph(url, body) });
+  const qc = useQueryClient();
+  const mutation = useMutation({
+    mutationFn: (body: { baseRevision: number; graph: LinkageGraph }) => api<GraphSaved>(url, { method: "PUT", body }),
+    // A new revision changes the findings, stales sign-offs and adds a history row: the review panels refetch.
+    onSuccess: () => qc.invalidateQueries({ queryKey: linkageKeys.review(opts.linkageId) }),
+  });
   const mutate = mutation.mutateAsync;
 
   const saveRef = useRef<() => Promise<string | null>>(async () => null);
@@ -109,10 +94,10 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
       if (store.getState().dirty) schedule();
       return null;
     } catch (e) {
-      if (e instanceof SaveError) {
+      if (e instanceof ApiFailure && !e.offline) {
         setOffline(false);
         if (e.status === 409 && e.code === "stale_revision") {
-          const cur = (e.body as { error?: { current?: RemoteRevision } })?.error?.current;
+          const cur = e.detail<RemoteRevision>("current");
           if (cur) {
             conflictRef.current = cur;
             setConflict(cur);
@@ -125,9 +110,8 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
           setError({ message });
           return message;
         } else if (e.status === 400) {
-          const fields = (e.body as { error?: { fields?: unknown } })?.error?.fields;
           const message = `The server refused the linkage: ${e.message}`;
-          setError({ message, fields });
+          setError({ message, fields: e.fields });
           return message;
         }
         setError({ message: e.message });

@@ -4,8 +4,8 @@ import type { z } from "zod";
 import { ApiError, fieldError, invalid, notFound, serverError, unauthorized, forbidden } from "./errors";
 import { getSessionUser, type SessionUser } from "./auth";
 import { getMembership, type Build } from "@/db/builds";
-import { getLinkage, getRevision, type Linkage, type RevisionView } from "@/db/linkages";
-import { revisionQuery } from "@/shared/api";
+import { getLinkage, getRevision, type Linkage, type Revision } from "@/db/linkages";
+import { revisionQuery } from "@/shared/schemas/common";
 import { can, type Capability, type Role, CAPABILITIES } from "@/shared/roles";
 
 export const MAX_BODY_BYTES = 5 * 1024 * 1024;
@@ -133,7 +133,7 @@ export async function getLinkageOrThrow(buildId: string, rawId: string): Promise
 }
 
 /** A revision of the linkage (the current one when `revision` is undefined); 404 when there is none. */
-export async function getRevisionOrThrow(linkageId: string, revision?: number): Promise<RevisionView> {
+export async function getRevisionOrThrow(linkageId: string, revision?: number): Promise<Revision> {
   const rev = await getRevision(linkageId, revision);
   if (!rev) throw notFound("revision");
   return rev;
@@ -158,12 +158,12 @@ export function withLinkage<P extends { buildId: string; linkageId: string } = {
 export function withLinkage<P extends { buildId: string; linkageId: string } = { buildId: string; linkageId: string }>(
   capability: Capability,
   choice: RevisionChoice,
-  handler: (a: LinkageArgs<P> & { revision: RevisionView }) => Promise<Response>,
+  handler: (a: LinkageArgs<P> & { revision: Revision }) => Promise<Response>,
 ): ReturnType<typeof withBuild<P>>;
 export function withLinkage<P extends { buildId: string; linkageId: string }>(
   capability: Capability,
   a: RevisionChoice | ((a: LinkageArgs<P>) => Promise<Response>),
-  b?: (a: LinkageArgs<P> & { revision: RevisionView }) => Promise<Response>,
+  b?: (a: LinkageArgs<P> & { revision: Revision }) => Promise<Response>,
 ) {
   return withBuild<P>(capability, async (args) => {
     const linkage = await getLinkageOrThrow(args.build.id, args.params.linkageId);

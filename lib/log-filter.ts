@@ -1,7 +1,7 @@
 import "server-only";
 import type { NextRequest } from "next/server";
 import { fieldError, invalid } from "./errors";
-import { logFilter } from "@/shared/records-api";
+import { logFilter } from "@/shared/schemas/log";
 
 /** `?system=&from=&to=&q=` of the log routes; a bad value is a 400 naming it. */
 export function readLogFilter(req: NextRequest) {

@@ -2,9 +2,9 @@ import "server-only";
 import { parseBody, parseParams, json } from "./http";
 import { csvRowsInvalid, duplicatePart, notFound } from "./errors";
 import { createPart, deletePart, importParts, listParts, partNumbers, updatePart, type Library } from "@/db/parts";
-import { partInput, partsImport } from "@/shared/records-api";
+import { partInput, partsImport } from "@/shared/schemas/parts";
+import { uuidParam } from "@/shared/schemas/common";
 import { parsePartsCsv, partsToCsv } from "@/shared/records/parts";
-import { uuidParam } from "@/shared/api";
 import { csvResponse } from "./records-http";
 
 /** The same handlers serve a personal library (/api/parts) and a build's (/api/builds/[id]/parts). */

@@ -7,7 +7,7 @@ import "server-only";
 import { sendMail } from "./mail";
 import { appUrl } from "./urls";
 import { ROLE_LABEL, type Role } from "@/shared/roles";
-import type { Recipient } from "@/db/review";
+import type { Recipient } from "@/db/users";
 import type { Subject } from "@/shared/analysis/types";
 
 export function escapeHtml(s: string) {

@@ -1,7 +1,8 @@
 import "server-only";
 /** What the review routes share: the report of a revision, names of subjects, hooks after a save. */
-import type { Linkage, RevisionView } from "@/db/linkages";
-import { buildOwners, claimNewlyStaleSignoffs } from "@/db/review";
+import type { Linkage, Revision } from "@/db/linkages";
+import { claimNewlyStaleSignoffs } from "@/db/signoffs";
+import { buildOwners } from "@/db/builds";
 import type { Build } from "@/db/builds";
 import type { SessionUser } from "./auth";
 import { analyze } from "@/shared/analysis";
@@ -10,7 +11,7 @@ import type { LinkageGraph } from "@/shared/linkage/schema";
 import { notifyStale } from "./review-mail";
 
 /** The analysis stored with a revision; revisions saved before the engine ran get it computed now. */
-export function reportOf(build: Build, rev: RevisionView): Report {
+export function reportOf(build: Build, rev: Revision): Report {
   return rev.analysis ?? analyze(rev.graph, build.analysisSettings);
 }
 

@@ -6,12 +6,13 @@
  */
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useRef, useState } from "react";
-import { api } from "@/components/api-client";
-import { ACCEPT_PHOTOS, uploadFile, type StoredFile } from "./upload-client";
+import { api, ACCEPT_PHOTOS, uploadFile } from "@/components/api-client";
+import { jointKeys } from "@/components/query-keys";
+import type { StoredFile } from "@/shared/schemas/files";
 
 export function JointPhotos({ buildId, linkageId, jointId, jointName, canEdit, canRemove = false }: { buildId: string; linkageId: string; jointId: string; jointName: string; canEdit: boolean; canRemove?: boolean }) {
   const url = `/api/builds/${buildId}/linkages/${linkageId}/joints/${encodeURIComponent(jointId)}/photos`;
-  const key = ["joint-photos", linkageId, jointId];
+  const key = jointKeys.photos(linkageId, jointId);
   const qc = useQueryClient();
   const input = useRef<HTMLInputElement>(null);
   const [error, setError] = useState<string | null>(null);

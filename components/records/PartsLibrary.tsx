@@ -4,6 +4,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import { useMemo, useState } from "react";
 import { api, ApiFailure } from "@/components/api-client";
+import { partKeys } from "@/components/query-keys";
 import { Button, Card, EmptyState, Field, Input, Select } from "@/components/ui";
 import { CSV_UNITS, PART_KINDS, PART_KIND_LABEL, SPEC_COLUMNS, describeSpec, partInput, type Part, type PartKind, type RowError } from "@/shared/records/parts";
 import { THREADS } from "@/shared/linkage/schema";
@@ -14,7 +15,7 @@ const col = createColumnHelper<Part>();
 
 export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: string; canEdit: boolean; title: string; intro: string }) {
   const qc = useQueryClient();
-  const key = ["parts", apiBase];
+  const key = partKeys.list(apiBase);
   const parts = useQuery({ queryKey: key, queryFn: async () => (await api<{ parts: Part[] }>(apiBase)).parts });
   const [sorting, setSorting] = useState<SortingState>([{ id: "kind", desc: false }]);
   const [filter, setFilter] = useState("");
@@ -76,7 +77,7 @@ function AddPart({ apiBase }: { apiBase: string }) {
   const [error, setError] = useState<string | null>(null);
   const save = useMutation({
     mutationFn: (body: unknown) => api(apiBase, { body }),
-    onSuccess: () => { setValues({ partNumber: "", description: "" }); setFields({}); setError(null); qc.invalidateQueries({ queryKey: ["parts", apiBase] }); },
+    onSuccess: () => { setValues({ partNumber: "", description: "" }); setFields({}); setError(null); qc.invalidateQueries({ queryKey: partKeys.list(apiBase) }); },
     onError: (e) => { if (e instanceof ApiFailure && e.fields) setFields(e.fields); setError(e instanceof Error ? e.message : String(e)); },
   });
   const submit = (e: React.FormEvent) => {
@@ -127,12 +128,12 @@ function ImportCsv({ apiBase }: { apiBase: string }) {
   const run = useMutation({
     mutationFn: async (dryRun: boolean) => {
       try { return { ok: true, r: await api<Report>(`${apiBase}/import`, { body: { csv: csv!.text, skipBadRows: skip, dryRun } }), dryRun }; }
-      catch (e) { if (e instanceof ApiFailure && (e.body as { error?: { report?: Report } })?.error?.report) return { ok: false, r: (e.body as { error: { report: Report } }).error.report, dryRun, message: e.message }; throw e; }
+      catch (e) { const report = e instanceof ApiFailure ? e.detail<Report>("report") : undefined; if (report) return { ok: false, r: report, dryRun, message: (e as Error).message }; throw e; }
     },
     onSuccess: (x) => {
       setReport(x.r);
       setMessage(x.dryRun ? `Checked: ${x.r.valid} of ${x.r.rows} rows can be imported.` : x.ok ? `Imported ${x.r.imported} part${x.r.imported === 1 ? "" : "s"}${x.r.skipped ? `, skipped ${x.r.skipped} bad row${x.r.skipped === 1 ? "" : "s"}` : ""}.` : (x as { message?: string }).message ?? null);
-      if (!x.dryRun && x.ok) qc.invalidateQueries({ queryKey: ["parts", apiBase] });
+      if (!x.dryRun && x.ok) qc.invalidateQueries({ queryKey: partKeys.list(apiBase) });
     },
     onError: (e) => setMessage(e instanceof Error ? e.message : String(e)),
   });

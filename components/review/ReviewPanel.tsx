@@ -2,7 +2,7 @@
 /** The linkage's review panel: sign-off state and form, what still blocks it, revision history and diff, e-mail setting. */
 import { useState } from "react";
 import { ApiFailure } from "@/components/api-client";
-import { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "@/shared/review-api";
+import { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "@/shared/schemas/users";
 import { showValue, type ChangedItem, type GraphDiff } from "@/shared/review/diff";
 import { useAcknowledgements, useDiff, useNotify, useReviewActions, useRevisions, useSignoffs } from "./api";
 import type { ReviewMe } from "./ReviewThread";

@@ -1,39 +1,31 @@
 "use client";
-/** react-query hooks of the review API; every mutation refreshes the review queries of its linkage. */
+/**
+ * react-query hooks of the review API. Every mutation refreshes the review queries of its linkage; a
+ * save of the graph does too (editor/useAutosave), so nothing here polls.
+ */
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import type { z } from "zod";
 import { api } from "@/components/api-client";
-import type { Subject, Finding } from "@/shared/analysis/types";
-import type { GraphDiff } from "@/shared/review/diff";
-import type { NotifyPref } from "@/shared/review-api";
+import { commentKeys, findingKeys, linkageKeys, meKeys, signoffKeys } from "@/components/query-keys";
+import type { Subject } from "@/shared/schemas/common";
+import type { commentsResponse, CommentView } from "@/shared/schemas/comments";
+import type { acknowledgementsResponse } from "@/shared/schemas/acknowledgements";
+import type { signoffsResponse, Signoff } from "@/shared/schemas/signoffs";
+import type { diffResponse, revisionsResponse } from "@/shared/schemas/linkages";
+import type { NotifyPref } from "@/shared/schemas/users";
 
-export type Person = { id: string | null; name: string };
-export type CommentView = {
-  id: string;
-  subject: Subject;
-  parentId: string | null;
-  author: Person;
-  body: string;
-  revision: number;
-  createdAt: string;
-  editedAt: string | null;
-  editableUntil: string;
-  resolvedAt: string | null;
-  resolvedBy: Person | null;
-};
-export type AckView = { id: string; code: string; subject: Subject; reason: string; by: Person; revision: number; createdAt: string; status: "active" | "lapsed" };
-export type FindingView = Finding & { subjectName: string; acknowledgement: AckView | null; lapsed: AckView | null };
-export type SignoffView = { id: string; revision: number; reviewer: Person; statement: string; createdAt: string; stale: boolean };
-export type RevisionRow = { revision: number; author: Person; createdAt: string; summary: { hazard: number; caution: number; advisory: number } | null };
+export type { CommentView } from "@/shared/schemas/comments";
+export type { AckView, FindingView } from "@/shared/schemas/acknowledgements";
+export type { Person } from "@/shared/schemas/common";
+export type { RevisionRow } from "@/shared/schemas/linkages";
+export type SignoffView = Signoff;
 
-const POLL = 4000;
 const base = (buildId: string, linkageId: string) => `/api/builds/${buildId}/linkages/${linkageId}`;
-export const reviewKey = (linkageId: string, what: string, ...rest: unknown[]) => ["review", linkageId, what, ...rest];
 
 export function useComments(buildId: string, linkageId: string) {
   return useQuery({
-    queryKey: reviewKey(linkageId, "comments"),
-    queryFn: () => api<{ comments: CommentView[]; unresolved: Record<string, number>; editMinutes: number }>(`${base(buildId, linkageId)}/comments`),
-    refetchInterval: POLL,
+    queryKey: commentKeys.list(linkageId),
+    queryFn: () => api<z.infer<typeof commentsResponse>>(`${base(buildId, linkageId)}/comments`),
   });
 }
 
@@ -44,46 +36,42 @@ export function useUnresolvedCounts(buildId: string, linkageId: string): Record<
 
 export function useAcknowledgements(buildId: string, linkageId: string) {
   return useQuery({
-    queryKey: reviewKey(linkageId, "acks"),
-    queryFn: () => api<{ revision: number; findings: FindingView[]; acknowledgements: AckView[] }>(`${base(buildId, linkageId)}/acknowledgements`),
-    refetchInterval: POLL,
+    queryKey: findingKeys.list(linkageId),
+    queryFn: () => api<z.infer<typeof acknowledgementsResponse>>(`${base(buildId, linkageId)}/acknowledgements`),
   });
 }
 
 export function useSignoffs(buildId: string, linkageId: string) {
   return useQuery({
-    queryKey: reviewKey(linkageId, "signoffs"),
-    queryFn: () =>
-      api<{ currentRevision: number; status: { state: "none" | "signed" | "stale"; latest: SignoffView | null }; signoffs: SignoffView[] }>(`${base(buildId, linkageId)}/signoffs`),
-    refetchInterval: POLL,
+    queryKey: signoffKeys.list(linkageId),
+    queryFn: () => api<z.infer<typeof signoffsResponse>>(`${base(buildId, linkageId)}/signoffs`),
   });
 }
 
 export function useRevisions(buildId: string, linkageId: string, enabled = true) {
   return useQuery({
-    queryKey: reviewKey(linkageId, "revisions"),
-    queryFn: () => api<{ currentRevision: number; revisions: RevisionRow[] }>(`${base(buildId, linkageId)}/revisions`),
+    queryKey: linkageKeys.revisions(linkageId),
+    queryFn: () => api<z.infer<typeof revisionsResponse>>(`${base(buildId, linkageId)}/revisions`),
     enabled,
-    refetchInterval: POLL,
   });
 }
 
 export function useDiff(buildId: string, linkageId: string, from: number | null, to: number | null) {
   return useQuery({
-    queryKey: reviewKey(linkageId, "diff", from, to),
-    queryFn: () => api<{ diff: GraphDiff; from: { revision: number }; to: { revision: number } }>(`${base(buildId, linkageId)}/diff?from=${from}&to=${to}`),
+    queryKey: linkageKeys.diff(linkageId, from, to),
+    queryFn: () => api<z.infer<typeof diffResponse>>(`${base(buildId, linkageId)}/diff?from=${from}&to=${to}`),
     enabled: from !== null && to !== null,
     staleTime: Infinity,
   });
 }
 
 export function useNotify() {
-  return useQuery({ queryKey: ["me", "notify"], queryFn: () => api<{ notify: NotifyPref }>("/api/me/notifications") });
+  return useQuery({ queryKey: meKeys.notify, queryFn: () => api<{ notify: NotifyPref }>("/api/me/notifications") });
 }
 
 function useReviewMutation<V, R>(linkageId: string, fn: (v: V) => Promise<R>) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: fn, onSettled: () => qc.invalidateQueries({ queryKey: ["review", linkageId] }) });
+  return useMutation({ mutationFn: fn, onSettled: () => qc.invalidateQueries({ queryKey: linkageKeys.review(linkageId) }) });
 }
 
 export function useReviewActions(buildId: string, linkageId: string) {
@@ -98,7 +86,7 @@ export function useReviewActions(buildId: string, linkageId: string) {
     signOff: useReviewMutation(linkageId, (v: { revision: number; statement: string }) => api(`${b}/signoffs`, { method: "POST", body: v })),
     setNotify: useMutation({
       mutationFn: (notify: NotifyPref) => api<{ notify: NotifyPref }>("/api/me/notifications", { method: "PATCH", body: { notify } }),
-      onSuccess: (d) => qc.setQueryData(["me", "notify"], d),
+      onSuccess: (d) => qc.setQueryData(meKeys.notify, d),
     }),
   };
 }

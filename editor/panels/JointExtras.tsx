@@ -10,6 +10,7 @@ import type { Joint, JointHardware } from "@/shared/linkage/schema";
 import type { PartSpec } from "@/shared/records/parts";
 import type { SuggestResult, Suggestion } from "@/shared/records/suggest";
 import { api } from "@/components/api-client";
+import { jointKeys } from "@/components/query-keys";
 import { JointPhotos } from "@/components/records/JointPhotos";
 import { indexById, jointName } from "@/shared/linkage/names";
 import { useEditorConfig, useEditorStore, useEditorStoreApi } from "../context";
@@ -120,7 +121,7 @@ export function SuggestPart({ target, joint }: { target: RecordsTarget; joint: J
   const [open, setOpen] = useState(false);
   const [applied, setApplied] = useState<string | null>(null);
   const q = useQuery({
-    queryKey: ["joint-suggestions", target.linkageId, joint.id, revision],
+    queryKey: jointKeys.suggestions(target.linkageId, joint.id, revision),
     queryFn: () => api<SuggestResult & { revision: number; analysisStored: boolean }>(`${jointUrl(target, joint.id)}/suggestions`),
     enabled: open && inSaved,
     staleTime: 30_000,

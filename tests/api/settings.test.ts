@@ -42,4 +42,16 @@ describe("build design settings", () => {
     expect(r.body.build.analysisSettings.pilotForce.pitchStick).toBe(334);
     expect((await current()).analysis.settings.fittingFactor).toBe(1.25);
   });
+
+  it("a patch changes only what it names: the settings leave the model alone, a new name leaves the model and the settings", async () => {
+    const before = (await owner.request("GET", `/api/builds/${ids.buildId}`)).body.build;
+    expect(before.model).toBe("test model");
+    let r = await owner.request("PATCH", `/api/builds/${ids.buildId}`, { analysisSettings: { fittingFactor: 1.3 } });
+    expect(r.body.build.model).toBe("test model");
+    r = await owner.request("PATCH", `/api/builds/${ids.buildId}`, { name: "Renamed build" });
+    expect(r.status).toBe(200);
+    expect(r.body.build).toMatchObject({ name: "Renamed build", model: "test model", registration: before.registration });
+    expect(r.body.build.analysisSettings.fittingFactor).toBe(1.3);
+    expect((await owner.request("PATCH", `/api/builds/${ids.buildId}`, {})).status).toBe(400);
+  });
 });

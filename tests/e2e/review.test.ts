@@ -91,7 +91,7 @@ describe("review and sign-off in a real browser", () => {
     await thread(danaPage).getByTestId("thread-reply").click();
     await thread(danaPage).getByTestId("reply-body").fill("Fitted a jam nut and a 0.625 in washer under the head.");
     await thread(danaPage).getByTestId("reply-submit").click();
-    await expect.poll(() => thread(danaPage).getByTestId("comment").count()).toBe(2);
+    await expect.poll(() => thread(danaPage).getByTestId("comment").count(), { timeout: 10_000 }).toBe(2);
     await shot(danaPage, "review-03-builder-fixed-and-replied");
   });
 

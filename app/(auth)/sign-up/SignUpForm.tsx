@@ -6,7 +6,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button, Field, Input } from "@/components/ui";
 import { api, ApiFailure } from "@/components/api-client";
-import { signUpInput } from "@/shared/api";
+import { signUpInput } from "@/shared/schemas/users";
 
 type Values = z.infer<typeof signUpInput>;
 

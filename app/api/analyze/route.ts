@@ -1,5 +1,5 @@
 import { withUser, parseBody, json } from "@/lib/http";
-import { analyzeInput } from "@/shared/api";
+import { analyzeInput } from "@/shared/schemas/graph";
 import { analyze } from "@/shared/analysis";
 
 /** Runs the load-path check on a posted linkage without storing anything. */

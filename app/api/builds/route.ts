@@ -1,5 +1,5 @@
 import { withUser, parseBody, json } from "@/lib/http";
-import { buildInput } from "@/shared/api";
+import { buildInput } from "@/shared/schemas/builds";
 import { createBuild, listBuildsForUser } from "@/db/builds";
 
 export const GET = withUser(async ({ user }) => json({ builds: await listBuildsForUser(user.id) }));

@@ -1,5 +1,5 @@
 import { withUser, parseBody, json } from "@/lib/http";
-import { mePatch } from "@/shared/api";
+import { mePatch } from "@/shared/schemas/users";
 import { setUnitSystem } from "@/db/users";
 
 export const GET = withUser(async ({ user }) => json({ user }));

@@ -1,6 +1,6 @@
 import { withErrors, parseBody, json } from "@/lib/http";
 import { emailTaken } from "@/lib/errors";
-import { signUpInput } from "@/shared/api";
+import { signUpInput } from "@/shared/schemas/users";
 import { createUser, findUserByEmail } from "@/db/users";
 import { hashPassword } from "@/lib/passwords";
 

@@ -7,21 +7,14 @@ import { Badge, Button, Card, EmptyState, Input, Select } from "@/components/ui"
 import { SYSTEMS, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
 import { parseLinkageFile } from "@/shared/linkage/io";
 
-type Linkage = {
-  id: string;
-  name: string;
-  system: ControlSystem;
-  revision: number;
-  updatedAt: string;
-  lastAuthor: string | null;
-  summary: { hazard: number; caution: number; advisory: number } | null;
-};
+import { linkageKeys } from "@/components/query-keys";
+import type { Linkage } from "@/shared/schemas/linkages";
 
 export const SYSTEM_LABEL: Record<ControlSystem, string> = { pitch: "Pitch", roll: "Roll", yaw: "Yaw", flap: "Flaps", trim: "Trim", other: "Other" };
 
 export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; initial: Linkage[]; canEdit: boolean }) {
   const qc = useQueryClient();
-  const key = ["linkages", buildId];
+  const key = linkageKeys.list(buildId);
   const { data: linkages = initial } = useQuery({ queryKey: key, queryFn: async () => (await api<{ linkages: Linkage[] }>(`/api/builds/${buildId}/linkages`)).linkages, initialData: initial });
   const [adding, setAdding] = useState(false);
   const [renaming, setRenaming] = useState<string | null>(null);

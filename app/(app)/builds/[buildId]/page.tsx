@@ -9,7 +9,7 @@ import { can, ROLE_LABEL } from "@/shared/roles";
 import { LinkagesPanel } from "./LinkagesPanel";
 import { recentEntries } from "@/db/log";
 import Link from "next/link";
-import { reviewSummaryForBuild } from "@/db/review";
+import { reviewSummaryForBuild } from "@/db/signoffs";
 import { OverviewReview } from "@/components/review/OverviewReview";
 
 export const metadata: Metadata = { title: "Build overview" };

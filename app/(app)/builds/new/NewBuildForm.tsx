@@ -5,7 +5,7 @@ import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button, Field, Input } from "@/components/ui";
 import { api, ApiFailure } from "@/components/api-client";
-import { buildInput } from "@/shared/api";
+import { buildInput } from "@/shared/schemas/builds";
 
 type Values = z.input<typeof buildInput>;
 

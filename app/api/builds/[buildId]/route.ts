@@ -1,5 +1,5 @@
 import { withBuild, parseBody, json } from "@/lib/http";
-import { buildPatch } from "@/shared/api";
+import { buildPatch } from "@/shared/schemas/builds";
 import { deleteBuild, updateBuild } from "@/db/builds";
 import { analyze, settingsSchema } from "@/shared/analysis";
 import { deleteObject } from "@/lib/storage";

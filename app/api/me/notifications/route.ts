@@ -1,6 +1,6 @@
 import { withUser, parseBody, json } from "@/lib/http";
-import { notificationsPatch } from "@/shared/review-api";
-import { getNotify, setNotify } from "@/db/review";
+import { notificationsPatch } from "@/shared/schemas/users";
+import { getNotify, setNotify } from "@/db/users";
 
 /** Which review e-mails the signed-in user gets: all | mentions_signoffs | none. */
 export const GET = withUser(async ({ user }) => json({ notify: await getNotify(user.id) }));

@@ -5,17 +5,19 @@ import Link from "next/link";
 import { useMemo, useState } from "react";
 import { api } from "@/components/api-client";
 import { Card, EmptyState, Input, Select } from "@/components/ui";
-import { HARDWARE_STATES, HARDWARE_STATE_LABEL, type HardwareLine, type HardwareState } from "@/shared/records/hardware";
+import { HARDWARE_STATES, HARDWARE_STATE_LABEL, type HardwareState } from "@/shared/records/hardware";
+import type { HardwareLineView } from "@/shared/schemas/hardware";
+import { hardwareKeys } from "@/components/query-keys";
 import { DataTable } from "@/components/DataTable";
 
-type Line = HardwareLine & { state: HardwareState; stateBy: string | null; stateAt: string | null };
+type Line = HardwareLineView;
 const KIND_LABEL: Record<string, string> = { rodEnd: "Rod end", jamNut: "Jam nut", bolt: "Bolt", nut: "Nut", washer: "Washer", cotterPin: "Cotter pin" };
 const STATE_TONE: Record<HardwareState, string> = { to_order: "text-caution", ordered: "text-advisory", received: "text-ink", installed: "text-ink", inspected: "text-ok" };
 const col = createColumnHelper<Line>();
 
 export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; canEdit: boolean; initial: Line[] }) {
   const qc = useQueryClient();
-  const key = ["hardware", buildId];
+  const key = hardwareKeys.list(buildId);
   const q = useQuery({ queryKey: key, queryFn: async () => (await api<{ lines: Line[] }>(`/api/builds/${buildId}/hardware`)).lines, initialData: initial });
   const [error, setError] = useState<string | null>(null);
   const setState = useMutation({

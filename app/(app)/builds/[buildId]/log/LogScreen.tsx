@@ -5,17 +5,15 @@ import { useForm } from "react-hook-form";
 import { useMemo, useState } from "react";
 import type { z } from "zod";
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
-import { api } from "@/components/api-client";
+import { api, ACCEPT_FILES, uploadFile } from "@/components/api-client";
 import { Button, Card, Caution, EmptyState, Field, Input, Select } from "@/components/ui";
-import { logEntryInput } from "@/shared/records-api";
+import { logEntryInput, type LogEntry, type LogTotals } from "@/shared/schemas/log";
+import { logKeys } from "@/components/query-keys";
 import { SYSTEMS } from "@/shared/linkage/schema";
-import { ACCEPT_FILES, uploadFile, type StoredFile } from "@/components/records/upload-client";
+import type { StoredFile } from "@/shared/schemas/files";
 
-type Entry = {
-  id: string; date: string; hours: number; title: string; text: string; systems: string[]; linkageId: string | null; linkageName: string | null;
-  revision: number | null; revisionSummary?: { hazard: number; caution: number; advisory: number } | null; author: string | null; files: StoredFile[];
-};
-type Totals = { total: number; bySystem: Record<string, number>; byMonth: ({ month: string; total: number } & Record<string, number | string>)[] };
+type Entry = LogEntry;
+type Totals = LogTotals;
 type Filter = { system: string; from: string; to: string; q: string };
 
 const SYSTEM_LABEL: Record<string, string> = { pitch: "Pitch", roll: "Roll", yaw: "Yaw", flap: "Flaps", trim: "Trim", other: "Other", unassigned: "No system" };
@@ -29,7 +27,7 @@ export function LogScreen(p: { buildId: string; canEdit: boolean; initial: { ent
   const qs = useMemo(() => new URLSearchParams(Object.entries(filter).filter(([, v]) => v)).toString(), [filter]);
   const isDefault = qs === "";
   const log = useQuery({
-    queryKey: ["log", p.buildId, qs],
+    queryKey: logKeys.list(p.buildId, qs),
     queryFn: () => api<{ entries: Entry[]; totals: Totals }>(`${base}${qs ? `?${qs}` : ""}`),
     initialData: isDefault ? p.initial : undefined,
     placeholderData: keepPreviousData,
@@ -118,7 +116,7 @@ export function LogScreen(p: { buildId: string; canEdit: boolean; initial: { ent
 
 function EntryCard({ e, buildId, canEdit }: { e: Entry; buildId: string; canEdit: boolean }) {
   const qc = useQueryClient();
-  const del = useMutation({ mutationFn: () => api(`/api/builds/${buildId}/log/${e.id}`, { method: "DELETE" }), onSuccess: () => qc.invalidateQueries({ queryKey: ["log", buildId] }) });
+  const del = useMutation({ mutationFn: () => api(`/api/builds/${buildId}/log/${e.id}`, { method: "DELETE" }), onSuccess: () => qc.invalidateQueries({ queryKey: logKeys.all(buildId) }) });
   return (
     <li className="rounded-lg border border-ink/10 bg-white p-4" data-testid="log-entry">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
@@ -171,7 +169,7 @@ function EntryForm({ buildId, linkages, onDone }: { buildId: string; linkages: {
   const [uploading, setUploading] = useState(false);
   const save = useMutation({
     mutationFn: (v: FormValues) => api(`/api/builds/${buildId}/log`, { body: { ...v, linkageId: v.linkageId || null, fileIds: files.map((f) => f.id) } }),
-    onSuccess: () => { qc.invalidateQueries({ queryKey: ["log", buildId] }); onDone(); },
+    onSuccess: () => { qc.invalidateQueries({ queryKey: logKeys.all(buildId) }); onDone(); },
     onError: (e) => setError(e instanceof Error ? e.message : String(e)),
   });
   const onFiles = async (list: File[]) => {

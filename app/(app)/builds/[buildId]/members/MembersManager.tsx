@@ -6,11 +6,11 @@ import { useState } from "react";
 import type { z } from "zod";
 import { api, ApiFailure } from "@/components/api-client";
 import { Button, Card, Field, Input, Select } from "@/components/ui";
-import { memberAdd } from "@/shared/api";
+import { memberAdd } from "@/shared/schemas/members";
 import { ROLES, ROLE_LABEL, type Role } from "@/shared/roles";
 
-type Member = { userId: string; name: string; email: string; role: Role; since: string };
-type Invitation = { id: string; email: string; role: Role; expiresAt: string; acceptedAt: string | null };
+import { memberKeys } from "@/components/query-keys";
+import type { Invitation, Member } from "@/shared/schemas/members";
 
 const ROLE_HELP: Record<Role, string> = {
   owner: "everything, including members and deleting the build",
@@ -22,16 +22,16 @@ const ROLE_HELP: Record<Role, string> = {
 export function MembersManager(p: { buildId: string; me: string; canManage: boolean; initialMembers: Member[]; initialInvitations: Invitation[] }) {
   const qc = useQueryClient();
   const base = `/api/builds/${p.buildId}`;
-  const members = useQuery({ queryKey: ["members", p.buildId], queryFn: async () => (await api<{ members: Member[] }>(`${base}/members`)).members, initialData: p.initialMembers });
+  const members = useQuery({ queryKey: memberKeys.list(p.buildId), queryFn: async () => (await api<{ members: Member[] }>(`${base}/members`)).members, initialData: p.initialMembers });
   const invitations = useQuery({
-    queryKey: ["invitations", p.buildId],
+    queryKey: memberKeys.invitations(p.buildId),
     queryFn: async () => (await api<{ invitations: Invitation[] }>(`${base}/invitations`)).invitations,
     initialData: p.initialInvitations,
     enabled: p.canManage,
   });
   const [link, setLink] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const refresh = () => { qc.invalidateQueries({ queryKey: ["members", p.buildId] }); qc.invalidateQueries({ queryKey: ["invitations", p.buildId] }); };
+  const refresh = () => { qc.invalidateQueries({ queryKey: memberKeys.list(p.buildId) }); qc.invalidateQueries({ queryKey: memberKeys.invitations(p.buildId) }); };
   const fail = (e: unknown) => setError(e instanceof Error ? e.message : String(e));
 
   const form = useForm<z.input<typeof memberAdd>>({ resolver: zodResolver(memberAdd), defaultValues: { email: "", role: "builder" } });

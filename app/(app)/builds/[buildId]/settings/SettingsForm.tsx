@@ -7,7 +7,7 @@ import { z } from "zod";
 import { api, ApiFailure } from "@/components/api-client";
 import { Button, Card, Caution, Field, Input } from "@/components/ui";
 import { DEFAULT_SETTINGS, settingsSchema, type AnalysisSettings } from "@/shared/analysis/types";
-import { buildInput } from "@/shared/api";
+import { buildInput } from "@/shared/schemas/builds";
 
 type Details = z.input<typeof buildInput>;
 

@@ -1,6 +1,7 @@
 import { withSiteAdmin, parseBody, parseParams, json } from "@/lib/http";
 import { lastAdmin, notFound } from "@/lib/errors";
-import { adminUserPatch, uuidParam } from "@/shared/api";
+import { adminUserPatch } from "@/shared/schemas/users";
+import { uuidParam } from "@/shared/schemas/common";
 import { setSiteAdmin } from "@/db/users";
 import { audit } from "@/db/audit";
 

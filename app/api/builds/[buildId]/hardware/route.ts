@@ -1,6 +1,6 @@
 import { withBuild, parseBody, json } from "@/lib/http";
 import { buildHardware, setHardwareState } from "@/db/hardware";
-import { hardwareStatePut } from "@/shared/records-api";
+import { hardwareStatePut } from "@/shared/schemas/hardware";
 import { notFound } from "@/lib/errors";
 import { audit } from "@/db/audit";
 

@@ -1,5 +1,5 @@
 import { withBuild, parseBody, json } from "@/lib/http";
-import { invitationCreate } from "@/shared/api";
+import { invitationCreate } from "@/shared/schemas/members";
 import { createInvitation, listInvitations } from "@/db/builds";
 import { inviteUrl } from "@/lib/urls";
 import { sendInvitationMail } from "@/lib/review-mail";

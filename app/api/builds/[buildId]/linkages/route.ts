@@ -1,5 +1,5 @@
 import { withBuild, parseBody, json } from "@/lib/http";
-import { linkageCreate } from "@/shared/api";
+import { linkageCreate } from "@/shared/schemas/linkages";
 import { createLinkage, listLinkages } from "@/db/linkages";
 import { analyze } from "@/shared/analysis";
 

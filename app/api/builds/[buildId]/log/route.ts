@@ -1,6 +1,6 @@
 import { withBuild, parseBody, json } from "@/lib/http";
 import { createEntry, getEntry, hourTotals, listEntries } from "@/db/log";
-import { logEntryInput } from "@/shared/records-api";
+import { logEntryInput } from "@/shared/schemas/log";
 import { LOG_REF_ERRORS, readLogFilter } from "@/lib/log-filter";
 
 /** Entries (newest first) and hour totals by system and month, both over the same filter. */

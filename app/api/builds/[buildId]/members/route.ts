@@ -1,6 +1,6 @@
 import { withBuild, parseBody, json } from "@/lib/http";
 import { alreadyMember } from "@/lib/errors";
-import { memberAdd } from "@/shared/api";
+import { memberAdd } from "@/shared/schemas/members";
 import { addMember, createInvitation, listMembers } from "@/db/builds";
 import { findUserByEmail } from "@/db/users";
 import { inviteUrl } from "@/lib/urls";

@@ -1,17 +1,20 @@
 "use client";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
+import type { z } from "zod";
 import { useEffect, useState } from "react";
 import { api } from "@/components/api-client";
 import { Button, Caution } from "@/components/ui";
 import { JointPhotos } from "@/components/records/JointPhotos";
 
-type Item = { jointId: string; where: string; code: string; text: string; source: { kind: string; text: string }; tickedBy: string | null; tickedAt: string | null; note: string };
-type Data = { revision: number; currentRevision: number; items: Item[] };
+import { checklistKeys } from "@/components/query-keys";
+import type { checklistResponse, ChecklistItemView as Item } from "@/shared/schemas/checklist";
+
+type Data = z.infer<typeof checklistResponse>;
 
 export function ChecklistScreen(p: { buildId: string; linkageId: string; linkageName: string; revision?: number; canTick: boolean; canEdit: boolean }) {
   const url = `/api/builds/${p.buildId}/linkages/${p.linkageId}/checklist`;
-  const key = ["checklist", p.linkageId, p.revision ?? "current"];
+  const key = checklistKeys.one(p.linkageId, p.revision);
   const qc = useQueryClient();
   const q = useQuery({ queryKey: key, queryFn: () => api<Data>(`${url}${p.revision ? `?revision=${p.revision}` : ""}`) });
   const [error, setError] = useState<string | null>(null);

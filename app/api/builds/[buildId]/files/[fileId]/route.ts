@@ -1,7 +1,7 @@
 import { withBuild, parseParams, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
 import { deleteFileRow, getFileRow } from "@/db/files";
-import { uuidParam } from "@/shared/api";
+import { uuidParam } from "@/shared/schemas/common";
 import { streamObject } from "@/lib/records-http";
 import { removeObjects } from "@/lib/uploads";
 import { audit } from "@/db/audit";

@@ -1,6 +1,6 @@
 import { withBuild, parseParams, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
-import { uuidParam } from "@/shared/api";
+import { uuidParam } from "@/shared/schemas/common";
 import { revokeInvitation } from "@/db/builds";
 
 type P = { buildId: string; invitationId: string };

@@ -1,6 +1,6 @@
 import { withLinkage, parseBody, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
-import { linkagePatch } from "@/shared/api";
+import { linkagePatch } from "@/shared/schemas/linkages";
 import { deleteLinkage, updateLinkage } from "@/db/linkages";
 
 export const GET = withLinkage("read", async ({ linkage }) => json({ linkage }));

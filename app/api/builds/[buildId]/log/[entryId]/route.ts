@@ -2,8 +2,8 @@ import { withBuild, parseBody, parseParams, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
 import { LOG_REF_ERRORS } from "@/lib/log-filter";
 import { deleteEntry, getEntry, updateEntry } from "@/db/log";
-import { logEntryPatch } from "@/shared/records-api";
-import { uuidParam } from "@/shared/api";
+import { logEntryPatch } from "@/shared/schemas/log";
+import { uuidParam } from "@/shared/schemas/common";
 
 type P = { buildId: string; entryId: string };
 

@@ -1,6 +1,7 @@
 import { withBuild, parseBody, parseParams, json } from "@/lib/http";
 import { lastOwner, notFound } from "@/lib/errors";
-import { memberPatch, uuidParam } from "@/shared/api";
+import { memberPatch } from "@/shared/schemas/members";
+import { uuidParam } from "@/shared/schemas/common";
 import { removeMember, setMemberRole } from "@/db/builds";
 
 type P = { buildId: string; userId: string };

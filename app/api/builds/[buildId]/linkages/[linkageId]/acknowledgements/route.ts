@@ -1,7 +1,7 @@
 import { withLinkage, parseBody, json } from "@/lib/http";
 import { fieldError } from "@/lib/errors";
-import { acknowledgementCreate } from "@/shared/review-api";
-import { createAcknowledgement, listAcknowledgements } from "@/db/review";
+import { acknowledgementCreate } from "@/shared/schemas/acknowledgements";
+import { createAcknowledgement, listAcknowledgements } from "@/db/acknowledgements";
 import { reportOf } from "@/lib/review";
 import { fingerprint } from "@/shared/review/fingerprint";
 import { ackFor, findingStates } from "@/shared/review/hazards";

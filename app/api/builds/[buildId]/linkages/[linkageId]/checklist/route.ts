@@ -4,7 +4,7 @@ import { getRevision } from "@/db/linkages";
 import { listTicks, setTick } from "@/db/checklist";
 import { audit } from "@/db/audit";
 import { checklistFor } from "@/shared/records/checklist";
-import { checklistTick } from "@/shared/records-api";
+import { checklistTick } from "@/shared/schemas/checklist";
 
 /** The checklist generated from a revision (current by default, `?revision=N`), with its ticks and notes. */
 export const GET = withLinkage("read", { revision: "requested" }, async ({ linkage, revision: rev }) => {

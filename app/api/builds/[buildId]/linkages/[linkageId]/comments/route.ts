@@ -1,12 +1,14 @@
 import { withLinkage, parseBody, parseParams, json } from "@/lib/http";
 import { fieldError } from "@/lib/errors";
-import { commentCreate, COMMENT_EDIT_MINUTES, subjectSchema } from "@/shared/review-api";
-import { createComment, getComment, linkageAudience, listComments, unresolvedCounts, type ReviewComment } from "@/db/review";
+import { commentCreate, COMMENT_EDIT_MINUTES } from "@/shared/schemas/comments";
+import { subjectSchema } from "@/shared/schemas/common";
+import { createComment, getComment, linkageAudience, listComments, unresolvedCounts } from "@/db/comments";
+import type { Comment } from "@/shared/schemas/comments";
 import { subjectExists } from "@/lib/review";
 import { subjectPhrase } from "@/shared/linkage/names";
 import { notifyComment } from "@/lib/review-mail";
 
-const withWindow = (c: ReviewComment) => ({ ...c, editableUntil: new Date(Date.parse(c.createdAt) + COMMENT_EDIT_MINUTES * 60_000).toISOString() });
+const withWindow = (c: Comment) => ({ ...c, editableUntil: new Date(Date.parse(c.createdAt) + COMMENT_EDIT_MINUTES * 60_000).toISOString() });
 
 /** Every comment of the linkage (or of one subject: `?subjectType=joint&subjectId=j1`), oldest first, and open-thread counts. */
 export const GET = withLinkage("read", async ({ req, linkage }) => {

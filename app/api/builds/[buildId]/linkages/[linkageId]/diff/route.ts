@@ -1,5 +1,5 @@
 import { withLinkage, parseParams, json, getRevisionOrThrow } from "@/lib/http";
-import { revisionQuery } from "@/shared/api";
+import { revisionQuery } from "@/shared/schemas/common";
 import { diffGraphs } from "@/shared/review/diff";
 
 /** `?from=A&to=B`: what changed from revision A to revision B (defaults: the current one and the one before). */

@@ -1,6 +1,6 @@
 import { withLinkage, parseBody, json } from "@/lib/http";
 import { notFound, staleRevision } from "@/lib/errors";
-import { graphPut } from "@/shared/api";
+import { graphPut } from "@/shared/schemas/graph";
 import { getRevision, saveRevision } from "@/db/linkages";
 import { analyze } from "@/shared/analysis";
 import { afterRevisionSaved } from "@/lib/review";

@@ -1,5 +1,5 @@
 import { withLinkage, json } from "@/lib/http";
-import { listRevisions } from "@/db/review";
+import { listRevisions } from "@/db/linkages";
 
 /** The revision history, newest first: number, author, time and the counts of findings. */
 export const GET = withLinkage("read", async ({ linkage }) =>

@@ -1,7 +1,10 @@
 import { withLinkage, parseBody, json, getRevisionOrThrow } from "@/lib/http";
 import { fieldError, notCurrent, unacknowledgedHazards as hazardsOpen } from "@/lib/errors";
-import { signoffCreate } from "@/shared/review-api";
-import { buildOwners, createSignoff, listAcknowledgements, listSignoffs, type Signoff } from "@/db/review";
+import { signoffCreate } from "@/shared/schemas/signoffs";
+import { createSignoff, listSignoffs } from "@/db/signoffs";
+import { listAcknowledgements } from "@/db/acknowledgements";
+import { buildOwners } from "@/db/builds";
+import type { Signoff } from "@/shared/schemas/signoffs";
 import { reportOf } from "@/lib/review";
 import { unacknowledgedHazards } from "@/shared/review/hazards";
 import { notifySignoff } from "@/lib/review-mail";

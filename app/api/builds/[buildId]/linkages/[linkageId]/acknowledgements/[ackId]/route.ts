@@ -1,7 +1,7 @@
 import { withLinkage, parseParams, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
-import { uuidParam } from "@/shared/api";
-import { deleteAcknowledgement } from "@/db/review";
+import { uuidParam } from "@/shared/schemas/common";
+import { deleteAcknowledgement } from "@/db/acknowledgements";
 
 type P = { buildId: string; linkageId: string; ackId: string };
 

@@ -1,8 +1,8 @@
 import { withLinkage, parseBody, parseParams, json } from "@/lib/http";
 import { editWindowClosed, forbidden, notFound } from "@/lib/errors";
-import { uuidParam } from "@/shared/api";
-import { commentPatch, COMMENT_EDIT_MINUTES } from "@/shared/review-api";
-import { getComment, setThreadResolved, updateCommentBody } from "@/db/review";
+import { uuidParam } from "@/shared/schemas/common";
+import { commentPatch, COMMENT_EDIT_MINUTES } from "@/shared/schemas/comments";
+import { getComment, setThreadResolved, updateCommentBody } from "@/db/comments";
 
 type P = { buildId: string; linkageId: string; commentId: string };
 

@@ -1,16 +1,16 @@
 import { withLinkage, parseBody, parseParams, json } from "@/lib/http";
 import { fieldError, notFound } from "@/lib/errors";
 import { getFile, linkJointPhoto, listJointPhotos } from "@/db/files";
-import type { RevisionView } from "@/db/linkages";
+import type { Revision } from "@/db/linkages";
 import { audit } from "@/db/audit";
-import { jointPhotoLink } from "@/shared/records-api";
+import { jointPhotoLink } from "@/shared/schemas/files";
 import { jointIdParam } from "@/lib/records-http";
 import { readUpload, storeUpload, PHOTO_MAX_BYTES } from "@/lib/uploads";
 
 type P = { buildId: string; linkageId: string; jointId: string };
 
 /** The joint must be on the current revision of the linkage. */
-function requireJoint(rev: RevisionView, rawJointId: string) {
+function requireJoint(rev: Revision, rawJointId: string) {
   const jointId = parseParams(rawJointId, jointIdParam);
   if (!rev.graph.joints.some((j) => j.id === jointId)) throw notFound("joint");
   return jointId;

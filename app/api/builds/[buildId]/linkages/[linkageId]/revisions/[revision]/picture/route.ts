@@ -3,7 +3,7 @@ import { notFound } from "@/lib/errors";
 import { deleteFileRow, getRevisionPictureRow, setRevisionPicture } from "@/db/files";
 import type { Linkage } from "@/db/linkages";
 import { audit } from "@/db/audit";
-import { revisionQuery } from "@/shared/api";
+import { revisionQuery } from "@/shared/schemas/common";
 import { refuseJsonUpload, streamObject } from "@/lib/records-http";
 import { readUpload, removeObjects, storeUpload, PHOTO_MAX_BYTES } from "@/lib/uploads";
 

@@ -1,7 +1,7 @@
 import { withLinkage, parseParams, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
 import { unlinkJointPhoto } from "@/db/files";
-import { uuidParam } from "@/shared/api";
+import { uuidParam } from "@/shared/schemas/common";
 import { jointIdParam } from "@/lib/records-http";
 
 type P = { buildId: string; linkageId: string; jointId: string; fileId: string };

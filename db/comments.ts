@@ -1,0 +1,124 @@
+import "server-only";
+/** Review comments: threads on a subject, replies, resolve; and who follows a linkage (its commenters). */
+import { db } from "./index";
+import { audit } from "./audit";
+import { person } from "./people";
+import type { Recipient } from "./users";
+import type { Subject } from "@/shared/schemas/common";
+import type { Comment } from "@/shared/schemas/comments";
+
+type CommentRow = {
+  id: string;
+  build_id: string;
+  linkage_id: string;
+  subject_type: Subject["type"];
+  subject_id: string;
+  parent_id: string | null;
+  author_id: string | null;
+  author_name: string | null;
+  body: string;
+  revision: number;
+  created_at: Date;
+  edited_at: Date | null;
+  resolved_at: Date | null;
+  resolved_by: string | null;
+  resolver_name: string | null;
+};
+
+const toComment = (r: CommentRow): Comment => ({
+  id: r.id,
+  linkageId: r.linkage_id,
+  subject: { type: r.subject_type, id: r.subject_id },
+  parentId: r.parent_id,
+  author: person(r.author_id, r.author_name),
+  body: r.body,
+  revision: r.revision,
+  createdAt: r.created_at.toISOString(),
+  editedAt: r.edited_at ? r.edited_at.toISOString() : null,
+  resolvedAt: r.resolved_at ? r.resolved_at.toISOString() : null,
+  resolvedBy: r.resolved_at ? person(r.resolved_by, r.resolver_name) : null,
+});
+
+const commentQuery = () =>
+  db("comments as c")
+    .leftJoin("users as a", "a.id", "c.author_id")
+    .leftJoin("users as r", "r.id", "c.resolved_by")
+    .select("c.*", "a.name as author_name", "r.name as resolver_name");
+
+export async function listComments(linkageId: string, subject?: Subject) {
+  const q = commentQuery().where("c.linkage_id", linkageId).orderBy("c.created_at", "asc").orderBy("c.id");
+  if (subject) q.where({ "c.subject_type": subject.type, "c.subject_id": subject.id });
+  return (await q).map(toComment);
+}
+
+export async function getComment(linkageId: string, commentId: string) {
+  const row = await commentQuery().where({ "c.linkage_id": linkageId, "c.id": commentId }).first();
+  return row ? toComment(row) : null;
+}
+
+export async function createComment(c: {
+  buildId: string;
+  linkageId: string;
+  subject: Subject;
+  parentId: string | null;
+  authorId: string;
+  body: string;
+  revision: number;
+}) {
+  const id = await db.transaction(async (trx) => {
+    const [row] = await trx("comments")
+      .insert({
+        build_id: c.buildId,
+        linkage_id: c.linkageId,
+        subject_type: c.subject.type,
+        subject_id: c.subject.id,
+        parent_id: c.parentId,
+        author_id: c.authorId,
+        body: c.body,
+        revision: c.revision,
+      })
+      .returning("id");
+    // Writing in a thread follows the linkage; a reply reopens nothing by itself.
+    await trx("linkage_followers").insert({ linkage_id: c.linkageId, user_id: c.authorId }).onConflict(["linkage_id", "user_id"]).ignore();
+    await trx("linkages").where({ id: c.linkageId }).update({ updated_at: trx.fn.now() });
+    await audit({ buildId: c.buildId, userId: c.authorId, action: c.parentId ? "comment.reply" : "comment.create", detail: { linkageId: c.linkageId, commentId: row.id, subject: c.subject } }, trx);
+    return row.id as string;
+  });
+  return (await getComment(c.linkageId, id))!;
+}
+
+export async function updateCommentBody(buildId: string, linkageId: string, commentId: string, userId: string, body: string) {
+  await db("comments").where({ id: commentId, linkage_id: linkageId }).update({ body, edited_at: db.fn.now() });
+  await audit({ buildId, userId, action: "comment.edit", detail: { linkageId, commentId } });
+  return getComment(linkageId, commentId);
+}
+
+export async function setThreadResolved(buildId: string, linkageId: string, rootId: string, userId: string, resolved: boolean) {
+  await db("comments")
+    .where({ id: rootId, linkage_id: linkageId })
+    .update(resolved ? { resolved_at: db.fn.now(), resolved_by: userId } : { resolved_at: null, resolved_by: null });
+  await audit({ buildId, userId, action: resolved ? "comment.resolve" : "comment.reopen", detail: { linkageId, commentId: rootId } });
+  return getComment(linkageId, rootId);
+}
+
+/** Open threads per subject ("joint:j1" → 2). */
+export async function unresolvedCounts(linkageId: string): Promise<Record<string, number>> {
+  const rows = await db("comments")
+    .where({ linkage_id: linkageId })
+    .whereNull("parent_id")
+    .whereNull("resolved_at")
+    .groupBy("subject_type", "subject_id")
+    .select("subject_type", "subject_id", db.raw("count(*)::int as n"));
+  const out: Record<string, number> = {};
+  for (const r of rows as { subject_type: string; subject_id: string; n: number }[]) out[`${r.subject_type}:${r.subject_id}`] = r.n;
+  return out;
+}
+
+/** Followers of the linkage (commenters) and the build's owners, who are still members. */
+export async function linkageAudience(buildId: string, linkageId: string): Promise<Recipient[]> {
+  return db("memberships as m")
+    .join("users as u", "u.id", "m.user_id")
+    .where("m.build_id", buildId)
+    .where((q) => q.where("m.role", "owner").orWhereExists(db("linkage_followers as f").where("f.linkage_id", linkageId).whereRaw("f.user_id = m.user_id")))
+    .select("u.id", "u.email", "u.name", "u.notify", "m.role");
+}

@@ -1,0 +1,71 @@
+import "server-only";
+/** Sign-offs of revisions, the stale ones whose owners were not told yet, and the review state per linkage of a build. */
+import { db } from "./index";
+import { audit } from "./audit";
+import { person, personName } from "./people";
+import type { Signoff } from "@/shared/schemas/signoffs";
+
+type SignoffRow = { id: string; linkage_id: string; revision: number; reviewer_id: string | null; reviewer_name: string | null; statement: string; created_at: Date };
+const toSignoff = (r: SignoffRow, current: number): Signoff => ({
+  id: r.id,
+  revision: r.revision,
+  reviewer: person(r.reviewer_id, r.reviewer_name),
+  statement: r.statement,
+  createdAt: r.created_at.toISOString(),
+  stale: r.revision < current,
+});
+
+export async function listSignoffs(linkageId: string, currentRevision: number) {
+  const rows = await db("signoffs as s")
+    .leftJoin("users as u", "u.id", "s.reviewer_id")
+    .where("s.linkage_id", linkageId)
+    .orderBy("s.created_at", "desc")
+    .orderBy("s.revision", "desc")
+    .select("s.*", "u.name as reviewer_name");
+  return rows.map((r: SignoffRow) => toSignoff(r, currentRevision));
+}
+
+export async function createSignoff(s: { buildId: string; linkageId: string; revision: number; reviewerId: string; statement: string }) {
+  const [row] = await db("signoffs").insert({ linkage_id: s.linkageId, revision: s.revision, reviewer_id: s.reviewerId, statement: s.statement }).returning("id");
+  await audit({ buildId: s.buildId, userId: s.reviewerId, action: "linkage.signoff", detail: { linkageId: s.linkageId, revision: s.revision } });
+  return (await listSignoffs(s.linkageId, s.revision)).find((x) => x.id === row.id)!;
+}
+
+/** Sign-offs made stale by `currentRevision` whose owner was not told yet; marks them told (once). */
+export async function claimNewlyStaleSignoffs(linkageId: string, currentRevision: number) {
+  const rows = await db("signoffs as s")
+    .where("s.linkage_id", linkageId)
+    .where("s.revision", "<", currentRevision)
+    .whereNull("s.stale_notified_at")
+    .update({ stale_notified_at: db.fn.now() })
+    .returning(["s.id", "s.revision", "s.reviewer_id"]);
+  if (rows.length === 0) return [];
+  const names = await db("users").whereIn("id", rows.map((r: { reviewer_id: string | null }) => r.reviewer_id).filter(Boolean) as string[]).select("id", "name");
+  const byId = new Map(names.map((n: { id: string; name: string }) => [n.id, n.name]));
+  return rows.map((r: { id: string; revision: number; reviewer_id: string | null }) => ({ id: r.id, revision: r.revision, reviewerName: (r.reviewer_id && byId.get(r.reviewer_id)) || "a reviewer" }));
+}
+
+/** Per linkage: open threads and the newest sign-off (with whether a later revision made it stale). */
+export async function reviewSummaryForBuild(buildId: string) {
+  const open = await db("comments as c")
+    .join("linkages as l", "l.id", "c.linkage_id")
+    .where("l.build_id", buildId)
+    .whereNull("c.parent_id")
+    .whereNull("c.resolved_at")
+    .groupBy("c.linkage_id")
+    .select("c.linkage_id", db.raw("count(*)::int as n"));
+  const latest = await db("signoffs as s")
+    .join("linkages as l", "l.id", "s.linkage_id")
+    .leftJoin("users as u", "u.id", "s.reviewer_id")
+    .where("l.build_id", buildId)
+    .distinctOn("s.linkage_id")
+    .orderBy([{ column: "s.linkage_id" }, { column: "s.created_at", order: "desc" }])
+    .select("s.linkage_id", "s.revision", "s.created_at", "u.name as reviewer_name", "l.current_revision");
+  const out: Record<string, { unresolved: number; signoff: { revision: number; reviewerName: string; at: string; stale: boolean } | null }> = {};
+  for (const r of open as { linkage_id: string; n: number }[]) out[r.linkage_id] = { unresolved: r.n, signoff: null };
+  for (const r of latest as { linkage_id: string; revision: number; created_at: Date; reviewer_name: string | null; current_revision: number }[]) {
+    out[r.linkage_id] ??= { unresolved: 0, signoff: null };
+    out[r.linkage_id].signoff = { revision: r.revision, reviewerName: personName(r.reviewer_name), at: r.created_at.toISOString(), stale: r.revision < r.current_revision };
+  }
+  return out;
+}

@@ -1,0 +1,26 @@
+/** Accounts: sign-up, the signed-in user's settings (units, review e-mail), and site admins. */
+import { z } from "zod";
+import { text } from "./common";
+
+export const signUpInput = z.object({
+  name: text("Name", 120),
+  email: z.string().trim().email("Enter a valid e-mail address").max(254),
+  password: z.string().min(10, "Use at least 10 characters").max(200, "At most 200 characters"),
+});
+
+export const UNIT_SYSTEMS = ["US", "SI"] as const;
+export const mePatch = z.object({ unitSystem: z.enum(UNIT_SYSTEMS) });
+export const publicUser = z.object({ id: z.string(), email: z.string(), name: z.string(), isSiteAdmin: z.boolean(), unitSystem: z.enum(UNIT_SYSTEMS) });
+export type PublicUser = z.infer<typeof publicUser>;
+
+export const adminUserPatch = z.object({ isSiteAdmin: z.boolean({ error: "isSiteAdmin must be true or false" }) });
+
+export const NOTIFY_PREFS = ["all", "mentions_signoffs", "none"] as const;
+export type NotifyPref = (typeof NOTIFY_PREFS)[number];
+export const notificationsPatch = z.object({ notify: z.enum(NOTIFY_PREFS, { error: "notify must be all, mentions_signoffs or none" }) });
+export const notifyResponse = notificationsPatch;
+export const NOTIFY_LABEL: Record<NotifyPref, string> = {
+  all: "Every comment and reply on linkages I follow, and sign-offs",
+  mentions_signoffs: "Only when someone @mentions me, and sign-offs",
+  none: "No review e-mail",
+};
