@@ -12,12 +12,14 @@ import { retentionFindings } from "./retention";
 import { structureFindings } from "./structure";
 import { sortFindings, summarize } from "./report";
 import { finding, linkageSubject } from "./format";
+import { analyzeMotion, type MotionReport } from "./motion";
 
 export * from "./types";
 export { solveFourBar, sweepFourBar, fourBarFindings, transmissionAngle, TRANSMISSION_MIN, TRANSMISSION_MAX } from "./kinematics";
 export type { FourBar, FourBarPosition, SweepResult, Branch } from "./kinematics";
 export { columnAllowable, eulerLoad, johnsonLoad, tubeSection, transitionSlenderness, marginOfSafety, specialFactor, boltDiameter, MARGIN_CAP } from "./allowables";
 export { designForce, bellcrankPivotLoad, DUAL_CONTROL_SHARE } from "./loads";
+export { analyzeMotion, sweepGraph, MOTION_NOT_CHECKED, atInput, type MotionReport, type MotionChainSummary, type WorstLoad, type ChainSweep, type MotionResult } from "./motion";
 
 export const ENGINE_VERSION = "1.0.0";
 
@@ -36,6 +38,20 @@ export const ASSUMPTIONS: readonly string[] = [
   "The drawing is planar and has no airframe coordinates: rod-end misalignment and the four-bar transmission angle are not measured from it.",
 ];
 
+/** With geometry, these replace the perpendicular-arm and no-geometry lines for the runs that were swept. */
+export const MOTION_ASSUMPTIONS: readonly string[] = [
+  "Runs with geometry are swept through the input's travel in small steps on the branch they are assembled in; each pushrod, rod end, pivot and hinge load is its largest over the travel the run has (to its stops), with the input position where it occurs.",
+  "The design force acts at the grip or pedal square to its arm; each rod's load is the torque over its effective arm (arm × sine of the angle between rod and arm), along the rod's own axis when it leaves the plane.",
+  "Motion is planar: every pivot bolt is square to the plane, so a rod end's misalignment is the rod's angle out of the plane and does not change over the travel.",
+];
+
+/** Every run swept: the perpendicular-arm and no-geometry lines give way to the motion ones; some swept: both. */
+function assumptionsFor(m: MotionReport): string[] {
+  if (!m.checked) return [...ASSUMPTIONS];
+  const allSwept = !m.notChecked.some((s) => s.startsWith("Motion of the run"));
+  return allSwept ? [...ASSUMPTIONS.slice(0, 1), ...ASSUMPTIONS.slice(2, -1), ...MOTION_ASSUMPTIONS] : [...ASSUMPTIONS.slice(0, -1), ...MOTION_ASSUMPTIONS];
+}
+
 function resolveSettings(settings: Partial<AnalysisSettings> | undefined, out: Finding[]): AnalysisSettings {
   if (!settings) return DEFAULT_SETTINGS;
   const r = settingsSchema.safeParse(settings);
@@ -51,6 +67,12 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   const s = resolveSettings(settings, findings);
   const ctx = buildContext(graph);
   const loads = propagate(ctx, s);
+  const motion = analyzeMotion(ctx, s);
+  // With geometry the swept runs' worst-step loads replace the perpendicular-arm loads of their members.
+  for (const [n, v] of motion.loads.pushrod) loads.pushrodAxial[n] = v;
+  for (const [j, v] of motion.loads.joint) loads.jointRadial[j] = v;
+  for (const [n, v] of motion.loads.surface) loads.surfaceMoment[n] = v;
+  findings.push(...motion.findings);
 
   const pushrods: PushrodResult[] = [];
   const surfaces: SurfaceResult[] = [];
@@ -80,7 +102,8 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
     summary: summarize(sorted, pushrods, joints),
     settings: s,
     surfaces,
-    assumptions: [...ASSUMPTIONS],
+    assumptions: assumptionsFor(motion.report),
+    motion: motion.report,
     notice: NOTICE,
   };
 }

@@ -1,5 +1,6 @@
 /** The report of the load-path check. Every number is US customary: lbf, in, in·lbf, psi, degrees. */
 import { z } from "zod";
+import type { MotionReport } from "./motion/types";
 
 export const SEVERITIES = ["hazard", "caution", "advisory"] as const;
 export type Severity = (typeof SEVERITIES)[number];
@@ -82,6 +83,8 @@ export type Report = {
   assumptions: string[];
   /** The standing caution that goes with every result. */
   notice: string;
+  /** Added field (engine v1): the motion check — swept runs, or what to enter for it (never a pass when absent). */
+  motion?: MotionReport;
 };
 
 /** Design pilot forces and factors (domain.md §1), one set per build, with the published defaults. */

@@ -25,6 +25,6 @@ export function parseLinkageFile(text: string): ParseResult {
 
 /** The file text of a linkage: fixed top-level key order, two-space indent, trailing newline. */
 export function serializeLinkage(graph: LinkageGraph): string {
-  const { formatVersion, name, system, nodes, joints } = graph;
-  return JSON.stringify({ formatVersion, name, system, nodes, joints }, null, 2) + "\n";
+  const { formatVersion, name, system, nodes, joints, geometry } = graph;
+  return JSON.stringify(geometry ? { formatVersion, name, system, nodes, joints, geometry } : { formatVersion, name, system, nodes, joints }, null, 2) + "\n";
 }

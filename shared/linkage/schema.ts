@@ -7,6 +7,7 @@
 import { z } from "zod";
 import { inches, force, systemSchema, type ControlSystem } from "./fields";
 import { KIND_LIST, PORTS, type KindDef } from "./kinds";
+import { geometrySchema } from "./geometry";
 
 export const FORMAT_VERSION = 1 as const;
 
@@ -46,6 +47,8 @@ export const rodEndSchema = z.object({
   ratedUltimate: force("rated ultimate radial load").optional(),
   /** Rated misalignment, ± degrees. */
   ratedMisalignment: z.number().min(0).max(45).optional(),
+  /** Length of the threaded shank (male) or of the internal thread (female), in: sets the rigging range. */
+  threadLength: inches("thread length").optional(),
   hasWitnessHole: z.boolean().default(true),
   partNumber: z.string().max(60).optional(),
 });
@@ -109,6 +112,8 @@ export const graphSchema = z
     system: systemSchema.default("other"),
     nodes: z.array(nodeSchema).max(20_000),
     joints: z.array(jointSchema).max(40_000),
+    /** Optional: pivots to scale and arm angles (geometry.ts); without it motion is not checked. */
+    geometry: geometrySchema.optional(),
   })
   .superRefine((g, ctx) => {
     const ids = new Map<string, LinkageNode>();
@@ -128,6 +133,15 @@ export const graphSchema = z
       }
       if (j.from.node === j.to.node) ctx.addIssue({ code: "custom", path: ["joints", i], message: `joint ${j.id} joins a part to itself` });
     });
+    if (g.geometry)
+      for (const [nodeId, pg] of Object.entries(g.geometry.parts)) {
+        const n = ids.get(nodeId);
+        if (!n) ctx.addIssue({ code: "custom", path: ["geometry", "parts", nodeId], message: `geometry for missing node "${nodeId}"` });
+        else
+          for (const port of [...Object.keys(pg.arms), ...Object.keys(pg.offsets)])
+            if (port !== "grip" && !PORTS[n.kind].includes(port))
+              ctx.addIssue({ code: "custom", path: ["geometry", "parts", nodeId], message: `a ${n.kind} has no port "${port}" for an arm (ports: ${PORTS[n.kind].join(", ")})` });
+      }
   });
 
 export type LinkageGraph = z.infer<typeof graphSchema>;

@@ -3,8 +3,10 @@
  * per analysis and its ratio to JSON.parse of the same graph's JSON (what loading the file costs anyway).
  * Targets (issue 3): 60 parts < 1 ms; 10,000 parts < 2 × JSON.parse; growth linear.
  */
-import { analyze } from "../../shared/analysis";
+import { analyze, analyzeMotion, DEFAULT_SETTINGS, sweepGraph } from "../../shared/analysis";
+import { buildContext } from "../../shared/analysis/context";
 import { generateLinkage } from "../../shared/demo";
+import { chainGeometry } from "../../shared/demo-geometry";
 
 function median(xs: number[]): number {
   const s = [...xs].sort((a, b) => a - b);
@@ -57,8 +59,22 @@ export async function run(): Promise<{ ok: boolean; rows: EngineBenchRow[] }> {
   const rawGrowth = big.usPerPart / mid.usPerPart;
   const parseGrowth = big.parseMs / big.parts / (mid.parseMs / mid.parts);
   const growth = big.ratio / mid.ratio;
+  // Motion (issue 14): a 60-part single-path run with geometry swept in 1,000 steps; and what the motion
+  // check adds to a run without geometry (it returns at once), against that run's whole analysis.
+  const g60 = generateLinkage(60);
+  const geo60 = { ...g60, geometry: chainGeometry(g60) };
+  for (let i = 0; i < 5; i++) sweepGraph(geo60, DEFAULT_SETTINGS, 1000);
+  const sweepMs = time(() => sweepGraph(geo60, DEFAULT_SETTINGS, 1000));
+  const stages = sweepGraph(geo60, DEFAULT_SETTINGS, 1000).sweeps[0]?.chain.stages.length ?? 0;
+  const withGeoMs = time(() => analyze(geo60));
+  const ctx60 = buildContext(g60);
+  const noGeoMotionMs = time(() => analyzeMotion(ctx60, DEFAULT_SETTINGS));
+  console.log(`motion: 60-part run, ${stages} four-bars: 1,000-step sweep ${sweepMs.toFixed(2)} ms; analyze() with geometry (default steps) ${withGeoMs.toFixed(2)} ms; ` +
+    `without geometry the motion check costs ${(noGeoMotionMs * 1000).toFixed(3)} µs of the ${(small.analyzeMs * 1000).toFixed(1)} µs analysis`);
   const checks = [
     [`60 parts under 1 ms`, small.analyzeMs < 1, `${small.analyzeMs.toFixed(3)} ms`],
+    [`1,000-step sweep of a 60-part run with geometry under 20 ms`, stages > 10 && sweepMs < 20, `${sweepMs.toFixed(2)} ms (${stages} four-bars)`],
+    [`a run without geometry costs what it did (motion check under 1 % of its analysis)`, noGeoMotionMs < small.analyzeMs * 0.01, `${((noGeoMotionMs / small.analyzeMs) * 100).toFixed(3)} %`],
     [`10,000 parts under 2 × JSON.parse`, big.ratio < 2, `${big.ratio.toFixed(2)} ×`],
     [`linear growth (analyze/parse ratio 1,000 → 10,000 parts grows < 2 ×)`, growth < 2,
       `${growth.toFixed(2)} × (raw µs per part ${rawGrowth.toFixed(2)} ×, JSON.parse per part ${parseGrowth.toFixed(2)} ×)`],

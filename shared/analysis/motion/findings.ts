@@ -1,0 +1,93 @@
+/**
+ * Rules over a swept chain (domain.md §5; 14 CFR 23.675 for stops). Each finding names the input position
+ * where it happens, so the builder can move the stick there and look.
+ */
+import { SRC } from "../../hardware";
+import type { Finding, SourceTag } from "../types";
+import { finding, fmt, jointSubject, nodeSubject, num } from "../format";
+import { type Ctx, nodeLabel } from "../context";
+import { TRANSMISSION_MAX, TRANSMISSION_MIN } from "../kinematics";
+import { type ChainSweep, mu as muDeg, TOGGLE_SIN } from "./sweep";
+import type { LinkageGeometry } from "../../linkage/geometry";
+
+export const MOTION_SRC = {
+  closure: { kind: "published", text: "four-bar loop closure (mechanism-design texts)" },
+  stops: { kind: "published", text: "14 CFR 23.675 (stops positively limit the range of motion)" },
+  designTravel: { kind: "commonPractice", text: "rig the surface to the designer's travel within its tolerance" },
+} as const satisfies Record<string, SourceTag>;
+
+/** "12.5° forward", "3.0° back", "neutral". */
+export function atInput(theta: number): string {
+  if (Math.abs(theta) < 0.05) return "neutral";
+  return `${fmt(Math.abs(theta), 1)}° ${theta > 0 ? "forward" : "back"}`;
+}
+
+/** Steps eb..ef (inclusive) are the travel the run really has; stopBack/stopForward: a travel stop ends it there. */
+export type Ends = { eb: number; ef: number; stopBack: boolean; stopForward: boolean };
+
+export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: LinkageGeometry, out: Finding[]): void {
+  const ch = sw.chain;
+  const { eb, ef } = ends;
+  const input = ctx.nodes[ch.input];
+  for (let s = 0; s < ch.stages.length; s++) {
+    const st = ch.stages[s];
+    const rod = ctx.nodes[st.rod];
+    let lo = Infinity, hi = -Infinity, loAt = 0, hiAt = 0, toggleAt: number | null = null;
+    const sA0 = Math.sign(sw.crossA[s][sw.neutral]);
+    for (let k = eb; k <= ef; k++) {
+      if (!sw.ok[k]) continue;
+      for (let e = 0; e < 2; e++) {
+        const mu = -(e ? sw.cosB[s][k] : sw.cosA[s][k]); // −cos μ rises with μ: compare that, convert once
+        if (mu < lo) { lo = mu; loAt = sw.theta[k]; }
+        if (mu > hi) { hi = mu; hiAt = sw.theta[k]; }
+      }
+      const nearA = Math.abs(sw.crossA[s][k]) < TOGGLE_SIN * st.a * st.b;
+      const nearB = Math.abs(sw.crossB[s][k]) < TOGGLE_SIN * st.c * st.b;
+      const flipped = sA0 !== 0 && Math.sign(sw.crossA[s][k]) === -sA0;
+      if (toggleAt === null && (nearA || nearB || flipped)) toggleAt = sw.theta[k];
+    }
+    lo = muDeg(-lo);
+    hi = muDeg(-hi);
+    if (toggleAt !== null) {
+      out.push(finding("motion-over-centre", "hazard", nodeSubject(rod.id),
+        `At ${atInput(toggleAt)} of ${nodeLabel(input)} the pushrod ${nodeLabel(rod)} falls in line with a crank arm (toggle): there the run can lock, or pass over centre and drive the surface the wrong way. Change the arm angles, the pivot positions or the travel so it stays clear of the line over the whole travel.`,
+        SRC.transmission, [num("input position", toggleAt, "°")]));
+    } else if (lo < TRANSMISSION_MIN || hi > TRANSMISSION_MAX) {
+      const bad = lo < TRANSMISSION_MIN ? { v: lo, at: loAt } : { v: hi, at: hiAt };
+      out.push(finding("motion-transmission-angle", "caution", nodeSubject(rod.id),
+        `Over the travel the angle between ${nodeLabel(rod)} and the arms it joins runs from ${fmt(lo, 1)}° to ${fmt(hi, 1)}° (${fmt(bad.v, 1)}° at ${atInput(bad.at)} of ${nodeLabel(input)}), outside 40°–140°: the rod pushes along the arm more than around the pivot, so loads and free play rise there. Move a pivot or change an arm angle to bring it inside the band.`,
+        SRC.transmission, [num("minimum transmission angle", lo, "°"), num("maximum transmission angle", hi, "°"), num("input position", bad.at, "°")]));
+    }
+    // Rod-end misalignment: the rod's angle to the plane the bolts are square to (constant in planar motion).
+    const mis = (Math.asin(Math.min(1, Math.abs(st.dz) / st.length)) * 180) / Math.PI;
+    for (const j of [st.jointA, st.jointB]) {
+      const rated = ctx.joints[j].hardware?.rodEnd?.ratedMisalignment;
+      if (rated !== undefined && mis > rated)
+        out.push(finding("motion-misalignment", "hazard", jointSubject(ctx.joints[j].id),
+          `${nodeLabel(rod)} leaves the plane of its arms by ${fmt(st.dz, 2)} in over its ${fmt(st.length, 2)} in length, so the rod end at joint ${ctx.joints[j].id} works at ${fmt(mis, 1)}° of misalignment, beyond its rated ±${fmt(rated, 1)}°. The ball housing bears on the shank and bends it. Bring the attach points into line (spacers) or fit a rod end rated for the angle.`,
+          SRC.misalignment, [num("misalignment", mis, "°"), num("rated misalignment", rated, "°")]));
+    }
+  }
+  for (const [fail, stage, dir] of [[sw.failForward, sw.failStageForward, "forward"], [sw.failBack, sw.failStageBack, "back"]] as const) {
+    if (fail === null) continue;
+    const limit = dir === "forward" ? ch.travelForward : ch.travelBack;
+    // A travel stop met before the chain runs out is what limits the travel: then the run is fine.
+    if (dir === "forward" ? ends.stopForward : ends.stopBack) continue;
+    const rod = ctx.nodes[ch.stages[stage].rod];
+    out.push(finding("motion-cannot-assemble", "hazard", nodeSubject(rod.id),
+      `${nodeLabel(input)} cannot reach its ${dir} stop (${fmt(limit, 1)}°): at ${atInput(fail)} ${nodeLabel(rod)} can no longer join its two arms — a crank runs out of travel and the run jams before the stop. Shorten that crank's travel or change the arm lengths or pivot positions.`,
+      MOTION_SRC.closure, [num("input position", fail, "°"), num("input stop", dir === "forward" ? limit : -limit, "°")]));
+  }
+  const dt = geo.designTravel;
+  if (dt && ch.surface >= 0) {
+    const a = sw.deflection[eb], b = sw.deflection[ef];
+    const up = Math.max(a, b, 0), down = Math.max(-Math.min(a, b), 0);
+    const surf = ctx.nodes[ch.surface];
+    for (const [got, want, word] of [[up, dt.up, "up"], [down, dt.down, "down"]] as const) {
+      if (Math.abs(got - want) > dt.tolerance + 1e-9)
+        out.push(finding("motion-surface-travel", "caution", nodeSubject(surf.id),
+          `At the stops ${nodeLabel(surf)} moves ${fmt(got, 1)}° ${word}; the designer's travel is ${fmt(want, 1)}° ± ${fmt(dt.tolerance, 1)}°. ${got > want ? "Too much travel: reset the stops or the arm lengths" : "Not enough travel: the stops or the arm ratios cut it short"} before flight, then measure it on the aircraft.`,
+          MOTION_SRC.designTravel, [num(`${word} travel at the stops`, got, "°"), num(`designer's ${word} travel`, want, "°"), num("tolerance", dt.tolerance, "°")]));
+    }
+  }
+}

@@ -1,0 +1,44 @@
+/** What the motion check adds to the report (engine v1 added field `motion`). Degrees, inches, lbf, in·lbf. */
+import type { Subject } from "../types";
+
+export type WorstLoad = {
+  subject: Subject;
+  /** What the load is: "axial", "radial", "hinge moment". */
+  what: string;
+  unit: "lbf" | "in·lbf";
+  /** Limit load at the worst step. */
+  limit: number;
+  /** Input deflection of that step, ° (forward +), and the input it belongs to. */
+  at: number;
+  inputId: string;
+};
+
+export type MotionChainSummary = {
+  inputId: string;
+  hornId: string;
+  surfaceId: string | null;
+  steps: number;
+  /** The input travel the run really has: from the input's stops, a travel stop met first, or where it stops closing. */
+  travelBack: number;
+  travelForward: number;
+  /** Surface deflection (° up +) at those two ends, and the gearing (surface ° per input °) at neutral. */
+  deflectionBack: number;
+  deflectionForward: number;
+  gearingNeutral: number;
+  minTransmission: { value: number; at: number; rodId: string };
+  maxTransmission: { value: number; at: number; rodId: string };
+  /** Input deflection where a part runs out (the chain will not close), each way; null when it closes to the stop. */
+  failBack: number | null;
+  failForward: number | null;
+  /** Per pushrod: the centre-to-centre length the geometry needs, the card's, and the rigging range if known. */
+  rods: { rodId: string; needed: number; card: number; shortest: number | null; longest: number | null; misalignment: number }[];
+};
+
+export type MotionReport = {
+  /** True when at least one run was swept. */
+  checked: boolean;
+  /** What to enter (or why a run cannot be swept); shown beside the results. */
+  notChecked: string[];
+  chains: MotionChainSummary[];
+  worstLoads: WorstLoad[];
+};

@@ -1,0 +1,119 @@
+import { describe, expect, it } from "vitest";
+import { analyze } from "../../shared/analysis";
+import { graphSchema } from "../../shared/linkage/schema";
+import { parseLinkageFile, serializeLinkage } from "../../shared/linkage/io";
+import { demoPitchLinkage } from "../../shared/demo";
+import { demoPitchGeometry } from "../../shared/demo-geometry";
+import { barRun, type Bar } from "./motion-fixtures";
+import type { LinkageGraph } from "../../shared/linkage/schema";
+
+const square: Bar = { a: 3, c: 3, o2: [0, 0], o4: [30, 0], alpha: 90, beta: 90 }; // parallelogram: surface = stick
+const codes = (g: LinkageGraph) => analyze(g).findings.map((f) => f.code);
+
+function withStop(g: LinkageGraph, target: string, stopAt: number): LinkageGraph {
+  return graphSchema.parse({
+    ...g,
+    nodes: [...g.nodes, { id: "stop", kind: "travelStop", label: "Stop", position: { x: 0, y: 0 }, props: { stopAt } }],
+    joints: [...g.joints, { id: "j-stop", from: { node: "stop", port: "contact" }, to: { node: target, port: target === "elevator" ? "hinge" : "pivot" }, hardware: {} }],
+  });
+}
+
+describe("rod-end misalignment (rated ± angle vs the rod's angle out of the plane)", () => {
+  it("trips when the rod leaves the plane by more than the rating", () => {
+    // 30 in rod rising 7 in out of plane: asin(7 / 30.8) ≈ 13.1° > 12° rated (geometry; rating from the card)
+    expect(codes(barRun({ ...square, dzB: 7 }))).toContain("motion-misalignment");
+  });
+  it("does not trip within the rating", () => {
+    // 2 in over 30 in: ≈ 3.8° < 12°
+    expect(codes(barRun({ ...square, dzB: 2 }))).not.toContain("motion-misalignment");
+  });
+});
+
+describe("surface travel at the stops vs the designer's travel", () => {
+  it("trips when the surface moves more than the designer's travel plus tolerance", () => {
+    // Parallelogram: surface = stick, ±15°; designer 10° up and down ± 1°.
+    const f = analyze(barRun(square, { designTravel: { up: 10, down: 10, tolerance: 1 } })).findings.filter((x) => x.code === "motion-surface-travel");
+    expect(f.map((x) => x.numbers[0].value.toFixed(3))).toEqual(["15.000", "15.000"]);
+  });
+  it("does not trip within tolerance", () => {
+    expect(codes(barRun(square, { designTravel: { up: 15.5, down: 14.5, tolerance: 1 } }))).not.toContain("motion-surface-travel");
+  });
+  it("a travel stop met first sets the travel the surface has", () => {
+    const g = withStop(barRun(square, { designTravel: { up: 10, down: 15, tolerance: 0.5 } }), "elevator", 10);
+    expect(codes(g)).not.toContain("motion-surface-travel");
+    expect(analyze(g).motion!.chains[0].deflectionForward).toBeCloseTo(10, 1);
+  });
+});
+
+describe("stops", () => {
+  it("a stop beyond the input's travel is never reached", () => {
+    expect(codes(withStop(barRun(square), "elevator", 20))).toContain("stop-never-reached");
+  });
+  it("a stop inside the travel is reached", () => {
+    const c = codes(withStop(barRun(square), "elevator", 12));
+    expect(c).not.toContain("stop-never-reached");
+    expect(c).not.toContain("stop-after-runout");
+  });
+  it("a stop beyond where the run jams is reached after another part runs out", () => {
+    // 6 in arm on a 1.5 in horn: the horn reaches toggle at about 14.5° of stick; a stop at 80° of the horn is never met first.
+    const g = withStop(barRun({ a: 6, c: 1.5, o2: [0, 0], o4: [30, 0], alpha: 90, beta: 90 }), "elevator", 80);
+    const c = codes(g);
+    expect(c).toContain("stop-after-runout");
+    expect(c).toContain("motion-cannot-assemble");
+  });
+  it("a stop met before the run jams makes the jam unreachable", () => {
+    const g = withStop(barRun({ a: 6, c: 1.5, o2: [0, 0], o4: [30, 0], alpha: 90, beta: 90 }), "stick", 10);
+    // Without the stop it jams at about 12.4° forward (the case above); a stick stop at 10° is met first.
+    expect(codes(g)).not.toContain("motion-cannot-assemble");
+  });
+});
+
+describe("rigging range (thread length and minimum engagement, the witness-hole rule)", () => {
+  function rigged(engaged: number, threadLength: number, cardDelta: number): LinkageGraph {
+    const g = barRun(square);
+    g.nodes = g.nodes.map((n) => (n.kind === "pushrod" ? { ...n, props: { ...n.props, length: n.props.length + cardDelta } } : n));
+    g.joints = g.joints.map((j) => (j.hardware.rodEnd ? { ...j, hardware: { ...j.hardware, rodEnd: { ...j.hardware.rodEnd, threadLength }, engagement: { witnessHoleVerified: true, engagedLength: engaged } } } : j));
+    return g;
+  }
+  it("not checked, with what to enter, when thread and engaged lengths are missing", () => {
+    const r = analyze(barRun(square));
+    expect(r.motion!.notChecked.some((s) => s.includes("thread length") && s.includes("engaged length"))).toBe(true);
+    expect(r.findings.map((f) => f.code)).not.toContain("rigging-out-of-range");
+  });
+  it("in range: 1/4-28 ends, 1.0 in of thread, 0.6 in engaged; steel tube → min engagement 0.25 in (1×D)", () => {
+    // longest = card + 2·(0.6 − 0.25) = card + 0.7; shortest = card − 2·(1.0 − 0.6) = card − 0.8 (common practice, 1×D)
+    const r = analyze(rigged(0.6, 1.0, -0.5));
+    expect(r.findings.map((f) => f.code)).not.toContain("rigging-out-of-range");
+    expect(r.motion!.chains[0].rods[0].longest! - r.motion!.chains[0].rods[0].card).toBeCloseTo(0.7, 9);
+  });
+  it("out of range: the geometry needs 1 in more than the ends can give", () => {
+    expect(codes(rigged(0.6, 1.0, -1))).toContain("rigging-out-of-range");
+  });
+});
+
+describe("the format: geometry is optional in version 1", () => {
+  it("an old file without geometry reads, and writes back without it", () => {
+    const text = serializeLinkage(demoPitchLinkage());
+    const r = parseLinkageFile(text);
+    expect(r.ok).toBe(true);
+    expect(text.includes("geometry")).toBe(false);
+  });
+  it("geometry round-trips through the file", () => {
+    const g = { ...demoPitchLinkage(), geometry: demoPitchGeometry() };
+    const r = parseLinkageFile(serializeLinkage(g));
+    expect(r.ok && r.graph.geometry?.parts.bellcrank.arms.out).toBe(90);
+  });
+  it("rejects geometry for a missing node, an arm on a port the part lacks, and a pivot out of range", () => {
+    const bad = (geometry: unknown) => graphSchema.safeParse({ ...demoPitchLinkage(), geometry }).success;
+    expect(bad({ parts: { nope: { pivot: { x: 0, y: 0 }, arms: {} } } })).toBe(false);
+    expect(bad({ parts: { stick: { pivot: { x: 0, y: 0 }, arms: { out: 10 } } } })).toBe(false);
+    expect(bad({ parts: { stick: { pivot: { x: 1e6, y: 0 }, arms: {} } } })).toBe(false);
+    expect(bad({ parts: { stick: { pivot: { x: 1, y: 0 }, arms: { attach: -90 } } } })).toBe(true);
+  });
+  it("geometry missing for a part of the run: motion not checked, naming what to enter", () => {
+    const g = { ...demoPitchLinkage(), geometry: { ...demoPitchGeometry(), parts: { stick: demoPitchGeometry().parts.stick } } };
+    const r = analyze(graphSchema.parse(g));
+    expect(r.motion!.checked).toBe(false);
+    expect(r.motion!.notChecked[0]).toMatch(/Bellcrank under the seat.*pivot position/);
+  });
+});
