@@ -5,7 +5,7 @@
 import { SRC } from "../../hardware";
 import type { Finding, SourceTag } from "../types";
 import { finding, fmt, jointSubject, nodeSubject, num } from "../format";
-import { type Ctx, nodeLabel } from "../context";
+import { type Ctx, jointLabel, nodeLabel } from "../context";
 import { TRANSMISSION_MAX, TRANSMISSION_MIN } from "../kinematics";
 import { type ChainSweep, mu as muDeg, TOGGLE_SIN } from "./sweep";
 import type { LinkageGeometry } from "../../linkage/geometry";
@@ -64,7 +64,7 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
       const rated = ctx.joints[j].hardware?.rodEnd?.ratedMisalignment;
       if (rated !== undefined && mis > rated)
         out.push(finding("motion-misalignment", "hazard", jointSubject(ctx.joints[j].id),
-          `${nodeLabel(rod)} leaves the plane of its arms by ${fmt(st.dz, 2)} in over its ${fmt(st.length, 2)} in length, so the rod end at joint ${ctx.joints[j].id} works at ${fmt(mis, 1)}° of misalignment, beyond its rated ±${fmt(rated, 1)}°. The ball housing bears on the shank and bends it. Bring the attach points into line (spacers) or fit a rod end rated for the angle.`,
+          `${nodeLabel(rod)} leaves the plane of its arms by ${fmt(st.dz, 2)} in over its ${fmt(st.length, 2)} in length, so the rod end at ${jointLabel(ctx, j)} works at ${fmt(mis, 1)}° of misalignment, beyond its rated ±${fmt(rated, 1)}°. The ball housing bears on the shank and bends it. Bring the attach points into line (spacers) or fit a rod end rated for the angle.`,
           SRC.misalignment, [num("misalignment", mis, "°"), num("rated misalignment", rated, "°")]));
     }
   }

@@ -9,7 +9,7 @@
  */
 import type { LinkageNode } from "../../linkage/schema";
 import { THREADS_BY_NAME, TUBE_MATERIALS_BY_NAME } from "../../hardware";
-import type { Ctx } from "../context";
+import { type Ctx, jointLabel } from "../context";
 
 export type Rigging =
   | { ok: true; shortest: number; longest: number; card: number; minEngagement: number[] }
@@ -33,7 +33,7 @@ export function riggingRange(ctx: Ctx, rod: number, joints: [number, number]): R
     if (!re) lack.push("rod end");
     if (re && re.threadLength === undefined) lack.push("thread length");
     if (hw?.engagement?.engagedLength === undefined) lack.push("engaged length");
-    if (lack.length || !re) { toEnter.push(`${ctx.joints[j].id}: ${lack.join(", ")}`); continue; }
+    if (lack.length || !re) { toEnter.push(`${jointLabel(ctx, j)}: ${lack.join(", ")}`); continue; }
     const e = hw.engagement!.engagedLength!;
     const t = re.threadLength!;
     const m = minEngagement(THREADS_BY_NAME[re.thread].majorDiameter, family);
