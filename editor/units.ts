@@ -7,7 +7,7 @@ import { convert, unitLabel as sharedLabel, type QuantityKind } from "@/shared/u
 
 const factor = (k: QuantityKind) => convert(1, k, "US", "SI");
 export type UnitSystem = "US" | "SI";
-export type Quantity = "length" | "force" | "torque" | "angle" | "stress" | "count" | "ratio";
+export type Quantity = "length" | "force" | "torque" | "angle" | "stress" | "count" | "ratio" | "temperature";
 
 type Conv = { us: string; si: string; toSI: number; siDigits: number; usDigits: number };
 const conv = (k: "length" | "force" | "torque" | "stress", usDigits: number, siDigits: number): Conv => ({
@@ -17,14 +17,19 @@ const conv = (k: "length" | "force" | "torque" | "stress", usDigits: number, siD
   usDigits,
   siDigits,
 });
-const CONV: Record<Exclude<Quantity, "count" | "ratio" | "angle">, Conv> = {
+const CONV: Record<Exclude<Quantity, "count" | "ratio" | "angle" | "temperature">, Conv> = {
   length: conv("length", 3, 1),
   force: conv("force", 0, 0),
   torque: conv("torque", 0, 1),
   stress: conv("stress", 0, 1),
 };
 
+/** °F ↔ °C: the one conversion here with an offset (the format stores °F). */
+const fToC = (f: number) => ((f - 32) * 5) / 9;
+const cToF = (c: number) => (c * 9) / 5 + 32;
+
 export function unitLabel(q: Quantity, sys: UnitSystem): string {
+  if (q === "temperature") return sys === "SI" ? "°C" : "°F";
   if (q === "angle") return "°";
   if (q === "count" || q === "ratio") return "";
   return sys === "SI" ? CONV[q].si : CONV[q].us;
@@ -32,11 +37,13 @@ export function unitLabel(q: Quantity, sys: UnitSystem): string {
 
 /** Canonical (US) value → display value. */
 export function toDisplay(v: number, q: Quantity, sys: UnitSystem): number {
+  if (q === "temperature") return sys === "SI" ? fToC(v) : v;
   if (sys === "US" || q === "angle" || q === "count" || q === "ratio") return v;
   return v * CONV[q].toSI;
 }
 /** Display value → canonical (US) value. */
 export function fromDisplay(v: number, q: Quantity, sys: UnitSystem): number {
+  if (q === "temperature") return sys === "SI" ? cToF(v) : v;
   if (sys === "US" || q === "angle" || q === "count" || q === "ratio") return v;
   return v / CONV[q].toSI;
 }
@@ -50,7 +57,7 @@ function trim(n: number, digits: number): string {
 export function inputText(v: number | undefined, q: Quantity, sys: UnitSystem): string {
   if (v === undefined || v === null || Number.isNaN(v)) return "";
   const d = toDisplay(v, q, sys);
-  if (q === "angle" || q === "count" || q === "ratio") return trim(d, 3);
+  if (q === "angle" || q === "count" || q === "ratio" || q === "temperature") return trim(d, q === "temperature" ? 1 : 3);
   return trim(d, sys === "SI" ? Math.max(CONV[q].siDigits, 3) : Math.max(CONV[q].usDigits, 4));
 }
 
@@ -59,6 +66,7 @@ export function fmt(v: number | undefined | null, q: Quantity, sys: UnitSystem, 
   if (v === undefined || v === null || !Number.isFinite(v)) return "—";
   if (q === "angle") return `${trim(v, digits ?? 1)}°`;
   if (q === "count") return String(Math.round(v));
+  if (q === "temperature") return `${trim(toDisplay(v, q, sys), digits ?? 0)} ${unitLabel(q, sys)}`;
   if (q === "ratio") return v.toFixed(digits ?? 2);
   const c = CONV[q];
   const d = toDisplay(v, q, sys);
@@ -70,7 +78,7 @@ export function fmt(v: number | undefined | null, q: Quantity, sys: UnitSystem, 
 export function fmtUnit(v: number, unit: string, sys: UnitSystem): string {
   const u = unit.trim();
   const q: Quantity | null =
-    u === "in" ? "length" : u === "lbf" ? "force" : u === "in·lbf" || u === "in-lbf" || u === "in lbf" ? "torque" : u === "psi" ? "stress" : u === "°" || u === "deg" ? "angle" : null;
+    u === "in" ? "length" : u === "lbf" ? "force" : u === "in·lbf" || u === "in-lbf" || u === "in lbf" ? "torque" : u === "psi" ? "stress" : u === "°" || u === "deg" ? "angle" : u === "°F" ? "temperature" : null;
   if (q) {
     const digits = q === "length" ? (sys === "SI" ? 1 : 3) : undefined;
     return fmt(v, q, sys, digits);

@@ -96,14 +96,20 @@ export const settingsSchema = z.object({
       yawPedal: z.number().positive().default(200), // 14 CFR 23.397(b)
       /** Used for flap, trim and other inputs. */
       other: z.number().positive().default(100),
+      /** Wheel, pitch (symmetric), lbf: 200 maximum, 100 minimum. */
+      pitchWheel: z.number().positive().default(200), // 14 CFR 23.397(b); below 100 is a finding (shared/analysis/cables.ts)
+      /** Wheel, roll: the couple is this × the wheel diameter D, in·lbf per in: 50·D maximum, 40·D minimum. */
+      rollWheel: z.number().positive().default(50), // 14 CFR 23.397(b); below 40 is a finding (shared/analysis/cables.ts)
     })
-    .default({ pitchStick: 167, rollStick: 67, yawPedal: 200, other: 100 }),
+    .default({ pitchStick: 167, rollStick: 67, yawPedal: 200, other: 100, pitchWheel: 200, rollWheel: 50 }),
   ultimateFactor: z.number().min(1).max(5).default(1.5), // 14 CFR 23.303
   fittingFactor: z.number().min(1).max(5).default(1.15), // 14 CFR 23.625
   /** Special factor on plain bearings in push-pull joints with angular motion. */
   bearingFactor: z.number().min(1).max(10).default(3.33), // 14 CFR 23.693
   /** Apply the bearing factor to spherical rod ends too (a matter of interpretation). */
   bearingFactorOnRodEnds: z.boolean().default(false),
+  /** Special factor on joints in cable systems (and the cables' breaking strength against it). */
+  cableFactor: z.number().min(1).max(10).default(2.0), // 14 CFR 23.693
   dualControls: z.boolean().default(false),
 });
 export type AnalysisSettings = z.infer<typeof settingsSchema>;

@@ -4,3 +4,4 @@ export * from "./bolts";
 export * from "./threads";
 export * from "./materials";
 export * from "./torque";
+export * from "./cables";

@@ -14,3 +14,9 @@ export type ControlSystem = z.infer<typeof systemSchema>;
 
 export const TUBE_MATERIALS = ["4130N", "6061-T6", "2024-T3"] as const;
 export const tubeMaterialSchema = z.enum(TUBE_MATERIALS);
+/** A temperature in °F (cable rigging tension is measured at one). */
+export const fahrenheit = (what: string) =>
+  z.number({ error: `${what} must be a number (°F)` }).min(-100, `${what} below −100 °F`).max(200, `${what} above 200 °F`);
+/** A whole count of threads. */
+export const threadCount = (what: string) =>
+  z.number({ error: `${what} must be a number` }).int(`${what} is a whole number of threads`).min(0, `${what} cannot be negative`).max(50, `${what} over 50`);

@@ -20,6 +20,14 @@ function propsFor(kind: NodeKind): fc.Arbitrary<Record<string, unknown>> {
     case "controlSurface": return fc.record({ hingeMoment: fc.double({ min: 1, max: 1e4, noNaN: true }) }, { requiredKeys: [] });
     case "structureMount": return fc.constant({});
     case "travelStop": return fc.record({ stopAt: ang }, { requiredKeys: [] });
+    case "controlWheel": return fc.record({ axis: fc.constantFrom("pitch", "roll"), diameter: len, columnArm: len, attachArm: len }, { requiredKeys: ["diameter", "columnArm", "attachArm"] });
+    case "cablePedal": return fc.record({ pedalArm: len, cableArm: len });
+    case "cableSector": return fc.record({ inputArm: len, sectorRadius: len });
+    // No rigging tension here: a preloaded circuit is not linear in the force (T = max(F, P + F/2)).
+    case "cable": return fc.record({ size: fc.constantFrom("1/16", "3/32", "1/8", "3/16"), construction: fc.constantFrom("7x19", "7x7", "1x19"), terminalA: fc.constantFrom("swaged", "thimble") }, { requiredKeys: [] });
+    case "turnbuckle": return fc.record({ threadsShowingA: fc.integer({ min: 0, max: 8 }), locking: fc.constantFrom("clip", "wire", "none"), travelCheck: fc.constantFrom("free", "binds") }, { requiredKeys: [] });
+    case "pulley": return fc.record({ diameter: len, wrapAngle: ang, guards: fc.constantFrom("fitted", "missing") }, { requiredKeys: ["diameter"] });
+    case "fairlead": return fc.record({ turnAngle: ang }, { requiredKeys: [] });
   }
 }
 
@@ -89,7 +97,7 @@ describe("properties", () => {
         const g = graphSchema.parse(raw);
         const base = { ...DEFAULT_SETTINGS, dualControls: dual };
         const pf = base.pilotForce;
-        const scaled = { ...base, pilotForce: { pitchStick: pf.pitchStick * k, rollStick: pf.rollStick * k, yawPedal: pf.yawPedal * k, other: pf.other * k } };
+        const scaled = { ...base, pilotForce: { pitchStick: pf.pitchStick * k, rollStick: pf.rollStick * k, yawPedal: pf.yawPedal * k, other: pf.other * k, pitchWheel: pf.pitchWheel * k, rollWheel: pf.rollWheel * k } };
         const a = analyze(g, base), b = analyze(g, scaled);
         const close = (x: number, y: number) => Math.abs(x - y) <= 1e-9 * Math.max(1, Math.abs(x), Math.abs(y));
         a.pushrods.forEach((p, i) => {

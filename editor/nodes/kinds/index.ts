@@ -15,10 +15,20 @@ import { controlHorn } from "./controlHorn";
 import { controlSurface } from "./controlSurface";
 import { structureMount } from "./structureMount";
 import { travelStop } from "./travelStop";
+import { controlWheel } from "./controlWheel";
+import { cablePedal } from "./cablePedal";
+import { cableSector } from "./cableSector";
+import { cable } from "./cable";
+import { turnbuckle } from "./turnbuckle";
+import { pulley } from "./pulley";
+import { fairlead } from "./fairlead";
 
 export type { EditorKindDef } from "./types";
 
-export const EDITOR_KIND_LIST = [stick, pedal, torqueTube, bellcrank, idlerArm, pushrod, controlHorn, controlSurface, structureMount, travelStop] as const;
+export const EDITOR_KIND_LIST = [
+  stick, controlWheel, pedal, cablePedal, torqueTube, bellcrank, cableSector, idlerArm, pushrod,
+  cable, turnbuckle, pulley, fairlead, controlHorn, controlSurface, structureMount, travelStop,
+] as const;
 
 // Every kind of the shared registry has its editor file (a kind missing here fails the typecheck).
 type Covered = (typeof EDITOR_KIND_LIST)[number]["kind"];

@@ -17,12 +17,22 @@ import { controlHorn } from "./controlHorn";
 import { controlSurface } from "./controlSurface";
 import { structureMount } from "./structureMount";
 import { travelStop } from "./travelStop";
+import { controlWheel } from "./controlWheel";
+import { cablePedal } from "./cablePedal";
+import { cableSector } from "./cableSector";
+import { cable } from "./cable";
+import { turnbuckle } from "./turnbuckle";
+import { pulley } from "./pulley";
+import { fairlead } from "./fairlead";
 
 export { defineKind, ROLE_PORTS } from "./types";
 export type { EngineInfo, KindDef, PilotForces, PortDef, Role, Side } from "./types";
 
 /** Every part kind, in the order the parts tray lists them. */
-export const KIND_LIST = [stick, pedal, torqueTube, bellcrank, idlerArm, pushrod, controlHorn, controlSurface, structureMount, travelStop] as const;
+export const KIND_LIST = [
+  stick, controlWheel, pedal, cablePedal, torqueTube, bellcrank, cableSector, idlerArm, pushrod,
+  cable, turnbuckle, pulley, fairlead, controlHorn, controlSurface, structureMount, travelStop,
+] as const;
 
 type Def = (typeof KIND_LIST)[number];
 export type NodeKind = Def["kind"];

@@ -18,7 +18,11 @@ export type PortDef = {
 };
 
 /** Design pilot forces of the build's settings, limit, lbf (shared/analysis/types.ts). */
-export type PilotForces = { pitchStick: number; rollStick: number; yawPedal: number; other: number };
+export type PilotForces = {
+  pitchStick: number; rollStick: number; yawPedal: number; other: number;
+  /** Wheel, pitch (lbf) and roll (in·lbf per inch of wheel diameter). */
+  pitchWheel: number; rollWheel: number;
+};
 
 /**
  * The part's role in the run, and the numbers the engine reads for that role. Each role uses fixed port
@@ -38,7 +42,11 @@ export type EngineInfo<P> =
   /** The airframe (ground): reacts whatever reaches it; left out of the loop check. */
   | { role: "mount" }
   /** Limits travel; reacts whatever reaches it. */
-  | { role: "stop" };
+  | { role: "stop" }
+  /** Carries tension only, from end `a` to end `b` (a cable, a turnbuckle); pulleys and fairleads hang on `run` when it has one. */
+  | { role: "tension" }
+  /** Turns a cable joined at `cable` through `turn` degrees; reacts the resultant on its other ports (shared/analysis/cables.ts). */
+  | { role: "guide"; turn: (p: P) => number | undefined };
 
 export type Role = EngineInfo<unknown>["role"];
 
@@ -50,6 +58,8 @@ export const ROLE_PORTS: Record<Role, readonly string[]> = {
   surface: ["horn", "hinge"],
   mount: ["mount"],
   stop: ["contact"],
+  tension: ["a", "b"],
+  guide: ["cable"],
 };
 
 export type KindDef<K extends string = string, P extends z.ZodObject = z.ZodObject> = {

@@ -1,0 +1,29 @@
+import { z } from "zod";
+import { degrees, force, inches } from "../fields";
+import { defineKind } from "./types";
+
+/** A rudder pedal whose arm pulls a cable: the pedal force at the pedal arm, the cable on the cable arm. */
+export const cablePedal = defineKind({
+  kind: "cablePedal",
+  name: "Pedal, cable arm",
+  hint: "pilot input, yaw, pulls a cable",
+  props: z.object({
+    pedalArm: inches("pedal arm"),
+    /** Pivot to the cable's attach hole. */
+    cableArm: inches("cable arm"),
+    designForce: force("design force").optional(),
+    travel: degrees("travel").default(20),
+  }),
+  ports: { attach: { side: "right", name: "cable" }, pivot: { side: "bottom", name: "pivot" } },
+  defaults: () => ({ pedalArm: 9, cableArm: 3 }),
+  engine: {
+    role: "input",
+    arms: (p) => [p.pedalArm, p.cableArm],
+    // 14 CFR 23.397(b): the pedal force (the build's settings hold the figure). A foot pushes only.
+    pilotForce: (p, system, f) => {
+      if (p.designForce) return p.designForce;
+      if (system === "flap" || system === "trim") return f.other;
+      return f.yawPedal;
+    },
+  },
+});

@@ -1,0 +1,25 @@
+import { z } from "zod";
+import { threadCount } from "../fields";
+import { CABLE_SIZES } from "../../hardware/cables";
+import { defineKind } from "./types";
+
+/** A turnbuckle between two cable terminals (or a cable and a fitting): sets the rigging tension, carries tension only. */
+export const turnbuckle = defineKind({
+  kind: "turnbuckle",
+  name: "Turnbuckle",
+  hint: "sets the cable tension",
+  props: z.object({
+    /** The cable size it is made for. */
+    size: z.enum(CABLE_SIZES).default("1/8"),
+    /** Whole threads of each terminal showing outside the barrel. */
+    threadsShowingA: threadCount("threads showing at end A").optional(),
+    threadsShowingB: threadCount("threads showing at end B").optional(),
+    /** How the barrel is locked: a locking clip at each end, safety wire, or not yet. */
+    locking: z.enum(["clip", "wire", "none"]).optional(),
+    /** Checked at both ends of the travel: it lines up with the cable and cannot bind against the part it joins ("free"), or it binds. */
+    travelCheck: z.enum(["free", "binds"]).optional(),
+  }),
+  ports: { a: { side: "left", name: "A", end: true }, b: { side: "right", name: "B", end: true } },
+  defaults: () => ({ size: "1/8" as const }),
+  engine: { role: "tension" },
+});
