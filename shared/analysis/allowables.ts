@@ -103,11 +103,12 @@ export function specialFactor(hw: JointHardware | undefined, settings: AnalysisS
   return sf;
 }
 
-export function jointResult(ctx: Ctx, j: number, loads: Loads, settings: AnalysisSettings): JointResult {
+/** `cableJoint`: the joint is in a cable system, whose factor (14 CFR 23.693) competes as one more special factor. */
+export function jointResult(ctx: Ctx, j: number, loads: Loads, settings: AnalysisSettings, cableJoint = false): JointResult {
   const jt = ctx.joints[j];
   const hw = jt.hardware;
   const radialLimit = loads.jointRadial[j];
-  const sf = specialFactor(hw, settings);
+  const sf = cableJoint ? Math.max(specialFactor(hw, settings), settings.cableFactor) : specialFactor(hw, settings);
   const radialUltimate = radialLimit * settings.ultimateFactor * sf;
   const rating = hw?.rodEnd?.ratedUltimate ?? null;
   let boltAllow: number | null = null;

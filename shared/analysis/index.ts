@@ -13,6 +13,8 @@ import { structureFindings } from "./structure";
 import { sortFindings, summarize } from "./report";
 import { finding, linkageSubject } from "./format";
 import { analyzeMotion, type MotionReport } from "./motion";
+import { cableContext } from "./cable-circuits";
+import { cableFindings, cableResults } from "./cables";
 
 export * from "./types";
 export { solveFourBar, sweepFourBar, fourBarFindings, transmissionAngle, TRANSMISSION_MIN, TRANSMISSION_MAX } from "./kinematics";
@@ -35,6 +37,8 @@ export const ASSUMPTIONS: readonly string[] = [
   "Ultimate = limit × ultimate factor; joints also × the highest one special factor (fitting factor, or the bearing factor on plain bushings and clevis pins) (14 CFR 23.619). The bearing factor is applied to the joint's whole ultimate load, bolt included — conservative.",
   "Pushrods are pinned-pinned columns (K = 1), Euler or Johnson; the design force pushes and pulls, so each pushrod is checked both ways at the same load.",
   "With dual controls each pilot's force is 75 % and the inputs' loads are added (both pilots pushing the same way); otherwise the largest single input governs.",
+  "Cables carry tension only. Two cables between the same two parts are a closed circuit; the pulling cable carries the larger of the force and the circuit's rigging tension plus half the force (legs of equal stiffness), its slack partner less; without a recorded rigging tension the force alone is used and the strength is not checked. With dual controls the two pilots' cable tensions are added, each with the rigging tension — conservative.",
+  "A pulley or fairlead carries 2·T·sin(θ/2) for a cable of tension T turned through θ; cable-system joints and cables take the cable-system special factor (14 CFR 23.693) when it is the highest.",
   "The drawing is planar and has no airframe coordinates: rod-end misalignment and the four-bar transmission angle are not measured from it.",
 ];
 
@@ -66,7 +70,8 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   const findings: Finding[] = [];
   const s = resolveSettings(settings, findings);
   const ctx = buildContext(graph);
-  const loads = propagate(ctx, s);
+  const cc = cableContext(ctx);
+  const loads = propagate(ctx, s, cc.pretension);
   const motion = analyzeMotion(ctx, s);
   // With geometry the swept runs' worst-step loads replace the perpendicular-arm loads of their members.
   for (const [n, v] of motion.loads.pushrod) loads.pushrodAxial[n] = v;
@@ -87,11 +92,13 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
     }
   }
   const joints: JointResult[] = new Array(ctx.joints.length);
-  for (let j = 0; j < ctx.joints.length; j++) joints[j] = jointResult(ctx, j, loads, s);
+  for (let j = 0; j < ctx.joints.length; j++) joints[j] = jointResult(ctx, j, loads, s, cc.cableJoint[j] === 1);
+  const cables = cableResults(ctx, cc, loads, s);
 
-  structureFindings(ctx, loads, findings);
+  structureFindings(ctx, loads, findings, cc);
   strengthFindings(ctx, pushrodNodes, pushrods, joints, s, findings);
   retentionFindings(ctx, findings);
+  cableFindings(ctx, cc, loads, cables, s, findings);
 
   const sorted = sortFindings(findings);
   return {
@@ -99,9 +106,10 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
     findings: sorted,
     pushrods,
     joints,
-    summary: summarize(sorted, pushrods, joints),
+    summary: summarize(sorted, pushrods, joints, cables),
     settings: s,
     surfaces,
+    cables,
     assumptions: assumptionsFor(motion.report),
     motion: motion.report,
     notice: NOTICE,

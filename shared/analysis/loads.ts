@@ -23,13 +23,14 @@
 import type { LinkageGraph, LinkageNode } from "../linkage/schema";
 import { ENGINE, roleOf, type EngineInfo } from "../linkage/kinds";
 import { bellcrankPivotLoad } from "../linkage/kinds/bellcrank";
+import { guideLoad, pullingTension } from "../hardware/cables";
 import type { AnalysisSettings } from "./types";
 import { type Ctx, jointsAt, otherNode, otherPort } from "./context";
 
 export type InputLoad = { node: number; gripForce: number; linkForce: number; reachesSurface: boolean };
 
 export type Loads = {
-  /** Limit axial load per node index (pushrods only; 0 elsewhere), lbf. */
+  /** Limit axial load per node index: pushrods, and the tension of cables and turnbuckles; 0 elsewhere, lbf. */
   pushrodAxial: Float64Array;
   /** Limit radial load per joint index, lbf. */
   jointRadial: Float64Array;
@@ -67,7 +68,11 @@ function arms(n: LinkageNode): [number, number] {
   return e && (e.role === "input" || e.role === "crank") ? e.arms(n.props) : [0, 0];
 }
 
-export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
+/**
+ * `pretension`, per node: the rigging tension of the cable circuit a tension member is in (NaN when unknown,
+ * then the pulling cable is taken at the force alone). From shared/analysis/cable-circuits.ts.
+ */
+export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Float64Array): Loads {
   const { nodes, joints } = ctx;
   const N = nodes.length;
   const J = joints.length;
@@ -138,6 +143,30 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings): Loads {
           forwardSamePort(j, n, port, f);
           const exit = port === "a" ? "b" : port === "b" ? "a" : null;
           if (exit) for (const k of jointsAt(ctx, n, exit)) push(k, n, f, 0);
+          break;
+        }
+        case "tension": {
+          // A cable or turnbuckle: tension only. The pulling cable of a preloaded circuit carries
+          // T = max(F, P + F/2) (shared/hardware/cables.ts); its joints carry T, the force passed on is F.
+          if (port !== "a" && port !== "b") break;
+          const p = pretension ? pretension[n] : Number.NaN;
+          const t = Number.isNaN(p) ? f : pullingTension(f, p);
+          recJ(j, t);
+          if (wA[n] === 0 && t > 0) touchedN.push(n);
+          if (t > wA[n]) wA[n] = t;
+          forwardSamePort(j, n, port, f);
+          for (const k of jointsAt(ctx, n, port === "a" ? "b" : "a")) { recJ(k, t); push(k, n, f, 0); }
+          // Pulleys and fairleads on the run carry the two legs' resultant, and so does their mounting.
+          for (const k of jointsAt(ctx, n, "run")) {
+            const g = otherNode(ctx, k, n);
+            if (g < 0 || ctx.nodeRole[g] !== "guide") continue;
+            const guide = ENGINE[nodes[g].kind] as Extract<EngineInfo<unknown>, { role: "guide" }>;
+            const r = guideLoad(t, guide.turn(nodes[g].props) ?? 0);
+            recJ(k, r);
+            if (!driven[g]) driven[g] = 1;
+            const gp = ctx.ports[g];
+            if (gp) for (const q in gp) if (q !== "cable") for (const kk of gp[q]) recJ(kk, r);
+          }
           break;
         }
         case "crank": {

@@ -1,8 +1,8 @@
 /** The summary of a report: counts by severity and the lowest margin, with where it is. */
-import type { Finding, JointResult, PushrodResult, Summary } from "./types";
+import type { CableResult, Finding, JointResult, PushrodResult, Summary } from "./types";
 import { MARGIN_CAP } from "./allowables";
 
-export function summarize(findings: Finding[], pushrods: PushrodResult[], joints: JointResult[]): Summary {
+export function summarize(findings: Finding[], pushrods: PushrodResult[], joints: JointResult[], cables: CableResult[] = []): Summary {
   const s: Summary = { hazard: 0, caution: 0, advisory: 0, lowestMargin: null };
   for (const f of findings) s[f.severity]++;
   let low = MARGIN_CAP;
@@ -22,6 +22,7 @@ export function summarize(findings: Finding[], pushrods: PushrodResult[], joints
     consider(j.rodEndMargin, "joint", j.jointId, "rod-end rating");
     consider(j.boltMargin, "joint", j.jointId, "bolt shear");
   }
+  for (const c of cables) if (c.limitTension > 0) consider(c.margin, "node", c.nodeId, "cable breaking strength");
   s.lowestMargin = best;
   return s;
 }

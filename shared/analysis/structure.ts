@@ -12,16 +12,28 @@ import type { Finding } from "./types";
 import { type Ctx, jointLabel, jointsAt, nodeLabel, otherNode } from "./context";
 import type { Loads } from "./loads";
 import { finding, jointSubject, linkageSubject, nodeSubject } from "./format";
+import type { CableCtx } from "./cable-circuits";
 
 /** Roles that turn on a pivot (and so need one joined to a mount), and roles that carry the run's load. */
 const PIVOTED = new Set<Role | undefined>(["input", "crank"]);
-const LOAD_PATH = new Set<Role | undefined>(["link", "crank", "horn", "surface"]);
+const LOAD_PATH = new Set<Role | undefined>(["link", "crank", "horn", "surface", "tension"]);
 
 function hasHardware(hw: Ctx["joints"][number]["hardware"] | undefined): boolean {
   return !!hw && !!(hw.rodEnd || hw.bolt || hw.nut || hw.bearing || hw.jamNut || hw.washerUnderHead || hw.washerUnderNut);
 }
 
-export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
+/**
+ * Joints that carry no hardware of their own: a terminal screwed into a turnbuckle (two tension members), and a
+ * cable lying over a pulley or through a fairlead (the guide's own mounting carries the bolt).
+ */
+function needsNoHardware(ctx: Ctx, j: number): boolean {
+  const f = ctx.jFrom[j], t = ctx.jTo[j];
+  const rf = ctx.nodeRole[f], rt = ctx.nodeRole[t];
+  if (rf === "tension" && rt === "tension") return true;
+  return (rf === "guide" && ctx.joints[j].from.port === "cable") || (rt === "guide" && ctx.joints[j].to.port === "cable");
+}
+
+export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[], cc?: CableCtx) {
   const { nodes, joints } = ctx;
   const linkageId = ctx.graph.name || "linkage";
 
@@ -41,7 +53,7 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
     }
     checkPort(ctx, j, nodes[f], jt.from.port, out);
     checkPort(ctx, j, nodes[t], jt.to.port, out);
-    if (!hasHardware(jt.hardware)) {
+    if (!hasHardware(jt.hardware) && !needsNoHardware(ctx, j)) {
       out.push(finding("joint-hardware-missing", "caution", jointSubject(jt.id),
         `The joint ${jointLabel(ctx, j)} has no hardware recorded (no bolt, nut, rod end or bearing), so nothing about it can be checked. Fill in its joint card.`, SRC.structure));
     }
@@ -77,7 +89,7 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
 
   if (nodes.length > 0 && inputCount === 0)
     out.push(finding("no-input", "caution", linkageSubject(linkageId),
-      `The drawing has no stick or pedal, so no load can be put into it and no loads are computed. Add the input the pilot moves.`, SRC.structure));
+      `The drawing has no stick, wheel or pedal, so no load can be put into it and no loads are computed. Add the input the pilot moves.`, SRC.structure));
 
   for (const inp of loads.inputs) {
     if (!inp.reachesSurface) {
@@ -107,6 +119,13 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[]) {
     const f = ctx.jFrom[j], t = ctx.jTo[j];
     if (f < 0 || t < 0 || f === t) continue;
     if (ctx.nodeRole[f] === "mount" || ctx.nodeRole[t] === "mount") continue;
+    if (cc && cc.skipLoop[j]) continue; // cable runs: taken below as whole chains
+    union(f, t, j);
+  }
+  // Each cable chain joins its two end parts; the return cable of a closed circuit is not a loop.
+  if (cc) for (const [x, y, j] of cc.loopEdges) union(x, y, j);
+
+  function union(f: number, t: number, j: number) {
     const a = find(f), b = find(t);
     if (a === b)
       out.push(finding("linkage-loop", "caution", jointSubject(joints[j].id),

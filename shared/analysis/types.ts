@@ -62,6 +62,29 @@ export type SurfaceResult = {
   driven: boolean;
 };
 
+/** A cable or turnbuckle (engine v1, added): its tension and, for a cable, its strength. */
+export type CableResult = {
+  nodeId: string;
+  kind: "cable" | "turnbuckle";
+  /** Tension of the pulling cable at the design force, limit, lbf. */
+  limitTension: number;
+  /** limit × ultimate factor × the cable-system factor, lbf. */
+  ultimateRequired: number;
+  /** The circuit's rigging tension, lbf; null when none is recorded. */
+  pretension: number | null;
+  /** One of the two cables of a closed circuit. */
+  inCircuit: boolean;
+  /** Minimum breaking strength from the table, lbf; null when the table has no row (or a turnbuckle). */
+  breakingStrength: number | null;
+  /** The lower of its two terminals' efficiencies. */
+  terminalEfficiency: number | null;
+  /** Breaking strength × terminal efficiency, lbf. */
+  allowable: number | null;
+  /** Null when not checked (no table row, or a circuit without a rigging tension). */
+  margin: number | null;
+  driven: boolean;
+};
+
 export type Summary = {
   hazard: number;
   caution: number;
@@ -79,6 +102,8 @@ export type Report = {
   settings: AnalysisSettings;
   /** Added fields (engine v1). */
   surfaces: SurfaceResult[];
+  /** Cables and turnbuckles (added, engine v1). */
+  cables: CableResult[];
   /** Simplifying assumptions behind the numbers, in plain words (shown with the results). */
   assumptions: string[];
   /** The standing caution that goes with every result. */
