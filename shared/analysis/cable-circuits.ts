@@ -1,8 +1,9 @@
 /**
  * Cable runs as the check sees them (domain.md §6). Tension members (cables, turnbuckles) joined end to end
- * form a chain; each chain ends on two other parts (a pedal, a sector, a horn). Two chains between the same
- * two parts are one closed circuit — one cable pulls each way — and are not a loop. A chain with no other
- * chain at either of its end parts has nothing to pull the other way: it would have to push.
+ * form a chain; each chain ends on two other parts (a pedal, a sector, a horn). Chains that meet at a part are
+ * one closed circuit — one cable pulls each way (two cables between a sector and a horn, or a cable from each
+ * pedal to the rudder horn) — and are not a loop. A chain in no circuit has nothing to pull the other way: it
+ * would have to push.
  * Built once per analysis in one pass over the tension parts and their joints (linear).
  */
 import type { Ctx } from "./context";
@@ -15,9 +16,7 @@ export type Chain = {
   ends: { node: number; joint: number }[];
   /** Index of the circuit it belongs to, -1 when it has no partner. */
   circuit: number;
-  /** The second chain of a circuit (the return): left out of the loop check. */
-  isReturn: boolean;
-  /** Another chain ends on one of its end parts, so something pulls the other way. */
+  /** It is in a circuit with another chain, so something pulls the other way. */
   returned: boolean;
 };
 
@@ -25,7 +24,7 @@ export type CableCtx = {
   chains: Chain[];
   /** Per node: its chain, -1 for parts that are not tension members. */
   chainOf: Int32Array;
-  /** Per circuit: its chains. */
+  /** Per circuit (two or more chains meeting at parts): its chains. */
   circuits: number[][];
   /** Per node: the rigging tension of its circuit (the highest recorded on it), NaN when none is recorded. */
   pretension: Float64Array;
@@ -33,8 +32,11 @@ export type CableCtx = {
   cableJoint: Uint8Array;
   /** Per joint: 1 when the loop check leaves it out (cable-system joints: their chains are checked as wholes). */
   skipLoop: Uint8Array;
-  /** Chains as edges between their end parts for the loop check: [part, part, joint that closes it]. */
-  loopEdges: [number, number, number][];
+  /**
+   * Chains between two parts, for the loop check: [part, part, last joint]. A chain whose two parts are already
+   * joined by pushrods and cranks closes a loop; chains among themselves never do (that is a circuit).
+   */
+  chainLinks: [number, number, number][];
 };
 
 const isTension = (ctx: Ctx, n: number) => n >= 0 && ctx.nodeRole[n] === "tension";
@@ -56,7 +58,7 @@ export function cableContext(ctx: Ctx): CableCtx {
   const stack: number[] = [];
   for (let s = 0; s < N; s++) {
     if (!isTension(ctx, s) || chainOf[s] >= 0) continue;
-    const chain: Chain = { nodes: [], ends: [], circuit: -1, isReturn: false, returned: false };
+    const chain: Chain = { nodes: [], ends: [], circuit: -1, returned: false };
     const id = chains.length;
     chains.push(chain);
     chainOf[s] = id;
@@ -76,34 +78,38 @@ export function cableContext(ctx: Ctx): CableCtx {
     }
   }
 
-  // Circuits: chains grouped by the pair of parts they run between.
-  const byPair = new Map<string, number>();
-  const chainsAtPart = new Map<number, number>();
-  const circuits: number[][] = [];
-  const loopEdges: [number, number, number][] = [];
+  // Circuits: chains that meet at a part (not the airframe) work together — one pulls while the other is
+  // eased — so they form one closed circuit, whatever path they take. A closed circuit is not a loop.
+  const parent = chains.map((_, i) => i);
+  const find = (x: number): number => { while (parent[x] !== x) { parent[x] = parent[parent[x]]; x = parent[x]; } return x; };
+  const chainAtPart = new Map<number, number>();
+  const chainLinks: [number, number, number][] = [];
   for (let c = 0; c < chains.length; c++) {
-    const ch = chains[c];
-    const parts = [...new Set(ch.ends.map((e) => e.node))];
-    for (const p of parts) chainsAtPart.set(p, (chainsAtPart.get(p) ?? 0) + 1);
-    if (parts.length !== 2) continue;
-    const [x, y] = parts[0] < parts[1] ? parts : [parts[1], parts[0]];
-    const key = `${x}:${y}`;
-    const first = byPair.get(key);
-    const closing = ch.ends[ch.ends.length - 1].joint;
-    if (first === undefined) {
-      byPair.set(key, c);
-      if (ctx.nodeRole[x] !== "mount" && ctx.nodeRole[y] !== "mount") loopEdges.push([x, y, closing]);
-    } else if (chains[first].circuit < 0 || circuits[chains[first].circuit].length < 2) {
-      // The return of a closed circuit: one cable pulls each way. Not a loop.
-      let ci = chains[first].circuit;
-      if (ci < 0) { ci = circuits.length; circuits.push([first]); chains[first].circuit = ci; }
-      circuits[ci].push(c);
-      ch.circuit = ci;
-      ch.isReturn = true;
-    } else if (ctx.nodeRole[x] !== "mount" && ctx.nodeRole[y] !== "mount") loopEdges.push([x, y, closing]); // a third path: a real loop
+    const parts = [...new Set(chains[c].ends.map((e) => e.node))].filter((p) => ctx.nodeRole[p] !== "mount");
+    for (const p of parts) {
+      const other = chainAtPart.get(p);
+      if (other === undefined) chainAtPart.set(p, c);
+      else parent[find(c)] = find(other);
+    }
+    if (parts.length === 2) chainLinks.push([parts[0], parts[1], chains[c].ends[chains[c].ends.length - 1].joint]);
   }
-  for (const ch of chains) {
-    ch.returned = ch.circuit >= 0 || ch.ends.some((e) => (chainsAtPart.get(e.node) ?? 0) > 1);
+  const circuitOfRoot = new Map<number, number>();
+  const members = new Map<number, number[]>();
+  for (let c = 0; c < chains.length; c++) {
+    const r = find(c);
+    if (!members.has(r)) members.set(r, []);
+    members.get(r)!.push(c);
+  }
+  const circuits: number[][] = [];
+  for (const [r, list] of members) {
+    if (list.length < 2) continue;
+    circuitOfRoot.set(r, circuits.length);
+    circuits.push(list);
+  }
+  for (let c = 0; c < chains.length; c++) {
+    const ci = circuitOfRoot.get(find(c));
+    chains[c].circuit = ci ?? -1;
+    chains[c].returned = ci !== undefined;
   }
 
   // Rigging tension: the highest recorded on any cable of the circuit (or of the chain, outside a circuit).
@@ -119,5 +125,5 @@ export function cableContext(ctx: Ctx): CableCtx {
     }
     for (const n of chains[c].nodes) pretension[n] = p;
   }
-  return { chains, chainOf, circuits, pretension, cableJoint, skipLoop, loopEdges };
+  return { chains, chainOf, circuits, pretension, cableJoint, skipLoop, chainLinks };
 }

@@ -122,15 +122,18 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[], cc?: C
     if (cc && cc.skipLoop[j]) continue; // cable runs: taken below as whole chains
     union(f, t, j);
   }
-  // Each cable chain joins its two end parts; the return cable of a closed circuit is not a loop.
-  if (cc) for (const [x, y, j] of cc.loopEdges) union(x, y, j);
+  // A cable chain between two parts already joined by pushrods and cranks closes a loop; chains meeting
+  // other chains form a closed circuit, which is how cables work, not a loop.
+  if (cc) for (const [x, y, j] of cc.chainLinks) if (find(x) === find(y)) loopFinding(j);
 
   function union(f: number, t: number, j: number) {
     const a = find(f), b = find(t);
-    if (a === b)
-      out.push(finding("linkage-loop", "caution", jointSubject(joints[j].id),
-        `The joint ${jointLabel(ctx, j)} closes a loop in the run. Loads in a closed loop share out by stiffness, which this check does not model: each path is taken to carry the full force, and the result should be checked by hand.`, SRC.structure));
+    if (a === b) loopFinding(j);
     else parent[a] = b;
+  }
+  function loopFinding(j: number) {
+    out.push(finding("linkage-loop", "caution", jointSubject(joints[j].id),
+      `The joint ${jointLabel(ctx, j)} closes a loop in the run. Loads in a closed loop share out by stiffness, which this check does not model: each path is taken to carry the full force, and the result should be checked by hand.`, SRC.structure));
   }
 }
 

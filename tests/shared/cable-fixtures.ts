@@ -1,0 +1,63 @@
+/**
+ * A complete, correct rudder circuit (no findings at all): two pedals with cable arms, a cable from each over a
+ * pulley (left) or through a fairlead (right), a turnbuckle at the aft end of each, both on the rudder horn.
+ * Each test changes one thing. Node ids: pedalL, pedalR, cableL, cableR, pulley, fairlead, tbL, tbR, horn,
+ * rudder, floor, fin. Numbers are plausible light-aircraft values, invented for the tests.
+ */
+import type { LinkageGraph, LinkageNode } from "../../shared/linkage/schema";
+import { goodBallPivot, goodClamp, graph, horn, j, mount, surface } from "./fixtures";
+
+type Props<K extends LinkageNode["kind"]> = Extract<LinkageNode, { kind: K }>["props"];
+let x = 0;
+const at = () => ({ x: (x += 200), y: 300 });
+
+export const cablePedal = (id: string, over: Partial<Props<"cablePedal">> = {}): LinkageNode =>
+  ({ id, kind: "cablePedal", label: id, position: at(), props: { pedalArm: 9, cableArm: 3, travel: 20, ...over } });
+export const cable = (id: string, over: Partial<Props<"cable">> = {}): LinkageNode =>
+  ({ id, kind: "cable", label: id, position: at(), props: { size: "1/8", construction: "7x19", material: "carbon", terminalA: "swaged", terminalB: "swaged", ...over } });
+export const turnbuckle = (id: string, over: Partial<Props<"turnbuckle">> = {}): LinkageNode =>
+  ({ id, kind: "turnbuckle", label: id, position: at(), props: { size: "1/8", threadsShowingA: 2, threadsShowingB: 2, locking: "clip", travelCheck: "free", ...over } });
+export const pulley = (id: string, over: Partial<Props<"pulley">> = {}): LinkageNode =>
+  ({ id, kind: "pulley", label: id, position: at(), props: { diameter: 3, grooveFor: "1/8", wrapAngle: 30, bearing: "ball", guards: "fitted", guardGap: 0.05, ratedLoad: 1200, ...over } });
+export const fairlead = (id: string, over: Partial<Props<"fairlead">> = {}): LinkageNode =>
+  ({ id, kind: "fairlead", label: id, position: at(), props: { turnAngle: 2, ...over } });
+
+/** The rigging record on the left cable: 30 lbf at 70 °F, the designer's range 25–35 lbf at 70 °F (invented). */
+export const RIGGED = { riggingTension: 30, riggingTemperature: 70, tensionMin: 25, tensionMax: 35, rangeTemperature: 70 };
+
+export function rudderCircuit(): LinkageGraph {
+  return graph(
+    [
+      cablePedal("pedalL"), cablePedal("pedalR"), mount("floor"), mount("fin"),
+      cable("cableL", RIGGED), cable("cableR"), pulley("pulley"), fairlead("fairlead"),
+      turnbuckle("tbL"), turnbuckle("tbR"), horn("horn", 3), surface("rudder"),
+    ],
+    [
+      j("pivL", ["pedalL", "pivot"], ["floor", "mount"], goodBallPivot()),
+      j("pivR", ["pedalR", "pivot"], ["floor", "mount"], goodBallPivot()),
+      j("pedL", ["pedalL", "attach"], ["cableL", "a"], goodClamp()),
+      j("pedR", ["pedalR", "attach"], ["cableR", "a"], goodClamp()),
+      j("overP", ["cableL", "run"], ["pulley", "cable"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" }),
+      j("pulleyAxle", ["pulley", "pivot"], ["floor", "mount"], goodBallPivot()),
+      j("thruF", ["cableR", "run"], ["fairlead", "cable"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" }),
+      j("fairMount", ["fairlead", "mount"], ["floor", "mount"], goodClamp()),
+      j("tbLa", ["cableL", "b"], ["tbL", "a"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" }),
+      j("tbRa", ["cableR", "b"], ["tbR", "a"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" }),
+      j("hornL", ["tbL", "b"], ["horn", "attach"], goodClamp()),
+      j("hornR", ["tbR", "b"], ["horn", "attach"], goodClamp()),
+      j("hornMount", ["horn", "surface"], ["rudder", "horn"], goodClamp()),
+      j("hinge", ["rudder", "hinge"], ["fin", "mount"], goodBallPivot()),
+    ],
+    "yaw",
+  );
+}
+
+/** Props of node `id` in a copy of g, patched. */
+export function withProps(g: LinkageGraph, id: string, patch: Record<string, unknown>): LinkageGraph {
+  const copy: LinkageGraph = structuredClone(g);
+  const n = copy.nodes.find((k) => k.id === id);
+  if (!n) throw new Error(`fixture has no part ${id}`);
+  Object.assign(n.props, patch);
+  for (const [k, v] of Object.entries(patch)) if (v === undefined) delete (n.props as Record<string, unknown>)[k];
+  return copy;
+}
