@@ -49,10 +49,12 @@ export function cableContext(ctx: Ctx): CableCtx {
   const skipLoop = new Uint8Array(J);
   const chains: Chain[] = [];
 
-  for (let j = 0; j < J; j++) {
+  const roles = ctx.nodeRole;
+  let any = false;
+  for (let n = 0; n < N; n++) if (roles[n] === "tension" || roles[n] === "guide") { any = true; break; }
+  if (any) for (let j = 0; j < J; j++) {
     const f = ctx.jFrom[j], t = ctx.jTo[j];
-    const r = (n: number) => n >= 0 && (ctx.nodeRole[n] === "tension" || ctx.nodeRole[n] === "guide");
-    if (r(f) || r(t)) cableJoint[j] = skipLoop[j] = 1;
+    if ((f >= 0 && (roles[f] === "tension" || roles[f] === "guide")) || (t >= 0 && (roles[t] === "tension" || roles[t] === "guide"))) cableJoint[j] = skipLoop[j] = 1;
   }
 
   const stack: number[] = [];
