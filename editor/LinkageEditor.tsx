@@ -10,6 +10,7 @@ import { useStore } from "zustand";
 import { useShallow } from "zustand/react/shallow";
 import type { ControlSystem, LinkageGraph } from "@/shared/linkage/schema";
 import { parseLinkageFile, serializeLinkage } from "@/shared/linkage/io";
+import dynamic from "next/dynamic";
 import type { AnalysisSettings } from "@/shared/analysis/types";
 import { analyze } from "@/shared/analysis";
 import { EditorConfigContext, EditorStoreContext } from "./context";
@@ -26,6 +27,9 @@ import { ConflictDialog } from "./panels/ConflictDialog";
 import { ShortcutsSheet } from "./panels/ShortcutsSheet";
 import { readDeepLink } from "./view";
 import { uploadFile } from "@/components/api-client";
+
+/** The geometry view and its chart library load only when it is opened (the editor's first load stays as it was). */
+const GeometryPanel = dynamic(() => import("./geometry/GeometryPanel"), { ssr: false, loading: () => <p className="p-3 text-[12px] text-ink-soft">Loading the geometry view…</p> });
 
 export type LinkageEditorProps = {
   buildId: string;
@@ -147,6 +151,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
   const rootRef = useRef<HTMLDivElement>(null);
   const fileRef = useRef<HTMLInputElement>(null);
   const [sheet, setSheet] = useState(false);
+  const [geoOpen, setGeoOpen] = useState(false);
   const [importErrors, setImportErrors] = useState<string[] | null>(null);
   const [exporting, setExporting] = useState(false);
   const [picture, setPicture] = useState<PicturePhase>({ phase: "idle" });
@@ -332,6 +337,11 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
   }, [store, rf, fitAll, canEdit, autosave, sheet]);
 
   const s = store.getState;
+  const geometryButton = (
+    <ToolButton onClick={() => setGeoOpen((v) => !v)} aria-pressed={geoOpen} title="The run to scale: pivots, arm angles and its motion through the travel" data-testid="btn-geometry">
+      Geometry
+    </ToolButton>
+  );
   return (
     <div ref={rootRef} className={`flex ${props.fill ? "h-full" : "h-[calc(100vh-3.5rem)]"} min-h-0 flex-col overflow-hidden bg-paper text-ink`} data-testid="linkage-editor">
       <div className="flex flex-wrap items-center gap-1 border-b border-ink/10 bg-white px-2 py-1" role="toolbar" aria-label="Linkage tools">
@@ -407,6 +417,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
           </ToolButton>
         )}
         <PictureStatus state={picture} onDismiss={() => setPicture({ phase: "idle" })} />
+        {geometryButton}
         <ToolButton onClick={() => setSheet(true)} className="ml-auto" title="Keyboard shortcuts" kbd="?" data-testid="btn-shortcuts">
           Keys ?
         </ToolButton>
@@ -429,7 +440,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
       )}
       <div className="flex min-h-0 flex-1">
         {canEdit && <PartsTray />}
-        <main className="relative min-w-0 flex-1" aria-label="Linkage canvas">
+        <main className={`relative min-w-0 flex-1 ${geoOpen ? "hidden lg:block" : ""}`} aria-label="Linkage canvas">
           <Canvas opening={opening} />
           {notice && (
             <div role="status" data-testid="notice" className="pointer-events-none absolute bottom-4 left-1/2 z-10 max-w-lg -translate-x-1/2 rounded bg-ink px-3 py-1.5 text-[12px] text-white shadow-lg">
@@ -437,6 +448,11 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
             </div>
           )}
         </main>
+        {geoOpen && (
+          <div className="min-w-0 flex-1 border-l border-ink/10 lg:max-w-[560px]">
+            <GeometryPanel onClose={() => setGeoOpen(false)} />
+          </div>
+        )}
         <aside className="flex w-[360px] shrink-0 flex-col border-l border-ink/10 bg-paper" aria-label="Inspector and findings">
           <div className="min-h-0 flex-[3] overflow-y-auto">
             <Inspector buildId={props.buildId} linkageId={props.linkageId} linkageName={linkageName} reviewSlot={props.reviewSlot} />

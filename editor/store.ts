@@ -18,12 +18,14 @@ import {
   type NodeKind,
 } from "@/shared/linkage/schema";
 import type { AnalysisSettings, Finding, Report, Severity } from "@/shared/analysis/types";
+import type { LinkageGeometry } from "@/shared/linkage/geometry";
 import { defaultProps, KIND_NAMES } from "@/shared/linkage/kinds";
 import { indexById, jointName, partName } from "@/shared/linkage/names";
 
 export type XY = { x: number; y: number };
 export type Viewport = { x: number; y: number; zoom: number };
-export type Snapshot = { nodes: LinkageNode[]; joints: Joint[] };
+/** `geometry`: the linkage geometry a save sent (kept outside undo; see setGeometry). */
+export type Snapshot = { nodes: LinkageNode[]; joints: Joint[]; geometry?: LinkageGeometry };
 export type Selection = { nodes: string[]; joints: string[] };
 export type SubjectRef = { type: "node" | "joint" | "linkage"; id: string };
 export type Endpoint = { node: string; port: string };
@@ -56,7 +58,9 @@ export const subjectKey = (s: SubjectRef) => `${s.type}:${s.id}`;
 export { KIND_NAMES, defaultProps };
 
 export type EditorState = {
-  meta: { name: string; system: ControlSystem };
+  meta: { name: string; system: ControlSystem; geometry?: LinkageGeometry };
+  /** The geometry as last confirmed by the server. */
+  savedGeometry?: LinkageGeometry;
   nodes: LinkageNode[];
   joints: Joint[];
   selection: Selection;
@@ -117,6 +121,8 @@ export type EditorState = {
   setNotice: (text: string | null) => void;
   setSettings: (s: AnalysisSettings | undefined) => void;
   runAnalysis: () => void;
+  /** Replace the linkage geometry (the geometry view); saved with the graph, not part of undo. */
+  setGeometry: (g: LinkageGeometry | undefined) => void;
 };
 
 export type EditorStore = StoreApi<EditorState>;
@@ -130,6 +136,7 @@ export function toGraph(s: Pick<EditorState, "meta" | "nodes" | "joints">, snap?
     system: s.meta.system,
     nodes: (snap ?? s).nodes,
     joints: (snap ?? s).joints,
+    ...((snap ? snap.geometry : s.meta.geometry) ? { geometry: snap ? snap.geometry : s.meta.geometry } : {}),
   };
 }
 
@@ -159,7 +166,8 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
       return shortId(kind, taken);
     };
     const snap = (): Snapshot => ({ nodes: get().nodes, joints: get().joints });
-    const isDirty = (nodes: LinkageNode[], joints: Joint[]) => nodes !== get().saved.nodes || joints !== get().saved.joints;
+    const isDirty = (nodes: LinkageNode[], joints: Joint[]) =>
+      nodes !== get().saved.nodes || joints !== get().saved.joints || get().meta.geometry !== get().savedGeometry;
 
     /** Apply a change as one undoable step (or fold it into the previous step when coalescing). */
     const commit = (next: Partial<Snapshot> & { selection?: Selection }, o: { coalesce?: string; external?: boolean; structural?: boolean } = {}) => {
@@ -216,7 +224,8 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
     };
 
     return {
-      meta: { name: initial.name, system: initial.system },
+      meta: { name: initial.name, system: initial.system, geometry: initial.geometry },
+      savedGeometry: initial.geometry,
       nodes: initial.nodes,
       joints: initial.joints,
       selection: { nodes: [], joints: [] },
@@ -447,7 +456,8 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
       markSaved(revision, snapshot) {
         const saved = snapshot ?? snap();
         const s = get();
-        set({ saved, revision, dirty: s.nodes !== saved.nodes || s.joints !== saved.joints });
+        const savedGeometry = snapshot ? snapshot.geometry : s.meta.geometry;
+        set({ saved, savedGeometry, revision, dirty: s.nodes !== saved.nodes || s.joints !== saved.joints || s.meta.geometry !== savedGeometry });
       },
 
       rebase(revision) {
@@ -462,7 +472,8 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
         if (o?.revision !== undefined) {
           // The server's version: a clean state with a fresh history.
           set({
-            meta: { name: graph.name || s.meta.name, system: graph.system ?? s.meta.system },
+            meta: { name: graph.name || s.meta.name, system: graph.system ?? s.meta.system, geometry: graph.geometry },
+            savedGeometry: graph.geometry,
             nodes,
             joints,
             saved: { nodes, joints },
@@ -522,6 +533,13 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
 
       setNotice(text) {
         set({ notice: text ? { text, at: now() } : null });
+      },
+
+      setGeometry(geometry) {
+        const s = get();
+        if (s.readOnly) return;
+        set({ meta: { ...s.meta, geometry }, dirty: true, structureVersion: s.structureVersion + 1 });
+        if (geometry === s.savedGeometry) set({ dirty: isDirty(s.nodes, s.joints) });
       },
 
       setSettings(settings) {

@@ -82,7 +82,7 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
     if (!enabled || busy.current || conflictRef.current) return conflictRef.current ? "Someone else saved a newer revision." : null;
     const s = store.getState();
     if (!s.dirty) return null;
-    const snapshot: Snapshot = { nodes: s.nodes, joints: s.joints };
+    const snapshot: Snapshot = { nodes: s.nodes, joints: s.joints, geometry: s.meta.geometry };
     busy.current = true;
     setInFlight(true);
     try {
@@ -133,7 +133,7 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
   useEffect(() => {
     if (!enabled) return;
     return store.subscribe((s, prev) => {
-      if (s.dirty && (s.nodes !== prev.nodes || s.joints !== prev.joints)) schedule();
+      if (s.dirty && (s.nodes !== prev.nodes || s.joints !== prev.joints || s.meta.geometry !== prev.meta.geometry)) schedule();
     });
   }, [enabled, store, schedule]);
 

@@ -1,0 +1,93 @@
+/**
+ * The geometry view in a real browser: type the demo run's geometry in, see the charts, move the slider through
+ * the travel, then move a pivot with the keyboard until a transmission angle leaves 40°–140° and the finding
+ * appears; the geometry is saved with the graph.
+ */
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, Page } from "playwright-core";
+import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
+import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
+import { demoPitchLinkage } from "@/shared/demo";
+
+let browser: Browser;
+let page: Page;
+let buildId: string;
+let linkageId: string;
+const errors: string[] = [];
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  const owner = await makeUser("e2e-geometry");
+  ({ buildId, linkageId } = await makeBuild({ owner }));
+  await testDb("linkage_revisions").where({ linkage_id: linkageId, revision: 1 }).update({ graph: JSON.stringify({ ...demoPitchLinkage(), name: "Pitch run" }) });
+  page = await browser.newPage({ viewport: { width: 1600, height: 1000 } });
+  page.on("pageerror", (e) => errors.push(String(e)));
+  await signInPage(page, owner.email, TEST_PASSWORD);
+});
+afterAll(async () => { await browser?.close(); await testDb.destroy(); });
+
+const transmissionFindings = () => page.locator('[data-testid=finding][data-code="motion-transmission-angle"]').count();
+
+describe("geometry and motion", () => {
+  it("enters the demo run's geometry, charts it, plays it and flags a pivot moved out of the band", async () => {
+    await page.goto(`${APP_URL}/builds/${buildId}/linkages/${linkageId}`);
+    await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
+    // Stick travel of 5° each way (the demo's arms gear the elevator about 3.2 : 1).
+    await page.locator('.react-flow__node[data-id="stick"]').click();
+    await page.getByLabel(/Forward travel/).fill("5");
+    await page.getByLabel(/Aft travel/).fill("5");
+
+    await page.getByTestId("btn-geometry").click();
+    await page.getByTestId("geometry-empty").waitFor();
+    await page.getByTestId("geometry-start-empty").click();
+    await page.getByTestId("geometry-datum").fill("firewall face, top longeron");
+    const enter = async (id: string, values: Record<string, string>) => {
+      for (const [field, v] of Object.entries(values)) await page.getByTestId(`geo-${id}-${field}`).fill(v);
+    };
+    await enter("stick", { x: "20", y: "0", attach: "-90", grip: "90" });
+    await enter("bellcrank", { x: "50", y: "-3", in: "-90", out: "90" });
+    await enter("horn", { x: "122", y: "3.5", attach: "-90" });
+
+    await page.getByTestId("motion-charts").waitFor();
+    await expect.poll(() => page.locator("[data-testid=motion-charts] .recharts-line").count()).toBeGreaterThanOrEqual(4);
+    expect(await page.getByTestId("geometry-rod").count()).toBe(2);
+    await expect.poll(() => page.getByTestId("worst-loads").textContent()).toMatch(/Forward pushrod/);
+    expect(await transmissionFindings()).toBe(0);
+    await shot(page, "geometry-01-entered");
+
+    // The slider moves the drawing: the forward rod's end moves when the stick is at its forward stop.
+    const rodX = () => page.locator("[data-testid=geometry-rod] line").first().getAttribute("x1");
+    const atNeutral = await rodX();
+    await page.getByTestId("geometry-slider").focus();
+    await page.keyboard.press("End");
+    await expect.poll(() => page.getByTestId("geometry-readout").textContent()).toMatch(/5\.0° fwd/);
+    expect(await rodX()).not.toBe(atNeutral);
+    await page.getByTestId("geometry-play").click();
+    await expect.poll(() => page.getByTestId("geometry-readout").textContent()).not.toMatch(/5\.0° fwd/);
+    await page.getByTestId("geometry-play").click();
+    await shot(page, "geometry-02-moved");
+
+    // Raise the bellcrank 1 in at a time until the forward rod meets its arms outside 40°–140°.
+    const pivot = page.getByTestId("pivot-bellcrank");
+    let presses = 0;
+    while ((await transmissionFindings()) === 0 && presses < 60) {
+      await pivot.focus();
+      await page.keyboard.press("Shift+ArrowUp");
+      presses++;
+      if (presses % 5 === 0) await page.waitForTimeout(300);
+    }
+    await expect.poll(transmissionFindings).toBe(1);
+    expect(presses).toBeGreaterThan(10); // it takes a real move: about 25 in up puts the 30 in rod 40° off square
+    const f = page.locator('[data-testid=finding][data-code="motion-transmission-angle"]');
+    expect(await f.getAttribute("data-subject")).toBe("node:pushrod-fwd");
+    await shot(page, "geometry-03-out-of-band");
+
+    await page.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "saved", null, { timeout: 20_000 });
+    const rev = await testDb("linkages").where({ id: linkageId }).first();
+    const row = await testDb("linkage_revisions").where({ linkage_id: linkageId, revision: rev.current_revision }).first();
+    const graph = typeof row.graph === "string" ? JSON.parse(row.graph) : row.graph;
+    expect(graph.geometry.datum).toBe("firewall face, top longeron");
+    expect(graph.geometry.parts.bellcrank.pivot.y).toBeGreaterThan(5);
+    expect(errors).toEqual([]);
+  }, 180_000);
+});
