@@ -9,7 +9,7 @@ import { DEFAULT_SETTINGS, sweepGraph } from "@/shared/analysis";
 import { mu } from "@/shared/analysis/motion";
 import { emptyGeometry, geometrySchema, type LinkageGeometry, type PartGeometry } from "@/shared/linkage/geometry";
 import { chainGeometry } from "@/shared/demo-geometry";
-import { partName, indexById } from "@/shared/linkage/names";
+import { indexById, jointName, partName } from "@/shared/linkage/names";
 import { CAUTION_TEXT } from "@/shared/caution";
 import { useEditorStore, useEditorStoreApi } from "../context";
 import { toGraph } from "../store";
@@ -98,7 +98,7 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
   if (sw && sw.ok[k]) for (let s = 0; s < sw.cosA.length; s++) { lo = Math.min(lo, mu(sw.cosA[s][k]), mu(sw.cosB[s][k])); hi = Math.max(hi, mu(sw.cosA[s][k]), mu(sw.cosB[s][k])); }
 
   return (
-    <section className="flex h-full flex-col gap-2 overflow-y-auto bg-paper p-3 text-[12px]" data-testid="geometry-panel" aria-label="Geometry">
+    <section className="flex h-full flex-col gap-2 overflow-y-auto bg-paper p-3 text-[12px] [&>*]:shrink-0" data-testid="geometry-panel" aria-label="Geometry" onKeyDown={ownKeys}>
       <Header onClose={onClose} />
       <div className="grid grid-cols-2 gap-2 sm:grid-cols-4">
         <label className="flex flex-col text-[10px] text-ink-soft">View
@@ -164,10 +164,11 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
           <thead><tr className="text-left text-ink-soft"><th>member</th><th>load</th><th className="text-right">limit</th><th className="text-right">at</th></tr></thead>
           <tbody>
             {report.motion.worstLoads.map((w, i) => {
-              const name = w.subject.type === "node" ? partName(nodeById.get(w.subject.id)) : joints.find((j) => j.id === w.subject.id)?.id ?? w.subject.id;
+              const jt = w.subject.type === "joint" ? joints.find((j) => j.id === w.subject.id) : undefined;
+              const name = w.subject.type === "node" ? partName(nodeById.get(w.subject.id)) : jt ? jointName(jt, nodeById) : w.subject.id;
               return (
                 <tr key={i} className="border-t border-ink/5">
-                  <td className="max-w-[9rem] truncate">{name}</td><td>{w.what}</td>
+                  <td className="max-w-[12rem] truncate" title={name}>{name}</td><td>{w.what}</td>
                   <td className="text-right tabular-nums">{w.limit.toFixed(0)} {w.unit}</td>
                   <td className="text-right">{inputWord(w.at)}</td>
                 </tr>
@@ -212,6 +213,11 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
       <p className="text-[10px] leading-3 text-ink-soft">{CAUTION_TEXT}</p>
     </section>
   );
+}
+
+/** Keys pressed in the geometry view are its own (arrows move a pivot, not the diagram's selection); Ctrl/⌘ keys still reach the editor. */
+function ownKeys(e: React.KeyboardEvent) {
+  if (!e.ctrlKey && !e.metaKey) e.stopPropagation();
 }
 
 function Header({ onClose }: { onClose: () => void }) {

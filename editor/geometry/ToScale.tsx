@@ -56,7 +56,7 @@ export function ToScale({ geo, parts, rods, rot, readOnly, onMovePivot }: Props)
   for (let y = Math.ceil(frame.y0 / step) * step; Y(y) >= 0; y += step) gy.push(y);
 
   return (
-    <svg ref={svgRef} viewBox={`0 0 ${W} ${H}`} className="h-auto w-full touch-none select-none rounded border border-ink/10 bg-white" data-testid="geometry-view"
+    <svg ref={svgRef} viewBox={`0 0 ${W} ${H}`} className="h-auto w-full shrink-0 touch-none select-none rounded border border-ink/10 bg-white" data-testid="geometry-view"
       role="img" aria-label="The run to scale"
       onPointerMove={(e) => { if (drag.current) { const p = toInches(e); onMovePivot(drag.current, p.x, p.y); } }}
       onPointerUp={() => { drag.current = null; }} onPointerLeave={() => { drag.current = null; }}>

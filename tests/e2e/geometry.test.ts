@@ -51,6 +51,8 @@ describe("geometry and motion", () => {
     await page.getByTestId("motion-charts").waitFor();
     await expect.poll(() => page.locator("[data-testid=motion-charts] .recharts-line").count()).toBeGreaterThanOrEqual(4);
     expect(await page.getByTestId("geometry-rod").count()).toBe(2);
+    expect((await page.getByTestId("geometry-view").boundingBox())!.height).toBeGreaterThan(150); // drawn, not squeezed
+    expect(await page.getByTestId("worst-mark").count()).toBe(1);
     await expect.poll(() => page.getByTestId("worst-loads").textContent()).toMatch(/Forward pushrod/);
     expect(await transmissionFindings()).toBe(0);
     await shot(page, "geometry-01-entered");
@@ -88,6 +90,8 @@ describe("geometry and motion", () => {
     const graph = typeof row.graph === "string" ? JSON.parse(row.graph) : row.graph;
     expect(graph.geometry.datum).toBe("firewall face, top longeron");
     expect(graph.geometry.parts.bellcrank.pivot.y).toBeGreaterThan(5);
+    // The arrow keys moved the pivot in the geometry, not the selected card on the diagram.
+    expect(graph.nodes.find((n: { id: string }) => n.id === "stick").position).toEqual(demoPitchLinkage().nodes[0].position);
     expect(errors).toEqual([]);
   }, 180_000);
 });
