@@ -2,7 +2,7 @@
 const nextConfig = {
   // A separate output folder lets tests build beside a running dev server.
   distDir: process.env.NEXT_DIST_DIR || ".next",
-  serverExternalPackages: ["knex", "pg", "sharp", "nodemailer", "pdf-lib"],
+  serverExternalPackages: ["knex", "pg", "pg-boss", "sharp", "nodemailer", "pdf-lib"],
   poweredByHeader: false,
   typedRoutes: false,
 };

@@ -4,6 +4,7 @@ import Link from "next/link";
 export const BUILD_SECTIONS: { href: string; label: string }[] = [
   { href: "", label: "Overview" },
   { href: "/log", label: "Build log" },
+  { href: "/files", label: "Files" },
   { href: "/hardware", label: "Hardware list" },
   { href: "/parts", label: "Parts library" },
   { href: "/checklist", label: "Checklist" },
@@ -18,7 +19,7 @@ export function BuildNav({ buildId, buildName, current, extra }: { buildId: stri
         <div>
           <Link href="/builds" className="text-xs text-ink-soft hover:underline">Builds</Link>
           <p className="text-lg font-semibold leading-tight">{buildName}</p>
-          <nav aria-label="Build sections" className="mt-2 flex gap-1">
+          <nav aria-label="Build sections" className="mt-2 flex gap-1 overflow-x-auto">
             {BUILD_SECTIONS.map((s) => (
               <Link
                 key={s.href}

@@ -3,6 +3,7 @@ import "server-only";
 import { db } from "./index";
 import { audit } from "./audit";
 import { person } from "./people";
+import { countOf, keysetPage, type Key, type PageArgs } from "./paging";
 import type { Recipient } from "./users";
 import type { Subject } from "@/shared/schemas/common";
 import type { Comment } from "@/shared/schemas/comments";
@@ -45,10 +46,25 @@ const commentQuery = () =>
     .leftJoin("users as r", "r.id", "c.resolved_by")
     .select("c.*", "a.name as author_name", "r.name as resolver_name");
 
-export async function listComments(linkageId: string, subject?: Subject) {
-  const q = commentQuery().where("c.linkage_id", linkageId).orderBy("c.created_at", "asc").orderBy("c.id");
-  if (subject) q.where({ "c.subject_type": subject.type, "c.subject_id": subject.id });
-  return (await q).map(toComment);
+/** Threads newest first (by their first comment; the id breaks ties). */
+export const THREAD_KEYS: Key[] = [{ expr: "c.created_at", type: "timestamptz" }, { expr: "c.id", type: "uuid" }];
+
+/**
+ * One page of threads of the linkage (or of one subject), newest first, each with all its replies
+ * (oldest first), and how many threads there are in all.
+ */
+export async function pageThreads(linkageId: string, subject: Subject | undefined, page: PageArgs) {
+  const roots = () => {
+    const q = db("comments as c").where("c.linkage_id", linkageId).whereNull("c.parent_id");
+    if (subject) q.where({ "c.subject_type": subject.type, "c.subject_id": subject.id });
+    return q;
+  };
+  const [p, total] = await Promise.all([
+    keysetPage<CommentRow>(roots().leftJoin("users as a", "a.id", "c.author_id").leftJoin("users as r", "r.id", "c.resolved_by").select("c.*", "a.name as author_name", "r.name as resolver_name"), THREAD_KEYS, page),
+    countOf(roots()),
+  ]);
+  const replies = p.items.length ? await commentQuery().whereIn("c.parent_id", p.items.map((r) => r.id)).orderBy([{ column: "c.created_at" }, { column: "c.id" }]) : [];
+  return { items: [...p.items, ...(replies as CommentRow[])].map(toComment), next: p.next, total };
 }
 
 export async function getComment(linkageId: string, commentId: string) {

@@ -1,12 +1,13 @@
 import "server-only";
 import type { Knex } from "knex";
 import { db } from "./index";
+import { countOf, keysetPage, type Key, type PageArgs } from "./paging";
 
 import type { FileKind, JointPhoto, StoredFile } from "@/shared/schemas/files";
 export type { FileKind, StoredFile };
 type FileRow = {
   id: string; build_id: string; key: string; kind: FileKind; content_type: string; size: number; name: string;
-  thumb_key: string | null; width: number | null; height: number | null; uploaded_by: string | null; created_at: Date;
+  thumb_key: string | null; thumb_size?: number | null; width: number | null; height: number | null; uploaded_by: string | null; created_at: Date;
   uploader_name?: string | null;
 };
 
@@ -27,11 +28,11 @@ export const toFile = (r: FileRow): StoredFile => ({
 });
 
 export async function insertFile(
-  f: { id: string; buildId: string; key: string; kind: FileKind; contentType: string; size: number; name: string; thumbKey: string | null; width: number | null; height: number | null; uploadedBy: string },
+  f: { id: string; buildId: string; key: string; kind: FileKind; contentType: string; size: number; name: string; thumbKey: string | null; thumbSize?: number | null; width: number | null; height: number | null; uploadedBy: string },
   trx: Knex = db,
 ) {
   const [row] = await trx<FileRow>("files")
-    .insert({ id: f.id, build_id: f.buildId, key: f.key, kind: f.kind, content_type: f.contentType, size: f.size, name: f.name, thumb_key: f.thumbKey, width: f.width, height: f.height, uploaded_by: f.uploadedBy })
+    .insert({ id: f.id, build_id: f.buildId, key: f.key, kind: f.kind, content_type: f.contentType, size: f.size, name: f.name, thumb_key: f.thumbKey, thumb_size: f.thumbSize ?? null, width: f.width, height: f.height, uploaded_by: f.uploadedBy })
     .returning("*");
   return toFile(row);
 }
@@ -48,10 +49,21 @@ export async function getFile(buildId: string, fileId: string) {
 
 const withUploader = () => db("files as f").leftJoin("users as u", "u.id", "f.uploaded_by").select("f.*", "u.name as uploader_name");
 
-export async function listFiles(buildId: string, kind?: FileKind) {
-  const q = withUploader().where("f.build_id", buildId).orderBy("f.created_at", "desc").limit(500);
-  if (kind) q.where("f.kind", kind);
-  return (await q).map(toFile);
+/** Uploads, newest first (the id breaks ties). */
+export const FILE_KEYS: Key[] = [{ expr: "f.created_at", type: "timestamptz" }, { expr: "f.id", type: "uuid" }];
+
+/** One page of the build's uploads (newest first) and how many there are in all. */
+export async function pageFiles(buildId: string, kind: FileKind | undefined, page: PageArgs) {
+  const q = () => {
+    const b = db("files as f").where("f.build_id", buildId);
+    if (kind) b.where("f.kind", kind);
+    return b;
+  };
+  const [p, total] = await Promise.all([
+    keysetPage<FileRow>(q().leftJoin("users as u", "u.id", "f.uploaded_by").select("f.*", "u.name as uploader_name"), FILE_KEYS, page),
+    countOf(q()),
+  ]);
+  return { items: p.items.map(toFile), next: p.next, total };
 }
 
 export async function filesByIds(buildId: string, ids: string[]) {
@@ -102,9 +114,9 @@ export async function getRevisionPictureRow(buildId: string, linkageId: string, 
   return db("files as f").join("revision_pictures as rp", "rp.file_id", "f.id").where({ "f.build_id": buildId, "rp.linkage_id": linkageId, "rp.revision": revision }).first<FileRow | undefined>("f.*");
 }
 
-/** Storage keys of files (server only: for embedding in PDFs). */
+/** Storage keys of files (server only: for embedding in PDFs; a photo's thumbnail key when it has one). */
 export async function fileKeys(buildId: string, ids: string[]) {
-  if (!ids.length) return new Map<string, { key: string; contentType: string; kind: FileKind }>();
-  const rows = await db<FileRow>("files").where("build_id", buildId).whereIn("id", ids).select("id", "key", "content_type", "kind");
-  return new Map(rows.map((r) => [r.id, { key: r.key, contentType: r.content_type, kind: r.kind }]));
+  if (!ids.length) return new Map<string, { key: string; thumbKey: string | null; contentType: string; kind: FileKind }>();
+  const rows = await db<FileRow>("files").where("build_id", buildId).whereIn("id", ids).select("id", "key", "thumb_key", "content_type", "kind");
+  return new Map(rows.map((r) => [r.id, { key: r.key, thumbKey: r.thumb_key, contentType: r.content_type, kind: r.kind }]));
 }

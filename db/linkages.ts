@@ -3,6 +3,7 @@ import type { Knex } from "knex";
 import { db } from "./index";
 import { audit } from "./audit";
 import { person } from "./people";
+import { countOf, keysetPage, type Key, type PageArgs } from "./paging";
 import { emptyGraph, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
 import type { Report } from "@/shared/analysis/types";
 import type { Linkage, RevisionRow } from "@/shared/schemas/linkages";
@@ -139,19 +140,24 @@ export async function saveRevision(
   });
 }
 
-/** The revision history, newest first, with the findings counts stored with each. */
-export async function listRevisions(linkageId: string) {
-  const rows = await db("linkage_revisions as r")
-    .leftJoin("users as u", "u.id", "r.author_id")
-    .where("r.linkage_id", linkageId)
-    .orderBy("r.revision", "desc")
-    .select("r.revision", "r.author_id", "u.name as author_name", "r.created_at", db.raw("r.analysis -> 'summary' as summary"));
-  return rows.map((r: { revision: number; author_id: string | null; author_name: string | null; created_at: Date; summary: Report["summary"] | null }): RevisionRow => ({
+/** Revisions newest first: the number is the key. */
+export const REVISION_KEYS: Key[] = [{ expr: "r.revision", type: "int" }];
+
+/** One page of the revision history (newest first, with the findings counts stored with each) and how many revisions there are. */
+export async function pageRevisions(linkageId: string, page: PageArgs) {
+  type Row = { revision: number; author_id: string | null; author_name: string | null; created_at: Date; summary: Report["summary"] | null };
+  const [p, total] = await Promise.all([
+    keysetPage<Row>(db("linkage_revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.linkage_id", linkageId)
+      .select("r.revision", "r.author_id", "u.name as author_name", "r.created_at", db.raw("r.analysis -> 'summary' as summary")), REVISION_KEYS, page),
+    countOf(db("linkage_revisions as r").where("r.linkage_id", linkageId)),
+  ]);
+  const items = p.items.map((r): RevisionRow => ({
     revision: r.revision,
     author: person(r.author_id, r.author_name),
     createdAt: r.created_at.toISOString(),
     summary: r.summary ? { hazard: r.summary.hazard, caution: r.summary.caution, advisory: r.summary.advisory } : null,
   }));
+  return { items, next: p.next, total };
 }
 
 export async function countRevisions(linkageId: string) {

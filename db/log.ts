@@ -2,6 +2,7 @@ import "server-only";
 import { db } from "./index";
 import { audit } from "./audit";
 import { filesByIds, type StoredFile } from "./files";
+import { countOf, keysetPage, type Key, type Page, type PageArgs } from "./paging";
 import type { ControlSystem } from "@/shared/linkage/schema";
 import type { LogEntry, LogFilter, LogTotals } from "@/shared/schemas/log";
 export type { LogEntry, LogFilter };
@@ -51,41 +52,82 @@ async function attachFiles(buildId: string, rows: EntryRow[]) {
   const links = await db("log_entry_files").whereIn("entry_id", rows.map((r) => r.id)).orderBy("position");
   const files = await filesByIds(buildId, [...new Set(links.map((l: { file_id: string }) => l.file_id))]);
   const byId = new Map(files.map((f) => [f.id, f]));
-  return rows.map((r) => toEntry(r, links.filter((l: { entry_id: string }) => l.entry_id === r.id).map((l: { file_id: string }) => byId.get(l.file_id)!).filter(Boolean)));
+  const byEntry = new Map<string, StoredFile[]>();
+  for (const l of links as { entry_id: string; file_id: string }[]) {
+    const f = byId.get(l.file_id);
+    if (f) byEntry.set(l.entry_id, [...(byEntry.get(l.entry_id) ?? []), f]);
+  }
+  return rows.map((r) => toEntry(r, byEntry.get(r.id) ?? []));
 }
 
-export async function listEntries(buildId: string, f: LogFilter = {}) {
-  const rows = await filtered(buildId, f)
-    .leftJoin("users as u", "u.id", "e.author_id")
-    .leftJoin("linkages as l", "l.id", "e.linkage_id")
-    .leftJoin("linkage_revisions as lr", function () {
-      this.on("lr.linkage_id", "e.linkage_id").andOn("lr.revision", "e.revision");
-    })
-    .select("e.*", "u.name as author_name", "l.name as linkage_name", db.raw("lr.analysis -> 'summary' as revision_summary"))
-    .orderBy([{ column: "e.date", order: "desc" }, { column: "e.created_at", order: "desc" }])
-    .limit(2000);
-  return attachFiles(buildId, rows);
+const withJoins = (q: ReturnType<typeof filtered>) => q
+  .leftJoin("users as u", "u.id", "e.author_id")
+  .leftJoin("linkages as l", "l.id", "e.linkage_id")
+  .leftJoin("linkage_revisions as lr", function () {
+    this.on("lr.linkage_id", "e.linkage_id").andOn("lr.revision", "e.revision");
+  })
+  .select("e.*", "u.name as author_name", "l.name as linkage_name", db.raw("lr.analysis -> 'summary' as revision_summary"));
+
+/** The log's order, newest first: by date, then by when it was written (the id breaks ties). */
+export const LOG_KEYS: Key[] = [{ expr: "e.date", type: "date" }, { expr: "e.created_at", type: "timestamptz" }, { expr: "e.id", type: "uuid" }];
+
+/** One page of the filtered entries (newest first) and how many match in all. */
+export async function pageEntries(buildId: string, f: LogFilter, page: PageArgs) {
+  const [p, total] = await Promise.all([keysetPage<EntryRow>(withJoins(filtered(buildId, f)), LOG_KEYS, page), countOf(filtered(buildId, f))]);
+  return { items: await attachFiles(buildId, p.items), next: p.next, total };
 }
 
-/** Hours by system and by month over the filtered entries. An entry with several systems counts toward each. */
+/** Every filtered entry, oldest first, a page at a time (for exports: memory holds one page of rows). */
+export async function* eachEntry(buildId: string, f: LogFilter, pageSize = 250) {
+  let after: string[] | null = null;
+  for (;;) {
+    const p: Page<EntryRow> = await keysetPage<EntryRow>(withJoins(filtered(buildId, f)), LOG_KEYS, { limit: pageSize, after }, "asc");
+    if (p.items.length) yield await attachFiles(buildId, p.items);
+    if (!p.next) return;
+    after = p.next;
+  }
+}
+
+/** How many entries, photos (and their thumbnails' bytes) and tied revisions a filter covers: the export's size estimate. */
+export async function logSize(buildId: string, f: LogFilter) {
+  const [r] = await filtered(buildId, f)
+    .leftJoin("log_entry_files as lf", "lf.entry_id", "e.id")
+    .leftJoin("files as fi", function () { this.on("fi.id", "lf.file_id").andOnVal("fi.kind", "photo"); })
+    .select(
+      db.raw("count(distinct e.id)::int as entries"),
+      db.raw("count(distinct fi.id)::int as photos"),
+      db.raw("count(distinct (e.linkage_id, e.revision)) filter (where e.linkage_id is not null)::int as revisions"),
+    );
+  const [b] = await db("files as fi")
+    .whereIn("fi.id", filtered(buildId, f).join("log_entry_files as lf", "lf.entry_id", "e.id").select("lf.file_id"))
+    .where("fi.kind", "photo")
+    // A photo without a recorded thumbnail size counts as 25 kB (common practice, no source: a 320 px JPEG).
+    .select(db.raw("coalesce(sum(coalesce(fi.thumb_size, 25000)), 0)::bigint as bytes"));
+  return { entries: Number(r.entries), photos: Number(r.photos), photoBytes: Number(b.bytes), revisions: Number(r.revisions) };
+}
+
+/**
+ * Hours by system and by month over every filtered entry, summed in the database. An entry with
+ * several systems counts toward each (so the per-system rows may add up to more than the total).
+ */
 export async function hourTotals(buildId: string, f: LogFilter = {}): Promise<LogTotals> {
-  const rows = await filtered(buildId, f).select("e.date", "e.hours", "e.systems");
+  const [sum, rows] = await Promise.all([
+    filtered(buildId, f).sum<{ total: string | null }[]>("e.hours as total"),
+    filtered(buildId, f)
+      .joinRaw("cross join lateral unnest(case when cardinality(e.systems) = 0 then array['unassigned']::text[] else e.systems end) as s(system)")
+      .select(db.raw("to_char(e.date, 'YYYY-MM') as month"), "s.system", db.raw("sum(e.hours) as hours"))
+      .groupByRaw("1, 2")
+      .orderByRaw("1, 2"),
+  ]);
   const bySystem: Record<string, number> = {};
   const byMonth: Record<string, Record<string, number>> = {};
-  let total = 0;
-  for (const r of rows as EntryRow[]) {
+  for (const r of rows as { month: string; system: string; hours: string }[]) {
     const h = Number(r.hours);
-    total += h;
-    const month = isoDay(r.date).slice(0, 7);
-    const systems = r.systems?.length ? r.systems : ["unassigned"];
-    byMonth[month] ??= {};
-    for (const s of systems) {
-      bySystem[s] = (bySystem[s] ?? 0) + h;
-      byMonth[month][s] = (byMonth[month][s] ?? 0) + h;
-    }
+    bySystem[r.system] = (bySystem[r.system] ?? 0) + h;
+    (byMonth[r.month] ??= {})[r.system] = h;
   }
   const months = Object.keys(byMonth).sort().map((m) => ({ month: m, ...byMonth[m], total: Object.values(byMonth[m]).reduce((a, b) => a + b, 0) }));
-  return { total: Math.round(total * 100) / 100, bySystem, byMonth: months };
+  return { total: Math.round(Number(sum[0]?.total ?? 0) * 100) / 100, bySystem, byMonth: months };
 }
 
 export async function getEntry(buildId: string, id: string) {

@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "./index";
+import { countOf, keysetPage, type Key, type PageArgs } from "./paging";
 import type { PartInput } from "@/shared/records/parts";
 import type { Part } from "@/shared/schemas/parts";
 
@@ -13,6 +14,26 @@ const toPart = (r: PartRow): Part => ({
 });
 const owner = (lib: Library) => ("userId" in lib ? { owner_user_id: lib.userId } : { build_id: lib.buildId });
 
+/** Parts newest first (the id breaks ties). */
+export const PART_KEYS: Key[] = [{ expr: "p.created_at", type: "timestamptz" }, { expr: "p.id", type: "uuid" }];
+export type PartFilter = { q?: string; kind?: Part["kind"] };
+
+/** One page of a library (search and kind run in the database over every part) and how many match. */
+export async function pageParts(lib: Library, f: PartFilter, page: PageArgs) {
+  const q = () => {
+    const b = db("parts as p").where("userId" in lib ? { "p.owner_user_id": lib.userId } : { "p.build_id": lib.buildId });
+    if (f.kind) b.where("p.kind", f.kind);
+    if (f.q?.trim()) {
+      const like = `%${f.q.trim().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+      b.where((w) => w.whereILike("p.part_number", like).orWhereILike("p.description", like));
+    }
+    return b;
+  };
+  const [p, total] = await Promise.all([keysetPage<PartRow>(q().select("p.*"), PART_KEYS, page), countOf(q())]);
+  return { items: p.items.map(toPart), next: p.next, total };
+}
+
+/** Every part (for suggestions and the CSV export). */
 export async function listParts(lib: Library) {
   const rows = await db<PartRow>("parts").where(owner(lib)).orderBy(["kind", "part_number"]);
   return rows.map(toPart);

@@ -22,6 +22,8 @@ export const ERROR_STATUS = {
   last_owner: 409,
   last_admin: 409,
   email_taken: 409,
+  export_not_ready: 409,
+  export_not_failed: 409,
   invitation_closed: 410,
   too_large: 413,
   unsupported_type: 415,
@@ -78,6 +80,8 @@ export const lastOwner = (message: string) => apiError("last_owner", message);
 export const lastAdmin = (message: string) => apiError("last_admin", message);
 export const emailTaken = (message: string, fields?: Fields) => apiError("email_taken", message, { fields });
 export const invitationClosed = (message: string) => apiError("invitation_closed", message);
+export const exportNotReady = (message: string) => apiError("export_not_ready", message);
+export const exportNotFailed = (message: string) => apiError("export_not_failed", message);
 
 /** zod issues → `{ "path.to.field": "message" }`. */
 export function fieldsOf(error: z.ZodError): Fields {

@@ -1,15 +1,30 @@
 import "server-only";
 import { parseBody, parseParams, json } from "./http";
-import { csvRowsInvalid, duplicatePart, notFound } from "./errors";
-import { createPart, deletePart, importParts, listParts, partNumbers, updatePart, type Library } from "@/db/parts";
+import type { NextRequest } from "next/server";
+import { z } from "zod";
+import { csvRowsInvalid, duplicatePart, invalid, notFound } from "./errors";
+import { pageBody, readPage } from "./paging";
+import { createPart, deletePart, importParts, listParts, pageParts, partNumbers, PART_KEYS, updatePart, type Library } from "@/db/parts";
 import { partInput, partsImport } from "@/shared/schemas/parts";
 import { uuidParam } from "@/shared/schemas/common";
-import { parsePartsCsv, partsToCsv } from "@/shared/records/parts";
+import { PART_KINDS, parsePartsCsv, partsToCsv } from "@/shared/records/parts";
 import { csvResponse } from "./records-http";
+
+const partFilter = z.object({
+  q: z.string().max(200).refine((s) => !s.includes("\u0000"), "must not contain NUL characters").optional(),
+  kind: z.enum(PART_KINDS, { error: `kind is one of ${PART_KINDS.join(", ")}` }).optional(),
+});
 
 /** The same handlers serve a personal library (/api/parts) and a build's (/api/builds/[id]/parts). */
 export const partsHandlers = {
-  list: async (lib: Library) => json({ parts: await listParts(lib) }),
+  /** A page of the library, newest first (`?q=&kind=&cursor=&limit=`), and how many parts match. */
+  list: async (lib: Library, req: NextRequest) => {
+    const sp = req.nextUrl.searchParams;
+    const f = partFilter.safeParse({ q: sp.get("q") || undefined, kind: sp.get("kind") || undefined });
+    if (!f.success) throw invalid(f.error, "The filter is not valid.");
+    const p = await pageParts(lib, f.data, readPage(req, PART_KEYS));
+    return json(pageBody("parts", p, p.total));
+  },
 
   create: async (lib: Library, req: Request) => {
     const p = await parseBody(req, partInput);

@@ -38,5 +38,4 @@ export const csvResponse = (csv: string, filename: string) =>
 export const pdfResponse = (bytes: Uint8Array, filename: string) =>
   new Response(Buffer.from(bytes), { status: 200, headers: { "content-type": "application/pdf", "content-disposition": `inline; filename="${filename}"`, "x-content-type-options": "nosniff", "cache-control": "private, no-store" } });
 
-/** "Larkspur LX-2" → "larkspur-lx-2" for file names. */
-export const slug = (s: string) => s.toLowerCase().replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "").slice(0, 60) || "build";
+export { slug } from "@/shared/schemas/exports";

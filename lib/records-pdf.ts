@@ -105,8 +105,8 @@ class Doc {
   }
   async finish() {
     const n = this.pages.length;
+    const lines = this.wrap(`Caution. ${CAUTION_TEXT}`, 7, this.font, PAGE.w - 2 * M);
     this.pages.forEach((p, i) => {
-      const lines = this.wrap(`Caution. ${CAUTION_TEXT}`, 7, this.font, PAGE.w - 2 * M);
       lines.forEach((l, k) => p.drawText(l, { x: M, y: M + 30 - k * 9, size: 7, font: this.font, color: CAUTION }));
       p.drawText(`${printable(this.title, this.font)} · page ${i + 1} of ${n}`, { x: M, y: M - 14, size: 7, font: this.font, color: SOFT });
     });
@@ -114,62 +114,120 @@ class Doc {
   }
 }
 
-/** A stored photo or picture, re-encoded small enough for a PDF page (pdf-lib embeds JPEG and PNG only). */
+/** A stored picture re-encoded small enough for a PDF page (pdf-lib embeds JPEG and PNG only). */
+async function reencoded(bytes: Buffer, maxPx: number) {
+  const sharp = (await import("sharp")).default;
+  return sharp(bytes).rotate().resize(maxPx, maxPx, { fit: "inside", withoutEnlargement: true }).flatten({ background: "#ffffff" }).jpeg({ quality: 80 }).toBuffer();
+}
+
 async function embedStored(doc: Doc, key: string, maxPx: number): Promise<PDFImage | null> {
   const bytes = await getObject(key);
-  if (!bytes) return null;
-  const sharp = (await import("sharp")).default;
-  const jpeg = await sharp(bytes).rotate().resize(maxPx, maxPx, { fit: "inside", withoutEnlargement: true }).flatten({ background: "#ffffff" }).jpeg({ quality: 80 }).toBuffer();
-  return doc.pdf.embedJpg(jpeg);
+  return bytes ? doc.pdf.embedJpg(await reencoded(bytes, maxPx)) : null;
+}
+
+/** Runs `fn` over `items` with at most `n` at once (storage reads of a page's photos). */
+async function pool<T, R>(items: T[], n: number, fn: (t: T) => Promise<R>): Promise<R[]> {
+  const out: R[] = new Array(items.length);
+  let next = 0;
+  await Promise.all(Array.from({ length: Math.min(n, items.length) }, async () => {
+    while (next < items.length) { const i = next++; out[i] = await fn(items[i]); }
+  }));
+  return out;
 }
 
 const SYSTEM_LABEL: Record<string, string> = { pitch: "Pitch", roll: "Roll", yaw: "Yaw", flap: "Flaps", trim: "Trim", other: "Other", unassigned: "No system" };
 const h2 = (v: number) => (Math.round(v * 100) / 100).toFixed(2).replace(/\.00$/, "").replace(/(\.\d)0$/, "$1");
 
-export async function logPdf(build: Build, entries: LogEntry[], totals: { total: number; bySystem: Record<string, number> }, f: LogFilter) {
+/** Reports how far a long export has got: entries done of the total. */
+export type Progress = (done: number, total: number) => Promise<void> | void;
+
+/**
+ * The log as a PDF. Entries come a page at a time, oldest first (memory holds one page of rows), and
+ * each photo is embedded once, from its stored thumbnail (a JPEG, embedded as it is); each tied
+ * revision's findings and picture are read and embedded once however many entries name it.
+ */
+export async function logPdf(build: Build, pages: AsyncIterable<LogEntry[]>, count: number, totals: { total: number; bySystem: Record<string, number> }, f: LogFilter, progress?: Progress) {
   const doc = await new Doc(`${build.name} — build log`).init();
   doc.text(`${build.name} — build log`, { size: 18, bold: true, gap: 4 });
   doc.text([build.model, build.registration].filter(Boolean).join(" · ") || "Model not set", { color: SOFT });
   const range = f.from || f.to ? `${f.from ?? "the first entry"} to ${f.to ?? "the last entry"}` : "all entries";
-  doc.text(`Covers ${range}${f.system ? `, ${SYSTEM_LABEL[f.system]} only` : ""}${f.q ? `, matching "${f.q}"` : ""}. ${entries.length} entr${entries.length === 1 ? "y" : "ies"}, ${h2(totals.total)} h. Printed ${new Date().toISOString().slice(0, 10)}.`, { color: SOFT, gap: 6 });
+  doc.text(`Covers ${range}${f.system ? `, ${SYSTEM_LABEL[f.system]} only` : ""}${f.q ? `, matching "${f.q}"` : ""}. ${count} entr${count === 1 ? "y" : "ies"}, ${h2(totals.total)} h. Printed ${new Date().toISOString().slice(0, 10)}.`, { color: SOFT, gap: 6 });
   const sys = Object.entries(totals.bySystem).sort((a, b) => b[1] - a[1]);
   if (sys.length) doc.text(`Hours by system: ${sys.map(([s, h]) => `${SYSTEM_LABEL[s] ?? s} ${h2(h)} h`).join(" · ")}`, { size: 9, gap: 8 });
   doc.rule();
-  if (!entries.length) doc.text("No entries in this range.", { color: SOFT });
+  if (!count) doc.text("No entries in this range.", { color: SOFT });
 
-  const keys = await fileKeys(build.id, entries.flatMap((e) => e.files.map((x) => x.id)));
-  for (const e of entries) {
-    doc.ensure(60);
-    doc.text(`${e.date} · ${h2(e.hours)} h${e.systems.length ? ` · ${e.systems.map((s) => SYSTEM_LABEL[s] ?? s).join(", ")}` : ""}${e.author ? ` · ${e.author}` : ""}`, { size: 8, color: SOFT, gap: 0 });
-    doc.text(e.title, { size: 12, bold: true });
-    if (e.text.trim()) doc.text(e.text, { size: 10, gap: 4 });
+  const photoCache = new Map<string, Promise<PDFImage | null>>();
+  const photo = (k: { key: string; thumbKey: string | null }) => {
+    const id = k.thumbKey ?? k.key;
+    let p = photoCache.get(id);
+    if (!p) {
+      p = (async () => {
+        if (k.thumbKey) {
+          const thumb = await getObject(k.thumbKey);
+          // Stored thumbnails are JPEG (lib/uploads.ts), embedded as they are; anything else is re-encoded.
+          // A copy: pdf-lib reads the bytes' whole ArrayBuffer, and a small Buffer is a slice of a shared pool.
+          if (thumb && thumb[0] === 0xff && thumb[1] === 0xd8) return doc.pdf.embedJpg(new Uint8Array(thumb));
+          if (thumb) return doc.pdf.embedJpg(await reencoded(thumb, 320));
+        }
+        return embedStored(doc, k.key, 320);
+      })();
+      photoCache.set(id, p);
+    }
+    return p;
+  };
+  const revisionCache = new Map<string, Promise<{ rev: Awaited<ReturnType<typeof getRevision>>; img: PDFImage | null }>>();
+  const revisionOf = (linkageId: string, revision: number) => {
+    const id = `${linkageId}:${revision}`;
+    let p = revisionCache.get(id);
+    if (!p) {
+      p = (async () => {
+        const [rev, pic] = await Promise.all([getRevision(linkageId, revision), getRevisionPictureRow(build.id, linkageId, revision)]);
+        return { rev, img: pic ? await embedStored(doc, pic.key, 1000) : null };
+      })();
+      revisionCache.set(id, p);
+    }
+    return p;
+  };
 
-    if (e.linkageId && e.revision) {
-      const rev = await getRevision(e.linkageId, e.revision);
-      const s = rev?.analysis?.summary;
-      doc.text(`Linkage: ${e.linkageName ?? "deleted linkage"}, revision ${e.revision}${s ? ` — ${s.hazard} hazard${s.hazard === 1 ? "" : "s"}, ${s.caution} caution${s.caution === 1 ? "" : "s"}, ${s.advisory} advisor${s.advisory === 1 ? "y" : "ies"}${s.lowestMargin ? `; lowest margin ${s.lowestMargin.value.toFixed(2)} (${s.lowestMargin.what})` : ""}` : ""}`, { size: 9, bold: true, color: s && s.hazard ? HAZARD : INK });
-      for (const fi of (rev?.analysis?.findings ?? []).filter((x) => x.severity !== "advisory").slice(0, 6)) {
-        doc.text(`• ${fi.severity === "hazard" ? "Hazard" : "Caution"}: ${fi.message}`, { size: 8, x: M + 8, gap: 1 });
-      }
-      const pic = await getRevisionPictureRow(build.id, e.linkageId, e.revision);
-      if (pic) {
-        const img = await embedStored(doc, pic.key, 1600);
+  let done = 0;
+  for await (const entries of pages) {
+    const keys = await fileKeys(build.id, entries.flatMap((e) => e.files.map((x) => x.id)));
+    // Read this page's photos and revisions from storage a few at a time, ahead of laying them out.
+    await pool([...keys.values()].filter((k) => k.kind !== "pdf"), 8, photo);
+    await pool(entries.filter((e) => e.linkageId && e.revision), 4, (e) => revisionOf(e.linkageId!, e.revision!));
+    for (const e of entries) {
+      doc.ensure(60);
+      doc.text(`${e.date} · ${h2(e.hours)} h${e.systems.length ? ` · ${e.systems.map((s) => SYSTEM_LABEL[s] ?? s).join(", ")}` : ""}${e.author ? ` · ${e.author}` : ""}`, { size: 8, color: SOFT, gap: 0 });
+      doc.text(e.title, { size: 12, bold: true });
+      if (e.text.trim()) doc.text(e.text, { size: 10, gap: 4 });
+
+      if (e.linkageId && e.revision) {
+        const { rev, img } = await revisionOf(e.linkageId, e.revision);
+        const s = rev?.analysis?.summary;
+        doc.text(`Linkage: ${e.linkageName ?? "deleted linkage"}, revision ${e.revision}${s ? ` — ${s.hazard} hazard${s.hazard === 1 ? "" : "s"}, ${s.caution} caution${s.caution === 1 ? "" : "s"}, ${s.advisory} advisor${s.advisory === 1 ? "y" : "ies"}${s.lowestMargin ? `; lowest margin ${s.lowestMargin.value.toFixed(2)} (${s.lowestMargin.what})` : ""}` : ""}`, { size: 9, bold: true, color: s && s.hazard ? HAZARD : INK });
+        for (const fi of (rev?.analysis?.findings ?? []).filter((x) => x.severity !== "advisory").slice(0, 6)) {
+          doc.text(`• ${fi.severity === "hazard" ? "Hazard" : "Caution"}: ${fi.message}`, { size: 8, x: M + 8, gap: 1 });
+        }
         if (img) doc.images([{ img, caption: `${e.linkageName ?? "Linkage"} — revision ${e.revision} (picture from the editor)` }], 1, 300);
-      } else doc.text("(No picture stored for this revision.)", { size: 8, color: SOFT });
-    }
+        else doc.text("(No picture stored for this revision.)", { size: 8, color: SOFT });
+      }
 
-    const photos: { img: PDFImage; caption: string }[] = [];
-    const pdfs: string[] = [];
-    for (const file of e.files) {
-      const k = keys.get(file.id);
-      if (!k) continue;
-      if (k.kind === "pdf") { pdfs.push(file.name); continue; }
-      const img = await embedStored(doc, k.key, 900);
-      if (img) photos.push({ img, caption: file.name });
+      const photos: { img: PDFImage; caption: string }[] = [];
+      const pdfs: string[] = [];
+      for (const file of e.files) {
+        const k = keys.get(file.id);
+        if (!k) continue;
+        if (k.kind === "pdf") { pdfs.push(file.name); continue; }
+        const img = await photo(k);
+        if (img) photos.push({ img, caption: file.name });
+      }
+      if (photos.length) doc.images(photos, photos.length === 1 ? 1 : Math.min(3, photos.length), photos.length === 1 ? 200 : 140);
+      if (pdfs.length) doc.text(`Attached documents: ${pdfs.join(", ")}`, { size: 8, color: SOFT });
+      doc.rule();
     }
-    if (photos.length) doc.images(photos, photos.length === 1 ? 1 : 2, photos.length === 1 ? 260 : 180);
-    if (pdfs.length) doc.text(`Attached documents: ${pdfs.join(", ")}`, { size: 8, color: SOFT });
-    doc.rule();
+    done += entries.length;
+    await progress?.(done, count);
   }
   return doc.finish();
 }

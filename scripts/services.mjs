@@ -11,14 +11,15 @@ const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
 const require = createRequire(import.meta.url);
 
 export async function startLocalServices(env = process.env) {
-  const mode = env.LW_SERVICES_MODE === "test" ? "test" : "dev";
+  // dev (npm start), test (npm test) or bench (npm run bench:scale): each its own ports and folders.
+  const mode = env.LW_SERVICES_MODE === "test" || env.LW_SERVICES_MODE === "bench" ? env.LW_SERVICES_MODE : "dev";
   const out = { env: {}, summary: "", async stop() {} };
   const stops = [];
 
   if (!env.SMTP_URL) {
     const { SMTPServer } = require("smtp-server");
     const { simpleParser } = await import("mailparser").catch(() => ({ simpleParser: null }));
-    const port = Number(env.LW_SMTP_PORT || (mode === "test" ? 2526 : 2525));
+    const port = mode === "bench" ? Number(env.LW_SMTP_PORT || 2526) + 1 : Number(env.LW_SMTP_PORT || (mode === "test" ? 2526 : 2525));
     const dir = path.join(ROOT, ".data", `mail-sink-${mode}`);
     mkdirSync(dir, { recursive: true });
     let n = 0;
@@ -58,7 +59,7 @@ export async function startLocalServices(env = process.env) {
 
   if (!env.S3_ENDPOINT) {
     const S3rver = require("s3rver");
-    const port = Number(env.LW_S3_PORT || (mode === "test" ? 4570 : 4569));
+    const port = mode === "bench" ? Number(env.LW_S3_PORT || 4570) + 1 : Number(env.LW_S3_PORT || (mode === "test" ? 4570 : 4569));
     const dir = path.join(ROOT, ".data", `s3-${mode}`);
     mkdirSync(dir, { recursive: true });
     const bucket = "linkwright";

@@ -1,8 +1,9 @@
 "use client";
-/** A parts library (a person's own, or a build's): sortable table, add a part, CSV import with a row report, CSV export. */
+/** A parts library (a person's own, or a build's), newest first a page at a time, searched in the database: sortable table, add a part, CSV import with a row report, CSV export. */
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
-import { useMemo, useState } from "react";
+import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
+import { useEffect, useMemo, useState } from "react";
+import { LoadMore, usePagedList } from "@/components/paged";
 import { api, ApiFailure } from "@/components/api-client";
 import { partKeys } from "@/components/query-keys";
 import { Button, Card, EmptyState, Field, Input, Select } from "@/components/ui";
@@ -16,9 +17,12 @@ const col = createColumnHelper<Part>();
 export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: string; canEdit: boolean; title: string; intro: string }) {
   const qc = useQueryClient();
   const key = partKeys.list(apiBase);
-  const parts = useQuery({ queryKey: key, queryFn: async () => (await api<{ parts: Part[] }>(apiBase)).parts });
-  const [sorting, setSorting] = useState<SortingState>([{ id: "kind", desc: false }]);
   const [filter, setFilter] = useState("");
+  const [search, setSearch] = useState("");
+  // The search runs in the database over the whole library, a moment after typing stops.
+  useEffect(() => { const t = setTimeout(() => setSearch(filter.trim()), 250); return () => clearTimeout(t); }, [filter]);
+  const parts = usePagedList<Part>({ key: [...key, search], url: search ? `${apiBase}?q=${encodeURIComponent(search)}` : apiBase, name: "parts" });
+  const [sorting, setSorting] = useState<SortingState>([]);
   const [error, setError] = useState<string | null>(null);
   const del = useMutation({ mutationFn: (id: string) => api(`${apiBase}/${id}`, { method: "DELETE" }), onSuccess: () => qc.invalidateQueries({ queryKey: key }), onError: (e) => setError(String(e instanceof Error ? e.message : e)) });
 
@@ -31,9 +35,10 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
     ...(canEdit ? [col.display({ id: "actions", header: () => <span className="sr-only">Actions</span>, cell: (c) => <Button size="sm" tone="ghost" aria-label={`Delete ${c.row.original.partNumber}`} onClick={() => { if (confirm(`Delete ${c.row.original.partNumber}?`)) del.mutate(c.row.original.id); }}>Delete</Button> })] : []),
   ], [canEdit, del]);
   const table = useReactTable({
-    data: parts.data ?? [], columns, state: { sorting, globalFilter: filter }, onSortingChange: setSorting, onGlobalFilterChange: setFilter,
-    getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(), getFilteredRowModel: getFilteredRowModel(),
+    data: parts.items, columns, state: { sorting }, onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(),
   });
+  const all = !parts.hasNextPage;
 
   return (
     <div className="space-y-6">
@@ -43,7 +48,7 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
       </div>
       {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
       {canEdit ? <div className="grid gap-6 lg:grid-cols-2"><AddPart apiBase={apiBase} /><ImportCsv apiBase={apiBase} /></div> : null}
-      {parts.data && parts.data.length === 0 ? (
+      {!parts.isPending && parts.total === 0 && !search ? (
         <EmptyState title="No parts in this library yet">
           Record the rod ends, bolts, nuts, washers, tubes and bushings you buy, with the maker&apos;s ratings. &ldquo;Suggest a part&rdquo; on a joint then
           picks the ones that fit (thread, hand, bore) and carry the load, best margin first.{" "}
@@ -55,8 +60,10 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
           )}
         </EmptyState>
       ) : (
-        <Card title={`${table.getFilteredRowModel().rows.length} part${table.getFilteredRowModel().rows.length === 1 ? "" : "s"}`} actions={<Input aria-label="Filter parts" placeholder="Filter…" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-48" />}>
+        <Card title={`${parts.total.toLocaleString("en-US")} part${parts.total === 1 ? "" : "s"}${search ? " match" : ""}`} actions={<Input aria-label="Search parts" placeholder="Search part number or description" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-56" />}>
+          {sorting.length && !all ? <p className="mb-2 text-xs text-caution">Sorted among the {parts.items.length} parts loaded so far; load the rest to sort the whole library.</p> : null}
           <DataTable table={table} testId="parts-table" rowTestId="part-row" />
+          <LoadMore shown={parts.items.length} total={parts.total} noun="parts" hasMore={!!parts.hasNextPage} loading={parts.isFetchingNextPage} error={parts.isFetchNextPageError ? parts.error : null} onMore={() => void parts.fetchNextPage()} />
         </Card>
       )}
     </div>

@@ -1,12 +1,11 @@
 "use client";
 /** A thin strip above the editor: the linkage's sign-off state and its open review threads. */
-import { useComments, useSignoffs } from "./api";
+import { useUnresolvedCounts, useSignoffs } from "./api";
 import { SignoffBadge } from "./SignoffBadge";
 
 export function EditorReviewBar({ buildId, linkageId }: { buildId: string; linkageId: string }) {
   const s = useSignoffs(buildId, linkageId);
-  const c = useComments(buildId, linkageId);
-  const open = Object.values(c.data?.unresolved ?? {}).reduce((a, b) => a + b, 0);
+  const open = Object.values(useUnresolvedCounts(buildId, linkageId)).reduce((a, b) => a + b, 0);
   return (
     <div className="flex items-center gap-3 border-b border-ink/10 bg-white px-3 py-1 text-[11px]" data-testid="review-bar">
       <span className="font-semibold text-ink-soft">Review</span>

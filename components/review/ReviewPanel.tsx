@@ -1,6 +1,7 @@
 "use client";
 /** The linkage's review panel: sign-off state and form, what still blocks it, revision history and diff, e-mail setting. */
 import { useState } from "react";
+import { LoadMore } from "@/components/paged";
 import { ApiFailure } from "@/components/api-client";
 import { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "@/shared/schemas/users";
 import { showValue, type ChangedItem, type GraphDiff } from "@/shared/review/diff";
@@ -132,7 +133,7 @@ function DiffView({ d }: { d: GraphDiff }) {
 function HistorySection({ buildId, linkageId }: { buildId: string; linkageId: string }) {
   const [open, setOpen] = useState(false);
   const revs = useRevisions(buildId, linkageId, open);
-  const list = revs.data?.revisions ?? [];
+  const list = revs.revisions;
   const [pick, setPick] = useState<{ from: number | null; to: number | null }>({ from: null, to: null });
   const to = pick.to ?? list[0]?.revision ?? null;
   const from = pick.from ?? (to !== null ? Math.max(1, to - 1) : null);
@@ -153,6 +154,7 @@ function HistorySection({ buildId, linkageId }: { buildId: string; linkageId: st
                 {r.summary && r.summary.hazard > 0 && <span className="text-hazard">{r.summary.hazard}H</span>}
               </li>
             ))}
+            <li><LoadMore shown={list.length} total={revs.total} noun="revisions" hasMore={!!revs.hasNextPage} loading={revs.isFetchingNextPage} error={revs.isFetchNextPageError ? revs.error : null} onMore={() => void revs.fetchNextPage()} /></li>
           </ul>
           {list.length > 1 && (
             <div className="flex items-center gap-1 text-[11px]">

@@ -5,6 +5,7 @@
  * With nothing selected it shows the linkage's review panel: sign-off, history and diff.
  */
 import { useState } from "react";
+import { LoadMore } from "@/components/paged";
 import type { Subject } from "@/shared/analysis/types";
 import { ApiFailure } from "@/components/api-client";
 import { LinkifiedText } from "./LinkifiedText";
@@ -191,17 +192,18 @@ function SubjectFindingsReview({ findings, me, actions }: { findings: FindingVie
 }
 
 export function ReviewThread({ buildId, linkageId, subject, me }: Props) {
-  const comments = useComments(buildId, linkageId);
+  const comments = useComments(buildId, linkageId, subject);
   const acks = useAcknowledgements(buildId, linkageId);
   const actions = useReviewActions(buildId, linkageId);
-  const mine = (comments.data?.comments ?? []).filter((c) => c.subject.type === subject.type && c.subject.id === subject.id);
+  const mine = comments.comments;
   const roots = mine.filter((c) => !c.parentId);
-  const open = roots.filter((r) => !r.resolvedAt).length;
+  // Over every thread of the subject, not only the pages loaded.
+  const open = comments.unresolved[`${subject.type}:${subject.id}`] ?? 0;
   const findings = (acks.data?.findings ?? []).filter((f) => f.subject.type === subject.type && f.subject.id === subject.id);
   const what = subject.type === "linkage" ? "the linkage as a whole" : `this ${subject.type === "joint" ? "joint" : "part"}`;
   return (
     <section data-testid="review-thread" data-subject={`${subject.type}:${subject.id}`} className="space-y-2 text-ink">
-      {subject.type === "linkage" && <ReviewPanel buildId={buildId} linkageId={linkageId} me={me} unresolved={comments.data?.unresolved ?? {}} />}
+      {subject.type === "linkage" && <ReviewPanel buildId={buildId} linkageId={linkageId} me={me} unresolved={comments.unresolved} />}
       <h4 className="flex items-center gap-2 text-[12px] font-semibold">
         Review of {what}
         <span data-testid="review-open-count" data-count={open} className={`rounded-full px-1.5 text-[10px] ${open ? "bg-caution/15 text-caution" : "bg-ink/5 text-ink-soft"}`}>
@@ -211,7 +213,7 @@ export function ReviewThread({ buildId, linkageId, subject, me }: Props) {
       {subject.type !== "linkage" && <SubjectFindingsReview findings={findings} me={me} actions={actions} />}
       {comments.isLoading ? (
         <p className="text-[11px] text-ink-soft">Loading comments…</p>
-      ) : comments.error ? (
+      ) : comments.error && !comments.data ? (
         <p role="alert" className="text-[11px] text-hazard">{errText(comments.error)}</p>
       ) : roots.length === 0 ? (
         <p className="text-[11px] text-ink-soft">No comments on {what} yet.</p>
@@ -220,6 +222,7 @@ export function ReviewThread({ buildId, linkageId, subject, me }: Props) {
           {roots.map((r) => (
             <Thread key={r.id} root={r} replies={mine.filter((c) => c.parentId === r.id)} me={me} actions={actions} />
           ))}
+          <li><LoadMore shown={roots.length} total={comments.total} noun="threads" hasMore={!!comments.hasNextPage} loading={comments.isFetchingNextPage} error={comments.isFetchNextPageError ? comments.error : null} onMore={() => void comments.fetchNextPage()} /></li>
         </ul>
       )}
       {me.canComment && (

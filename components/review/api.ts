@@ -1,9 +1,10 @@
 "use client";
 /**
  * react-query hooks of the review API. Every mutation refreshes the review queries of its linkage; a
- * save of the graph does too (editor/useAutosave), so nothing here polls.
+ * save of the graph does too (editor/useAutosave), so nothing here polls. Threads and revisions come a
+ * page at a time, newest first (components/paged.tsx).
  */
-import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useInfiniteQuery, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import type { z } from "zod";
 import { api } from "@/components/api-client";
 import { commentKeys, findingKeys, linkageKeys, meKeys, signoffKeys } from "@/components/query-keys";
@@ -22,16 +23,27 @@ export type SignoffView = Signoff;
 
 const base = (buildId: string, linkageId: string) => `/api/builds/${buildId}/linkages/${linkageId}`;
 
-export function useComments(buildId: string, linkageId: string) {
-  return useQuery({
-    queryKey: commentKeys.list(linkageId),
-    queryFn: () => api<z.infer<typeof commentsResponse>>(`${base(buildId, linkageId)}/comments`),
+type CommentPage = z.infer<typeof commentsResponse>;
+
+/** The threads of one subject, newest first, a page at a time (each with its replies). */
+export function useComments(buildId: string, linkageId: string, subject: Subject) {
+  const q = useInfiniteQuery({
+    queryKey: [...commentKeys.list(linkageId), subject.type, subject.id],
+    queryFn: ({ pageParam }) =>
+      api<CommentPage>(`${base(buildId, linkageId)}/comments?subjectType=${subject.type}&subjectId=${encodeURIComponent(subject.id)}${pageParam ? `&cursor=${encodeURIComponent(pageParam)}` : ""}`),
+    initialPageParam: "",
+    getNextPageParam: (last) => last.nextCursor ?? undefined,
   });
+  const first = q.data?.pages[0];
+  return { ...q, comments: q.data?.pages.flatMap((p) => p.comments) ?? [], total: first?.total ?? 0, unresolved: first?.unresolved ?? {} };
 }
 
-/** Open threads per subject key ("joint:j1" → 2), for markers on the canvas. */
+/** Open threads per subject key ("joint:j1" → 2), for markers on the canvas and the review bar (counted over every thread). */
 export function useUnresolvedCounts(buildId: string, linkageId: string): Record<string, number> {
-  return useComments(buildId, linkageId).data?.unresolved ?? {};
+  return useQuery({
+    queryKey: [...commentKeys.list(linkageId), "open"],
+    queryFn: () => api<CommentPage>(`${base(buildId, linkageId)}/comments?limit=1`).then((r) => r.unresolved),
+  }).data ?? {};
 }
 
 export function useAcknowledgements(buildId: string, linkageId: string) {
@@ -48,12 +60,16 @@ export function useSignoffs(buildId: string, linkageId: string) {
   });
 }
 
+/** The revision history a page at a time, newest first (see components/paged.tsx). */
 export function useRevisions(buildId: string, linkageId: string, enabled = true) {
-  return useQuery({
+  const q = useInfiniteQuery({
     queryKey: linkageKeys.revisions(linkageId),
-    queryFn: () => api<z.infer<typeof revisionsResponse>>(`${base(buildId, linkageId)}/revisions`),
+    queryFn: ({ pageParam }) => api<z.infer<typeof revisionsResponse>>(`${base(buildId, linkageId)}/revisions${pageParam ? `?cursor=${encodeURIComponent(pageParam)}` : ""}`),
+    initialPageParam: "",
+    getNextPageParam: (last) => last.nextCursor ?? undefined,
     enabled,
   });
+  return { ...q, revisions: q.data?.pages.flatMap((p) => p.revisions) ?? [], total: q.data?.pages[0]?.total ?? 0 };
 }
 
 export function useDiff(buildId: string, linkageId: string, from: number | null, to: number | null) {

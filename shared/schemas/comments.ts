@@ -1,6 +1,6 @@
 /** Review comments: threads on a part, a joint or the linkage, replies one level deep, resolve and reopen. */
 import { z } from "zod";
-import { isoTime, person, subjectSchema, text } from "./common";
+import { isoTime, pageFields, person, subjectSchema, text } from "./common";
 
 /** Minutes during which the author may still change a comment's text. */
 export const COMMENT_EDIT_MINUTES = 15;
@@ -37,8 +37,10 @@ export type Comment = z.infer<typeof comment>;
 export const commentView = comment.extend({ editableUntil: isoTime });
 export type CommentView = z.infer<typeof commentView>;
 
+/** A page of threads, newest first: each thread's first comment, then its replies; `total` counts threads. */
 export const commentsResponse = z.object({
   comments: z.array(commentView),
+  ...pageFields,
   /** Open threads per subject ("joint:j1" → 2). */
   unresolved: z.record(z.string(), z.number().int()),
   editMinutes: z.number().int(),

@@ -35,6 +35,12 @@ export const subjectSchema = z.object({
 export type Subject = z.infer<typeof subjectSchema>;
 
 /** Findings counts by severity, as stored with a revision. */
+/**
+ * A page of a long list (newest first): how many items the whole list has, and the cursor of the next
+ * page (null on the last). The items sit beside these under the list's own name.
+ */
+export const pageFields = { total: z.number().int().min(0), nextCursor: z.string().nullable() };
+
 export const severityCounts = z.object({ hazard: z.number().int(), caution: z.number().int(), advisory: z.number().int() });
 
 /** A patch names at least one field. */

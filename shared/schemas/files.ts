@@ -1,6 +1,6 @@
 /** Uploaded files of a build (photos, PDFs, linkage pictures) and photos tied to a joint. */
 import { z } from "zod";
-import { isoTime } from "./common";
+import { isoTime, pageFields } from "./common";
 
 export const FILE_KINDS = ["photo", "pdf", "linkage-picture"] as const;
 export type FileKind = (typeof FILE_KINDS)[number];
@@ -22,7 +22,8 @@ export const storedFile = z.object({
   thumbUrl: z.string().nullable(),
 });
 export type StoredFile = z.infer<typeof storedFile>;
-export const filesResponse = z.object({ files: z.array(storedFile) });
+/** A page of the build's uploads, newest first. */
+export const filesResponse = z.object({ files: z.array(storedFile), ...pageFields });
 export const fileResponse = z.object({ file: storedFile });
 
 /** Link a photo already uploaded to the build to a joint. */

@@ -2,7 +2,7 @@
 import { z } from "zod";
 import { graphSchema, systemSchema } from "../linkage/schema";
 import type { Report } from "../analysis/types";
-import { isoTime, notEmpty, person, severityCounts, text } from "./common";
+import { isoTime, notEmpty, pageFields, person, severityCounts, text } from "./common";
 
 export const linkageCreate = z.object({ name: text("Linkage name", 120), system: systemSchema, graph: graphSchema.optional() });
 export const linkagePatch = linkageCreate.pick({ name: true, system: true }).partial().refine(notEmpty, "Nothing to change");
@@ -27,7 +27,8 @@ export const linkageResponse = z.object({ linkage });
 /** One row of the revision history. */
 export const revisionRow = z.object({ revision: z.number().int(), author: person, createdAt: isoTime, summary: severityCounts.nullable() });
 export type RevisionRow = z.infer<typeof revisionRow>;
-export const revisionsResponse = z.object({ currentRevision: z.number().int(), revisions: z.array(revisionRow) });
+/** A page of the revision history, newest first. */
+export const revisionsResponse = z.object({ currentRevision: z.number().int(), revisions: z.array(revisionRow), ...pageFields });
 
 const revisionStamp = z.object({ revision: z.number().int(), author: person, createdAt: isoTime });
 export const diffResponse = z.object({ from: revisionStamp, to: revisionStamp, diff: z.custom<import("../review/diff").GraphDiff>() });

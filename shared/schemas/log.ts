@@ -1,7 +1,7 @@
 /** The build log: dated entries with hours, systems, attached files and optionally the linkage revision they concern. */
 import { z } from "zod";
 import { SYSTEMS, systemSchema, type ControlSystem } from "../linkage/schema";
-import { isoTime, patchWithSomething, REVISION_MAX, severityCounts, text } from "./common";
+import { isoTime, pageFields, patchWithSomething, REVISION_MAX, severityCounts, text } from "./common";
 import { storedFile } from "./files";
 
 const isoDate = z.string({ error: "date is required (YYYY-MM-DD)" }).regex(/^\d{4}-\d{2}-\d{2}$/, "date must be YYYY-MM-DD")
@@ -58,5 +58,6 @@ export const logTotals = z.object({
   byMonth: z.array(z.custom<{ month: string; total: number } & Partial<Record<ControlSystem | "unassigned", number>>>((v) => !!v && typeof v === "object" && typeof (v as { month?: unknown }).month === "string")),
 });
 export type LogTotals = z.infer<typeof logTotals>;
-export const logResponse = z.object({ entries: z.array(logEntry), totals: logTotals });
+/** A page of entries; the first page (no cursor) carries the hour totals over every matching entry. */
+export const logResponse = z.object({ entries: z.array(logEntry), ...pageFields, totals: logTotals.optional() });
 export const logEntryResponse = z.object({ entry: logEntry });

@@ -1,7 +1,7 @@
 /** Parts libraries (a user's own, a build's): one part, a CSV import, and the parts as the API lists them. */
 import { z } from "zod";
 import { PART_KINDS, partInput, type Part } from "../records/parts";
-import { isoTime } from "./common";
+import { isoTime, pageFields } from "./common";
 
 export { partInput };
 export const partPatch = partInput; // a part is replaced whole: its spec depends on its kind
@@ -23,4 +23,5 @@ export const part = z.object({
   updatedAt: isoTime,
 });
 export type { Part };
-export const partsResponse = z.object({ parts: z.array(part) });
+/** A page of a library, newest first. */
+export const partsResponse = z.object({ parts: z.array(part), ...pageFields });

@@ -23,6 +23,8 @@ import { partsResponse } from "@/shared/schemas/parts";
 import { checklistResponse } from "@/shared/schemas/checklist";
 import { hardwareResponse } from "@/shared/schemas/hardware";
 import { notifyResponse, publicUser } from "@/shared/schemas/users";
+import { activityResponse } from "@/shared/schemas/activity";
+import { exportJobResponse, logEstimateResponse } from "@/shared/schemas/exports";
 
 let owner: Client;
 let B = "";
@@ -98,5 +100,14 @@ describe("response contracts", () => {
     expect((await fits(`${B}/parts`, partsResponse)).parts).toHaveLength(1);
     await fits(`${L}/checklist`, checklistResponse);
     await fits(`${B}/hardware`, hardwareResponse);
+    await fits(`${B}/activity`, activityResponse);
+  });
+
+  it("exports: the size estimate and a job", async () => {
+    await fits(`${B}/log/estimate`, logEstimateResponse);
+    const started = await owner.request("POST", `${B}/exports`, { kind: "hardware-csv", params: {} });
+    expect(started.status).toBe(202);
+    expect(strict(exportJobResponse).safeParse(started.body).success).toBe(true);
+    await fits(`${B}/exports/${started.body.job.id}`, exportJobResponse);
   });
 });

@@ -13,6 +13,7 @@ import { makeBuild, makeUser, snapshot, testDb } from "../support/db";
 import { signIn, type Client } from "../support/http";
 import { fetchBytes, s3Keys, testImage, upload, uploadRaw } from "../support/upload";
 import { APP_URL } from "../support/env";
+import { exportFile } from "../support/exports";
 
 const ARTIFACTS = path.resolve(__dirname, "../artifacts/records");
 mkdirSync(ARTIFACTS, { recursive: true });
@@ -223,6 +224,7 @@ describe("build log", () => {
 
     const all = (await viewer.request("GET", `${B()}/log`)).body;
     expect(all.entries.map((x: { title: string }) => x.title)).toEqual(["Torque stripes on the bellcrank", "Rudder pedals", "Made the aft pushrod"]);
+    expect([all.total, all.nextCursor]).toEqual([3, null]);
     expect(all.totals.total).toBe(6.75);
     expect(all.totals.bySystem).toEqual({ pitch: 4.75, yaw: 2, roll: 1.25 });
     expect(all.totals.byMonth).toEqual([{ month: "2026-10", pitch: 3.5, yaw: 2, total: 5.5 }, { month: "2026-11", pitch: 1.25, roll: 1.25, total: 2.5 }]);
@@ -236,9 +238,11 @@ describe("build log", () => {
   });
 
   it("exports a date range as a PDF with the photo, the linkage picture and the caution on every page", async () => {
-    const res = await fetchBytes(viewer, `${B()}/log/pdf?from=2026-10-01&to=2026-10-31`);
-    expect(res.status).toBe(200);
+    const est = await viewer.request("GET", `${B()}/log/estimate?from=2026-10-01&to=2026-10-31`);
+    expect(est.body.estimate).toMatchObject({ entries: 2, photos: 1, large: false });
+    const res = await exportFile(viewer, buildId, "log-pdf", { from: "2026-10-01", to: "2026-10-31" });
     expect(res.headers.get("content-type")).toBe("application/pdf");
+    expect(res.job.label).toContain("2 entries");
     expect(res.bytes.subarray(0, 5).toString()).toBe("%PDF-");
     const pages = renderPdf(res.bytes, "log");
     expect(pages.length).toBeGreaterThanOrEqual(1);
@@ -255,8 +259,7 @@ describe("build log", () => {
     const title = "Łukasz fitted the Höhenruder horn ↔ pushrod, ±0.5° play, ≥ 2 threads";
     const r = await owner.request("POST", `${B()}/log`, { date: "2026-09-15", hours: 0.5, title, text: "Ωmega check 🛩 done", systems: ["pitch"] });
     expect(r.status).toBe(201);
-    const res = await fetchBytes(viewer, `${B()}/log/pdf?from=2026-09-15&to=2026-09-15`);
-    expect(res.status).toBe(200);
+    const res = await exportFile(viewer, buildId, "log-pdf", { from: "2026-09-15", to: "2026-09-15" });
     const text = pdfText(res.bytes);
     expect(squash(text)).toContain(squash(title));
     expect(text).toContain("Ωmega check ? done");
@@ -274,7 +277,7 @@ describe("hardware list and checklist", () => {
     expect((await owner.request("PUT", `${B()}/hardware`, { key: "nothing|here", state: "received" })).status).toBe(404);
     const after = (await viewer.request("GET", `${B()}/hardware`)).body.lines.find((l: { key: string }) => l.key === jam.key);
     expect(after.state).toBe("received");
-    const csv = await (await fetch(`${APP_URL}${B()}/hardware/export`, { headers: { cookie: viewer.cookie } })).text();
+    const csv = (await exportFile(viewer, buildId, "hardware-csv")).bytes.toString("utf8");
     expect(csv).toContain('jamNut,Jam nut 1/4-28 LH,,1,Received,"Pitch run: Forward pushrod B ↔ Bellcrank under the seat, in"');
   });
 
@@ -292,8 +295,7 @@ describe("hardware list and checklist", () => {
     const items = (await viewer.request("GET", `${L()}/checklist`)).body.items;
     expect(items.find((i: { jointId: string; code: string }) => i.jointId === DEMO_WRONG_JOINT && i.code === "retaining-washer")).toMatchObject({ tickedAt: null, note: expect.stringContaining("replace") });
 
-    const pdf = await fetchBytes(viewer, `${L()}/checklist/pdf`);
-    expect(pdf.status).toBe(200);
+    const pdf = await exportFile(viewer, buildId, "checklist-pdf", { linkageId });
     renderPdf(pdf.bytes, "checklist");
     const text = pdfText(pdf.bytes);
     expect(text).toContain("1 of 33 items ticked");

@@ -177,6 +177,11 @@ describe("revision history and diff", () => {
     const r = await c.viewer.request("GET", `${L()}/revisions`);
     expect(r.status).toBe(200);
     expect(r.body.revisions.map((x: { revision: number }) => x.revision)).toEqual([5, 4, 3, 2, 1]);
+    expect([r.body.total, r.body.nextCursor]).toEqual([5, null]);
+    const paged = await c.viewer.request("GET", `${L()}/revisions?limit=2`);
+    expect(paged.body.revisions.map((x: { revision: number }) => x.revision)).toEqual([5, 4]);
+    const next = await c.viewer.request("GET", `${L()}/revisions?limit=2&cursor=${paged.body.nextCursor}`);
+    expect(next.body.revisions.map((x: { revision: number }) => x.revision)).toEqual([3, 2]);
     expect(r.body.revisions[0]).toMatchObject({ author: { id: u.builder.id, name: u.builder.name } });
     expect(Date.parse(r.body.revisions[0].createdAt)).toBeGreaterThan(0);
   });

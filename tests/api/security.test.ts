@@ -53,7 +53,7 @@ async function refused(c: Client, method: string, path: string, status: number, 
 
 describe("numbers and dates Postgres cannot hold", () => {
   it("a revision number past int4 in a query is a 404, not a 500", async () => {
-    for (const q of [`graph?revision=${TOO_BIG}`, `graph?revision=2147483648`, `file?revision=${TOO_BIG}`, `checklist?revision=${TOO_BIG}`, `checklist/pdf?revision=${TOO_BIG}`, `diff?from=${TOO_BIG}`, `diff?from=1&to=${TOO_BIG}`]) {
+    for (const q of [`graph?revision=${TOO_BIG}`, `graph?revision=2147483648`, `file?revision=${TOO_BIG}`, `checklist?revision=${TOO_BIG}`, `diff?from=${TOO_BIG}`, `diff?from=1&to=${TOO_BIG}`]) {
       await refused(owner, "GET", `${L()}/${q}`, 404);
     }
   });
@@ -69,7 +69,8 @@ describe("numbers and dates Postgres cannot hold", () => {
 
   it("the year 0000 (no such year in Postgres) is refused as a date", async () => {
     expect((await refused(owner, "GET", `${B()}/log?from=0000-01-01`, 400)).body.error.fields).toHaveProperty("from");
-    await refused(owner, "GET", `${B()}/log/pdf?to=0000-12-31`, 400);
+    await refused(owner, "GET", `${B()}/log/estimate?to=0000-12-31`, 400);
+    expect((await refused(owner, "POST", `${B()}/exports`, 400, { kind: "log-pdf", params: { to: "0000-12-31" } })).body.error.fields).toHaveProperty("params.to");
     expect((await refused(owner, "POST", `${B()}/log`, 400, { date: "0000-01-01", hours: 1, title: "t" })).body.error.fields).toHaveProperty("date");
     const entry = (await owner.request("POST", `${B()}/log`, { date: "2024-01-01", hours: 1, title: "year zero" })).body.entry;
     await refused(owner, "PATCH", `${B()}/log/${entry.id}`, 400, { date: "0000-01-01" });
@@ -113,7 +114,7 @@ describe("NUL characters (Postgres text and jsonb cannot store U+0000)", () => {
 
   it("are a 4xx in query strings too", async () => {
     expect((await refused(owner, "GET", `${B()}/log?q=a%00b`, 400)).body.error.fields).toHaveProperty("q");
-    await refused(owner, "GET", `${B()}/log/pdf?q=a%00b`, 400);
+    await refused(owner, "GET", `${B()}/log/estimate?q=a%00b`, 400);
     await refused(owner, "GET", `${L()}/comments?subjectType=joint&subjectId=a%00b`, 404);
   });
 

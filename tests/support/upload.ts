@@ -10,14 +10,14 @@ export const S3 = {
   endpoint: process.env.LW_TEST_S3_ENDPOINT || `http://127.0.0.1:${process.env.LW_S3_PORT || 4570}`,
   bucket: "linkwright",
 };
-const s3 = new S3Client({ endpoint: S3.endpoint, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" } });
+export const s3Client = new S3Client({ endpoint: S3.endpoint, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" } });
 
 /** Every key in the bucket under a prefix (e.g. `builds/<id>/`). */
 export async function s3Keys(prefix = ""): Promise<string[]> {
   const keys: string[] = [];
   let token: string | undefined;
   do {
-    const r = await s3.send(new ListObjectsV2Command({ Bucket: S3.bucket, Prefix: prefix, ContinuationToken: token }));
+    const r = await s3Client.send(new ListObjectsV2Command({ Bucket: S3.bucket, Prefix: prefix, ContinuationToken: token }));
     for (const o of r.Contents ?? []) if (o.Key) keys.push(o.Key);
     token = r.IsTruncated ? r.NextContinuationToken : undefined;
   } while (token);
@@ -63,8 +63,13 @@ export async function fixtureFile(buildId: string, userId: string | null, o: { k
   const bytes = o.bytes ?? (await testImage("png", 64, 48));
   const key = `builds/${buildId}/files/${id}.png`;
   const thumbKey = `builds/${buildId}/thumbs/${id}.jpg`;
-  await s3.send(new PutObjectCommand({ Bucket: S3.bucket, Key: key, Body: bytes, ContentType: "image/png" }));
-  await s3.send(new PutObjectCommand({ Bucket: S3.bucket, Key: thumbKey, Body: bytes, ContentType: "image/jpeg" }));
+  await s3Client.send(new PutObjectCommand({ Bucket: S3.bucket, Key: key, Body: bytes, ContentType: "image/png" }));
+  await s3Client.send(new PutObjectCommand({ Bucket: S3.bucket, Key: thumbKey, Body: bytes, ContentType: "image/jpeg" }));
   await testDb("files").insert({ id, build_id: buildId, key, kind: o.kind ?? "photo", content_type: "image/png", size: bytes.length, name: "fixture.png", thumb_key: thumbKey, width: 64, height: 48, uploaded_by: userId });
   return id;
+}
+
+/** An object put straight into the S3 fake (fixtures). */
+export async function putTestObject(key: string, body: Buffer, contentType: string) {
+  await s3Client.send(new PutObjectCommand({ Bucket: S3.bucket, Key: key, Body: body, ContentType: contentType }));
 }

@@ -2,7 +2,7 @@
 import { randomUUID } from "node:crypto";
 import { demoPitchLinkage } from "@/shared/demo";
 import { testDb } from "../../support/db";
-import { fixtureFile, testImage, upload, uploadRaw } from "../../support/upload";
+import { fixtureFile, putTestObject, testImage, upload, uploadRaw } from "../../support/upload";
 import type { Client } from "../../support/http";
 import { edit, comment, read, signedIn, type BadInput, type Ctx, type Row } from "./types";
 
@@ -34,6 +34,17 @@ async function asOwnPart(client: Client, c: Ctx, method: string, body?: unknown)
   return client.request(method, `/api/parts/${id}`, body);
 }
 
+const read202 = { ...read, owner: 202, builder: 202, reviewer: 202, viewer: 202 };
+/** An export job of the build's owner, finished (with a stored CSV) or failed. */
+const exportJob = (status: "done" | "failed") => async (c: Ctx) => {
+  const key = `builds/${c.buildId}/exports/fixture-${randomUUID()}.csv`;
+  if (status === "done") await putTestObject(key, Buffer.from("kind,quantity\r\n"), "text/csv");
+  const [j] = await testDb("export_jobs").insert({
+    build_id: c.buildId, user_id: c.users.owner.id, kind: "hardware-csv", params: "{}", label: "Hardware list CSV", status,
+    ...(status === "done" ? { result_key: key, result_name: "hardware.csv", result_type: "text/csv", result_size: 15, progress: 1 } : { error: "fixture failure" }),
+  }).returning("id");
+  return { job: j.id as string };
+};
 // prettier-ignore
 export const rows: Record<string, Row> = {
   "GET /api/builds/[buildId]/files":                      { expect: read, path: (c) => `${B(c)}/files` },
@@ -57,7 +68,12 @@ export const rows: Record<string, Row> = {
   "GET /api/builds/[buildId]/log/[entryId]":              { expect: read, path: (c) => `${B(c)}/log/${c.x.entry}`, prepare: logEntry },
   "PATCH /api/builds/[buildId]/log/[entryId]":            { expect: edit(200), path: (c) => `${B(c)}/log/${c.x.entry}`, prepare: logEntry, body: () => ({ hours: 3 }) },
   "DELETE /api/builds/[buildId]/log/[entryId]":           { expect: edit(200), path: (c) => `${B(c)}/log/${c.x.entry}`, prepare: logEntry },
-  "GET /api/builds/[buildId]/log/pdf":                    { expect: read, path: (c) => `${B(c)}/log/pdf?from=2026-01-01&to=2026-12-31`, prepare: logEntry },
+  "GET /api/builds/[buildId]/activity":                   { expect: read, path: (c) => `${B(c)}/activity?limit=5` },
+  "GET /api/builds/[buildId]/log/estimate":               { expect: read, path: (c) => `${B(c)}/log/estimate?from=2026-01-01&to=2026-12-31`, prepare: logEntry },
+  "POST /api/builds/[buildId]/exports":                   { expect: read202, path: (c) => `${B(c)}/exports`, prepare: logEntry, body: () => ({ kind: "log-pdf", params: { from: "2026-01-01" } }) },
+  "GET /api/builds/[buildId]/exports/[jobId]":            { expect: read, path: (c) => `${B(c)}/exports/${c.x.job}`, prepare: exportJob("done") },
+  "POST /api/builds/[buildId]/exports/[jobId]/retry":     { expect: read202, path: (c) => `${B(c)}/exports/${c.x.job}/retry`, prepare: exportJob("failed") },
+  "GET /api/builds/[buildId]/exports/[jobId]/download":   { expect: read, path: (c) => `${B(c)}/exports/${c.x.job}/download`, prepare: exportJob("done") },
   "GET /api/parts":                                       { expect: signedIn(200), path: () => "/api/parts" },
   "POST /api/parts":                                      { expect: signedIn(201), path: () => "/api/parts", body: () => rodEnd() },
   "PUT /api/parts/[partId]":                              { expect: signedIn(200), path: () => "", prepare: personalParts, send: (cl, c) => asOwnPart(cl, c, "PUT", rodEnd()) },
@@ -72,10 +88,8 @@ export const rows: Record<string, Row> = {
   "GET /api/builds/[buildId]/parts/export":               { expect: read, path: (c) => `${B(c)}/parts/export` },
   "GET /api/builds/[buildId]/hardware":                   { expect: read, path: (c) => `${B(c)}/hardware`, prepare: demoGraph },
   "PUT /api/builds/[buildId]/hardware":                   { expect: edit(200), path: (c) => `${B(c)}/hardware`, prepare: demoGraph, body: () => ({ key: "jamNut|1/4-28|RH", state: "ordered" }) },
-  "GET /api/builds/[buildId]/hardware/export":            { expect: read, path: (c) => `${B(c)}/hardware/export`, prepare: demoGraph },
   "GET /api/builds/[buildId]/linkages/[linkageId]/checklist": { expect: read, path: (c) => `${L(c)}/checklist`, prepare: demoGraph },
   "PUT /api/builds/[buildId]/linkages/[linkageId]/checklist": { expect: comment(200), path: (c) => `${L(c)}/checklist`, prepare: demoGraph, body: () => ({ revision: 1, jointId: "j-stick-fwd", code: "jam-nut", ticked: true, note: "marked" }) },
-  "GET /api/builds/[buildId]/linkages/[linkageId]/checklist/pdf": { expect: read, path: (c) => `${L(c)}/checklist/pdf`, prepare: demoGraph },
 };
 
 async function logEntry(c: Ctx) {
@@ -102,5 +116,6 @@ export const badInput: BadInput = {
   "PUT /api/builds/[buildId]/parts/[partId]": { path: (c) => `${B(c)}/parts/${someId}`, bodies: [[{ ...rodEnd(), spec: "strong" }, "spec"]] },
   "POST /api/builds/[buildId]/parts/import": { path: (c) => `${B(c)}/parts/import`, bodies: [[{}, "csv"]] },
   "PUT /api/builds/[buildId]/hardware": { path: (c) => `${B(c)}/hardware`, bodies: [[{ key: "x", state: "lost" }, "state"], [{ state: "ordered" }, "key"]] },
+  "POST /api/builds/[buildId]/exports": { path: (c) => `${B(c)}/exports`, bodies: [[{ kind: "zip" }, "kind"], [{ kind: "log-pdf", params: { from: "soon" } }, "params.from"], [{ kind: "checklist-pdf", params: {} }, "params.linkageId"], [{ kind: "checklist-pdf", params: { linkageId: someId } }, "params.linkageId"], [{ kind: "hardware-csv", params: { extra: 1 } }, "params"]] },
   "PUT /api/builds/[buildId]/linkages/[linkageId]/checklist": { path: (c) => `${L(c)}/checklist`, bodies: [[{ revision: 1, code: "polish", ticked: true }, "code"], [{ revision: 1, code: "jam-nut" }, "ticked"]] },
 };

@@ -11,30 +11,10 @@ import { recentEntries } from "@/db/log";
 import Link from "next/link";
 import { reviewSummaryForBuild } from "@/db/signoffs";
 import { OverviewReview } from "@/components/review/OverviewReview";
+import { ACTION_TEXT } from "@/shared/activity";
 
 export const metadata: Metadata = { title: "Build overview" };
 
-const ACTION_TEXT: Record<string, string> = {
-  "build.create": "created the build",
-  "build.update": "changed the build details",
-  "linkage.create": "added a linkage",
-  "linkage.update": "renamed a linkage",
-  "linkage.delete": "deleted a linkage",
-  "member.add": "added a member",
-  "member.role": "changed a member's role",
-  "member.remove": "removed a member",
-  "invitation.create": "sent an invitation",
-  "invitation.accept": "joined through an invitation",
-  "demo.seed": "set up the demo build",
-  "comment.create": "commented on a linkage",
-  "comment.reply": "replied to a comment",
-  "comment.edit": "edited a comment",
-  "comment.resolve": "resolved a review thread",
-  "comment.reopen": "reopened a review thread",
-  "finding.acknowledge": "acknowledged a finding",
-  "finding.unacknowledge": "withdrew an acknowledgement",
-  "linkage.signoff": "signed off a linkage revision",
-};
 
 export default async function BuildOverview({ params }: { params: Promise<{ buildId: string }> }) {
   const { buildId } = await params;
@@ -91,7 +71,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
               ))}
             </ul>
           </Card>
-          <Card title="Recent activity">
+          <Card title="Recent activity" actions={<Link href={`/builds/${build.id}/activity`} className="text-xs text-advisory hover:underline">All activity</Link>}>
             {activity.length === 0 ? <p className="text-ink-soft">Nothing yet.</p> : (
               <ul className="space-y-2 text-xs">
                 {activity.map((a) => (

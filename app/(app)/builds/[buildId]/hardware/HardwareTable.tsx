@@ -1,5 +1,6 @@
 "use client";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { ExportButton } from "@/components/records/ExportButton";
 import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type ColumnFiltersState, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo, useState } from "react";
@@ -75,7 +76,7 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
           <h1 className="text-xl font-semibold">Hardware list</h1>
           <p className="text-ink-soft">Every part the joint cards call for, across the current revision of each linkage.</p>
         </div>
-        <a href={`/api/builds/${buildId}/hardware/export`} className="rounded border border-ink/20 bg-white px-3 py-1.5 text-sm font-medium hover:bg-ink/5">Export CSV</a>
+        <ExportButton buildId={buildId} kind="hardware-csv" params={{}} testId="hardware-csv">Export CSV</ExportButton>
       </div>
       {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
       {q.data.length === 0 ? (

@@ -1,6 +1,6 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { keepPreviousData, useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
 import { useMemo, useState } from "react";
 import type { z } from "zod";
@@ -11,6 +11,8 @@ import { logEntryInput, type LogEntry, type LogTotals } from "@/shared/schemas/l
 import { logKeys } from "@/components/query-keys";
 import { SYSTEMS } from "@/shared/linkage/schema";
 import type { StoredFile } from "@/shared/schemas/files";
+import { LoadMore, usePagedList } from "@/components/paged";
+import { ExportButton } from "@/components/records/ExportButton";
 
 type Entry = LogEntry;
 type Totals = LogTotals;
@@ -21,18 +23,15 @@ const SYSTEM_LABEL: Record<string, string> = { pitch: "Pitch", roll: "Roll", yaw
 const SERIES: Record<string, string> = { pitch: "#2e5aac", roll: "#1b7a4b", yaw: "#b54708", flap: "#7a4fa3", trim: "#0f7c8c", other: "#6b7280", unassigned: "#c7c2b8" };
 const hours = (h: number) => `${Number(h.toFixed(2))} h`;
 
-export function LogScreen(p: { buildId: string; canEdit: boolean; initial: { entries: Entry[]; totals: Totals }; linkages: { id: string; name: string; revision: number }[] }) {
+type FirstPage = { entries: Entry[]; total: number; nextCursor: string | null; totals: Totals };
+
+export function LogScreen(p: { buildId: string; canEdit: boolean; initial: FirstPage; linkages: { id: string; name: string; revision: number }[] }) {
   const base = `/api/builds/${p.buildId}/log`;
   const [filter, setFilter] = useState<Filter>({ system: "", from: "", to: "", q: "" });
   const qs = useMemo(() => new URLSearchParams(Object.entries(filter).filter(([, v]) => v)).toString(), [filter]);
   const isDefault = qs === "";
-  const log = useQuery({
-    queryKey: logKeys.list(p.buildId, qs),
-    queryFn: () => api<{ entries: Entry[]; totals: Totals }>(`${base}${qs ? `?${qs}` : ""}`),
-    initialData: isDefault ? p.initial : undefined,
-    placeholderData: keepPreviousData,
-  });
-  const data = log.data ?? p.initial;
+  const log = usePagedList<Entry, FirstPage>({ key: logKeys.list(p.buildId, qs), url: `${base}${qs ? `?${qs}` : ""}`, name: "entries", first: isDefault ? p.initial : undefined });
+  const data = { totals: log.first?.totals ?? p.initial.totals, entries: log.items };
   const [adding, setAdding] = useState(false);
 
   return (
@@ -43,9 +42,9 @@ export function LogScreen(p: { buildId: string; canEdit: boolean; initial: { ent
           <p className="text-ink-soft">The dated record of the work: hours, what was done, photos, and the linkage revision it concerns.</p>
         </div>
         <div className="flex gap-2">
-          <a className="rounded border border-ink/20 bg-white px-3 py-1.5 text-sm font-medium hover:bg-ink/5" href={`${base}/pdf${qs ? `?${qs}` : ""}`} target="_blank" rel="noreferrer" data-testid="log-pdf">
+          <ExportButton buildId={p.buildId} kind="log-pdf" params={Object.fromEntries(Object.entries(filter).filter(([, v]) => v))} estimateUrl={`${base}/estimate${qs ? `?${qs}` : ""}`} testId="log-pdf">
             PDF of {isDefault ? "the whole log" : "this selection"}
-          </a>
+          </ExportButton>
           {p.canEdit ? <Button onClick={() => setAdding((a) => !a)} aria-expanded={adding}>{adding ? "Close" : "New entry"}</Button> : null}
         </div>
       </div>
@@ -97,7 +96,10 @@ export function LogScreen(p: { buildId: string; canEdit: boolean; initial: { ent
         </Card>
       </div>
 
-      {data.entries.length === 0 ? (
+      <p className="text-sm text-ink-soft" data-testid="log-total">
+        {log.isPending ? "Loading…" : `${log.total.toLocaleString("en-US")} entr${log.total === 1 ? "y" : "ies"}${isDefault ? " in the log" : " match these filters"}, newest first.`}
+      </p>
+      {log.isPending ? null : data.entries.length === 0 ? (
         isDefault ? (
           <EmptyState title="The log is empty" action={p.canEdit ? <Button onClick={() => setAdding(true)}>Write the first entry</Button> : undefined}>
             Each session in the shop gets an entry: the date, the hours, what was done and for which control system, with photos.
@@ -105,9 +107,12 @@ export function LogScreen(p: { buildId: string; canEdit: boolean; initial: { ent
           </EmptyState>
         ) : <p className="text-ink-soft">No entry matches these filters.</p>
       ) : (
-        <ol className="space-y-3" aria-label="Log entries">
-          {data.entries.map((e) => <EntryCard key={e.id} e={e} buildId={p.buildId} canEdit={p.canEdit} />)}
-        </ol>
+        <>
+          <ol className="space-y-3" aria-label="Log entries">
+            {data.entries.map((e) => <EntryCard key={e.id} e={e} buildId={p.buildId} canEdit={p.canEdit} />)}
+          </ol>
+          <LoadMore shown={data.entries.length} total={log.total} noun="entries" hasMore={!!log.hasNextPage} loading={log.isFetchingNextPage} error={log.isFetchNextPageError ? log.error : null} onMore={() => void log.fetchNextPage()} />
+        </>
       )}
       <Caution />
     </div>

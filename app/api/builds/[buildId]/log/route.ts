@@ -1,13 +1,18 @@
 import { withBuild, parseBody, json } from "@/lib/http";
-import { createEntry, getEntry, hourTotals, listEntries } from "@/db/log";
+import { createEntry, getEntry, hourTotals, pageEntries, LOG_KEYS } from "@/db/log";
+import { pageBody, readPage } from "@/lib/paging";
 import { logEntryInput } from "@/shared/schemas/log";
 import { LOG_REF_ERRORS, readLogFilter } from "@/lib/log-filter";
 
-/** Entries (newest first) and hour totals by system and month, both over the same filter. */
+/**
+ * A page of entries (newest first; `?cursor=&limit=`), how many match in all, and — with the first
+ * page — hour totals by system and month over every matching entry.
+ */
 export const GET = withBuild("read", async ({ req, build }) => {
   const f = readLogFilter(req);
-  const [entries, totals] = await Promise.all([listEntries(build.id, f), hourTotals(build.id, f)]);
-  return json({ entries, totals });
+  const page = readPage(req, LOG_KEYS);
+  const [p, totals] = await Promise.all([pageEntries(build.id, f, page), page.after ? null : hourTotals(build.id, f)]);
+  return json({ ...pageBody("entries", p, p.total), ...(totals ? { totals } : {}) });
 });
 
 export const POST = withBuild("edit", async ({ req, user, build }) => {

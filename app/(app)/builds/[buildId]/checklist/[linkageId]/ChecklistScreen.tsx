@@ -6,6 +6,7 @@ import { useEffect, useState } from "react";
 import { api } from "@/components/api-client";
 import { Button, Caution } from "@/components/ui";
 import { JointPhotos } from "@/components/records/JointPhotos";
+import { ExportButton } from "@/components/records/ExportButton";
 
 import { checklistKeys } from "@/components/query-keys";
 import type { checklistResponse, ChecklistItemView as Item } from "@/shared/schemas/checklist";
@@ -53,7 +54,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
         </div>
         <div className="no-print flex gap-2">
           <Button tone="secondary" onClick={() => window.print()}>Print</Button>
-          <a className="rounded bg-ink px-3 py-1.5 text-sm font-medium text-white hover:bg-ink/90" href={`${url}/pdf?revision=${d.revision}`} target="_blank" rel="noreferrer">PDF</a>
+          <ExportButton buildId={p.buildId} kind="checklist-pdf" params={{ linkageId: p.linkageId, revision: d.revision }} testId="checklist-pdf">PDF</ExportButton>
         </div>
       </div>
       {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}

@@ -2,20 +2,24 @@ import { withLinkage, parseBody, parseParams, json } from "@/lib/http";
 import { fieldError } from "@/lib/errors";
 import { commentCreate, COMMENT_EDIT_MINUTES } from "@/shared/schemas/comments";
 import { subjectSchema } from "@/shared/schemas/common";
-import { createComment, getComment, linkageAudience, listComments, unresolvedCounts } from "@/db/comments";
+import { createComment, getComment, linkageAudience, pageThreads, THREAD_KEYS, unresolvedCounts } from "@/db/comments";
 import type { Comment } from "@/shared/schemas/comments";
+import { pageBody, readPage } from "@/lib/paging";
 import { subjectExists } from "@/lib/review";
 import { subjectPhrase } from "@/shared/linkage/names";
 import { notifyComment } from "@/lib/review-mail";
 
 const withWindow = (c: Comment) => ({ ...c, editableUntil: new Date(Date.parse(c.createdAt) + COMMENT_EDIT_MINUTES * 60_000).toISOString() });
 
-/** Every comment of the linkage (or of one subject: `?subjectType=joint&subjectId=j1`), oldest first, and open-thread counts. */
+/**
+ * A page of the linkage's threads (or one subject's: `?subjectType=joint&subjectId=j1`), newest first
+ * (`?cursor=&limit=`), each with its replies; `total` threads in all; open-thread counts per subject.
+ */
 export const GET = withLinkage("read", async ({ req, linkage }) => {
   const sp = req.nextUrl.searchParams;
   const subject = sp.has("subjectType") ? parseParams({ type: sp.get("subjectType"), id: sp.get("subjectId") }, subjectSchema) : undefined;
-  const [comments, unresolved] = await Promise.all([listComments(linkage.id, subject), unresolvedCounts(linkage.id)]);
-  return json({ comments: comments.map(withWindow), unresolved, editMinutes: COMMENT_EDIT_MINUTES });
+  const [p, unresolved] = await Promise.all([pageThreads(linkage.id, subject, readPage(req, THREAD_KEYS)), unresolvedCounts(linkage.id)]);
+  return json({ ...pageBody("comments", { items: p.items.map(withWindow), next: p.next }, p.total), unresolved, editMinutes: COMMENT_EDIT_MINUTES });
 });
 
 /** A new thread on a node, a joint or the linkage, or a reply (`parentId`) in an existing thread. */

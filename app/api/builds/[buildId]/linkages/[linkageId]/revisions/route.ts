@@ -1,7 +1,9 @@
 import { withLinkage, json } from "@/lib/http";
-import { listRevisions } from "@/db/linkages";
+import { pageRevisions, REVISION_KEYS } from "@/db/linkages";
+import { pageBody, readPage } from "@/lib/paging";
 
-/** The revision history, newest first: number, author, time and the counts of findings. */
-export const GET = withLinkage("read", async ({ linkage }) =>
-  json({ currentRevision: linkage.revision, revisions: await listRevisions(linkage.id) }),
-);
+/** A page of the revision history, newest first (`?cursor=&limit=`): number, author, time and the counts of findings; and the total. */
+export const GET = withLinkage("read", async ({ req, linkage }) => {
+  const p = await pageRevisions(linkage.id, readPage(req, REVISION_KEYS));
+  return json({ currentRevision: linkage.revision, ...pageBody("revisions", p, p.total) });
+});

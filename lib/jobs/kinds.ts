@@ -1,0 +1,90 @@
+import "server-only";
+import type { z } from "zod";
+import { fieldError } from "@/lib/errors";
+import type { Build } from "@/db/builds";
+import { getLinkage, getRevision } from "@/db/linkages";
+import { LARGE_EXPORT_BYTES, PDF_BYTES_PER_ENTRY, PDF_BYTES_PER_REVISION_PICTURE, exportParams, slug, type ExportKind } from "@/shared/schemas/exports";
+
+/** A failure whose message is for the person who asked (shown on the page and in the e-mail as it is). */
+export class ExportFailure extends Error {}
+
+export type RunContext<P> = {
+  build: Build;
+  params: P;
+  /** Fraction done (0–1) and a short note ("1,200 of 5,003 entries"). */
+  progress: (fraction: number, note: string) => Promise<void>;
+};
+export type ExportResult = { body: Buffer; contentType: string; filename: string };
+
+type Kind<K extends ExportKind> = {
+  /**
+   * On the request: checks what the parameters name against the build (a 4xx if not), and returns
+   * the job's label and estimated size. Cheap: no export work here.
+   */
+  prepare: (build: Build, params: z.infer<(typeof exportParams)[K]>) => Promise<{ label: string; estimatedBytes: number | null }>;
+  /** In the worker process: makes the file. */
+  run: (ctx: RunContext<z.infer<(typeof exportParams)[K]>>) => Promise<ExportResult>;
+};
+
+const filterLabel = (f: { system?: string; from?: string; to?: string; q?: string }) =>
+  [f.from || f.to ? `${f.from ?? "start"} to ${f.to ?? "today"}` : "all entries", f.system, f.q ? `"${f.q}"` : ""].filter(Boolean).join(", ");
+
+/** A log PDF's size before it is made (see shared/exports.ts for the per-item figures). */
+export async function estimateLogPdf(buildId: string, f: z.infer<(typeof exportParams)["log-pdf"]>) {
+  const { logSize } = await import("@/db/log");
+  const s = await logSize(buildId, f);
+  const bytes = 40_000 + s.entries * PDF_BYTES_PER_ENTRY + s.photoBytes + s.revisions * PDF_BYTES_PER_REVISION_PICTURE; // 40 kB: the embedded font subsets and first page
+  return { ...s, estimatedBytes: bytes, large: bytes > LARGE_EXPORT_BYTES };
+}
+
+export const KINDS: { [K in ExportKind]: Kind<K> } = {
+  "log-pdf": {
+    async prepare(build, f) {
+      const e = await estimateLogPdf(build.id, f);
+      return { label: `Build log PDF — ${filterLabel(f)} (${e.entries} entr${e.entries === 1 ? "y" : "ies"})`, estimatedBytes: e.estimatedBytes };
+    },
+    async run({ build, params: f, progress }) {
+      const [{ eachEntry, hourTotals, logSize }, { logPdf }] = await Promise.all([import("@/db/log"), import("@/lib/records-pdf")]);
+      const [size, totals] = await Promise.all([logSize(build.id, f), hourTotals(build.id, f)]);
+      await progress(0, `0 of ${size.entries.toLocaleString("en-US")} entries`);
+      const bytes = await logPdf(build, eachEntry(build.id, f), size.entries, totals, f, (done, total) =>
+        progress(total ? 0.9 * (done / total) : 0.9, `${done.toLocaleString("en-US")} of ${total.toLocaleString("en-US")} entries laid out`));
+      await progress(0.95, "Saving the file");
+      return { body: Buffer.from(bytes), contentType: "application/pdf", filename: `${slug(build.name)}-log${f.from ? `-${f.from}` : ""}${f.to ? `-to-${f.to}` : ""}.pdf` };
+    },
+  },
+  "checklist-pdf": {
+    async prepare(build, p) {
+      const linkage = await getLinkage(build.id, p.linkageId);
+      if (!linkage) throw fieldError("params.linkageId", "not a linkage of this build", "That linkage is not in this build.");
+      if (p.revision && !(await getRevision(linkage.id, p.revision))) throw fieldError("params.revision", "no such revision", "That linkage has no such revision.");
+      return { label: `Checklist PDF — ${linkage.name}, revision ${p.revision ?? linkage.revision}`, estimatedBytes: null };
+    },
+    async run({ build, params: p, progress }) {
+      const [{ listTicks }, { checklistFor }, { checklistPdf }] = await Promise.all([import("@/db/checklist"), import("@/shared/records/checklist"), import("@/lib/records-pdf")]);
+      const linkage = await getLinkage(build.id, p.linkageId);
+      if (!linkage) throw new ExportFailure("The linkage was deleted before its checklist could be printed.");
+      const rev = await getRevision(linkage.id, p.revision);
+      if (!rev) throw new ExportFailure(`Revision ${p.revision} of ${linkage.name} no longer exists.`);
+      await progress(0.2, "Reading the ticks");
+      const bytes = await checklistPdf(build, linkage, rev.revision, checklistFor(rev.graph), await listTicks(linkage.id, rev.revision));
+      return { body: Buffer.from(bytes), contentType: "application/pdf", filename: `${slug(build.name)}-${slug(linkage.name)}-rev${rev.revision}-checklist.pdf` };
+    },
+  },
+  "hardware-csv": {
+    async prepare() {
+      return { label: "Hardware list CSV", estimatedBytes: null };
+    },
+    async run({ build, progress }) {
+      const [{ default: Papa }, { buildHardware }, { HARDWARE_STATE_LABEL }] = await Promise.all([import("papaparse"), import("@/db/hardware"), import("@/shared/records/hardware")]);
+      await progress(0.2, "Collecting the hardware of every linkage");
+      const lines = await buildHardware(build.id);
+      const csv = Papa.unparse({
+        fields: ["kind", "description", "partNumber", "quantity", "state", "usedIn"],
+        data: lines.map((l) => [l.kind, l.description, l.partNumber ?? "", l.quantity, HARDWARE_STATE_LABEL[l.state], l.usedIn.map((u) => `${u.linkageName}: ${u.where}`).join(" | ")]),
+      }, { newline: "\r\n", escapeFormulae: true }); // no cell runs as a spreadsheet formula
+      return { body: Buffer.from(csv + "\r\n", "utf8"), contentType: "text/csv; charset=utf-8", filename: `${slug(build.name)}-hardware.csv` };
+    },
+  },
+};
+

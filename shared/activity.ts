@@ -1,0 +1,22 @@
+/** How the activity list words each recorded action (db/audit.ts). */
+export const ACTION_TEXT: Record<string, string> = {
+  "build.create": "created the build",
+  "build.update": "changed the build details",
+  "linkage.create": "added a linkage",
+  "linkage.update": "renamed a linkage",
+  "linkage.delete": "deleted a linkage",
+  "member.add": "added a member",
+  "member.role": "changed a member's role",
+  "member.remove": "removed a member",
+  "invitation.create": "sent an invitation",
+  "invitation.accept": "joined through an invitation",
+  "demo.seed": "set up the demo build",
+  "comment.create": "commented on a linkage",
+  "comment.reply": "replied to a comment",
+  "comment.edit": "edited a comment",
+  "comment.resolve": "resolved a review thread",
+  "comment.reopen": "reopened a review thread",
+  "finding.acknowledge": "acknowledged a finding",
+  "finding.unacknowledge": "withdrew an acknowledgement",
+  "linkage.signoff": "signed off a linkage revision",
+};
