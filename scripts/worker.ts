@@ -9,6 +9,8 @@ async function main() {
   const quit = async () => {
     if (stopping) return;
     stopping = true;
+    // A job mid-way is left to the recovery of the next worker; never outlive the app by more than a moment.
+    setTimeout(() => process.exit(0), 12_000).unref();
     await stop().catch(() => {});
     process.exit(0);
   };

@@ -90,7 +90,13 @@ beforeAll(async () => {
   }
   const entry = await owner.request("POST", `${B}/log`, { date: "2026-11-20", hours: 2.5, title: "Fitted the aft pushrod", text: "Jam nut torqued, witness hole checked.", systems: ["pitch"], fileIds: photos });
   expect(entry.status, JSON.stringify(entry.body)).toBe(201);
-});
+  // Exports that earlier test files started change their rows as the worker runs them: let it finish,
+  // so the source compared after the backup is the source that was backed up.
+  for (const until = Date.now() + 300_000; Date.now() < until; await new Promise((r) => setTimeout(r, 500))) {
+    const [{ n }] = await testDb("export_jobs").whereIn("status", ["queued", "running"]).count<{ n: string }[]>("* as n");
+    if (Number(n) === 0) break;
+  }
+}, 360_000);
 
 afterAll(async () => {
   await target?.destroy();

@@ -6,7 +6,8 @@
  * build's, the full-log PDF's time, and other requests' p95 while it runs — each beside its target:
  * every page within 2× the demo build and under 300 KB for its first screen; the full-log PDF under
  * 30 s; other requests' p95 under 100 ms during the export. A miss sets exit code 1.
- * Knobs: LW_SKIP_BUILD=1 reuses the build (LW_BENCH_DIST, default .next-bench); LW_BENCH_KEEP=1 leaves the server up to look at.
+ * Knobs: LW_SKIP_BUILD=1 reuses the build (LW_BENCH_DIST, default .next-bench); LW_BENCH_REUSE=1 reuses the last seeded
+ * database and bucket; LW_BENCH_KEEP=1 leaves the server up to look at. Not while `npm test` runs: it restarts the test cluster.
  */
 import { spawn, spawnSync } from "node:child_process";
 import { rmSync } from "node:fs";
@@ -81,9 +82,12 @@ async function measure(cookie: string, urls: string[]) {
 
 export async function run() {
   console.log(`Throwaway database ${DB} on the test cluster (port ${TEST_PG_PORT}); app on ${APP}`);
-  sh(["--import", "tsx", "scripts/reset-db.ts", DB]);
-  sh(["--import", "tsx", "scripts/migrate.ts", "--seed"], { DATABASE_URL: DB_URL });
-  rmSync(path.join(ROOT, ".data/s3-bench"), { recursive: true, force: true });
+  const reuse = process.env.LW_BENCH_REUSE === "1";
+  if (!reuse) {
+    sh(["--import", "tsx", "scripts/reset-db.ts", DB]);
+    sh(["--import", "tsx", "scripts/migrate.ts", "--seed"], { DATABASE_URL: DB_URL });
+    rmSync(path.join(ROOT, ".data/s3-bench"), { recursive: true, force: true });
+  }
   const { startLocalServices } = await import("../../scripts/services.mjs");
   const env: Record<string, string> = { ...(process.env as Record<string, string>), LW_SERVICES_MODE: "bench", DATABASE_URL: DB_URL, NEXT_DIST_DIR: DIST, NEXTAUTH_SECRET: "bench-secret-not-for-production", NEXTAUTH_URL: APP, NEXT_TELEMETRY_DISABLED: "1" };
   const services = await startLocalServices(env);
@@ -93,16 +97,23 @@ export async function run() {
   const owner = await db("users").whereRaw("lower(email) = lower(?)", [dana.email]).first("id");
   const demo = await db("builds").where({ name: DEMO_BUILD.name }).first("id");
   const demoLinkage = await db("linkages").where({ build_id: demo.id }).first("id");
-  const [long] = await db("builds").insert({ name: "Ten-year build (bench)", model: "invented two-seater", created_by: owner.id }).returning("id");
-  await db("memberships").insert({ build_id: long.id, user_id: owner.id, role: "owner" });
-  const [rev] = await db("users").insert({ email: "bench-reviewer@bench.linkwright.test", name: "Bench Reviewer", password_hash: await bcrypt.hash("not-used", 4) }).returning("id");
-  await db("memberships").insert({ build_id: long.id, user_id: rev.id, role: "reviewer" });
-  const s3 = new S3Client({ endpoint: env.S3_ENDPOINT, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" } });
   let t0 = performance.now();
-  const seeded = await seedLongBuild(db, { client: s3, bucket: env.S3_BUCKET }, { buildId: long.id, ownerId: owner.id, reviewerId: rev.id, size: BENCH_SIZE, log: (s) => console.log(`  seeding: ${s}`) });
-  await db.raw("analyze");
-  const seedS = (performance.now() - t0) / 1000;
-  console.log(`Seeded in ${seedS.toFixed(0)} s`);
+  const existing = reuse ? await db("builds").where({ name: "Ten-year build (bench)" }).first("id") : null;
+  let long: { id: string }, seeded: { linkageIds: string[] };
+  if (existing) {
+    long = existing;
+    seeded = { linkageIds: (await db("linkages").where({ build_id: long.id }).orderBy("name").select("id")).map((l: { id: string }) => l.id) };
+    console.log("Reusing the seeded long build (LW_BENCH_REUSE=1)");
+  } else {
+    [long] = await db("builds").insert({ name: "Ten-year build (bench)", model: "invented two-seater", created_by: owner.id }).returning("id");
+    await db("memberships").insert({ build_id: long.id, user_id: owner.id, role: "owner" });
+    const [rev] = await db("users").insert({ email: "bench-reviewer@bench.linkwright.test", name: "Bench Reviewer", password_hash: await bcrypt.hash("not-used", 4) }).returning("id");
+    await db("memberships").insert({ build_id: long.id, user_id: rev.id, role: "reviewer" });
+    const s3 = new S3Client({ endpoint: env.S3_ENDPOINT, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" } });
+    seeded = await seedLongBuild(db, { client: s3, bucket: env.S3_BUCKET }, { buildId: long.id, ownerId: owner.id, reviewerId: rev.id, size: BENCH_SIZE, log: (s) => console.log(`  seeding: ${s}`) });
+    await db.raw("analyze");
+    console.log(`Seeded in ${((performance.now() - t0) / 1000).toFixed(0)} s`);
+  }
 
   if (process.env.LW_SKIP_BUILD !== "1") sh(["node_modules/next/dist/bin/next", "build"], { ...env, NODE_ENV: "production" });
   const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { cwd: ROOT, env: { ...env, NODE_ENV: "production" }, stdio: ["ignore", "inherit", "inherit"] });
