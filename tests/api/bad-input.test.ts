@@ -37,6 +37,7 @@ const CASES: BadInput = {
 const NO_BODY = new Set([
   "POST /api/auth/[...nextauth]", // next-auth's own
   "POST /api/invitations/[token]", // no body
+  "POST /api/builds/[buildId]/exports/[jobId]/retry", // no body: retries the job the path names
   "PATCH /api/admin/users/[userId]", // tests/api/admin.test.ts (needs a site admin)
 ]);
 
