@@ -11,12 +11,13 @@ import { signIn, type Client } from "../support/http";
 import { TEST_DB_URL } from "../support/env";
 import { exportFile, waitForJob } from "../support/exports";
 import { mailTo } from "../support/review";
-import { s3Client, S3 } from "../support/upload";
+import { deleteTestObjects, s3Client, S3 } from "../support/upload";
 import { seedLongBuild } from "../support/long-build";
 
 let owner: Client, viewer: Client;
 let ownerEmail: string, ownerId: string, buildId: string;
 let boss: PgBoss;
+let keys: string[] = [];
 const B = () => `/api/builds/${buildId}`;
 
 beforeAll(async () => {
@@ -24,14 +25,14 @@ beforeAll(async () => {
   ownerEmail = o.email;
   ownerId = o.id;
   ({ buildId } = await makeBuild({ owner: o, viewer: v }));
-  await seedLongBuild(testDb, { client: s3Client, bucket: S3.bucket }, { buildId, ownerId, size: { entries: 200, years: 2, photosPerEntry: 2, linkages: 1, revisions: 3, comments: 0, signoffs: 0, parts: 0 } });
+  keys = (await seedLongBuild(testDb, { client: s3Client, bucket: S3.bucket }, { buildId, ownerId, size: { entries: 200, years: 2, photosPerEntry: 2, linkages: 1, revisions: 3, comments: 0, signoffs: 0, parts: 0 } })).objectKeys;
   [owner, viewer] = await Promise.all([signIn(o.email), signIn(v.email)]);
   boss = new PgBoss({ connectionString: TEST_DB_URL, schema: "pgboss", supervise: false, schedule: false, max: 1 });
   await boss.start();
 });
 // A loaded machine gives the worker (at a lower priority than the app) little time: generous limits.
 vi.setConfig({ testTimeout: 300_000 });
-afterAll(async () => { await boss?.stop({ graceful: false, wait: true }); await testDb.destroy(); });
+afterAll(async () => { await boss?.stop({ graceful: false, wait: true }); await deleteTestObjects(keys); await testDb.destroy(); });
 
 /** A job row written straight to the database and put in the queue through pg-boss (as another app instance would). */
 async function queueDirect(row: Record<string, unknown>) {

@@ -10,7 +10,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { APP_URL, ARTIFACTS, launchBrowser, signInPage } from "../support/browser";
 import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
-import { s3Client, S3 } from "../support/upload";
+import { deleteTestObjects, s3Client, S3 } from "../support/upload";
 import { seedLongBuild } from "../support/long-build";
 
 const N = 600;
@@ -20,17 +20,18 @@ let browser: Browser;
 let page: Page;
 let buildId: string;
 const errors: string[] = [];
+let keys: string[] = [];
 
 beforeAll(async () => {
   browser = await launchBrowser();
   const owner = await makeUser("e2e-long");
   ({ buildId } = await makeBuild({ owner }));
-  await seedLongBuild(testDb, { client: s3Client, bucket: S3.bucket }, { buildId, ownerId: owner.id, size: { entries: N, years: 3, photosPerEntry: 1, linkages: 2, revisions: 4, comments: 0, signoffs: 0, parts: 0 } });
+  keys = (await seedLongBuild(testDb, { client: s3Client, bucket: S3.bucket }, { buildId, ownerId: owner.id, size: { entries: N, years: 3, photosPerEntry: 1, linkages: 2, revisions: 4, comments: 0, signoffs: 0, parts: 0 } })).objectKeys;
   page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
   page.on("pageerror", (e) => errors.push(String(e)));
   await signInPage(page, owner.email, TEST_PASSWORD);
 }, 300_000);
-afterAll(async () => { await browser?.close(); await testDb.destroy(); });
+afterAll(async () => { await browser?.close(); await deleteTestObjects(keys); await testDb.destroy(); });
 
 /** Scrolls to the end of the list until every item is shown (the sentinel loads the next page as it comes into view). */
 async function scrollToEnd(noun: string) {

@@ -104,5 +104,5 @@ export async function seedLongBuild(db: Knex, s3: { client: S3Client; bucket: st
     spec: JSON.stringify({ thread: "1/4-28", hand: i % 2 ? "LH" : "RH", shank: "male", ballBore: 0.25, ballDiameter: 0.5, housingBore: 0.5, ratedUltimate: 3000 + (i % 50) * 20, ratedMisalignment: 10, hasWitnessHole: true }),
   }));
   await inBatches(parts, 1000, (b) => db("parts").insert(b));
-  return { linkageIds: linkages.map((l) => l.id), entryIds: entries.map((e) => e.id) };
+  return { linkageIds: linkages.map((l) => l.id), entryIds: entries.map((e) => e.id), objectKeys: objects.map((x) => x.key) };
 }

@@ -1,6 +1,6 @@
 /** Multipart uploads from tests, test images made with sharp, and a look into the local S3 fake. */
 import { randomUUID } from "node:crypto";
-import { S3Client, ListObjectsV2Command, PutObjectCommand } from "@aws-sdk/client-s3";
+import { S3Client, DeleteObjectCommand, ListObjectsV2Command, PutObjectCommand } from "@aws-sdk/client-s3";
 import { APP_URL } from "./env";
 import type { Client } from "./http";
 import { testDb } from "./db";
@@ -67,6 +67,14 @@ export async function fixtureFile(buildId: string, userId: string | null, o: { k
   await s3Client.send(new PutObjectCommand({ Bucket: S3.bucket, Key: thumbKey, Body: bytes, ContentType: "image/jpeg" }));
   await testDb("files").insert({ id, build_id: buildId, key, kind: o.kind ?? "photo", content_type: "image/png", size: bytes.length, name: "fixture.png", thumb_key: thumbKey, width: 64, height: 48, uploaded_by: userId });
   return id;
+}
+
+/** Deletes objects from the S3 fake (a test's bulk fixtures: the fake's listing fails past 1,000 keys). */
+export async function deleteTestObjects(keys: string[]) {
+  let next = 0;
+  await Promise.all(Array.from({ length: 16 }, async () => {
+    while (next < keys.length) await s3Client.send(new DeleteObjectCommand({ Bucket: S3.bucket, Key: keys[next++] })).catch(() => {});
+  }));
 }
 
 /** An object put straight into the S3 fake (fixtures). */
