@@ -132,7 +132,8 @@ async function main() {
       const script = await pgTool("pg_restore", ["--no-owner", "--no-privileges", `--file=${sql}`, path.join(work, m.database.file)]);
       if (script.code !== 0) throw new Error(`pg_restore failed: ${script.stderr.trim()}`);
       const before = path.join(work, "before.sql");
-      writeFileSync(before, replace ? "drop schema if exists public cascade;\ncreate schema public;\n" : "");
+      // The export queue (pg-boss) keeps its tables in a schema of its own: replaced with the rest.
+      writeFileSync(before, replace ? "drop schema if exists public cascade;\ndrop schema if exists pgboss cascade;\ncreate schema public;\n" : "");
       const after = path.join(work, "after.sql");
       writeFileSync(
         after,
