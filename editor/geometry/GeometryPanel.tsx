@@ -17,6 +17,7 @@ import { inputWord, rodLinks, turningParts } from "./model";
 import { ToScale } from "./ToScale";
 import { NumField } from "./fields";
 import MotionCharts from "./MotionCharts";
+import { StopsPicture } from "./StopsPicture";
 
 const PAGE = 25;
 
@@ -149,6 +150,7 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
             {worstAt !== null && <> · worst angle at {inputWord(worstAt)} (red mark)</>}
           </p>
           <MotionCharts sw={sw} at={sw.theta[k]} stops={[sw.theta[ends.eb], sw.theta[ends.ef]]} />
+          <StopsPicture geo={geo} parts={parts} rods={rods} nodes={nodes} sw={sw} steps={[ends.eb, sw.neutral, ends.ef]} title={api.getState().meta.name} />
         </div>
       ) : null}
 

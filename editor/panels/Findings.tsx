@@ -119,8 +119,9 @@ export function designForceFor(system: ControlSystem, settings: AnalysisSettings
 
 export function SummaryStrip({ system, settings }: { system: ControlSystem; settings: AnalysisSettings }) {
   const { unitSystem } = useEditorConfig();
-  const { summary, where } = useEditorStore((s) => ({
+  const { summary, where, motion } = useEditorStore((s) => ({
     summary: s.report?.summary ?? null,
+    motion: !s.report?.motion ? null : s.report.motion.checked ? "checked" : "not checked",
     where: s.report?.summary.lowestMargin ? subjectName(s, s.report.summary.lowestMargin.subject) : "",
   }));
   const focus = useFocusSubject();
@@ -146,6 +147,12 @@ export function SummaryStrip({ system, settings }: { system: ControlSystem; sett
           </span>
         ))}
       </span>
+      {motion && (
+        <span data-testid="motion-status" title={motion === "checked" ? "The run is swept through its travel (Geometry)" : "Enter the pivots and arm angles in Geometry to sweep the run through its travel"}
+          className={motion === "checked" ? "text-ink" : "text-caution"}>
+          Motion {motion}
+        </span>
+      )}
       <span title="The build's design settings (change them on the build overview)">
         Design force ({df.label}) <b className="text-ink">{fmt(df.value, "force", unitSystem)}</b> · ultimate ×{settings.ultimateFactor} · fitting ×{settings.fittingFactor} · bearing ×
         {settings.bearingFactor}

@@ -8,6 +8,7 @@ import type { Browser, Page } from "playwright-core";
 import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
 import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
 import { demoPitchLinkage } from "@/shared/demo";
+import { readFile } from "node:fs/promises";
 
 let browser: Browser;
 let page: Page;
@@ -22,10 +23,17 @@ beforeAll(async () => {
   await testDb("linkage_revisions").where({ linkage_id: linkageId, revision: 1 }).update({ graph: JSON.stringify({ ...demoPitchLinkage(), name: "Pitch run" }) });
   page = await browser.newPage({ viewport: { width: 1600, height: 1000 } });
   page.on("pageerror", (e) => errors.push(String(e)));
+  page.on("response", async (r) => {
+    if (!/\.js(\?|$)/.test(r.url())) return;
+    const body = await r.text().catch(() => "");
+    if (body.includes("recharts-cartesian-grid")) chartScripts.push(r.url());
+  });
   await signInPage(page, owner.email, TEST_PASSWORD);
 });
 afterAll(async () => { await browser?.close(); await testDb.destroy(); });
 
+/** Bodies of the scripts the page has loaded so far that carry the chart library (its class-name prefix). */
+const chartScripts: string[] = [];
 const transmissionFindings = () => page.locator('[data-testid=finding][data-code="motion-transmission-angle"]').count();
 
 describe("geometry and motion", () => {
@@ -37,6 +45,9 @@ describe("geometry and motion", () => {
     await page.getByLabel(/Forward travel/).fill("5");
     await page.getByLabel(/Aft travel/).fill("5");
 
+    expect(await page.getByTestId("motion-status").textContent()).toBe("Motion not checked");
+    await page.waitForTimeout(500);
+    expect(chartScripts).toEqual([]); // the editor's first load does not carry the chart library
     await page.getByTestId("btn-geometry").click();
     await page.getByTestId("geometry-empty").waitFor();
     await page.getByTestId("geometry-start-empty").click();
@@ -55,7 +66,14 @@ describe("geometry and motion", () => {
     expect(await page.getByTestId("worst-mark").count()).toBe(1);
     await expect.poll(() => page.getByTestId("worst-loads").textContent()).toMatch(/Forward pushrod/);
     expect(await transmissionFindings()).toBe(0);
+    expect(chartScripts.length).toBeGreaterThan(0); // loaded with the geometry view
+    await expect.poll(() => page.getByTestId("motion-status").textContent()).toBe("Motion checked");
     await shot(page, "geometry-01-entered");
+    // The picture: the run at the back stop, neutral and the forward stop, 3 × 360 px drawn at 2×.
+    const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("geometry-picture").click()]);
+    const png = await readFile((await download.path())!);
+    expect(png.subarray(1, 4).toString()).toBe("PNG");
+    expect(png.readUInt32BE(16)).toBe(2160); // width from the IHDR chunk
 
     // The slider moves the drawing: the forward rod's end moves when the stick is at its forward stop.
     const rodX = () => page.locator("[data-testid=geometry-rod] line").first().getAttribute("x1");
