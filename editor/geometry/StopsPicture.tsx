@@ -59,7 +59,7 @@ ${svgs.map((s, i) => `<g transform="translate(${i * W},18)"><svg width="${W}" he
       </button>
       <div ref={box} aria-hidden="true" className="pointer-events-none fixed -left-[4000px] top-0 w-[360px]">
         {props.steps.map((k) => (
-          <ToScale key={k} geo={props.geo} parts={props.parts} rods={props.rods} rot={rotAt(k)} readOnly onMovePivot={() => {}} />
+          <ToScale key={k} geo={props.geo} parts={props.parts} rods={props.rods} rot={rotAt(k)} readOnly offscreen onMovePivot={() => {}} />
         ))}
       </div>
     </>

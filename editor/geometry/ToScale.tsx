@@ -16,12 +16,15 @@ type Props = {
   rot: Record<string, number>;
   readOnly: boolean;
   onMovePivot: (id: string, x: number, y: number) => void;
+  /** Drawn off screen for the picture: no test ids, nothing to focus. */
+  offscreen?: boolean;
 };
 
 const W = 360, H = 220, PAD = 18;
 const round = (v: number) => Math.round(v * 20) / 20; // 0.05 in
 
-export function ToScale({ geo, parts, rods, rot, readOnly, onMovePivot }: Props) {
+export function ToScale({ geo, parts, rods, rot, readOnly, onMovePivot, offscreen }: Props) {
+  const tid = (id: string) => (offscreen ? undefined : id);
   const byId = useMemo(() => new Map(parts.map((p) => [p.id, p])), [parts]);
   const placed = parts.filter((p) => geo.parts[p.id]);
   // The frame: every pivot and every arm end at neutral, so the view does not jump while playing.
@@ -56,7 +59,7 @@ export function ToScale({ geo, parts, rods, rot, readOnly, onMovePivot }: Props)
   for (let y = Math.ceil(frame.y0 / step) * step; Y(y) >= 0; y += step) gy.push(y);
 
   return (
-    <svg ref={svgRef} viewBox={`0 0 ${W} ${H}`} className="h-auto w-full shrink-0 touch-none select-none rounded border border-ink/10 bg-white" data-testid="geometry-view"
+    <svg ref={svgRef} viewBox={`0 0 ${W} ${H}`} className="h-auto w-full shrink-0 touch-none select-none rounded border border-ink/10 bg-white" data-testid={tid("geometry-view")}
       role="img" aria-label="The run to scale"
       onPointerMove={(e) => { if (drag.current) { const p = toInches(e); onMovePivot(drag.current, p.x, p.y); } }}
       onPointerUp={() => { drag.current = null; }} onPointerLeave={() => { drag.current = null; }}>
@@ -69,7 +72,7 @@ export function ToScale({ geo, parts, rods, rot, readOnly, onMovePivot }: Props)
         if (!a || !b) return null;
         const len = Math.hypot(b.x - a.x, b.y - a.y);
         return (
-          <g key={r.id} data-testid="geometry-rod">
+          <g key={r.id} data-testid={tid("geometry-rod")}>
             <line x1={X(a.x)} y1={Y(a.y)} x2={X(b.x)} y2={Y(b.y)} stroke="#1e293b" strokeWidth={2.5} strokeLinecap="round" />
             <text x={(X(a.x) + X(b.x)) / 2} y={(Y(a.y) + Y(b.y)) / 2 - 4} textAnchor="middle" fontSize={8} fill="#334155">{r.name} {len.toFixed(2)} in</text>
           </g>
@@ -84,7 +87,7 @@ export function ToScale({ geo, parts, rods, rot, readOnly, onMovePivot }: Props)
               return e && <line key={a.port} x1={X(pg.pivot.x)} y1={Y(pg.pivot.y)} x2={X(e.x)} y2={Y(e.y)} stroke={a.port === "grip" ? "#94a3b8" : "#0f766e"} strokeWidth={3} strokeLinecap="round" />;
             })}
             <circle cx={X(pg.pivot.x)} cy={Y(pg.pivot.y)} r={5} fill="#fff" stroke="#0f766e" strokeWidth={2}
-              tabIndex={readOnly ? -1 : 0} role="button" data-testid={`pivot-${p.id}`}
+              tabIndex={readOnly || offscreen ? -1 : 0} role="button" data-testid={tid(`pivot-${p.id}`)}
               aria-label={`${p.name} pivot at x ${pg.pivot.x}, y ${pg.pivot.y} in${readOnly ? "" : "; arrow keys move it"}`}
               className={readOnly ? "" : "cursor-move focus:outline-none focus-visible:stroke-[#f59e0b]"}
               onPointerDown={(e) => { if (!readOnly) { drag.current = p.id; (e.target as Element).setPointerCapture?.(e.pointerId); } }}
