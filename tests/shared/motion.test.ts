@@ -102,21 +102,26 @@ describe("motion: properties of random assemblable four-bars", () => {
     fc.assert(fc.property(bars, (p) => {
       const m = sweep({ a: p.a, c: p.c, o2: [0, 0], o4: [p.d, p.rise], alpha: p.alpha, beta: p.beta, back: p.travel, forward: p.travel }, 300);
       const sw = m.sweeps[0];
+      // Worst errors over the sweep, asserted once per four-bar (an expect per step is slow under load).
+      let closure = 0, virtualWork = 0, slopeErr = 0;
       for (let k = 0; k < sw.theta.length; k++) {
         if (!sw.ok[k]) continue;
         const e = ends(m, k);
-        expect(Math.abs(Math.hypot(e.bx - e.ax, e.by - e.ay) - e.st.b)).toBeLessThan(1e-9); // loop closure
+        closure = Math.max(closure, Math.abs(Math.hypot(e.bx - e.ax, e.by - e.ay) - e.st.b)); // loop closure
         // Virtual work: T_out·ω_out = T_in·ω_in, so the torque ratio found by statics is 1 / gearing.
-        expect(sw.forceRatio[0][k] * Math.abs(sw.stageGearing[0][k])).toBeCloseTo(1, 9);
+        virtualWork = Math.max(virtualWork, Math.abs(sw.forceRatio[0][k] * Math.abs(sw.stageGearing[0][k]) - 1));
         // Away from toggle (|sin μ| ≥ 0.3 at both ends) the central difference of the positions matches the gearing.
         const clear = Math.abs(Math.sin(mu(sw.cosA[0][k]) * R)) >= 0.3 && Math.abs(Math.sin(mu(sw.cosB[0][k]) * R)) >= 0.3;
         if (clear && k > 0 && sw.ok[k - 1] && k + 1 < sw.theta.length && sw.ok[k + 1]) {
           const slope = (sw.rot[1][k + 1] - sw.rot[1][k - 1]) / (sw.rot[0][k + 1] - sw.rot[0][k - 1]);
-          expect(Math.abs(slope - sw.stageGearing[0][k])).toBeLessThan(1e-2 * Math.max(1, Math.abs(slope))); // central difference, error ∝ step²
+          slopeErr = Math.max(slopeErr, Math.abs(slope - sw.stageGearing[0][k]) / Math.max(1, Math.abs(slope)));
         }
       }
+      expect(closure).toBeLessThan(1e-9);
+      expect(virtualWork).toBeLessThan(1e-9);
+      expect(slopeErr).toBeLessThan(1e-2); // central difference, error ∝ step²
     }), { numRuns: 60 });
-  });
+  }, 60_000);
 });
 
 describe("motion: the report", () => {
