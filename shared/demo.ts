@@ -17,8 +17,15 @@ function rodEnd(hand: "RH" | "LH", rating = 4200): RodEnd {
   return {
     shank: "male", thread: "1/4-28", hand, ballBore: 0.25, ballDiameter: 0.531, housingBore: 0.5,
     ratedUltimate: rating, ratedMisalignment: 12, hasWitnessHole: true, partNumber: `LW-SRE4M-${hand}`,
+    ballWidth: 0.375, bodyMaterial: "alloySteel",
   };
 }
+
+type Member = NonNullable<NonNullable<JointHardware["holes"]>["from"]>;
+/** A 4130N fork, 0.125 in each cheek, the hole 0.5 in from its edge (invented demo bracket). */
+const FORK: Member = { material: "4130N", thickness: 0.25, edgeDistance: 0.5, cheeks: 2 };
+/** A 4130N pivot bracket, two 0.125 in cheeks, 0.75 in edge distance (invented demo bracket). */
+const BRACKET: Member = { material: "4130N", thickness: 0.25, edgeDistance: 0.75, cheeks: 2 };
 
 function hw(over: Partial<JointHardware>): JointHardware {
   return { fit: "clamped", shear: "double", torqueStripe: true, photos: [], note: "", ...over };
@@ -35,6 +42,8 @@ function rodEndJoint(hand: "RH" | "LH", rating?: number): JointHardware {
     washerUnderHead: { outsideDiameter: 0.625, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
     torque: 60,
+    holes: { from: FORK, to: FORK },
+    spacers: 0,
   });
 }
 
@@ -47,6 +56,8 @@ function ballPivot(size: "AN4" | "AN5", torque: number): JointHardware {
     washerUnderHead: { outsideDiameter: 0.75, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.75, thickness: 0.063 },
     torque,
+    bearingRating: 3000, // invented demo bearing
+    holes: { from: BRACKET, to: BRACKET },
   });
 }
 
@@ -58,6 +69,7 @@ function bushingPivot(size: "AN5" | "AN6"): JointHardware {
     nut: { type: "castellatedCotter", pattern: "shear", cotterPinNew: true },
     washerUnderHead: { outsideDiameter: 0.875, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.875, thickness: 0.063 },
+    holes: { from: { ...BRACKET, bushing: "steel" }, to: BRACKET },
   });
 }
 
@@ -69,6 +81,8 @@ function boltedClamp(): JointHardware {
     washerUnderHead: { outsideDiameter: 0.438, thickness: 0.032 },
     washerUnderNut: { outsideDiameter: 0.438, thickness: 0.032 },
     torque: 22,
+    // The horn's steel base and the surface's 2024-T3 spar doubler.
+    holes: { from: { material: "4130N", thickness: 0.125, edgeDistance: 0.38 }, to: { material: "2024-T3", thickness: 0.19, edgeDistance: 0.38 } },
   });
 }
 
@@ -90,12 +104,13 @@ export function demoPitchLinkage(): LinkageGraph {
     { id: "pushrod-aft", kind: "pushrod", label: "Aft pushrod", position: { x: 660, y },
       props: { material: "6061-T6", outsideDiameter: 1.5, wall: 0.058, length: 72 } },
     { id: "horn", kind: "controlHorn", label: "Elevator horn", position: { x: 880, y },
-      props: { hornArm: 2.5, linkAngle: 90 } },
+      props: { hornArm: 2.5, linkAngle: 90, boltCount: 2, boltSpacing: 1.5 } },
     { id: "elevator", kind: "controlSurface", label: "Elevator", position: { x: 1100, y },
       props: { travelUp: 25, travelDown: 20 } },
     { id: "mount-stick", kind: "structureMount", label: "Seat-frame stick mount", position: { x: 0, y: 380 }, props: { note: "Welded lugs on the seat frame" } },
     { id: "mount-bellcrank", kind: "structureMount", label: "Bellcrank bracket", position: { x: 440, y: 380 }, props: { note: "Bracket riveted to the seat rib" } },
     { id: "mount-tail", kind: "structureMount", label: "Stabilizer rear spar", position: { x: 1100, y: 380 }, props: { note: "Hinge brackets on the stabilizer rear spar" } },
+    { id: "stop-stick", kind: "travelStop", label: "Stick stop", position: { x: 0, y: 20 }, props: { stopAt: 15, arm: 8 } },
   ];
   const wrong = hw({
     // The deliberate mistake: single shear on the horn, no jam nut, and a 0.438 in washer under the
@@ -108,6 +123,8 @@ export function demoPitchLinkage(): LinkageGraph {
     washerUnderHead: { outsideDiameter: 0.438, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
     torque: 60,
+    holes: { from: FORK, to: { material: "4130N", thickness: 0.125, edgeDistance: 0.5 } },
+    spacers: 0,
   });
   const joints: Joint[] = [
     joint("j-stick-pivot", ["stick", "pivot"], ["mount-stick", "mount"], bushingPivot("AN5")),
@@ -118,34 +135,37 @@ export function demoPitchLinkage(): LinkageGraph {
     joint(DEMO_WRONG_JOINT, ["pushrod-aft", "b"], ["horn", "attach"], wrong),
     joint("j-horn-elevator", ["horn", "surface"], ["elevator", "horn"], boltedClamp()),
     joint("j-elevator-hinge", ["elevator", "hinge"], ["mount-tail", "mount"], ballPivot("AN4", 60)),
+    joint("j-stick-stop", ["stop-stick", "contact"], ["stick", "attach"], boltedClamp()),
   ];
   return { formatVersion: FORMAT_VERSION, name: "Larkspur LX-2 pitch", system: "pitch", nodes, joints };
 }
 
 /**
- * A valid linkage of exactly nodeCount parts (minimum 6): a stick driving a chain of bellcranks
+ * A valid linkage of exactly nodeCount parts (minimum 7): a stick with its stop driving a chain of bellcranks
  * (each with its mount), splitting into branches, each branch ending at a horn and a surface hinged on a
  * mount. Arm ratios alternate 3:4 and 4:3 so loads stay bounded however long the chain. Hardware is
  * complete and correct, so a generated linkage has no retention findings. Positions are laid out on a grid.
  */
 export function generateLinkage(nodeCount: number): LinkageGraph {
-  const n = Math.max(6, Math.floor(nodeCount));
+  const n = Math.max(7, Math.floor(nodeCount));
   const nodes: LinkageNode[] = [];
   const joints: Joint[] = [];
   let jn = 0;
   const addJoint = (from: [string, string], to: [string, string], h: JointHardware) => joints.push(joint(`j${jn++}`, from, to, h));
   const pos = (col: number, row: number) => ({ x: col * 220, y: 200 + row * 180 });
 
-  // Budget: stick + mount = 2, each unit (pushrod, bellcrank, mount) = 3, each branch end
+  // Budget: stick + mount + stop = 3, each unit (pushrod, bellcrank, mount) = 3, each branch end
   // (pushrod, horn, surface, mount) = 4, and up to 2 extra hinge mounts of padding.
   let branches = Math.max(1, Math.floor((n - 6) / 250) + 1);
-  let units = Math.floor((n - 2 - 4 * branches) / 3);
-  while (branches > 1 && units < branches - 1) { branches--; units = Math.floor((n - 2 - 4 * branches) / 3); }
-  const pad = n - 2 - 4 * branches - 3 * units;
+  let units = Math.floor((n - 3 - 4 * branches) / 3);
+  while (branches > 1 && units < branches - 1) { branches--; units = Math.floor((n - 3 - 4 * branches) / 3); }
+  const pad = n - 3 - 4 * branches - 3 * units;
 
   nodes.push({ id: "stick", kind: "stick", label: "Stick", position: pos(0, 0), props: { gripArm: 20, attachArm: 6, axis: "pitch", travelFwd: 15, travelAft: 15 } });
   nodes.push({ id: "m-stick", kind: "structureMount", label: "", position: pos(0, 1), props: { note: "" } });
   addJoint(["stick", "pivot"], ["m-stick", "mount"], ballPivot("AN5", 120));
+  nodes.push({ id: "stop", kind: "travelStop", label: "", position: pos(0, -1), props: { stopAt: 15, arm: 8 } });
+  addJoint(["stop", "contact"], ["stick", "attach"], boltedClamp());
 
   // Open ends waiting for a pushrod: [node id, port, column, row].
   const open: [string, string, number, number][] = [["stick", "attach", 0, 0]];
@@ -190,7 +210,7 @@ export function generateLinkage(nodeCount: number): LinkageGraph {
     const pr = `pe${i}`, hn = `h${i}`, sf = `s${i}`, mt = `ms${i}`;
     hand = "RH";
     addPushrod(pr, col + 1, row, [fromId, fromPort]);
-    nodes.push({ id: hn, kind: "controlHorn", label: "", position: pos(col + 2, row), props: { hornArm: 2.5, linkAngle: 90 } });
+    nodes.push({ id: hn, kind: "controlHorn", label: "", position: pos(col + 2, row), props: { hornArm: 2.5, linkAngle: 90, boltCount: 2, boltSpacing: 1.5 } });
     addJoint([pr, "b"], [hn, "attach"], rodEndJoint("LH", 6000));
     nodes.push({ id: sf, kind: "controlSurface", label: "", position: pos(col + 3, row), props: { travelUp: 25, travelDown: 20 } });
     addJoint([hn, "surface"], [sf, "horn"], boltedClamp());

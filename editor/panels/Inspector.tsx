@@ -12,6 +12,7 @@ import { SchemaForm } from "./SchemaForm";
 import { HARDWARE_SECTIONS, nodeSections } from "./specs";
 import { FindingItem, LinkageFindings } from "./Findings";
 import { JointEvidence, SuggestPart, type RecordsTarget } from "./JointExtras";
+import { JointChecks } from "./JointChecks";
 
 export type ReviewSlot = (sel: { type: "node" | "joint" | "linkage"; id: string }) => React.ReactNode;
 
@@ -117,6 +118,7 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
         <span className="block text-[11px] font-normal text-ink-soft">{name}</span>
       </h3>
       <SubjectFindings subjectKey={`joint:${id}`} />
+      <JointChecks jointId={id} />
       {records && joint.hardware.rodEnd && <SuggestPart target={records} joint={joint} />}
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}

@@ -3,6 +3,7 @@ import { AN_BOLTS, NUT_TYPES, THREADS, type NodeKind } from "@/shared/linkage/sc
 import { EDITOR_KINDS } from "../nodes/kinds";
 import { opts } from "../nodes/kinds/format";
 import type { SectionSpec } from "./SchemaForm";
+import { JOINT_EXTRA_SECTIONS, NUT_EXTRA_FIELDS, ROD_END_EXTRA_FIELDS } from "./joint-sections";
 
 export function nodeSections(kind: NodeKind): SectionSpec[] {
   return [
@@ -34,6 +35,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
       { type: "number", path: "rodEnd.ratedUltimate", label: "Rated ultimate radial load", q: "force", hint: "from the maker's data" },
       { type: "number", path: "rodEnd.ratedMisalignment", label: "Rated misalignment ±", q: "angle" },
       { type: "bool", path: "rodEnd.hasWitnessHole", label: "Shank has a witness hole", default: true },
+      ...ROD_END_EXTRA_FIELDS,
       { type: "text", path: "rodEnd.partNumber", label: "Part number" },
     ],
   },
@@ -66,8 +68,10 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
       { type: "enum", path: "nut.type", label: "Type and locking", options: opts(NUT_TYPES, NUT_NAMES), required: true },
       { type: "enum", path: "nut.pattern", label: "Pattern", options: [["tension", "tension (full)"], ["shear", "shear (thin)"]], required: true, default: "tension" },
       { type: "bool", path: "nut.cotterPinNew", label: "New cotter pin" },
+      ...NUT_EXTRA_FIELDS,
     ],
   },
+  ...JOINT_EXTRA_SECTIONS,
   {
     title: "Washer under the bolt head",
     optional: "washerUnderHead",

@@ -1,23 +1,15 @@
 /**
  * Allowables and margins (domain.md §3): pushrod column (Euler / Johnson, pinned-pinned K = 1) and tension,
- * rod-end rating against the required ultimate, AN bolt shear single/double. MS = allowable / required − 1.
+ * bolt diameter, the joint's special factor (joints/ has every joint check). MS = allowable / required − 1.
  * The column and section formulas are unit-agnostic (tests run them in SI); the engine calls them in in, lbf, psi.
  */
 import type { LinkageNode } from "../linkage/schema";
-import {
-  ALUMINIUM_BOLT_FSU,
-  AN_BOLTS_BY_SIZE,
-  SRC,
-  STEEL_BOLT_FSU,
-  TUBE_MATERIALS_BY_NAME,
-  boltShearStrength,
-  type AnBoltSize,
-} from "../hardware";
+import { AN_BOLTS_BY_SIZE, SRC, TUBE_MATERIALS_BY_NAME, type AnBoltSize } from "../hardware";
 import type { JointHardware } from "../linkage/schema";
 import type { AnalysisSettings, Finding, JointResult, PushrodResult } from "./types";
-import { type Ctx, jointLabel, nodeLabel } from "./context";
-import type { Loads } from "./loads";
-import { finding, fmt, fmtMargin, jointSubject, nodeSubject, num } from "./format";
+import { type Ctx, nodeLabel } from "./context";
+import { selectSpecialFactor } from "./joints/factors";
+import { finding, fmt, fmtMargin, nodeSubject, num } from "./format";
 
 /** Margins are capped so a report stays finite and JSON-safe (an unloaded part has "infinite" margin). */
 export const MARGIN_CAP = 999;
@@ -95,46 +87,13 @@ export function boltDiameter(bolt: NonNullable<JointHardware["bolt"]>): number |
   return bolt.diameter ?? null;
 }
 
-/** The one special factor of a joint: only the highest applies (14 CFR 23.619). */
-export function specialFactor(hw: JointHardware | undefined, settings: AnalysisSettings): number {
-  let sf = settings.fittingFactor; // 14 CFR 23.625: fittings, their attachment and bearing on joined members
-  if (hw && (hw.bearing === "plainBushing" || hw.bearing === "clevisPin")) sf = Math.max(sf, settings.bearingFactor); // 14 CFR 23.693
-  if (hw?.rodEnd && settings.bearingFactorOnRodEnds) sf = Math.max(sf, settings.bearingFactor);
-  return sf;
+/** The one special factor on bearing at a joint (14 CFR 23.619: only the highest applies); see joints/factors.ts. */
+export function specialFactor(hw: JointHardware | undefined, settings: AnalysisSettings, role: JointResult["role"] = "other"): number {
+  return selectSpecialFactor(hw, role, settings).value;
 }
 
-/** `cableJoint`: the joint is in a cable system, whose factor (14 CFR 23.693) competes as one more special factor. */
-export function jointResult(ctx: Ctx, j: number, loads: Loads, settings: AnalysisSettings, cableJoint = false): JointResult {
-  const jt = ctx.joints[j];
-  const hw = jt.hardware;
-  const radialLimit = loads.jointRadial[j];
-  const sf = cableJoint ? Math.max(specialFactor(hw, settings), settings.cableFactor) : specialFactor(hw, settings);
-  const radialUltimate = radialLimit * settings.ultimateFactor * sf;
-  const rating = hw?.rodEnd?.ratedUltimate ?? null;
-  let boltAllow: number | null = null;
-  if (hw?.bolt) {
-    const d = boltDiameter(hw.bolt);
-    if (d) boltAllow = boltShearStrength(d, hw.bolt.material === "aluminium" ? ALUMINIUM_BOLT_FSU : STEEL_BOLT_FSU, hw.shear === "single" ? 1 : 2);
-  }
-  return {
-    jointId: jt.id,
-    radialLimit,
-    radialUltimate,
-    rodEndRating: rating,
-    rodEndMargin: rating === null ? null : marginOfSafety(rating, radialUltimate),
-    boltShearAllowable: boltAllow,
-    boltMargin: boltAllow === null ? null : marginOfSafety(boltAllow, radialUltimate),
-    role: ctx.roles[j],
-    specialFactor: sf,
-  };
-}
-
-function factorText(settings: AnalysisSettings, sf: number): string {
-  return `limit × ${fmt(settings.ultimateFactor, 2)} ultimate factor × ${fmt(sf, 2)} special factor`;
-}
-
-/** Findings of strength: negative margins (hazard), unknown ratings, single-shear bending (caution). */
-export function strengthFindings(ctx: Ctx, pushrodNodes: number[], pushrods: PushrodResult[], jointResults: JointResult[], settings: AnalysisSettings, out: Finding[]) {
+/** Findings of the pushrods' strength (the joints' are in joints/findings.ts). */
+export function strengthFindings(ctx: Ctx, pushrodNodes: number[], pushrods: PushrodResult[], settings: AnalysisSettings, out: Finding[]) {
   for (let i = 0; i < pushrods.length; i++) {
     const pr = pushrods[i];
     const n = ctx.nodes[pushrodNodes[i]];
@@ -153,39 +112,6 @@ export function strengthFindings(ctx: Ctx, pushrodNodes: number[], pushrods: Pus
       out.push(finding("pushrod-tension-weak", "hazard", nodeSubject(pr.nodeId),
         `Pushrod ${name} is too weak in tension: it must carry ${fmt(pr.ultimateAxial)} lbf ultimate but the tube section (${fmt(pr.area, 4)} in² × Ftu) holds ${fmt(pr.tensionAllowable)} lbf — margin ${fmtMargin(pr.marginTension)}.`,
         SRC.tubes, [num("required ultimate", pr.ultimateAxial, "lbf"), num("tension allowable", pr.tensionAllowable, "lbf"), num("margin", pr.marginTension, "")]));
-    }
-  }
-  for (let j = 0; j < jointResults.length; j++) {
-    const r = jointResults[j];
-    const hw = ctx.joints[j].hardware;
-    const subj = jointSubject(r.jointId);
-    if (hw?.rodEnd) {
-      if (r.rodEndRating === null) {
-        out.push(finding("rod-end-rating-missing", "caution", subj,
-          `The rod end at joint ${jointLabel(ctx, j)} has no rated ultimate radial load on its card, so it cannot be checked against the ${fmt(r.radialUltimate)} lbf it must carry (${factorText(settings, r.specialFactor)}). Enter the maker's rating.`,
-          SRC.rodEndRating, [num("required ultimate", r.radialUltimate, "lbf")]));
-      } else if (r.rodEndMargin !== null && r.rodEndMargin < 0) {
-        out.push(finding("rod-end-underrated", "hazard", subj,
-          `The rod end at joint ${jointLabel(ctx, j)} is rated ${fmt(r.rodEndRating)} lbf but must carry ${fmt(r.radialUltimate)} lbf ultimate (${fmt(r.radialLimit)} lbf limit, ${factorText(settings, r.specialFactor)}) — margin ${fmtMargin(r.rodEndMargin)}. Use a rod end with a higher rating.`,
-          SRC.rodEndRating, [num("required ultimate", r.radialUltimate, "lbf"), num("rating", r.rodEndRating, "lbf"), num("margin", r.rodEndMargin, "")]));
-      }
-      if (hw.shear === "single") {
-        out.push(finding("rod-end-single-shear", "caution", subj,
-          `The rod end at joint ${jointLabel(ctx, j)} hangs on one side of its arm, so the bolt works in single shear with bending. Double shear (a clevis or a bolt supported on both sides) is better; if single shear is the design, check the bolt for bending and keep the retaining washer.`,
-          SRC.singleShear));
-      }
-    }
-    if (hw?.bolt) {
-      if (r.boltShearAllowable === null) {
-        out.push(finding("bolt-diameter-unknown", "caution", subj,
-          `The custom bolt at joint ${jointLabel(ctx, j)} has no diameter recorded, so its shear strength cannot be checked. Enter the shank diameter.`,
-          SRC.anBolts));
-      } else if (r.boltMargin !== null && r.boltMargin < 0) {
-        out.push(finding("bolt-shear-weak", "hazard", subj,
-          `The bolt at joint ${jointLabel(ctx, j)} is too small: in ${hw.shear} shear it holds ${fmt(r.boltShearAllowable)} lbf but must carry ${fmt(r.radialUltimate)} lbf ultimate (${factorText(settings, r.specialFactor)}) — margin ${fmtMargin(r.boltMargin)}. Use a larger bolt or double shear.`,
-          hw.bolt.material === "aluminium" ? SRC.aluminiumBolts : SRC.anBolts,
-          [num("required ultimate", r.radialUltimate, "lbf"), num("bolt shear allowable", r.boltShearAllowable, "lbf"), num("margin", r.boltMargin, "")]));
-      }
     }
   }
 }

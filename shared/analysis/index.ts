@@ -7,7 +7,12 @@ import type { LinkageGraph } from "../linkage/schema";
 import { DEFAULT_SETTINGS, settingsSchema, type AnalysisSettings, type Finding, type JointResult, type PushrodResult, type Report, type SurfaceResult } from "./types";
 import { buildContext } from "./context";
 import { propagate } from "./loads";
-import { jointResult, pushrodResult, strengthFindings } from "./allowables";
+import { marginOfSafety, pushrodResult, strengthFindings } from "./allowables";
+import { jointResult } from "./joints/result";
+import { jointFindings } from "./joints/findings";
+import { pathLoads } from "./joints/path";
+import { hingeMomentCase, maxLoads, settingsCautions } from "./design-case";
+import { secondaryInputFindings } from "./secondary";
 import { retentionFindings } from "./retention";
 import { structureFindings } from "./structure";
 import { sortFindings, summarize } from "./report";
@@ -22,21 +27,25 @@ export type { FourBar, FourBarPosition, SweepResult, Branch } from "./kinematics
 export { columnAllowable, eulerLoad, johnsonLoad, tubeSection, transitionSlenderness, marginOfSafety, specialFactor, boltDiameter, MARGIN_CAP } from "./allowables";
 export { designForce, bellcrankPivotLoad, DUAL_CONTROL_SHARE } from "./loads";
 export { analyzeMotion, sweepGraph, MOTION_NOT_CHECKED, atInput, type MotionReport, type MotionChainSummary, type WorstLoad, type ChainSweep, type MotionResult } from "./motion";
+export { selectSpecialFactor, turnsOnBolt, HINGE_BEARING_FACTOR, CABLE_JOINT_FACTOR, type FactorOptions } from "./joints/factors";
+export { HINGE_MOMENT_FACTOR } from "./design-case";
 
-export const ENGINE_VERSION = "1.0.0";
+export const ENGINE_VERSION = "2.0.0";
 
 export const NOTICE =
   "Linkwright's numbers are an aid to the builder's own engineering and the designer's data, not a substitute. " +
   "Follow the kit or plans designer's instructions, the applicable airworthiness regulations and the judgement of a qualified inspector; defer to local rules and licensed practice.";
 
 export const ASSUMPTIONS: readonly string[] = [
-  "Loads are limit loads from the design pilot force at the grip or pedal (14 CFR 23.397(b)); hinge moments are not used to lower them (14 CFR 23.395 would allow it).",
+  "Loads are limit loads from the design pilot force at the grip or pedal (14 CFR 23.397(b)); where a surface's hinge moment is given, 125 % of it sets them instead, between the minimum and maximum pilot forces (14 CFR 23.395). With several surfaces the largest case is applied to the whole run.",
   "Crank arms are taken perpendicular to their links (F_out = F_in · L_in / L_out); a horn's effective arm is its length × sin(link angle).",
   "A bellcrank pivot carries the vector sum of its two arm loads at the arm angle; idler arms, torque tubes, sticks and pedals are taken with their arms opposite, the largest resultant.",
   "Where a port carries several joints, each is taken to carry the full force; every pivot and hinge joint of a part carries the whole pivot or hinge load.",
-  "Ultimate = limit × ultimate factor; joints also × the highest one special factor (fitting factor, or the bearing factor on plain bushings and clevis pins) (14 CFR 23.619). The bearing factor is applied to the joint's whole ultimate load, bolt included — conservative.",
+  "Ultimate = limit × ultimate factor; every joint check also × the fitting factor (14 CFR 23.625). Bearing at a hole takes the joint's highest special factor instead (14 CFR 23.619): 3.33 where a part turns on a plain bearing (23.693), 6.67 at hinges without ball or roller bearings (23.657(a)); tear-out, shear and bending take the fitting factor.",
+  "A stop reacts the moment of the part it stops over its arm from that part's pivot; a horn's bolts share the link force and carry the hinge moment's couple, added in line (conservative).",
+  "Bolt bending: single shear M = P × (spacers + half the ball or member width); double shear with spacers M = P/2 × (gap + cheek/2 + ball/4); allowable Ftu × 1.5 × πD³/32.",
   "Pushrods are pinned-pinned columns (K = 1), Euler or Johnson; the design force pushes and pulls, so each pushrod is checked both ways at the same load.",
-  "With dual controls each pilot's force is 75 % and the inputs' loads are added (both pilots pushing the same way); otherwise the largest single input governs.",
+  "With dual controls each pilot's force is 75 % and the inputs' loads are added (both pilots pushing the same way); the single-pilot full-force case is checked too and the larger load kept. Otherwise the largest single input governs.",
   "Cables carry tension only. Two cables between the same two parts are a closed circuit; the pulling cable carries the larger of the force and the circuit's rigging tension plus half the force (legs of equal stiffness), its slack partner less; without a recorded rigging tension the force alone is used and the strength is not checked. With dual controls the two pilots' cable tensions are added, each with the rigging tension — conservative.",
   "A pulley or fairlead carries 2·T·sin(θ/2) for a cable of tension T turned through θ; cable-system joints and cables take the cable-system special factor (14 CFR 23.693) when it is the highest.",
   "The drawing is planar and has no airframe coordinates: rod-end misalignment and the four-bar transmission angle are not measured from it.",
@@ -72,6 +81,8 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   const ctx = buildContext(graph);
   const cc = cableContext(ctx);
   const loads = propagate(ctx, s, cc.pretension);
+  // 14 CFR 23.399: the dual-control case never replaces the single-pilot full-force case.
+  if (s.dualControls) maxLoads(loads, propagate(ctx, { ...s, dualControls: false }, cc.pretension));
   const motion = analyzeMotion(ctx, s);
   // With geometry the swept runs' worst-step loads replace the perpendicular-arm loads of their members.
   for (const [n, v] of motion.loads.pushrod) loads.pushrodAxial[n] = v;
@@ -88,17 +99,23 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
       pushrods.push(pushrodResult(node, loads.pushrodAxial[n], loads.driven[n] === 1, s));
       pushrodNodes.push(n);
     } else if (ctx.nodeRole[n] === "surface") {
-      surfaces.push({ nodeId: node.id, hingeMomentLimit: loads.surfaceMoment[n], driven: loads.driven[n] === 1 });
+      surfaces.push({ nodeId: node.id, hingeMomentLimit: loads.surfaceMoment[n], driven: loads.driven[n] === 1, designHingeMoment: null, loadCase: null });
     }
   }
+  const designCase = hingeMomentCase(ctx, loads, surfaces, s, s.dualControls, findings);
+  if (designCase.scale !== 1) for (const p of pushrods) rescale(p, designCase.scale);
+  const path = pathLoads(ctx, loads, findings);
   const joints: JointResult[] = new Array(ctx.joints.length);
-  for (let j = 0; j < ctx.joints.length; j++) joints[j] = jointResult(ctx, j, loads, s, cc.cableJoint[j] === 1);
+  for (let j = 0; j < ctx.joints.length; j++) joints[j] = jointResult(ctx, j, loads, s, path.loadTodo[j], { cable: cc.cableJoint[j] === 1 });
   const cables = cableResults(ctx, cc, loads, s);
+  const cautions = settingsCautions(s, findings);
 
   structureFindings(ctx, loads, findings, cc);
-  strengthFindings(ctx, pushrodNodes, pushrods, joints, s, findings);
+  strengthFindings(ctx, pushrodNodes, pushrods, s, findings);
+  jointFindings(ctx, joints, s, findings);
   retentionFindings(ctx, findings);
   cableFindings(ctx, cc, loads, cables, s, findings);
+  secondaryInputFindings(ctx, s, findings);
 
   const sorted = sortFindings(findings);
   return {
@@ -113,5 +130,15 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
     assumptions: assumptionsFor(motion.report),
     motion: motion.report,
     notice: NOTICE,
+    designCase,
+    settingsCautions: cautions,
   };
+}
+
+/** Scale a pushrod's loads (the hinge-moment case) and recompute its margins. */
+function rescale(p: PushrodResult, k: number) {
+  p.limitAxial *= k;
+  p.ultimateAxial *= k;
+  p.marginCompression = marginOfSafety(p.columnAllowable, p.ultimateAxial);
+  p.marginTension = marginOfSafety(p.tensionAllowable, p.ultimateAxial);
 }

@@ -49,8 +49,51 @@ export type JointResult = {
   boltMargin: number | null;
   /** Added fields (engine v1). What the joint does in the run. */
   role: JointRole;
-  /** The one special factor applied to the ultimate (14 CFR 23.619: only the highest applies). */
+  /** The one special factor on bearing at this joint (14 CFR 23.619: only the highest applies): its value… */
   specialFactor: number;
+  /** …and which factor it is, with its source. */
+  factor: SpecialFactor;
+  /** Added fields (engine v2): every check the joint's hardware calls for, computed or not checked. */
+  checks: JointCheck[];
+  /** The computed check with the lowest margin (null when none could be computed). */
+  governing: { check: CheckId; label: string; margin: number } | null;
+  /** What to enter so the checks not made can be made (empty when every check was computed). */
+  todo: string[];
+};
+
+export type CheckId =
+  | "rodEndRating" | "boltShear" | "pinShear" | "boltBending" | "bearingFrom" | "bearingTo"
+  | "tearOutFrom" | "tearOutTo" | "bearingRating" | "threadTension";
+
+export type JointCheck = {
+  id: CheckId;
+  /** In words: "bearing at the hole in Bellcrank". */
+  label: string;
+  status: "computed" | "notChecked";
+  /** Required ultimate (lbf, or in·lbf for bending) with `factor` applied; null when not known. */
+  required: number | null;
+  allowable: number | null;
+  unit: "lbf" | "in·lbf";
+  margin: number | null;
+  /** The factor on the limit load beyond the ultimate factor: the fitting factor or the special factor used. */
+  factor: number;
+  /** For a check not made: what to enter. */
+  todo: string | null;
+  /** How the allowable was found, in words (material, e/D, shape factor…). */
+  basis: string;
+  source: SourceTag;
+};
+
+export type SpecialFactor = { value: number; name: string; source: SourceTag };
+
+/** Which design case set the limit loads (14 CFR 23.395 / 23.397(b)). */
+export type DesignCase = {
+  governing: "maximumPilotForce" | "hingeMoment" | "minimumPilotForce";
+  /** Loads are the maximum pilot force's × this (1 unless hinge moments lowered them). */
+  scale: number;
+  text: string;
+  /** With dual controls: the single-pilot full-force case was checked too, and the larger load kept everywhere. */
+  singlePilotChecked: boolean;
 };
 
 export type JointRole = "link" | "pivot" | "hornMount" | "hinge" | "stop" | "other";
@@ -60,6 +103,10 @@ export type SurfaceResult = {
   /** Hinge moment put in by the control run at the design force, limit, in·lbf. */
   hingeMomentLimit: number;
   driven: boolean;
+  /** The designer's hinge moment, when given, and the limit it asks of the run (125 %, 14 CFR 23.395). */
+  designHingeMoment: number | null;
+  /** How this surface's case came out: which of 23.395 or the 23.397(b) bounds governs. */
+  loadCase: DesignCase["governing"] | null;
 };
 
 /** A cable or turnbuckle (engine v1, added): its tension and, for a cable, its strength. */
@@ -110,6 +157,10 @@ export type Report = {
   notice: string;
   /** Added field (engine v1): the motion check — swept runs, or what to enter for it (never a pass when absent). */
   motion?: MotionReport;
+  /** Added fields (engine v2). */
+  designCase: DesignCase;
+  /** Settings below the published forces or factors: shown with every result. */
+  settingsCautions: string[];
 };
 
 /** Design pilot forces and factors (domain.md §1), one set per build, with the published defaults. */

@@ -5,3 +5,5 @@ export * from "./threads";
 export * from "./materials";
 export * from "./torque";
 export * from "./cables";
+export * from "./design-loads";
+export * from "./plates";

@@ -8,12 +8,14 @@ import { z } from "zod";
 import { inches, force, systemSchema, type ControlSystem } from "./fields";
 import { KIND_LIST, PORTS, type KindDef } from "./kinds";
 import { geometrySchema } from "./geometry";
+import { jointExtraFields, nutExtraFields, rodEndExtraFields } from "./joint-extras";
 
 export const FORMAT_VERSION = 1 as const;
 
 const id = z.string().min(1, "id is empty").max(64, "id is longer than 64 characters");
 
 export { SYSTEMS, systemSchema, TUBE_MATERIALS, tubeMaterialSchema, type ControlSystem } from "./fields";
+export { PLATE_MATERIALS, BUSHING_MATERIALS, ROD_END_BODIES, CLEVIS_RETENTION, type Member } from "./joint-extras";
 export { NODE_KINDS, PORTS, KINDS, type NodeKind, type PropsOf } from "./kinds";
 
 const position = z.object({ x: z.number().finite(), y: z.number().finite() });
@@ -51,6 +53,7 @@ export const rodEndSchema = z.object({
   threadLength: inches("thread length").optional(),
   hasWitnessHole: z.boolean().default(true),
   partNumber: z.string().max(60).optional(),
+  ...rodEndExtraFields,
 });
 
 export const boltSchema = z.object({
@@ -72,6 +75,7 @@ export const nutSchema = z.object({
   /** Tension or shear (thin) nut, for the torque table. */
   pattern: z.enum(["tension", "shear"]).default("tension"),
   cotterPinNew: z.boolean().optional(),
+  ...nutExtraFields,
 });
 
 const washer = z.object({ outsideDiameter: inches("washer outside diameter"), thickness: inches("washer thickness").optional() });
@@ -98,6 +102,7 @@ export const hardwareSchema = z.object({
   /** Ids of uploaded photos that show this joint. */
   photos: z.array(z.string().max(64)).max(50).default([]),
   note: z.string().max(2000).default(""),
+  ...jointExtraFields,
 });
 export type JointHardware = z.infer<typeof hardwareSchema>;
 

@@ -2,10 +2,10 @@
  * A complete, correct rudder circuit (no findings at all): two pedals with cable arms, a cable from each over a
  * pulley (left) or through a fairlead (right), a turnbuckle at the aft end of each, both on the rudder horn.
  * Each test changes one thing. Node ids: pedalL, pedalR, cableL, cableR, pulley, fairlead, tbL, tbR, horn,
- * rudder, floor, fin. Numbers are plausible light-aircraft values, invented for the tests.
+ * rudder, floor, fin, stop (on the right pedal, 6 in from its pivot). Numbers are plausible light-aircraft values, invented for the tests.
  */
 import type { LinkageGraph, LinkageNode } from "../../shared/linkage/schema";
-import { goodBallPivot, goodClamp, graph, horn, j, mount, surface } from "./fixtures";
+import { goodBallPivot, goodClamp, graph, horn, j, mount, stop, surface } from "./fixtures";
 
 type Props<K extends LinkageNode["kind"]> = Extract<LinkageNode, { kind: K }>["props"];
 let x = 0;
@@ -30,7 +30,7 @@ export function rudderCircuit(): LinkageGraph {
     [
       cablePedal("pedalL"), cablePedal("pedalR"), mount("floor"), mount("fin"),
       cable("cableL", RIGGED), cable("cableR"), pulley("pulley"), fairlead("fairlead"),
-      turnbuckle("tbL"), turnbuckle("tbR"), horn("horn", 3), surface("rudder"),
+      turnbuckle("tbL"), turnbuckle("tbR"), horn("horn", 3), surface("rudder"), stop("stop", 6),
     ],
     [
       j("pivL", ["pedalL", "pivot"], ["floor", "mount"], goodBallPivot()),
@@ -47,6 +47,7 @@ export function rudderCircuit(): LinkageGraph {
       j("hornR", ["tbR", "b"], ["horn", "attach"], goodClamp()),
       j("hornMount", ["horn", "surface"], ["rudder", "horn"], goodClamp()),
       j("hinge", ["rudder", "hinge"], ["fin", "mount"], goodBallPivot()),
+      j("stopR", ["stop", "contact"], ["pedalR", "attach"], goodClamp()),
     ],
     "yaw",
   );

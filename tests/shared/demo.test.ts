@@ -13,7 +13,7 @@ describe("demo: Larkspur LX-2 pitch run", () => {
     expect(p.data).toEqual(g);
   });
   it("is stick → forward pushrod → bellcrank → aft pushrod → horn → elevator, laid out left to right", () => {
-    const main = g.nodes.filter((n) => n.kind !== "structureMount");
+    const main = g.nodes.filter((n) => n.kind !== "structureMount" && n.kind !== "travelStop");
     expect(main.map((n) => n.kind)).toEqual(["stick", "pushrod", "bellcrank", "pushrod", "controlHorn", "controlSurface"]);
     expect(main.map((n) => n.position.x)).toEqual([0, 220, 440, 660, 880, 1100]);
   });
@@ -44,7 +44,7 @@ describe("demo: Larkspur LX-2 pitch run", () => {
 });
 
 describe("generateLinkage", () => {
-  it.each([6, 7, 8, 60, 61, 62, 1000, 2503])("makes exactly %s valid parts with no findings", (n) => {
+  it.each([7, 8, 9, 60, 61, 62, 1000, 2503])("makes exactly %s valid parts with no findings", (n) => {
     const g = generateLinkage(n);
     expect(g.nodes).toHaveLength(n);
     expect(graphSchema.safeParse(g).success).toBe(true);

@@ -11,9 +11,14 @@ export type RodEnd = NonNullable<JointHardware["rodEnd"]>;
 export function rodEnd(over: Partial<RodEnd> = {}): RodEnd {
   return {
     shank: "male", thread: "1/4-28", hand: "RH", ballBore: 0.25, ballDiameter: 0.531, housingBore: 0.5,
-    ratedUltimate: 5000, ratedMisalignment: 12, hasWitnessHole: true, ...over,
+    ratedUltimate: 5000, ratedMisalignment: 12, hasWitnessHole: true,
+    ballWidth: 0.375, bodyMaterial: "alloySteel", ...over,
   };
 }
+
+export type Member = NonNullable<NonNullable<JointHardware["holes"]>["from"]>;
+/** A 4130N fork, 0.125 in each cheek, hole 0.5 in from the edge (e/D 2.0 for an AN4). */
+export const steelFork: Member = { material: "4130N", thickness: 0.25, edgeDistance: 0.5, cheeks: 2 };
 
 export function hardware(over: Partial<JointHardware> = {}): JointHardware {
   return { fit: "clamped", shear: "double", torqueStripe: true, photos: [], note: "", ...over };
@@ -30,6 +35,9 @@ export function goodRodEndJoint(over: Partial<JointHardware> = {}, re: Partial<R
     washerUnderHead: { outsideDiameter: 0.625, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
     torque: 60, // AC 43.13-1B table 7-1: 1/4-28 tension nut 50–70 in·lbf
+    // The member each side: the rod end's own side is its eye (covered by the rating), the other a steel fork.
+    holes: { from: steelFork, to: steelFork },
+    spacers: 0,
     ...over,
   });
 }
@@ -42,6 +50,9 @@ export function goodBallPivot(over: Partial<JointHardware> = {}): JointHardware 
     washerUnderHead: { outsideDiameter: 0.75, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.75, thickness: 0.063 },
     torque: 120, // AC 43.13-1B table 7-1: 5/16-24 tension nut 100–140 in·lbf
+    bearingRating: 4000, // fixture part: the maker's rated radial load
+    // The turning part's side is the bearing's housing (its rating); the mount is a 4130N bracket, e/D 2.0 for an AN5.
+    holes: { from: { material: "4130N", thickness: 0.25, edgeDistance: 0.625, cheeks: 2 }, to: { material: "4130N", thickness: 0.25, edgeDistance: 0.625, cheeks: 2 } },
     ...over,
   });
 }
@@ -53,6 +64,8 @@ export function goodClamp(over: Partial<JointHardware> = {}): JointHardware {
     washerUnderHead: { outsideDiameter: 0.438, thickness: 0.032 },
     washerUnderNut: { outsideDiameter: 0.438, thickness: 0.032 },
     torque: 22, // AC 43.13-1B table 7-1: 10-32 tension nut 20–25 in·lbf
+    // The horn's steel base and the surface's 2024-T3 spar doubler, e/D 2.0 for an AN3.
+    holes: { from: { material: "4130N", thickness: 0.125, edgeDistance: 0.38 }, to: { material: "2024-T3", thickness: 0.19, edgeDistance: 0.38 } },
     ...over,
   });
 }
@@ -71,8 +84,10 @@ export const pushrod = (id: string, material: "4130N" | "6061-T6" | "2024-T3", o
   ({ id, kind: "pushrod", label: "", position: at(), props: { material, outsideDiameter, wall, length } });
 export const bellcrank = (id: string, inputArm: number, outputArm: number, armAngle = 90): LinkageNode =>
   ({ id, kind: "bellcrank", label: "", position: at(), props: { inputArm, outputArm, armAngle } });
-export const horn = (id: string, hornArm: number, linkAngle = 90): LinkageNode =>
-  ({ id, kind: "controlHorn", label: "", position: at(), props: { hornArm, linkAngle } });
+export const horn = (id: string, hornArm: number, linkAngle = 90, bolts: { boltCount?: number; boltSpacing?: number } = { boltCount: 2, boltSpacing: 1.5 }): LinkageNode =>
+  ({ id, kind: "controlHorn", label: "", position: at(), props: { hornArm, linkAngle, ...bolts } });
+export const stop = (id: string, arm: number | undefined, stopAt = 15): LinkageNode =>
+  ({ id, kind: "travelStop", label: "", position: at(), props: { stopAt, ...(arm === undefined ? {} : { arm }) } });
 export const surface = (id: string): LinkageNode => ({ id, kind: "controlSurface", label: "", position: at(), props: { travelUp: 25, travelDown: 20 } });
 
 export function graph(nodes: LinkageNode[], joints: Joint[], system: LinkageGraph["system"] = "pitch"): LinkageGraph {
@@ -81,17 +96,19 @@ export function graph(nodes: LinkageNode[], joints: Joint[], system: LinkageGrap
 
 /**
  * Stick (grip 20 in, attach 5 in) → pushrod 4130N 1.000 × 0.049 × 24 in → horn 2 in → elevator.
- * Joint ids: "pivot", "rodA" (stick–pushrod a, RH), "rodB" (pushrod b–horn, LH), "horn", "hinge".
+ * Joint ids: "pivot", "rodA" (stick–pushrod a, RH), "rodB" (pushrod b–horn, LH), "horn", "hinge", "stop"
+ * (a stop 10 in from the stick's pivot, bolted to the stick's attach port).
  */
 export function goodRun(): LinkageGraph {
   return graph(
-    [stick("stick", 20, 5), mount("m1"), pushrod("rod", "4130N", 1, 0.049, 24), horn("hornpart", 2), surface("elev"), mount("m2")],
+    [stick("stick", 20, 5), mount("m1"), pushrod("rod", "4130N", 1, 0.049, 24), horn("hornpart", 2), surface("elev"), mount("m2"), stop("stop", 10)],
     [
       j("pivot", ["stick", "pivot"], ["m1", "mount"], goodBallPivot()),
       j("rodA", ["stick", "attach"], ["rod", "a"], goodRodEndJoint({}, { hand: "RH" })),
       j("rodB", ["rod", "b"], ["hornpart", "attach"], goodRodEndJoint({}, { hand: "LH" })),
       j("horn", ["hornpart", "surface"], ["elev", "horn"], goodClamp()),
       j("hinge", ["elev", "hinge"], ["m2", "mount"], goodBallPivot({ bolt: { size: "AN4", material: "steel", grip: 1.25, stack: 1.25, threadsProtruding: 2 }, torque: 60 })),
+      j("stop", ["stop", "contact"], ["stick", "attach"], goodClamp()),
     ],
   );
 }

@@ -11,12 +11,16 @@
  * Aft pushrod:       F2 = 668 · 3 / 4 = 501 lbf limit.
  * Bellcrank pivot:   arms at 90°: R = √(668² + 501²) = √(446,224 + 251,001) = √697,225 = 835 lbf.
  * Elevator hinge moment: 501 · 2.5 · sin 90° = 1,252.5 in·lbf.
- * Horn attachment and hinge: each carries the link force at the horn, 501 lbf.
+ * Hinge: carries the link force at the horn, 501 lbf.
+ * Horn attachment, two bolts 1.5 in apart (bolt-group statics): each takes its share 501 / 2 = 250.5 lbf plus
+ *   the couple of the hinge moment 6 · 1,252.5 / (1.5 · 2 · 3) = 835 lbf, in line: 1,085.5 lbf limit.
+ * Stop 10 in from the stick's pivot: the stick's moment 668 · 5 = 3,340 in·lbf over 10 in = 334 lbf (14 CFR 23.675).
  *
  * Ultimate (14 CFR 23.303 ×1.5; 14 CFR 23.625 fitting factor ×1.15 on joints):
  *   forward pushrod 668 × 1.5 = 1,002 lbf; aft pushrod 501 × 1.5 = 751.5 lbf;
  *   rod ends on the forward pushrod 668 × 1.5 × 1.15 = 1,152.3 lbf; on the aft pushrod 501 × 1.725 = 864.225 lbf;
- *   stick pivot on a plain bushing: highest special factor 3.33 (14 CFR 23.693, 23.619): 835 × 1.5 × 3.33 = 4,170.825 lbf;
+ *   stick pivot on a plain bushing: bolt and fittings 835 × 1.725 = 1,440.375 lbf; bearing at its holes with the
+ *   highest special factor 3.33 (14 CFR 23.693, 23.619): 835 × 1.5 × 3.33 = 4,170.825 lbf;
  *   bellcrank pivot on a ball bearing: 835 × 1.725 = 1,440.375 lbf.
  *
  * Forward pushrod column: Di = 0.68; A = π/4 (0.5625 − 0.4624) = 0.078618 in²;
@@ -33,14 +37,17 @@
  */
 import { describe, expect, it } from "vitest";
 import { analyze } from "../../shared/analysis";
-import { bellcrank, goodBallPivot, goodClamp, goodRodEndJoint, graph, hardware, horn, j, mount, pushrod, stick, surface, valid } from "./fixtures";
+import { bellcrank, goodBallPivot, goodClamp, goodRodEndJoint, graph, hardware, horn, j, mount, pushrod, stick, stop, surface, valid } from "./fixtures";
 
 function elevatorRun() {
   return valid(graph(
     [stick("stick", 20, 5), mount("m-stick"), pushrod("fwd", "4130N", 0.75, 0.035, 30), bellcrank("bc", 3, 4, 90), mount("m-bc"),
-      pushrod("aft", "6061-T6", 1.5, 0.058, 72), horn("horn", 2.5, 90), surface("elev"), mount("m-tail")],
+      pushrod("aft", "6061-T6", 1.5, 0.058, 72), horn("horn", 2.5, 90), surface("elev"), mount("m-tail"), stop("stop", 10)],
     [
-      j("stick-pivot", ["stick", "pivot"], ["m-stick", "mount"], hardware({ bearing: "plainBushing", bolt: { size: "AN5", material: "steel", threadsProtruding: 2 }, nut: { type: "castellatedCotter", pattern: "shear", cotterPinNew: true } })),
+      j("stick-pivot", ["stick", "pivot"], ["m-stick", "mount"], hardware({
+        bearing: "plainBushing", bolt: { size: "AN5", material: "steel", threadsProtruding: 2 }, nut: { type: "castellatedCotter", pattern: "shear", cotterPinNew: true },
+        holes: { from: { material: "4130N", thickness: 0.25, edgeDistance: 0.625, bushing: "steel" }, to: { material: "4130N", thickness: 0.25, edgeDistance: 0.625, cheeks: 2 } },
+      })),
       j("stick-fwd", ["stick", "attach"], ["fwd", "a"], goodRodEndJoint({}, { hand: "RH" })),
       j("fwd-bc", ["fwd", "b"], ["bc", "in"], goodRodEndJoint({}, { hand: "LH" })),
       j("bc-pivot", ["bc", "pivot"], ["m-bc", "mount"], goodBallPivot()),
@@ -48,6 +55,7 @@ function elevatorRun() {
       j("aft-horn", ["aft", "b"], ["horn", "attach"], goodRodEndJoint({}, { hand: "LH" })),
       j("horn-elev", ["horn", "surface"], ["elev", "horn"], goodClamp()),
       j("hinge", ["elev", "hinge"], ["m-tail", "mount"], goodBallPivot()),
+      j("stop", ["stop", "contact"], ["stick", "attach"], goodClamp()),
     ],
   ));
 }
@@ -75,11 +83,14 @@ describe("end-to-end elevator run (hand-derived loads in the header)", () => {
     rel(jr("bc-aft").radialLimit, 501);
     rel(jr("aft-horn").radialUltimate, 864.225);
     rel(jr("stick-pivot").radialLimit, 835); // 167 + 668
-    rel(jr("stick-pivot").radialUltimate, 4170.825); // × 1.5 × 3.33 (14 CFR 23.693, only the highest: 23.619)
-    expect(jr("stick-pivot").specialFactor).toBe(3.33);
+    rel(jr("stick-pivot").radialUltimate, 1440.375); // × 1.5 × 1.15 (14 CFR 23.303, 23.625): the bolt takes the fitting factor
+    expect(jr("stick-pivot").specialFactor).toBe(3.33); // 14 CFR 23.693, only the highest: 23.619
+    expect(jr("stick-pivot").factor.name).toMatch(/bearing factor/);
+    rel(jr("stick-pivot").checks.find((c) => c.id === "bearingFrom")!.required!, 4170.825); // bearing at the hole: × 1.5 × 3.33
     rel(jr("bc-pivot").radialLimit, 835); // √(668² + 501²)
     rel(jr("bc-pivot").radialUltimate, 1440.375);
-    rel(jr("horn-elev").radialLimit, 501);
+    rel(jr("horn-elev").radialLimit, 1085.5); // 501/2 + 6 · 1,252.5/(1.5 · 2 · 3), bolt-group statics
+    rel(jr("stop").radialLimit, 334); // 668 · 5 / 10 (14 CFR 23.675)
     rel(jr("hinge").radialLimit, 501);
   });
   it("hinge moment at the elevator", () => {
@@ -108,9 +119,11 @@ describe("end-to-end elevator run (hand-derived loads in the header)", () => {
 });
 
 describe("factors and settings", () => {
-  it("dual controls take each pilot's force at 75 %", () => {
+  it("dual controls with one stick keep the single-pilot full-force case", () => {
     const r = analyze(elevatorRun(), { dualControls: true });
-    rel(r.pushrods.find((p) => p.nodeId === "fwd")!.limitAxial, 0.75 * 668); // Part 23 appendix A: 75 %
+    // 75 % each (14 CFR 23.399) would give 501 lbf; the single pilot's full 668 lbf is always checked too.
+    rel(r.pushrods.find((p) => p.nodeId === "fwd")!.limitAxial, 668);
+    expect(r.designCase.singlePilotChecked).toBe(true);
   });
   it("the bearing factor on rod ends raises their required ultimate to × 3.33", () => {
     const r = analyze(elevatorRun(), { bearingFactorOnRodEnds: true });

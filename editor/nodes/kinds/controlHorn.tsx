@@ -13,5 +13,7 @@ export const controlHorn = defineEditorKind({
   fields: [
     { type: "number", path: "props.hornArm", label: "Horn arm", q: "length", required: true, hint: "hinge line to the pushrod hole" },
     { type: "number", path: "props.linkAngle", label: "Link angle at neutral", q: "angle", hint: "90 = pushrod square to the arm" },
+    { type: "number", path: "props.boltCount", label: "Bolts to the surface", q: "count", hint: "in one row" },
+    { type: "number", path: "props.boltSpacing", label: "Bolt spacing", q: "length", hint: "between neighbouring bolts: they carry the hinge moment's couple" },
   ],
 });

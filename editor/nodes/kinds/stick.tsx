@@ -17,6 +17,7 @@ export const stick = defineEditorKind({
     { type: "number", path: "props.attachArm", label: "Link arm", q: "length", required: true, hint: "pivot to the pushrod hole" },
     { type: "enum", path: "props.axis", label: "Axis", options: opts(["pitch", "roll"] as const), required: true, default: "pitch" },
     { type: "number", path: "props.designForce", label: "Design force override", q: "force", hint: "empty = the build setting" },
+    { type: "enum", path: "props.forceSource", label: "Flap or trim force from", options: [["designer", "the designer's figure (above)"], ["leverRule", "the lever rule, grip arm as radius"]], hint: "secondary controls only" },
     { type: "number", path: "props.travelFwd", label: "Forward travel", q: "angle" },
     { type: "number", path: "props.travelAft", label: "Aft travel", q: "angle" },
   ],

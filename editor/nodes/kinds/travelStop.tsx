@@ -10,5 +10,8 @@ export const travelStop = defineEditorKind({
     </g>
   ),
   lines: (p) => [`contacts at ${p.stopAt}°`],
-  fields: [{ type: "number", path: "props.stopAt", label: "Contacts at", q: "angle" }],
+  fields: [
+    { type: "number", path: "props.stopAt", label: "Contacts at", q: "angle" },
+    { type: "number", path: "props.arm", label: "Arm from the pivot", q: "length", hint: "pivot of the part it stops to the contact: the stop load is the moment over this arm" },
+  ],
 });

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { degrees, force, inches } from "../fields";
 import { defineKind } from "./types";
+import { leverRuleForce } from "../../hardware/design-loads";
 
 export const stick = defineKind({
   kind: "stick",
@@ -13,6 +14,8 @@ export const stick = defineKind({
     axis: z.enum(["pitch", "roll"]).default("pitch"),
     /** Override of the design pilot force at the grip; absent = the build's setting for the axis. */
     designForce: force("design force").optional(),
+    /** Where a flap, trim or other secondary input's force comes from: the designer's figure, or the lever rule (its grip arm is the lever). */
+    forceSource: z.enum(["designer", "leverRule"]).optional(),
     travelFwd: degrees("forward travel").default(15),
     travelAft: degrees("aft travel").default(15),
   }),
@@ -23,8 +26,11 @@ export const stick = defineKind({
     arms: (p) => [p.gripArm, p.attachArm],
     // 14 CFR 23.397(b): the stick force of the axis it moves (the build's settings hold the figures).
     pilotForce: (p, system, f) => {
+      const secondary = system === "flap" || system === "trim";
+      // A secondary lever's force by the lever rule, its grip arm the radius (shared/hardware/design-loads.ts).
+      if (secondary && p.forceSource === "leverRule") return leverRuleForce(p.gripArm);
       if (p.designForce) return p.designForce;
-      if (system === "flap" || system === "trim") return f.other;
+      if (secondary) return f.other;
       if (system === "roll" || (system !== "pitch" && p.axis === "roll")) return f.rollStick;
       return f.pitchStick;
     },

@@ -1,0 +1,55 @@
+"use client";
+/**
+ * The joint's checks from the live load-path check: each computed check with its margin (the governing one
+ * marked), the special factor used, and the to-do of checks not made — shown apart, never as a pass.
+ */
+import type { JointCheck } from "@/shared/analysis/types";
+import { useEditorStore } from "../context";
+
+function marginText(c: JointCheck) {
+  if (c.margin === null) return "—";
+  return c.margin >= 999 ? "no load" : `${c.margin >= 0 ? "+" : ""}${c.margin.toFixed(2)}`;
+}
+
+export function JointChecks({ jointId }: { jointId: string }) {
+  const r = useEditorStore((s) => s.report?.joints.find((j) => j.jointId === jointId));
+  if (!r || !r.checks) return null;
+  const done = r.checks.filter((c) => c.status === "computed");
+  return (
+    <section className="rounded border border-ink/10 bg-white" data-testid="joint-checks" aria-label="Checks at this joint">
+      <header className="flex items-center justify-between border-b border-ink/5 px-2 py-1">
+        <h4 className="text-[11px] font-semibold uppercase tracking-wide text-ink-soft">Checks</h4>
+        <span className="text-[10px] text-ink-soft" data-testid="joint-factor" title={r.factor.source.text}>
+          bearing factor {r.factor.value} ({r.factor.name})
+        </span>
+      </header>
+      {r.todo.length > 0 && (
+        <div className="border-b border-caution/20 bg-caution/10 px-2 py-1" data-testid="joint-todo">
+          <p className="text-[11px] font-semibold text-caution">Not checked — to do</p>
+          <ul className="list-disc pl-4 text-[11px] text-ink">
+            {r.todo.map((t) => (
+              <li key={t}>{t.charAt(0).toUpperCase() + t.slice(1)}</li>
+            ))}
+          </ul>
+        </div>
+      )}
+      {done.length > 0 ? (
+        <table className="w-full text-[11px]">
+          <tbody>
+            {done.map((c) => {
+              const gov = r.governing?.check === c.id;
+              return (
+                <tr key={c.id} data-testid="joint-check" data-check={c.id} data-margin={c.margin ?? ""} className={gov ? "font-semibold" : ""} title={c.basis}>
+                  <td className="px-2 py-0.5 text-ink">{c.label}{gov ? " · governs" : ""}</td>
+                  <td className={`px-2 py-0.5 text-right tabular-nums ${c.margin !== null && c.margin < 0 ? "text-hazard" : "text-ink"}`}>{marginText(c)}</td>
+                </tr>
+              );
+            })}
+          </tbody>
+        </table>
+      ) : (
+        r.todo.length === 0 && <p className="px-2 py-1 text-[11px] text-ink-soft">Add a bolt, rod end or bearing to this joint to have it checked.</p>
+      )}
+    </section>
+  );
+}

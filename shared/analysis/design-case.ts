@@ -1,0 +1,98 @@
+/**
+ * Which design case sets the limit loads (domain.md §1), applied to the propagated loads:
+ * - Dual controls: the 75 % each case (14 CFR 23.399) never lowers the single-pilot full-force case, which
+ *   is always checked too; every load keeps the larger of the two.
+ * - Hinge moments: where the designer gives a surface's hinge moment, the control system's limit loads are
+ *   125 % of it (14 CFR 23.395), not below the minimum pilot forces and need not exceed the maximum ones of
+ *   14 CFR 23.397(b). The run's loads scale linearly with the pilot force, so the case is a factor on them.
+ * - Settings below the published forces or factors give a caution that goes with every result.
+ */
+import { DESIGN_LOAD_SRC, FACTOR_MINIMUMS, PILOT_FORCE_TABLE, SRC } from "../hardware";
+import type { AnalysisSettings, DesignCase, Finding, SurfaceResult } from "./types";
+import type { Ctx } from "./context";
+import type { Loads } from "./loads";
+import { finding, fmt, linkageSubject, nodeSubject } from "./format";
+
+export const HINGE_MOMENT_FACTOR = 1.25; // 14 CFR 23.395
+
+/** Keep, everywhere, the larger of two load sets (dual-control case and single-pilot case). */
+export function maxLoads(into: Loads, other: Loads) {
+  const m = (a: Float64Array, b: Float64Array) => { for (let i = 0; i < a.length; i++) if (b[i] > a[i]) a[i] = b[i]; };
+  m(into.pushrodAxial, other.pushrodAxial);
+  m(into.jointRadial, other.jointRadial);
+  m(into.surfaceMoment, other.surfaceMoment);
+}
+
+const TABLE_KEY = { pitch: "pitchStick", roll: "rollStick", yaw: "yawPedal" } as const;
+
+/**
+ * The hinge-moment case per surface, and the factor on every load. Surfaces without a hinge moment, and
+ * runs of flaps, trim and other secondary controls, keep the maximum pilot force (factor 1).
+ */
+export function hingeMomentCase(ctx: Ctx, loads: Loads, surfaces: SurfaceResult[], s: AnalysisSettings, singlePilotChecked: boolean, out: Finding[]): DesignCase {
+  const system = ctx.graph.system;
+  const key = system === "pitch" || system === "roll" || system === "yaw" ? TABLE_KEY[system] : null;
+  let scale = 0;
+  let any = false;
+  let governing: DesignCase["governing"] = "maximumPilotForce";
+  for (const sr of surfaces) {
+    const n = ctx.nodeIndex.get(sr.nodeId)!;
+    const node = ctx.nodes[n];
+    const hm = node.kind === "controlSurface" ? node.props.hingeMoment : undefined;
+    if (hm === undefined || !key || !(sr.hingeMomentLimit > 0)) {
+      sr.designHingeMoment = hm ?? null;
+      sr.loadCase = sr.hingeMomentLimit > 0 ? "maximumPilotForce" : null;
+      scale = Math.max(scale, 1);
+      if (hm !== undefined && !key)
+        out.push(finding("hinge-moment-not-used", "advisory", nodeSubject(node.id),
+          `The hinge moment of ${node.label || node.id} is not used: 14 CFR 23.395 bounds it by the stick and pedal forces of 23.397(b), which do not cover a ${system} run. Loads come from the input's force.`, DESIGN_LOAD_SRC.hingeMoments));
+      continue;
+    }
+    any = true;
+    const want = HINGE_MOMENT_FACTOR * hm; // 14 CFR 23.395: 125 % of the hinge moment
+    const raw = want / sr.hingeMomentLimit;
+    const min = PILOT_FORCE_TABLE[key].min / s.pilotForce[key]; // 14 CFR 23.397(b) minimum
+    let f: number, c: DesignCase["governing"];
+    if (raw >= 1) { f = 1; c = "maximumPilotForce"; }
+    else if (raw <= min) { f = Math.min(1, min); c = "minimumPilotForce"; }
+    else { f = raw; c = "hingeMoment"; }
+    sr.designHingeMoment = hm;
+    sr.loadCase = c;
+    if (f > scale) { scale = f; governing = c; }
+  }
+  if (!any || scale <= 0) scale = 1;
+  if (scale < 1) {
+    const k = scale;
+    for (const a of [loads.pushrodAxial, loads.jointRadial, loads.surfaceMoment]) for (let i = 0; i < a.length; i++) a[i] *= k;
+    for (const sr of surfaces) sr.hingeMomentLimit *= k;
+    for (const inp of loads.inputs) { inp.gripForce *= k; inp.linkForce *= k; }
+  } else governing = "maximumPilotForce";
+  const text = !any
+    ? "Limit loads from the maximum pilot force at the grip or pedal (14 CFR 23.397(b)); no hinge moment was given."
+    : governing === "maximumPilotForce"
+      ? "125 % of the given hinge moment needs at least the maximum pilot force, so the maximum pilot force governs (14 CFR 23.395, 23.397(b))."
+      : governing === "minimumPilotForce"
+        ? `125 % of the given hinge moment needs less than the minimum pilot force, so the minimum governs: loads are ${fmt(scale * 100, 0)} % of the maximum-force case (14 CFR 23.395, 23.397(b)).`
+        : `125 % of the given hinge moment governs: loads are ${fmt(scale * 100, 0)} % of the maximum-force case (14 CFR 23.395).`;
+  return { governing, scale, text: singlePilotChecked ? `${text} Dual controls: the single-pilot full-force case was checked too, and the larger load kept.` : text, singlePilotChecked };
+}
+
+/** Settings below the published forces or factors: one caution with every result. */
+export function settingsCautions(s: AnalysisSettings, out: Finding[]): string[] {
+  const msgs: string[] = [];
+  for (const k of ["pitchStick", "rollStick", "yawPedal"] as const) {
+    const pub = PILOT_FORCE_TABLE[k].max; // 14 CFR 23.397(b)
+    if (s.pilotForce[k] < pub)
+      msgs.push(`The ${k === "pitchStick" ? "pitch stick" : k === "rollStick" ? "roll stick" : "pedal"} force is set to ${fmt(s.pilotForce[k], 0)} lbf, below the ${pub} lbf of 14 CFR 23.397(b); only the hinge-moment case of 23.395 may lower it, and never below ${PILOT_FORCE_TABLE[k].min} lbf.`);
+  }
+  const f = (v: number, min: number, what: string, src: string) => {
+    if (v < min) msgs.push(`The ${what} is set to ${v}, below the ${min} of ${src}.`);
+  };
+  f(s.ultimateFactor, FACTOR_MINIMUMS.ultimateFactor, "ultimate factor", "14 CFR 23.303");
+  f(s.fittingFactor, FACTOR_MINIMUMS.fittingFactor, "fitting factor", "14 CFR 23.625");
+  f(s.bearingFactor, FACTOR_MINIMUMS.bearingFactor, "bearing factor", "14 CFR 23.693");
+  if (msgs.length)
+    out.push(finding("settings-below-minimum", "caution", linkageSubject("settings"),
+      `${msgs.join(" ")} Every result of this check is computed with these settings.`, SRC.pilotForces));
+  return msgs;
+}

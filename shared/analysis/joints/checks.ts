@@ -1,0 +1,227 @@
+/**
+ * Every way a joint can fail (domain.md §3), each a check that is either computed (required, allowable,
+ * margin) or "not checked" with what to enter — never a margin made up from a default:
+ * rod-end rating, bolt or clevis-pin shear, bolt bending, bearing and tear-out at the hole in each member,
+ * ball or roller bearing rating, and the rod end's thread in tension. Required loads are limit × ultimate
+ * factor × the fitting factor (14 CFR 23.625); bearing at a hole takes the joint's special factor instead
+ * when a higher one applies (shared/analysis/joints/factors.ts, 14 CFR 23.619).
+ */
+import { ALUMINIUM_BOLT_FSU, STEEL_BOLT_FSU, STEEL_BOLT_FTU, boltShearStrength } from "../../hardware/bolts";
+import {
+  ALUMINIUM_BOLT_FTU, BEARING_SRC, BENDING_SRC, BUSHING_TABLE, MIN_EDGE_RATIO, PLATE_TABLE, ROD_END_BODY_FTU,
+  ROD_END_BODY_SRC, ROUND_SHAPE_FACTOR, TEAR_OUT_SRC, bearingUltimate, tearOutStrength,
+} from "../../hardware/plates";
+import { SRC } from "../../hardware/sources";
+import { THREADS_BY_NAME } from "../../hardware/threads";
+import { TUBE_MATERIALS_BY_NAME } from "../../hardware/materials";
+import type { JointHardware, Member } from "../../linkage/schema";
+import type { AnalysisSettings, CheckId, JointCheck, JointRole, SourceTag, SpecialFactor } from "../types";
+import { type Ctx, nodeLabel } from "../context";
+import { marginOfSafety } from "../allowables";
+
+// Module-level aliases: read imports once, not through re-export getters on every joint.
+const margin = marginOfSafety, labelOf = nodeLabel, PLATES = PLATE_TABLE, BUSHINGS = BUSHING_TABLE, THREADS = THREADS_BY_NAME, TUBES = TUBE_MATERIALS_BY_NAME;
+const BODY_FTU = ROD_END_BODY_FTU, FBRU = bearingUltimate, TEAR = tearOutStrength, SHEAR = boltShearStrength;
+const MIN_ED = MIN_EDGE_RATIO, SHAPE = ROUND_SHAPE_FACTOR, FSU_STEEL = STEEL_BOLT_FSU, FSU_ALU = ALUMINIUM_BOLT_FSU, FTU_STEEL = STEEL_BOLT_FTU, FTU_ALU = ALUMINIUM_BOLT_FTU;
+
+const RATING_SRC: SourceTag = SRC.rodEndRating;
+const BALL_SRC: SourceTag = { kind: "published", text: "14 CFR 23.693, 23.657(a): a ball or roller bearing's rating may not be exceeded" };
+const PIN_SRC: SourceTag = { kind: "published", text: "14 CFR 23.689(d); pin shear Fsu · πD²/4 per plane" };
+const THREAD_SRC: SourceTag = SRC.threads;
+
+export type CheckInput = {
+  ctx: Ctx;
+  j: number;
+  role: JointRole;
+  /** Limit radial load, lbf; null when the load itself is not known (see loadTodo). */
+  limit: number | null;
+  /** What to enter before the joint's load is known (a stop's arm, a horn's bolts). */
+  loadTodo: string | null;
+  settings: AnalysisSettings;
+  special: SpecialFactor;
+};
+
+type Side = "from" | "to";
+
+/** Fastener diameter at the joint: the clevis pin's, else the bolt's. */
+export function fastenerDiameter(hw: JointHardware, boltDia: (b: NonNullable<JointHardware["bolt"]>) => number | null): number | null {
+  if (hw.clevisPin) return hw.clevisPin.diameter;
+  return hw.bolt ? boltDia(hw.bolt) : null;
+}
+
+/** Which sides of the joint are members with a bolt hole (not the rod end's eye, not a ball bearing's housing). */
+function holeSides(c: CheckInput, hw: JointHardware): Side[] {
+  const { ctx, j, role } = c;
+  if (role === "stop" || !(hw.bolt || hw.clevisPin)) return [];
+  const out: Side[] = [];
+  for (const side of ["from", "to"] as const) {
+    const n = side === "from" ? ctx.jFrom[j] : ctx.jTo[j];
+    if (n < 0) continue;
+    const port = ctx.joints[j][side].port;
+    if (hw.rodEnd && ctx.nodeRole[n] === "link") continue; // the rod end's eye: its rating covers it
+    if (hw.bearing === "ballBearing" && (port === "pivot" || port === "hinge")) continue; // the bearing's housing: its rating
+    out.push(side);
+  }
+  return out;
+}
+
+function missing(m: Member | undefined, needs: ("material" | "thickness" | "edgeDistance")[]): string[] {
+  const words = { material: "material", thickness: "thickness", edgeDistance: "edge distance" } as const;
+  return needs.filter((k) => m?.[k] === undefined).map((k) => words[k]);
+}
+
+const NONE: string[] = [];
+const HOLE_NEEDS: ("material" | "thickness" | "edgeDistance")[] = ["material", "thickness", "edgeDistance"];
+const TEAR_BASIS = Object.fromEntries(Object.values(PLATE_TABLE).map((p) => [p.name, `2 · t · (e − D/2) · Fsu ${p.fsu / 1000} ksi (${p.name})`])) as Record<string, string>;
+const LABEL = { rodEndRating: "rod-end rating", bearingRating: "ball or roller bearing rating" } as const;
+
+type Acc = { checks: JointCheck[]; base: number | null; loadTodo: string | null };
+
+function addCheck(a: Acc, id: CheckId, label: string, factor: number, allowable: number | null, todo: string | null, basis: string, source: SourceTag, unit: "lbf" | "in·lbf" = "lbf", arm: number | null = 1) {
+  const required = a.base === null || arm === null ? null : a.base * factor * arm;
+  const computed = required !== null && allowable !== null && !todo && !a.loadTodo;
+  const t = computed ? null : a.loadTodo && todo ? `${a.loadTodo}; ${todo}` : a.loadTodo || todo;
+  a.checks.push({
+    id, label, status: computed ? "computed" : "notChecked", required, allowable, unit,
+    margin: computed ? margin(allowable!, required!) : null, factor, todo: t, basis, source,
+  });
+}
+
+export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardware["bolt"]>) => number | null): JointCheck[] {
+  const { ctx, j, settings, special } = c;
+  const hw = ctx.joints[j].hardware;
+  if (!hw) return [];
+  const checks: JointCheck[] = [];
+  const ff = settings.fittingFactor; // 14 CFR 23.625
+  const base = c.limit === null ? null : c.limit * settings.ultimateFactor; // 14 CFR 23.303
+  const acc: Acc = { checks, base, loadTodo: c.loadTodo };
+  // Rod-end rating (rated ultimate radial static load).
+  const re = hw.rodEnd;
+  if (re) {
+    const f = settings.bearingFactorOnRodEnds ? Math.max(ff, settings.bearingFactor) : ff;
+    addCheck(acc, "rodEndRating", LABEL.rodEndRating, f, re.ratedUltimate ?? null, re.ratedUltimate === undefined ? "enter the rod end's rated ultimate radial load from its maker" : null, "the maker's rated ultimate radial load", RATING_SRC);
+  }
+
+  // Fastener shear: the clevis pin, else the bolt.
+  const planes = hw.shear === "single" ? 1 : 2;
+  const pin = hw.clevisPin;
+  const isPin = !!pin || (hw.bearing === "clevisPin" && !hw.bolt);
+  const d = fastenerDiameter(hw, boltDia);
+  if (isPin) {
+    const todo = !pin ? "enter the clevis pin's diameter and shear strength" : pin.shearStrength === undefined ? "enter the clevis pin's shear strength (Fsu) from its maker" : null;
+    const allow = pin?.shearStrength !== undefined ? SHEAR(pin.diameter, pin.shearStrength, planes) : null;
+    addCheck(acc, "pinShear", hw.shear === "single" ? "clevis pin shear, single shear" : "clevis pin shear, double shear", ff, allow, todo, pin ? `Fsu ${Math.round((pin.shearStrength ?? 0) / 1000)} ksi × πD²/4 × ${planes}` : "no pin recorded", PIN_SRC);
+  } else if (hw.bolt) {
+    const alu = hw.bolt.material === "aluminium";
+    const allow = d === null ? null : SHEAR(d, alu ? FSU_ALU : FSU_STEEL, planes);
+    addCheck(acc, "boltShear", hw.shear === "single" ? "bolt shear, single shear" : "bolt shear, double shear", ff, allow, d === null ? "enter the bolt's shank diameter" : null,
+      alu ? (planes === 1 ? "aluminium 37 ksi × πD²/4 × 1" : "aluminium 37 ksi × πD²/4 × 2") : planes === 1 ? "steel 75 ksi × πD²/4 × 1" : "steel 75 ksi × πD²/4 × 2", alu ? SRC.aluminiumBolts : SRC.anBolts);
+  }
+
+  const sides = holeSides(c, hw);
+  const mFrom = hw.holes?.from, mTo = hw.holes?.to;
+  const members: (Member | undefined)[] = [];
+  for (const sd of sides) members.push(sd === "from" ? mFrom : mTo);
+
+  // Bolt bending: single shear, or double shear with spacers (gaps) in the stack.
+  const gaps = hw.spacers;
+  if ((hw.bolt || pin) && (hw.shear === "single" || (gaps !== undefined && gaps > 0))) {
+    const ftu = pin ? (pin.shearStrength !== undefined ? pin.shearStrength / 0.6 : null) // Fsu ≈ 0.6 Ftu, from memory
+      : hw.bolt!.material === "aluminium" ? FTU_ALU : FTU_STEEL;
+    const need: string[] = [];
+    if (d === null) need.push("the shank diameter");
+    if (ftu === null) need.push("the pin's shear strength");
+    if (gaps === undefined) need.push("the washers and spacers between the member's face and the ball (0 if none)");
+    let arm: number | null = null;
+    let how = "";
+    const innerWidth = re ? re.ballWidth : null;
+    if (hw.shear === "single") {
+      // M = P · a, a = spacers + half the width of the loaded part (domain.md §3).
+      const w = innerWidth ?? (re ? null : maxThickness(members));
+      if (w === null || w === undefined) need.push(re ? "the rod end's ball width" : "the thickness of both members");
+      else if (gaps !== undefined) { arm = gaps + w / 2; how = `M = P × (${fmt3(gaps)} + ${fmt3(w)}/2) in`; }
+    } else {
+      // Double shear with gaps: M = (P/2)·(g + t_cheek/2 + w/4) [from memory: pin bending in a clevis].
+      let fork: Member | undefined, otherM: Member | undefined;
+      for (const m of members) if (m?.cheeks === 2 && !fork) fork = m;
+      if (!fork && re && members.length === 1) fork = members[0];
+      for (const m of members) if (m && m !== fork && !otherM) otherM = m;
+      const other = re ? innerWidth : otherM?.thickness;
+      if (!fork?.thickness) need.push(re ? "the fork's thickness (both cheeks)" : "which member is the fork (2 cheeks) and its thickness");
+      if (other === undefined || other === null) need.push(re ? "the rod end's ball width" : "the middle member's thickness");
+      if (fork?.thickness && other && gaps !== undefined) {
+        const tc = fork.thickness / (fork.cheeks ?? 2);
+        arm = (gaps + tc / 2 + other / 4) / 2;
+        how = `M = P/2 × (${fmt3(gaps)} + ${fmt3(tc)}/2 + ${fmt3(other)}/4) in`;
+      }
+    }
+    const allow = d !== null && ftu !== null ? ftu * SHAPE * (Math.PI * d * d * d) / 32 : null;
+    addCheck(acc, "boltBending", `${pin ? "pin" : "bolt"} bending, ${hw.shear} shear`, ff, allow, need.length ? `enter ${need.join(", ")}` : null,
+      `${how ? how + "; " : ""}allowable Ftu ${ftu === null ? "?" : Math.round(ftu / 1000)} ksi × shape factor ${SHAPE} × πD³/32`, BENDING_SRC, "in·lbf", arm);
+  }
+
+  // Bearing and tear-out at the hole in each member.
+  for (let i = 0; i < sides.length; i++) {
+    const s = sides[i], m = members[i];
+    const n = s === "from" ? ctx.jFrom[j] : ctx.jTo[j];
+    const name = n >= 0 ? labelOf(ctx.nodes[n]) : s;
+    const need = m && m.material !== undefined && m.thickness !== undefined && m.edgeDistance !== undefined ? NONE : missing(m, HOLE_NEEDS);
+    const todo = need.length ? `enter the ${need.join(", ")} of ${name}'s member at the hole` : d === null ? "enter the bolt's shank diameter" : null;
+    let bearAllow: number | null = null, tearAllow: number | null = null, basis = "", short: string | null = null;
+    if (!todo && m && d !== null) {
+      const plate = PLATES[m.material!];
+      const ed = m.edgeDistance! / d;
+      if (ed < MIN_ED - 1e-9) short = `edge distance ${fmt3(m.edgeDistance!)} in is ${ed.toFixed(2)} × D, under the ${MIN_ED} × D the bearing allowables start at: move the hole or use a wider member`;
+      const plateAllow = FBRU(plate, ed) * d * m.thickness!;
+      bearAllow = plateAllow;
+      basis = `${plate.name} Fbru ${Math.round(FBRU(plate, ed) / 1000)} ksi at e/D ${Math.round(ed * 100) / 100} × D × t`;
+      if (m.bushing) {
+        const b = BUSHINGS[m.bushing];
+        const bushAllow = b.fbru20 * d * m.thickness!;
+        if (bushAllow < plateAllow) { bearAllow = bushAllow; basis = `${b.name} Fbru ${Math.round(b.fbru20 / 1000)} ksi × D × t (softer than the ${plate.name} member)`; }
+      }
+      tearAllow = TEAR(m.thickness!, m.edgeDistance!, d, plate.fsu);
+    }
+    addCheck(acc, s === "from" ? "bearingFrom" : "bearingTo", `bearing at the hole in ${name}`, Math.max(ff, special.value), bearAllow, todo ?? short, basis || "Fbru · D · t", BEARING_SRC);
+    addCheck(acc, s === "from" ? "tearOutFrom" : "tearOutTo", `tear-out at the hole in ${name}`, ff, tearAllow, todo, m?.material ? TEAR_BASIS[m.material] : "2 · t · (e − D/2) · Fsu", TEAR_OUT_SRC);
+  }
+
+  // Ball or roller bearing: its rating may not be exceeded.
+  if (hw.bearing === "ballBearing") {
+    addCheck(acc, "bearingRating", LABEL.bearingRating, ff, hw.bearingRating ?? null, hw.bearingRating === undefined ? "enter the bearing's rated radial load from its maker" : null, "the maker's rated radial load", BALL_SRC);
+  }
+
+  // Rod-end shank (or the pushrod's threaded end, for a female rod end) in tension at its stress area.
+  if (re && c.role === "link") {
+    const th = THREADS[re.thread];
+    let ftu: number | null = null, what = "", todo: string | null = null, source = ROD_END_BODY_SRC;
+    if (re.shank === "male") {
+      if (re.bodyMaterial) { ftu = BODY_FTU[re.bodyMaterial]; what = `rod-end body (${re.bodyMaterial})`; }
+      else todo = "enter the rod end's body material";
+    } else {
+      const n = ctx.jFrom[j] >= 0 && ctx.nodeRole[ctx.jFrom[j]] === "link" ? ctx.jFrom[j] : ctx.jTo[j];
+      const pn = n >= 0 ? ctx.nodes[n] : null;
+      const mat = pn && pn.kind === "pushrod" ? TUBES[pn.props.material] : undefined;
+      if (mat) { ftu = mat.ftu; what = `pushrod end (${mat.name})`; source = mat.source; }
+      else todo = "enter the pushrod's material";
+    }
+    const allow = th && ftu !== null ? th.tensileStressArea * ftu : null;
+    addCheck(acc, "threadTension", `${re.thread} thread in tension`, ff, allow, todo,
+      `A_t ${th ? th.tensileStressArea : "?"} in² × Ftu ${ftu === null ? "?" : Math.round(ftu / 1000)} ksi of the ${what || "threaded part"}`, todo ? THREAD_SRC : source);
+  }
+  return checks;
+}
+
+function maxThickness(ms: (Member | undefined)[]): number | null {
+  let t = 0;
+  if (ms.length < 2) return null;
+  for (const m of ms) {
+    if (m?.thickness === undefined) return null;
+    t = Math.max(t, m.thickness);
+  }
+  return t;
+}
+
+function fmt3(v: number): string {
+  return String(Number(v.toFixed(3)));
+}
