@@ -61,13 +61,13 @@ export const KINDS: { [K in ExportKind]: Kind<K> } = {
       return { label: `Checklist PDF — ${linkage.name}, revision ${p.revision ?? linkage.revision}`, estimatedBytes: null };
     },
     async run({ build, params: p, progress }) {
-      const [{ listTicks }, { checklistFor }, { checklistPdf }] = await Promise.all([import("@/db/checklist"), import("@/shared/records/checklist"), import("@/lib/records-pdf")]);
+      const [{ listTicks }, { checklistFor }, { checklistPdf }, { analyze }] = await Promise.all([import("@/db/checklist"), import("@/shared/records/checklist"), import("@/lib/records-pdf"), import("@/shared/analysis")]);
       const linkage = await getLinkage(build.id, p.linkageId);
       if (!linkage) throw new ExportFailure("The linkage was deleted before its checklist could be printed.");
       const rev = await getRevision(linkage.id, p.revision);
       if (!rev) throw new ExportFailure(`Revision ${p.revision} of ${linkage.name} no longer exists.`);
       await progress(0.2, "Reading the ticks");
-      const bytes = await checklistPdf(build, linkage, rev.revision, checklistFor(rev.graph), await listTicks(linkage.id, rev.revision));
+      const bytes = await checklistPdf(build, linkage, rev.revision, checklistFor(rev.graph, analyze(rev.graph, build.analysisSettings)), await listTicks(linkage.id, rev.revision));
       return { body: Buffer.from(bytes), contentType: "application/pdf", filename: `${slug(build.name)}-${slug(linkage.name)}-rev${rev.revision}-checklist.pdf` };
     },
   },

@@ -6,11 +6,11 @@
 import { AN_BOLTS_BY_SIZE, SRC, THREADS_BY_NAME, type AnBoltSize } from "../hardware";
 import type { Joint, LinkageGraph } from "../linkage/schema";
 import { jointName, partName } from "../linkage/names";
-import type { SourceTag } from "../analysis/types";
+import type { Report, SourceTag } from "../analysis/types";
 
 export const ITEM_CODES = [
   "jam-nut", "witness-hole", "engagement-length", "retaining-washer", "nut-locking", "cotter-pin", "safety-wire",
-  "torque", "torque-stripe", "full-free-travel", "stops-before-limits",
+  "torque", "torque-stripe", "full-free-travel", "stops-before-limits", "not-checked",
 ] as const;
 export type ItemCode = (typeof ITEM_CODES)[number];
 
@@ -39,14 +39,14 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
     }
     if (hw.shear === "single") {
       const bore = re.housingBore ?? re.ballDiameter;
-      add("retaining-washer", `Retaining washer fitted under the bolt head, larger across than the rod end's housing bore${bore ? ` (over ${fmt(bore)} in)` : ""}, so the eye cannot slide off if the ball comes out.`, SRC.retainingWasher);
+      add("retaining-washer", `Retaining washer fitted under the ${hw.freeSide === "nut" ? "nut" : "bolt head"} (the rod end's free side), larger across than the rod end's housing bore${bore ? ` (over ${fmt(bore)} in)` : ""}, so the eye cannot slide off if the ball comes out.`, SRC.retainingWasher);
     }
   }
   const nut = hw.nut;
   if (nut && nut.type !== "none") {
     if (nut.type === "castellatedCotter") add("cotter-pin", "Castellated nut secured with a new cotter pin, legs bent back and trimmed.", SRC.cotter);
     else if (nut.type === "plainSafetyWire") add("safety-wire", "Nut safety-wired, the wire pulling in the tightening direction.", SRC.nutLocking);
-    else if (nut.type === "plain") add("nut-locking", "Plain nut: a locking device (lock washer, safety wire or jam nut) is present — every fastener in a control run must be locked.", SRC.nutLocking);
+    else if (nut.type === "plain") add("nut-locking", "Plain nut: it is not locked. Replace it with a self-locking nut (where the bolt is clamped and nothing turns on it) or a castellated nut with a new cotter pin, or safety-wire it — not a lock washer, which does not belong in a control run.", SRC.nutLocking);
     else add("nut-locking", "Self-locking nut: the locking feature grips (it cannot be turned by hand) and at least one full thread shows past the nut.", SRC.protrusion);
   }
   if (hw.bolt && hw.nut?.type !== "castellatedCotter") {
@@ -77,7 +77,28 @@ export function linkageItems(g: LinkageGraph): ChecklistItem[] {
   return items;
 }
 
-/** Every item of a revision, joints in graph order, then the whole-linkage items. */
-export function checklistFor(g: LinkageGraph): ChecklistItem[] {
-  return [...g.joints.flatMap((j) => jointItems(j, jointName(j, g.nodes))), ...linkageItems(g)];
+const NOT_CHECKED_SRC: SourceTag = { kind: "commonPractice", text: "a check without its inputs is not made" };
+
+/** The to-do of a joint whose checks could not all be made: what to enter on its card. */
+export function notCheckedItem(jointId: string, where: string, todo: readonly string[]): ChecklistItem {
+  const list = todo.map((t) => t.charAt(0).toUpperCase() + t.slice(1)).join("; ");
+  return { jointId, where, code: "not-checked", text: `Not checked yet — to do: ${list}. Then save, so the load-path check can make these checks.`, source: NOT_CHECKED_SRC };
+}
+
+/**
+ * Every item of a revision, joints in graph order (each joint's to-do from the report last), then the
+ * whole-linkage items. Without a report the to-do items are left out.
+ */
+export function checklistFor(g: LinkageGraph, report?: Pick<Report, "joints"> | null): ChecklistItem[] {
+  const todo = new Map<string, readonly string[]>();
+  for (const r of report?.joints ?? []) if (r.todo?.length) todo.set(r.jointId, r.todo);
+  const out: ChecklistItem[] = [];
+  for (const j of g.joints) {
+    const where = jointName(j, g.nodes);
+    for (const i of jointItems(j, where)) out.push(i);
+    const t = todo.get(j.id);
+    if (t) out.push(notCheckedItem(j.id, where, t));
+  }
+  for (const i of linkageItems(g)) out.push(i);
+  return out;
 }

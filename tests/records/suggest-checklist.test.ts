@@ -76,6 +76,7 @@ describe("inspection checklist", () => {
       [DEMO_WRONG_JOINT]: ["jam-nut", "witness-hole", "retaining-washer", "nut-locking", "torque", "torque-stripe"],
       "j-horn-elevator": ["nut-locking", "torque", "torque-stripe"],
       "j-elevator-hinge": ["nut-locking", "torque", "torque-stripe"],
+      "j-stick-stop": ["nut-locking", "torque", "torque-stripe"],
       "": ["full-free-travel", "stops-before-limits"],
     });
     const washer = items.find((i) => i.jointId === DEMO_WRONG_JOINT && i.code === "retaining-washer")!;
@@ -84,6 +85,22 @@ describe("inspection checklist", () => {
     expect(items.find((i) => i.jointId === "j-bellcrank-pivot" && i.code === "torque")!.text).toContain("120 in·lbf"); // demo value
     expect(items.find((i) => i.code === "stops-before-limits")!.text).toContain("Elevator 25° up / 20° down"); // demo travel
     for (const i of items) expect(i.source.text.length).toBeGreaterThan(0);
+  });
+  it("adds a joint's to-do from the report when a check could not be made, and none when every check was made", () => {
+    const g = demoPitchLinkage();
+    expect(checklistFor(g, analyze(g)).filter((i) => i.code === "not-checked")).toEqual([]); // the demo's cards are complete
+    const jt = g.joints.find((j) => j.id === "j-bellcrank-pivot")!;
+    jt.hardware = { ...jt.hardware, bearingRating: undefined };
+    const todo = checklistFor(g, analyze(g)).filter((i) => i.code === "not-checked");
+    expect(todo.map((i) => i.jointId)).toEqual(["j-bellcrank-pivot"]);
+    expect(todo[0].text).toContain("Enter the bearing's rated radial load from its maker");
+  });
+  it("never advises a lock washer", () => {
+    const g = demoPitchLinkage();
+    for (const jt of g.joints) if (jt.hardware.nut) jt.hardware = { ...jt.hardware, nut: { ...jt.hardware.nut, type: "plain" } };
+    for (const i of checklistFor(g, analyze(g))) expect(i.text).not.toMatch(/lock washer \(|use a lock washer|fit a lock washer/i);
+    const plain = checklistFor(g).find((i) => i.code === "nut-locking")!;
+    expect(plain.text).toContain("not a lock washer"); // AC 43.13-1B: no lock washers on primary or secondary structure
   });
 });
 
