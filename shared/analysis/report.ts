@@ -19,8 +19,8 @@ export function summarize(findings: Finding[], pushrods: PushrodResult[], joints
   }
   for (const j of joints) {
     if (j.radialLimit <= 0) continue;
-    consider(j.rodEndMargin, "joint", j.jointId, "rod-end rating");
-    consider(j.boltMargin, "joint", j.jointId, "bolt shear");
+    // Every computed check of the joint (its governing one is the lowest); a check not made has no margin.
+    if (j.governing) consider(j.governing.margin, "joint", j.jointId, j.governing.label);
   }
   for (const c of cables) if (c.limitTension > 0) consider(c.margin, "node", c.nodeId, "cable breaking strength");
   s.lowestMargin = best;

@@ -6,14 +6,16 @@
  */
 import { AN_BOLTS_BY_SIZE, MIN_BOLT_DIAMETER, SRC as SRC_, THREADS_BY_NAME, TORQUE_BY_THREAD, TUBE_MATERIALS_BY_NAME } from "../hardware";
 import type { Joint } from "../linkage/schema";
-import type { Finding } from "./types";
+import type { Finding, JointRole } from "./types";
+import { turnsOnBolt } from "./joints/factors";
+import { MIN_PREVAILING_TORQUE, PREVAILING_SRC } from "../hardware/plates";
 import { type Ctx, jointLabel, jointsAt, nodeLabel, pushrodEndOf } from "./context";
 import { boltDiameter } from "./allowables";
 import { finding, fmt, jointSubject, nodeSubject, num } from "./format";
 
 // Module-level aliases: read the tables once, not through re-export getters on every joint.
 const BOLTS = AN_BOLTS_BY_SIZE, THREADS = THREADS_BY_NAME, TORQUE = TORQUE_BY_THREAD, TUBES = TUBE_MATERIALS_BY_NAME, SRC = SRC_;
-const MIN_D = MIN_BOLT_DIAMETER;
+const MIN_D = MIN_BOLT_DIAMETER, MIN_DRAG = MIN_PREVAILING_TORQUE;
 
 function torqueNumbers(v: number, min: number, max: number) {
   return [num("applied torque", v, "in·lbf"), num("table minimum", min, "in·lbf"), num("table maximum", max, "in·lbf")];
@@ -27,8 +29,8 @@ export function engagementMultiple(family: "steel" | "aluminium"): number {
   return family === "steel" ? 1 : 2;
 }
 
-export function boltSubjectToRotation(hw: Joint["hardware"]): boolean {
-  return hw.fit === "freeToRotate" || hw.bearing === "plainBushing" || hw.bearing === "clevisPin";
+export function boltSubjectToRotation(hw: Joint["hardware"], role: JointRole = "other"): boolean {
+  return turnsOnBolt(hw, role);
 }
 
 export function retentionFindings(ctx: Ctx, out: Finding[]) {
@@ -96,10 +98,12 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       // Rule 4: retaining washer on a single-shear rod end.
       if (hw.shear === "single") {
         const bore = re.housingBore ?? re.ballDiameter;
-        const w = hw.washerUnderHead;
+        const nutSide = hw.freeSide === "nut";
+        const w = nutSide ? hw.washerUnderNut : hw.washerUnderHead;
+        const under = nutSide ? "under the nut" : "under the bolt head";
         if (!w) {
           out.push(finding("retaining-washer-missing", "hazard", jointSubject(jt.id),
-            `The rod end at joint ${jointLabel(ctx, j)} is in single shear with no retaining washer under the bolt head. If the ball comes out of its housing nothing holds the eye on the bolt: fit a washer whose outside diameter is larger than the housing bore${bore ? ` (over ${fmt(bore, 3)} in)` : ""}.`,
+            `The rod end at joint ${jointLabel(ctx, j)} is in single shear with no retaining washer on its free side (${under}). If the ball comes out of its housing nothing holds the eye on the bolt: fit a washer whose outside diameter is larger than the housing bore${bore ? ` (over ${fmt(bore, 3)} in)` : ""}.`,
             SRC.retainingWasher, bore ? [num("housing bore", bore, "in")] : []));
         } else if (bore === undefined) {
           out.push(finding("retaining-washer-unverifiable", "caution", jointSubject(jt.id),
@@ -107,7 +111,7 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
             SRC.retainingWasher, [num("washer outside diameter", w.outsideDiameter, "in")]));
         } else if (!(w.outsideDiameter > bore)) {
           out.push(finding("retaining-washer-small", "hazard", jointSubject(jt.id),
-            `The washer under the bolt head at joint ${jointLabel(ctx, j)} is ${fmt(w.outsideDiameter, 3)} in across, no larger than the ${fmt(bore, 3)} in ${re.housingBore !== undefined ? "housing bore" : "ball (no housing bore recorded)"} of the rod end. If the ball falls out the eye slides off over it. Fit a larger-diameter washer.`,
+            `The washer ${under} at joint ${jointLabel(ctx, j)} is ${fmt(w.outsideDiameter, 3)} in across, no larger than the ${fmt(bore, 3)} in ${re.housingBore !== undefined ? "housing bore" : "ball (no housing bore recorded)"} of the rod end. If the ball falls out the eye slides off over it. Fit a larger-diameter washer.`,
             SRC.retainingWasher, [num("washer outside diameter", w.outsideDiameter, "in"), num("housing bore", bore, "in")]));
         }
       }
@@ -120,13 +124,19 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       }
     }
 
-    // Rule 3b: self-locking nut on a bolt subject to rotation.
+    // Rule 3b: no self-locking nut where a part turns on the bolt (AC 43.13-1B 7-64a).
     const nut = hw.nut;
-    const rotating = boltSubjectToRotation(hw);
+    const role = ctx.roles[j];
+    const rotating = turnsOnBolt(hw, role);
     if (nut && (nut.type === "selfLockingMetal" || nut.type === "selfLockingInsert") && rotating) {
-      const why = hw.fit === "freeToRotate" ? "the bolt is set free to rotate" : `the part turns on the bolt (${hw.bearing === "clevisPin" ? "clevis pin" : "plain bushing"})`;
-      out.push(finding("self-locking-nut-on-turning-bolt", "hazard", jointSubject(jt.id),
-        `A self-locking nut is used at joint ${jointLabel(ctx, j)}, where ${why}. Rotation can back a self-locking nut off; use a castellated nut with a new cotter pin, or clamp the bolt so it cannot turn.`,
+      const known = hw.fit === "freeToRotate" || hw.bearing !== undefined;
+      const why = hw.fit === "freeToRotate" ? "the bolt is set free to rotate"
+        : hw.bearing === "clevisPin" ? "the part turns on a clevis pin"
+        : hw.bearing === "plainBushing" ? "the part turns on a plain bushing on the bolt"
+        : hw.bearing === "none" ? "the part turns directly on the bolt (no bearing)"
+        : "nothing records what the part turns on, so it is taken to turn on the bolt";
+      out.push(finding("self-locking-nut-on-turning-bolt", known ? "hazard" : "caution", jointSubject(jt.id),
+        `A self-locking nut is used at joint ${jointLabel(ctx, j)}, where ${why}. A part turning on the bolt can work a self-locking nut loose. Use a castellated nut with a new cotter pin (snugged so the part still turns freely, not torqued to the table), or a nut locked by safety wire; do not clamp a bushing pivot tight to stop it turning, which binds the control.${known ? "" : " If it turns on a ball bearing or rod end whose inner race the bolt clamps, record that under \"Turns on\"."}`,
         SRC.selfLockingRotation));
     }
 
@@ -163,6 +173,14 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       out.push(finding("bolt-too-small", "hazard", jointSubject(jt.id),
         `The bolt at joint ${jointLabel(ctx, j)} is ${fmt(d, 3)} in in diameter; nothing smaller than a 10-32 (AN3, 0.190 in) belongs in a control run. Use an AN3 or larger.`,
         SRC.minBolt, [num("bolt diameter", d, "in"), num("minimum", MIN_D, "in")]));
+    }
+
+    // Aluminium bolts: none under 1/4 in in primary structure (AC 43.13-1B 7-41).
+    const primary = ctx.graph.system !== "flap" && ctx.graph.system !== "trim";
+    if (bolt.material === "aluminium" && d !== null && d < 0.25 - 1e-9 && primary) {
+      out.push(finding("aluminium-bolt-small", "hazard", jointSubject(jt.id),
+        `The aluminium bolt at joint ${jointLabel(ctx, j)} is ${fmt(d, 3)} in in diameter; aluminium bolts under 1/4 in do not belong in primary structure, and a ${ctx.graph.system} run is primary. Use a steel bolt.`,
+        SRC.minBolt, [num("bolt diameter", d, "in"), num("minimum", 0.25, "in")]));
     }
 
     const hasNut = nut && nut.type !== "none";
@@ -202,19 +220,35 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
           const source = trow.source;
           const tq = hw.torque;
           const selfLocking = nut.type === "selfLockingMetal" || nut.type === "selfLockingInsert";
+          const drag = selfLocking ? nut.dragTorque : 0;
+          const ceiling = nut.pattern === "shear" ? trow.ceiling.shear : trow.ceiling.tension;
+          const pat = nut.pattern ?? "tension";
+          const lo = range.min + (drag ?? 0), hi = range.max + (drag ?? 0);
+          const plusDrag = selfLocking ? (drag === undefined ? " plus the nut's drag torque" : ` plus the measured ${fmt(drag, 1)} in·lbf drag`) : "";
           if (tq === undefined) {
             out.push(finding("torque-unrecorded", "advisory", jointSubject(jt.id),
-              `Record the torque applied at joint ${jointLabel(ctx, j)}: ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${nut.pattern ?? "tension"} nut, plus the nut's drag torque.`, source));
-          } else if (tq < range.min) {
+              `Record the torque applied at joint ${jointLabel(ctx, j)}: ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${pat} nut${plusDrag}.`, source));
+          } else if (tq > ceiling) {
+            out.push(finding("torque-over-maximum", "hazard", jointSubject(jt.id),
+              `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(ceiling, 0)} in·lbf maximum allowable for a ${row.thread} ${pat} nut. The bolt may have yielded: replace the bolt and the nut, and torque the new ones within ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf${plusDrag}.`,
+              SRC.torqueCeiling, [...torqueNumbers(tq, range.min, range.max), num("maximum allowable", ceiling, "in·lbf")]));
+          } else if (tq < lo) {
             out.push(finding("torque-low", "caution", jointSubject(jt.id),
-              `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, below the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${nut.pattern ?? "tension"} nut (plus drag torque). Re-torque it.`, source, torqueNumbers(tq, range.min, range.max)));
-          } else if (tq > range.max) {
-            if (selfLocking)
-              out.push(finding("torque-check-drag", "advisory", jointSubject(jt.id),
-                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the table's ${fmt(range.max, 0)} in·lbf for a ${row.thread} ${nut.pattern ?? "tension"} nut. That is right only if the excess is the self-locking nut's drag torque: measure the drag and confirm.`, source, torqueNumbers(tq, range.min, range.max)));
+              `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, below the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}. Re-torque it.`, source, torqueNumbers(tq, range.min, range.max)));
+          } else if (tq > hi) {
+            if (selfLocking && drag === undefined)
+              out.push(finding("torque-check-drag", "caution", jointSubject(jt.id),
+                `Not checked: the nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the table's ${fmt(range.max, 0)} in·lbf for a ${row.thread} ${pat} nut, and its drag torque is not recorded. Measure the nut's drag torque and record it: the torque is within the table only if it is no more than ${fmt(range.max, 0)} in·lbf plus the drag.`, source, torqueNumbers(tq, range.min, range.max)));
             else
               out.push(finding("torque-high", "caution", jointSubject(jt.id),
-                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${nut.pattern ?? "tension"} nut. Over-torque stretches the bolt; replace the bolt and nut and torque within the range.`, source, torqueNumbers(tq, range.min, range.max)));
+                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(lo, 0)}–${fmt(hi, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}. Over-torque stretches the bolt; replace the bolt and nut and torque within the range.`, source, torqueNumbers(tq, lo, hi)));
+          }
+          // A re-used self-locking nut whose drag has fallen below the minimum no longer locks.
+          const minDrag = MIN_DRAG[row.thread];
+          if (selfLocking && drag !== undefined && minDrag !== undefined && drag < minDrag) {
+            out.push(finding("nut-drag-low", "caution", jointSubject(jt.id),
+              `The self-locking nut at joint ${jointLabel(ctx, j)}${nut.reused ? ", re-used," : ""} has a drag torque of ${fmt(drag, 1)} in·lbf, below the ${fmt(minDrag, 1)} in·lbf minimum for a ${row.thread} nut: its locking feature is worn. Replace the nut.`,
+              PREVAILING_SRC, [num("drag torque", drag, "in·lbf"), num("minimum", minDrag, "in·lbf")]));
           }
         }
       }

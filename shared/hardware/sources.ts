@@ -17,6 +17,7 @@ export const SRC = {
   rodEndRating: { kind: "published", text: "rod-end makers' engineering notes (rating = lowest of race, eye, shank)" },
   statics: { kind: "fromMemory", text: "statics: F_out = F_in · L_in / L_out" },
   torqueTable: { kind: "published", text: "AC 43.13-1B table 7-1" },
+  torqueCeiling: { kind: "fromMemory", text: "AC 43.13-1B table 7-1, maximum allowable tightening torque column (recalled)" },
   torqueTableMemory: { kind: "fromMemory", text: "AC 43.13-1B table 7-1 (row recalled, not checked against the text)" },
   jamNut: { kind: "published", text: "AC 43.13-1B 7-70 (checknut); common practice" },
   engagement: { kind: "commonPractice", text: "thread engagement: witness hole, or 1×D steel / 2×D aluminium" },

@@ -142,7 +142,7 @@ describe("rule 6: torque within AC 43.13-1B table 7-1", () => {
   it("only advises on a self-locking nut above the range (the excess may be drag torque)", () => {
     const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 75 }));
     expect(codes(g, "rodA")).toEqual(["torque-check-drag"]);
-    expect(severityOf(g, "torque-check-drag")).toBe("advisory");
+    expect(severityOf(g, "torque-check-drag")).toBe("caution");
   });
   it("uses the shear-nut column for a shear nut", () => {
     const shear = (t: number) => (h: JointHardware) => ({ ...h, nut: { type: "plainSafetyWire" as const, pattern: "shear" as const }, torque: t });

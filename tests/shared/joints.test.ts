@@ -1,0 +1,196 @@
+/**
+ * The joint checks of the load-path check v2, each tripped and not tripped. Loads come from goodRun()
+ * (tests/shared/fixtures.ts): stick 167 lbf (14 CFR 23.397(b)) × 20/5 = 668 lbf limit in the pushrod and at
+ * its rod-end joints; ultimate with the fitting factor 668 × 1.5 × 1.15 = 1,152.3 lbf (14 CFR 23.303, 23.625).
+ */
+import { describe, expect, it } from "vitest";
+import { analyze, selectSpecialFactor, DEFAULT_SETTINGS, type JointResult } from "../../shared/analysis";
+import type { JointHardware, LinkageGraph } from "../../shared/linkage/schema";
+import { bearingUltimate, PLATE_TABLE, tearOutStrength } from "../../shared/hardware";
+import { goodRun, valid, withHardware } from "./fixtures";
+
+const run = (g: LinkageGraph, settings = {}) => analyze(valid(g), settings);
+const joint = (g: LinkageGraph, id: string, settings = {}): JointResult => run(g, settings).joints.find((x) => x.jointId === id)!;
+const check = (r: JointResult, id: string) => r.checks.find((c) => c.id === id)!;
+const codes = (g: LinkageGraph, subject: string) => run(g).findings.filter((f) => f.subject.id === subject).map((f) => f.code);
+const rel = (a: number, b: number, tol = 1e-4) => expect(Math.abs(a / b - 1)).toBeLessThan(tol);
+/** goodRun with the stick's design force set so the pushrod carries `link` lbf limit (grip 20, attach 5: × 4). */
+function withLink(link: number): LinkageGraph {
+  const g = goodRun();
+  (g.nodes[0].props as { designForce?: number }).designForce = link / 4;
+  return g;
+}
+
+describe("bolt bending in single shear (domain.md §3: AN4, a = 0.25 in)", () => {
+  // Link 2,400 / 1.725 = 1,391.3 lbf limit → 2,400 lbf ultimate at the rod end (14 CFR 23.303 × 1.5, 23.625 × 1.15).
+  // Bending: a = spacers 0 + ball width 0.5/2 = 0.25 in; M = 2,400 × 0.25 = 600 in·lbf.
+  // Allowable: 125,000 psi (AN steel Ftu, from memory) × 1.5 (round-bar shape factor, from memory: 1.5–1.7) × π · 0.25³/32 = 287.6 in·lbf.
+  // Shear: 75,000 × π · 0.25²/4 = 3,681.6 lbf single shear (from memory) → MS +0.534.
+  const single = (h: JointHardware) => ({ ...h, shear: "single" as const, spacers: 0, rodEnd: { ...h.rodEnd!, ballWidth: 0.5 } });
+  const g = withHardware(withLink(2400 / 1.725), "rodA", single);
+  const r = joint(g, "rodA");
+  it("bending margin is negative while the shear margin is positive", () => {
+    rel(check(r, "boltBending").required!, 600);
+    rel(check(r, "boltBending").allowable!, 287.62, 1e-3);
+    rel(check(r, "boltBending").margin! + 1, 287.62 / 600, 1e-3); // −0.52
+    rel(check(r, "boltShear").margin! + 1, 3681.55 / 2400, 1e-3); // +0.534
+    expect(check(r, "boltShear").margin!).toBeGreaterThan(0);
+    expect(r.governing).toMatchObject({ check: "boltBending" });
+    expect(r.governing!.margin).toBeLessThan(0);
+    expect(codes(g, "rodA")).toContain("bolt-bending-weak");
+  });
+  it("the summary's lowest margin is the bending, not a pushrod", () => {
+    expect(run(g).summary.lowestMargin).toMatchObject({ subject: { type: "joint", id: "rodA" } });
+    expect(run(g).summary.lowestMargin!.what).toMatch(/bending/);
+  });
+  it("does not trip at the base load (1,152.3 lbf ultimate: M = 288.1 in·lbf, just over; at a = 0.125 in 144 in·lbf passes)", () => {
+    const ok = withHardware(goodRun(), "rodA", (h) => ({ ...h, shear: "single", spacers: 0, rodEnd: { ...h.rodEnd!, ballWidth: 0.25 } }));
+    expect(check(joint(ok, "rodA"), "boltBending").margin!).toBeGreaterThan(0); // 287.6 / (1,152.3 × 0.125) − 1 = +1.0
+    expect(codes(ok, "rodA")).not.toContain("bolt-bending-weak");
+  });
+  it("is not checked without the stack: it asks for the ball width and spacers", () => {
+    const g2 = withHardware(goodRun(), "rodA", (h) => ({ ...h, shear: "single", spacers: undefined, rodEnd: { ...h.rodEnd!, ballWidth: undefined } }));
+    const c = check(joint(g2, "rodA"), "boltBending");
+    expect(c).toMatchObject({ status: "notChecked", margin: null });
+    expect(c.todo).toMatch(/ball width/);
+    expect(c.todo).toMatch(/spacers/);
+    expect(codes(g2, "rodA")).toContain("joint-checks-not-made");
+  });
+  it("double shear without gaps has no bending check; with spacers it has one", () => {
+    expect(joint(goodRun(), "rodA").checks.some((c) => c.id === "boltBending")).toBe(false);
+    // Gap 0.125 in, fork cheek 0.25/2 = 0.125 in, ball 0.375 in: M = P/2 × (0.125 + 0.0625 + 0.09375) = 1,152.3 × 0.140625 = 162.0 in·lbf.
+    const gap = withHardware(goodRun(), "rodA", (h) => ({ ...h, spacers: 0.125 }));
+    rel(check(joint(gap, "rodA"), "boltBending").required!, 1152.3 * 0.140625);
+  });
+});
+
+describe("bearing and tear-out at the hole (a lug worked by hand)", () => {
+  // 2024-T3 plate, t = 0.125 in, AN4 (D = 0.25 in), e = 0.4375 in → e/D = 1.75.
+  // Fbru (from memory, MIL-HDBK-5): 104 ksi at e/D 1.5, 129 ksi at 2.0 → 116.5 ksi at 1.75 (linear).
+  // Bearing: 116,500 × 0.25 × 0.125 = 3,640.6 lbf. Tear-out: 2 × 0.125 × (0.4375 − 0.125) × 39,000 (Fsu, from memory) = 3,046.9 lbf.
+  const lug = { material: "2024-T3" as const, thickness: 0.125, edgeDistance: 0.4375 };
+  const g = (link: number) => withHardware(withLink(link), "rodA", (h) => ({ ...h, holes: { from: lug, to: lug } }));
+  it("matches the hand figures", () => {
+    expect(bearingUltimate(PLATE_TABLE["2024-T3"], 1.75)).toBe(116_500);
+    rel(tearOutStrength(0.125, 0.4375, 0.25, 39_000), 3046.875, 1e-9);
+    const r = joint(g(668), "rodA");
+    rel(check(r, "bearingFrom").allowable!, 3640.625, 1e-9);
+    rel(check(r, "tearOutFrom").allowable!, 3046.875, 1e-9);
+    expect(check(r, "bearingFrom").label).toMatch(/stick|Control stick/i);
+    expect(r.checks.some((c) => c.id === "bearingTo")).toBe(false); // the pushrod side is the rod end's eye: its rating
+  });
+  it("trips tear-out when the ultimate passes 3,046.9 lbf, not below", () => {
+    const over = 3046.875 / 1.725 * 1.01, under = 3046.875 / 1.725 * 0.99;
+    expect(codes(g(over), "rodA")).toContain("hole-tear-out-weak");
+    expect(codes(g(under), "rodA")).not.toContain("hole-tear-out-weak");
+  });
+  it("trips when the edge distance is under 1.5 D, and the bearing is then not checked", () => {
+    const short = withHardware(goodRun(), "rodA", (h) => ({ ...h, holes: { from: { ...lug, edgeDistance: 0.3 }, to: lug } }));
+    expect(codes(short, "rodA")).toContain("hole-edge-short"); // e/D 1.2 < 1.5 (MIL-HDBK-5 tables start at 1.5, from memory)
+    expect(check(joint(short, "rodA"), "bearingFrom").status).toBe("notChecked");
+    expect(codes(goodRun(), "rodA")).not.toContain("hole-edge-short");
+  });
+  it("a member without its data is not checked, with what to enter — never a margin", () => {
+    const g2 = withHardware(goodRun(), "rodA", (h) => ({ ...h, holes: { from: { material: "6061-T6" }, to: lug } }));
+    const c = check(joint(g2, "rodA"), "bearingFrom");
+    expect(c).toMatchObject({ status: "notChecked", margin: null });
+    expect(c.todo).toMatch(/thickness, edge distance/);
+  });
+});
+
+describe("special factor: only the highest applies (14 CFR 23.619), on bearing", () => {
+  const s = DEFAULT_SETTINGS;
+  it("fitting factor 1.15 on a clamped rod end (23.625)", () => {
+    expect(selectSpecialFactor({ ...goodRun().joints[1].hardware }, "link", s)).toMatchObject({ value: 1.15, name: "fitting factor" });
+  });
+  it("3.33 on a part turning on a plain bushing or on the bolt (23.693), 2.0 in a cable system", () => {
+    const hw = { ...goodRun().joints[0].hardware, bearing: "plainBushing" as const };
+    expect(selectSpecialFactor(hw, "pivot", s).value).toBe(3.33);
+    expect(selectSpecialFactor({ ...hw, bearing: "none" }, "pivot", s).value).toBe(3.33);
+    expect(selectSpecialFactor(hw, "pivot", s, { cable: true })).toMatchObject({ value: 2, name: "cable-system joint factor" });
+    expect(selectSpecialFactor({ ...hw, bearing: "ballBearing" }, "pivot", s).value).toBe(1.15);
+  });
+  it("6.67 at a hinge that is not a ball or roller bearing (23.657(a)); fitting factor at a ball-bearing hinge", () => {
+    const g = withHardware(goodRun(), "hinge", (h) => ({ ...h, bearing: "plainBushing" }));
+    const r = joint(g, "hinge");
+    expect(r.factor).toMatchObject({ value: 6.67, name: "hinge bearing factor" });
+    // The hinge carries 668 lbf limit; bearing at the mount's hole takes 668 × 1.5 × 6.67, the bolt 668 × 1.725.
+    rel(check(r, "bearingTo").required!, 668 * 1.5 * 6.67);
+    rel(check(r, "boltShear").required!, 668 * 1.725);
+    expect(joint(goodRun(), "hinge").factor.value).toBe(1.15);
+  });
+});
+
+describe("ball and roller bearings: the rating may not be exceeded (23.693, 23.657(a))", () => {
+  it("not checked without a rating (a caution), a hazard when exceeded, nothing when it holds", () => {
+    const none = withHardware(goodRun(), "pivot", (h) => ({ ...h, bearingRating: undefined }));
+    expect(check(joint(none, "pivot"), "bearingRating").status).toBe("notChecked");
+    expect(codes(none, "pivot")).toEqual(["bearing-rating-missing"]);
+    // The stick pivot carries 167 + 668 = 835 lbf limit → 1,440.4 lbf ultimate with the fitting factor.
+    expect(codes(withHardware(goodRun(), "pivot", (h) => ({ ...h, bearingRating: 1400 })), "pivot")).toEqual(["bearing-rating-exceeded"]);
+    expect(codes(withHardware(goodRun(), "pivot", (h) => ({ ...h, bearingRating: 1500 })), "pivot")).toEqual([]);
+  });
+});
+
+describe("clevis pins (14 CFR 23.689(d))", () => {
+  const pin = (retention: "cotterPinOnly" | "nutAndCotterPin", shearStrength?: number) => (h: JointHardware) =>
+    ({ ...h, rodEnd: h.rodEnd, bolt: undefined, clevisPin: { diameter: 0.25, retention, ...(shearStrength ? { shearStrength } : {}) } });
+  it("a pin under load retained only by a cotter pin is a hazard; by more than a cotter pin, none", () => {
+    expect(codes(withHardware(goodRun(), "rodA", pin("cotterPinOnly", 60_000)), "rodA")).toContain("clevis-pin-cotter-only");
+    expect(codes(withHardware(goodRun(), "rodA", pin("nutAndCotterPin", 60_000)), "rodA")).not.toContain("clevis-pin-cotter-only");
+  });
+  it("shear like a bolt: 60,000 × π · 0.25²/4 × 2 = 5,890 lbf; without the pin's strength, not checked", () => {
+    rel(check(joint(withHardware(goodRun(), "rodA", pin("nutAndCotterPin", 60_000)), "rodA"), "pinShear").allowable!, 5890.49, 1e-5);
+    expect(check(joint(withHardware(goodRun(), "rodA", pin("nutAndCotterPin")), "rodA"), "pinShear").status).toBe("notChecked");
+  });
+});
+
+describe("rod-end thread in tension at its stress area (ASME B1.1)", () => {
+  // 1/4-28: A_t = 0.0364 in² (ASME B1.1). Alloy steel body 125 ksi (from memory): 4,550 lbf; aluminium 62 ksi: 2,256.8 lbf.
+  it("computed from the body's material; trips when the link load passes it", () => {
+    rel(check(joint(goodRun(), "rodA"), "threadTension").allowable!, 4550);
+    const alu = (link: number) => withHardware(withLink(link), "rodA", (h) => ({ ...h, rodEnd: { ...h.rodEnd!, bodyMaterial: "aluminium" } }));
+    expect(codes(alu(2256.8 / 1.725 * 1.01), "rodA")).toContain("thread-tension-weak");
+    expect(codes(alu(2256.8 / 1.725 * 0.99), "rodA")).not.toContain("thread-tension-weak");
+  });
+  it("not checked without the body material", () => {
+    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, rodEnd: { ...h.rodEnd!, bodyMaterial: undefined } }));
+    expect(check(joint(g, "rodA"), "threadTension")).toMatchObject({ status: "notChecked", todo: "enter the rod end's body material" });
+  });
+});
+
+describe("nuts, bolts and torque", () => {
+  it("self-locking nut where the part turns on the bolt: hazard for bearing none, caution when unknown, none on a ball bearing", () => {
+    const on = (bearing?: JointHardware["bearing"]) => withHardware(goodRun(), "pivot", (h) => ({ ...h, bearing }));
+    expect(run(on("none")).findings.find((f) => f.code === "self-locking-nut-on-turning-bolt")?.severity).toBe("hazard");
+    expect(run(on(undefined)).findings.find((f) => f.code === "self-locking-nut-on-turning-bolt")?.severity).toBe("caution");
+    expect(codes(on("ballBearing"), "pivot")).not.toContain("self-locking-nut-on-turning-bolt");
+    const msg = run(on("plainBushing")).findings.find((f) => f.code === "self-locking-nut-on-turning-bolt")!.message;
+    expect(msg).toMatch(/castellated nut with a new cotter pin/);
+    expect(msg).not.toMatch(/clamp the bolt so/); // clamping would bind a bushing pivot
+  });
+  it("torque: within table 7-1 plus the drag passes; above it a caution; above the maximum allowable a hazard (AC 43.13-1B)", () => {
+    const tq = (torque: number, dragTorque?: number) => withHardware(goodRun(), "rodA", (h) => ({ ...h, torque, nut: { ...h.nut!, dragTorque } }));
+    expect(codes(tq(75, 10), "rodA")).toEqual([]); // 1/4-28 tension 50–70 + 10 drag
+    expect(codes(tq(85, 10), "rodA")).toEqual(["torque-high"]);
+    expect(codes(tq(105, 10), "rodA")).toEqual(["torque-over-maximum"]); // over the 100 in·lbf column (from memory)
+    expect(run(tq(105, 10)).findings.find((f) => f.code === "torque-over-maximum")!.severity).toBe("hazard");
+  });
+  it("drag below the minimum for a re-used self-locking nut is a caution", () => {
+    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 60, nut: { ...h.nut!, dragTorque: 2, reused: true } }));
+    expect(codes(g, "rodA")).toEqual(["nut-drag-low"]); // 1/4-28 minimum 3.5 in·lbf (from memory)
+    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 63, nut: { ...h.nut!, dragTorque: 4, reused: true } })), "rodA")).toEqual([]);
+  });
+  it("aluminium bolts under 1/4 in in primary structure (AC 43.13-1B 7-41), not in a flap run", () => {
+    const alu = (g: LinkageGraph) => withHardware(g, "horn", (h) => ({ ...h, bolt: { ...h.bolt!, material: "aluminium" } }));
+    expect(codes(alu(goodRun()), "horn")).toContain("aluminium-bolt-small");
+    const flap = goodRun();
+    flap.system = "flap";
+    expect(codes(alu(flap), "horn")).not.toContain("aluminium-bolt-small");
+  });
+  it("the retaining washer is looked for on the rod end's free side", () => {
+    const single = (freeSide: "head" | "nut") => withHardware(goodRun(), "rodA", (h) => ({ ...h, shear: "single", freeSide, washerUnderHead: { outsideDiameter: 0.4 }, washerUnderNut: { outsideDiameter: 0.625 } }));
+    expect(codes(single("nut"), "rodA")).not.toContain("retaining-washer-small");
+    expect(codes(single("head"), "rodA")).toContain("retaining-washer-small");
+  });
+});
