@@ -27,14 +27,17 @@ export function movingRole(role: JointRole): boolean {
 
 /**
  * Whether a part turns directly on the bolt or pin at this joint (a plain bearing with angular motion):
- * a plain bushing or clevis pin, a bolt set free to turn, or a moving joint with no ball, roller or rod-end
- * bearing recorded (`none`, or left blank).
+ * a plain bushing or clevis pin, a bolt set free to turn, a moving joint whose bearing is recorded as `none`,
+ * or a pivot or hinge with no bearing recorded.
  */
 export function turnsOnBolt(hw: JointHardware | undefined, role: JointRole): boolean {
   if (!hw) return false;
   if (hw.fit === "freeToRotate" || hw.bearing === "plainBushing" || hw.bearing === "clevisPin") return true;
   if (hw.rodEnd || hw.bearing === "ballBearing" || hw.bearing === "rodEnd") return false;
-  return movingRole(role) && (hw.bearing === "none" || hw.bearing === undefined) && !!(hw.bolt || hw.clevisPin);
+  if (!(hw.bolt || hw.clevisPin)) return false;
+  // Nothing recorded: a pivot or hinge turns on something, so on the bolt; a link end (a fork, a terminal) is left alone.
+  if (hw.bearing === undefined) return role === "pivot" || role === "hinge";
+  return movingRole(role) && hw.bearing === "none";
 }
 
 export type FactorOptions = { /** The joint is in a cable system (the cable module sets it). */ cable?: boolean };
