@@ -126,6 +126,21 @@ describe("linkage editor in a real browser", () => {
     await waitSaved(page);
   });
 
+  it("shows the joint's checks: a check without its inputs is a to-do, not a pass, until they are entered", async () => {
+    const card = page.getByTestId("joint-card");
+    const checks = card.getByTestId("joint-checks");
+    await checks.waitFor();
+    // The rod end's thread in tension needs the body material (ASME B1.1 stress area × the body's Ftu).
+    await expect.poll(() => checks.getByTestId("joint-todo").textContent(), { timeout: 5000 }).toMatch(/Enter the rod end's body material/);
+    await expect(checks.locator("[data-check=threadTension]").count()).resolves.toBe(0);
+    await expect(checks.locator("[data-check=rodEndRating]").count()).resolves.toBe(1);
+    await shot(page, "editor-04b-joint-todo");
+    await card.getByTestId("joint-form-rodEnd__bodyMaterial").selectOption("alloySteel");
+    await expect.poll(() => checks.locator("[data-check=threadTension]").count(), { timeout: 5000 }).toBe(1);
+    await expect(checks.getByTestId("joint-todo").count()).resolves.toBe(0);
+    await waitSaved(page);
+  });
+
   it("reloads and finds everything saved", async () => {
     await page.reload();
     await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
