@@ -84,7 +84,7 @@ function ItemRow({ i, canTick, onChange }: { i: Item; canTick: boolean; onChange
   const [checked, setChecked] = useState(!!i.tickedAt);
   useEffect(() => setChecked(!!i.tickedAt), [i.tickedAt]);
   return (
-    <li className="flex gap-3 px-4 py-2" data-testid="checklist-item">
+    <li className={`flex gap-3 px-4 py-2 ${i.code === "not-checked" ? "bg-caution/10" : ""}`} data-testid="checklist-item" data-code={i.code}>
       <input id={id} type="checkbox" className="mt-1 h-4 w-4" checked={checked} disabled={!canTick} onChange={(e) => { setChecked(e.target.checked); onChange({ ticked: e.target.checked }); }} />
       <div className="flex-1">
         <label htmlFor={id} className="text-sm">{i.text}</label>
