@@ -119,8 +119,10 @@ export function designForceFor(system: ControlSystem, settings: AnalysisSettings
 
 export function SummaryStrip({ system, settings }: { system: ControlSystem; settings: AnalysisSettings }) {
   const { unitSystem } = useEditorConfig();
-  const { summary, where, motion } = useEditorStore((s) => ({
+  const { summary, where, motion, loadCase, belowMin } = useEditorStore((s) => ({
     summary: s.report?.summary ?? null,
+    loadCase: s.report?.designCase ?? null,
+    belowMin: s.report?.settingsCautions?.length ?? 0,
     motion: !s.report?.motion ? null : s.report.motion.checked ? "checked" : "not checked",
     where: s.report?.summary.lowestMargin ? subjectName(s, s.report.summary.lowestMargin.subject) : "",
   }));
@@ -147,6 +149,16 @@ export function SummaryStrip({ system, settings }: { system: ControlSystem; sett
           </span>
         ))}
       </span>
+      {loadCase && loadCase.governing !== "maximumPilotForce" && (
+        <span data-testid="load-case" title={loadCase.text} className="text-ink">
+          Loads: {loadCase.governing === "hingeMoment" ? "125 % hinge moment" : "minimum pilot force"} ({Math.round(loadCase.scale * 100)} %)
+        </span>
+      )}
+      {belowMin > 0 && (
+        <span data-testid="settings-below-minimum" className="font-semibold text-caution" title="See the caution in the findings">
+          Settings below the published minimums
+        </span>
+      )}
       {motion && (
         <span data-testid="motion-status" title={motion === "checked" ? "The run is swept through its travel (Geometry)" : "Enter the pivots and arm angles in Geometry to sweep the run through its travel"}
           className={motion === "checked" ? "text-ink" : "text-caution"}>
