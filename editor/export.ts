@@ -1,13 +1,16 @@
 /**
  * Picture export for the build log: the whole linkage (not just what is in view), drawn at 2× with
  * html-to-image, on top of a title block (build, linkage, revision, date, findings, caution).
+ * About 300 lines on purpose: it is one drawing (joints, cards and title block on one canvas, sized together),
+ * and its parts share the layout numbers; split, they would only pass those numbers back and forth.
  */
 import { getBezierPath, getNodesBounds, getViewportForBounds, Position, type Node } from "@xyflow/react";
 import { getFontEmbedCSS, toPng } from "html-to-image";
 import type { Severity, Summary } from "@/shared/analysis/types";
 import type { Joint, LinkageNode } from "@/shared/linkage/schema";
 import { cardSize, PORT_SIDES } from "./nodes";
-import { hardwareChips, SEVERITY_HEX } from "./joints/JointEdge";
+import { hardwareChips } from "./joints/JointEdge";
+import { SEVERITY_HEX } from "./presentation";
 import { partName } from "@/shared/linkage/names";
 
 export const EXPORT_WIDTH = 1600;

@@ -11,39 +11,18 @@ import type { LinkageGraph } from "@/shared/linkage/schema";
 import { api, ApiFailure } from "@/components/api-client";
 import { linkageKeys } from "@/components/query-keys";
 import type { GraphSaved, Revision } from "@/shared/schemas/graph";
-import { jointName, partName } from "@/shared/linkage/names";
+import { diffGraphs } from "@/shared/review/diff";
 import { toGraph, type EditorStore, type Snapshot } from "./store";
+import type { SaveStatus } from "./presentation";
 
 export const AUTOSAVE_DELAY = 1500;
 
-export type SaveStatus = "saved" | "saving" | "unsaved" | "offline" | "conflict" | "error" | "readonly";
+export type { SaveStatus };
 
 export type RemoteRevision = Revision;
 
 export function graphUrl(buildId: string, linkageId: string) {
   return `/api/builds/${encodeURIComponent(buildId)}/linkages/${encodeURIComponent(linkageId)}/graph`;
-}
-
-export type Difference = {
-  parts: { onlyTheirs: string[]; onlyMine: string[]; changed: string[] };
-  joints: { onlyTheirs: string[]; onlyMine: string[]; changed: string[] };
-};
-
-/** What differs between my graph and theirs, by name. */
-export function diffGraphs(mine: Snapshot, theirs: Snapshot): Difference {
-  const side = <T extends { id: string }>(a: T[], b: T[], name: (side: "mine" | "theirs", x: T) => string) => {
-    const ma = new Map(a.map((x) => [x.id, x]));
-    const mb = new Map(b.map((x) => [x.id, x]));
-    return {
-      onlyMine: a.filter((x) => !mb.has(x.id)).map((x) => name("mine", x)),
-      onlyTheirs: b.filter((x) => !ma.has(x.id)).map((x) => name("theirs", x)),
-      changed: a.filter((x) => mb.has(x.id) && JSON.stringify(x) !== JSON.stringify(mb.get(x.id))).map((x) => name("mine", x)),
-    };
-  };
-  return {
-    parts: side(mine.nodes, theirs.nodes, (_s, n) => partName(n)),
-    joints: side(mine.joints, theirs.joints, (s, j) => jointName(j, s === "mine" ? mine.nodes : theirs.nodes)),
-  };
 }
 
 export function useAutosave(opts: { store: EditorStore; buildId: string; linkageId: string; enabled: boolean }) {
@@ -217,6 +196,7 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
   const difference = useMemo(() => {
     if (!conflict) return null;
     const s = store.getState();
+    // Mine → theirs: "added" is only in theirs, "removed" only in mine (shared/review/diff.ts, as in the review history).
     return diffGraphs({ nodes: s.nodes, joints: s.joints }, { nodes: conflict.graph.nodes, joints: conflict.graph.joints });
   }, [conflict, store]);
 

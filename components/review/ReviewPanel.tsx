@@ -98,7 +98,7 @@ function Changed({ items, what }: { items: ChangedItem[]; what: string }) {
     <>
       {items.map((c) => (
         <li key={`${what}-${c.id}`}>
-          <span className="font-semibold">{what} {c.label || c.id}</span> changed:
+          <span className="font-semibold">{what} {c.name}</span> changed:
           <ul className="pl-3">
             {c.fields.map((f) => (
               <li key={f.path} data-testid="diff-field" className="font-mono text-[10px]">
@@ -119,10 +119,10 @@ function DiffView({ d }: { d: GraphDiff }) {
       {d.linkage.map((f) => (
         <li key={f.path}>Linkage {f.path}: {showValue(f.before)} → {showValue(f.after)}</li>
       ))}
-      {d.nodes.added.map((n) => <li key={`na-${n.id}`} className="text-ok">+ part {n.label || n.id} ({n.kind})</li>)}
-      {d.nodes.removed.map((n) => <li key={`nr-${n.id}`} className="text-hazard">− part {n.label || n.id} ({n.kind})</li>)}
-      {d.joints.added.map((j) => <li key={`ja-${j.id}`} className="text-ok">+ joint {j.label}</li>)}
-      {d.joints.removed.map((j) => <li key={`jr-${j.id}`} className="text-hazard">− joint {j.label}</li>)}
+      {d.nodes.added.map((n) => <li key={`na-${n.id}`} className="text-ok">+ part {n.name}</li>)}
+      {d.nodes.removed.map((n) => <li key={`nr-${n.id}`} className="text-hazard">− part {n.name}</li>)}
+      {d.joints.added.map((j) => <li key={`ja-${j.id}`} className="text-ok">+ joint {j.name}</li>)}
+      {d.joints.removed.map((j) => <li key={`jr-${j.id}`} className="text-hazard">− joint {j.name}</li>)}
       <Changed items={d.nodes.changed} what="part" />
       <Changed items={d.joints.changed} what="joint" />
       {d.nodes.moved > 0 && <li className="text-ink-soft">{d.nodes.moved} part{d.nodes.moved === 1 ? "" : "s"} moved on the canvas</li>}

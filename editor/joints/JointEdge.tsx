@@ -7,13 +7,12 @@
 import { memo } from "react";
 import { BaseEdge, EdgeLabelRenderer, getBezierPath, type Edge, type EdgeProps } from "@xyflow/react";
 import type { Joint } from "@/shared/linkage/schema";
-import type { Severity } from "@/shared/analysis/types";
 import { useEditorStoreApi, useEditorValue } from "../context";
+import { SEVERITY_HEX } from "../presentation";
 
 export type JointEdgeData = { joint: Joint };
 export type JointFlowEdge = Edge<JointEdgeData, "joint">;
 
-export const SEVERITY_HEX: Record<Severity, string> = { hazard: "#b42318", caution: "#b54708", advisory: "#2e5aac" };
 const INK = "#1f2a37";
 const MUTED = "#9aa3ad";
 

@@ -6,7 +6,7 @@
 import { memo } from "react";
 import { Handle, Position, type Node, type NodeHandle, type NodeProps } from "@xyflow/react";
 import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
-import type { Severity } from "@/shared/analysis/types";
+import { SEVERITY_BG, SEVERITY_BORDER } from "../presentation";
 import { useEditorConfig, useEditorValue } from "../context";
 import { partName } from "@/shared/linkage/names";
 import type { UnitSystem } from "../units";
@@ -20,13 +20,6 @@ export type PartFlowNode = Node<PartNodeData, NodeKind>;
 export { PORT_SIDES };
 const POS: Record<Side, Position> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
 
-export const SEVERITY_BORDER: Record<Severity, string> = {
-  hazard: "border-hazard",
-  caution: "border-caution",
-  advisory: "border-advisory",
-};
-export const SEVERITY_BG: Record<Severity, string> = { hazard: "bg-hazard", caution: "bg-caution", advisory: "bg-advisory" };
-export const SEVERITY_TEXT: Record<Severity, string> = { hazard: "text-hazard", caution: "text-caution", advisory: "text-advisory" };
 
 function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: NodeKind; label: string; lines: string[]; selected: boolean }) {
   const { readOnly } = useEditorConfig();

@@ -1,10 +1,12 @@
 "use client";
-/** Shown when a save finds that someone else saved a newer revision first. */
+/** Shown when a save finds that someone else saved a newer revision first, with what differs (shared/review/diff.ts). */
 import { useEffect, useRef } from "react";
-import type { Difference, RemoteRevision } from "../useAutosave";
+import type { GraphDiff, ItemRef } from "@/shared/review/diff";
+import type { RemoteRevision } from "../useAutosave";
 
-function Line({ label, names }: { label: string; names: string[] }) {
-  if (names.length === 0) return null;
+function Line({ label, items }: { label: string; items: ItemRef[] }) {
+  if (items.length === 0) return null;
+  const names = items.map((x) => x.name);
   const shown = names.slice(0, 4).join(", ") + (names.length > 4 ? ` and ${names.length - 4} more` : "");
   return (
     <li>
@@ -13,11 +15,11 @@ function Line({ label, names }: { label: string; names: string[] }) {
   );
 }
 
-export function ConflictDialog({ current, difference, onLoadTheirs, onKeepMine }: { current: RemoteRevision; difference: Difference; onLoadTheirs: () => void; onKeepMine: () => void }) {
+/** `difference` is from your work to their revision: added = only in theirs, removed = only in yours. */
+export function ConflictDialog({ current, difference, onLoadTheirs, onKeepMine }: { current: RemoteRevision; difference: GraphDiff; onLoadTheirs: () => void; onKeepMine: () => void }) {
   const ref = useRef<HTMLDivElement>(null);
   useEffect(() => ref.current?.querySelector<HTMLButtonElement>("button")?.focus(), []);
   const d = difference;
-  const none = [d.parts, d.joints].every((x) => x.onlyMine.length + x.onlyTheirs.length + x.changed.length === 0);
   const when = new Date(current.createdAt);
   return (
     <div className="fixed inset-0 z-50 flex items-center justify-center bg-ink/40 p-4" role="presentation">
@@ -30,16 +32,22 @@ export function ConflictDialog({ current, difference, onLoadTheirs, onKeepMine }
         </p>
         <div className="mt-3 rounded border border-ink/10 bg-paper p-2 text-[12px]" data-testid="conflict-diff">
           <p className="mb-1 font-semibold">Their revision compared with your work</p>
-          {none ? (
-            <p className="text-ink-soft">The parts and joints are the same; only positions or metadata differ.</p>
+          {d.same ? (
+            <p className="text-ink-soft">The parts and joints are the same{d.nodes.moved ? `; ${d.nodes.moved} part${d.nodes.moved === 1 ? " is" : "s are"} placed differently on the canvas` : ""}.</p>
           ) : (
             <ul className="space-y-0.5">
-              <Line label="parts only in theirs" names={d.parts.onlyTheirs} />
-              <Line label="parts only in yours" names={d.parts.onlyMine} />
-              <Line label="parts changed" names={d.parts.changed} />
-              <Line label="joints only in theirs" names={d.joints.onlyTheirs} />
-              <Line label="joints only in yours" names={d.joints.onlyMine} />
-              <Line label="joints changed" names={d.joints.changed} />
+              {d.linkage.map((f) => (
+                <li key={f.path}>
+                  Linkage {f.path}: <span className="text-ink-soft">{String(f.after ?? "")}</span>
+                </li>
+              ))}
+              <Line label="parts only in theirs" items={d.nodes.added} />
+              <Line label="parts only in yours" items={d.nodes.removed} />
+              <Line label="parts changed" items={d.nodes.changed} />
+              <Line label="joints only in theirs" items={d.joints.added} />
+              <Line label="joints only in yours" items={d.joints.removed} />
+              <Line label="joints changed" items={d.joints.changed} />
+              {d.nodes.moved > 0 && <li className="text-ink-soft">{d.nodes.moved} part{d.nodes.moved === 1 ? "" : "s"} placed differently on the canvas</li>}
             </ul>
           )}
         </div>

@@ -4,16 +4,15 @@ import { memo, useState } from "react";
 import { SEVERITIES, type AnalysisSettings, type Finding, type Severity } from "@/shared/analysis/types";
 import type { ControlSystem } from "@/shared/linkage/schema";
 import { useEditorConfig, useEditorStore } from "../context";
-import { useFocusSubject } from "../Canvas";
+import { useFocusSubject } from "../canvas/viewport";
 import { subjectName } from "@/shared/linkage/names";
 import { fmt, fmtUnit } from "../units";
-import { SEVERITY_BG, SEVERITY_TEXT } from "../nodes";
+import { SEVERITY_BG, SEVERITY_NAMES, SEVERITY_TEXT, SOURCE_NAMES } from "../presentation";
 
 export const CAUTION =
   "Linkwright's numbers aid your own engineering and the designer's data — they do not replace them. Follow the kit or plans designer's instructions, the airworthiness regulations and a qualified inspector; defer to local rules and licensed practice.";
 
-export const SEVERITY_NAMES: Record<Severity, string> = { hazard: "Hazard", caution: "Caution", advisory: "Advisory" };
-const SOURCE_NAMES = { published: "published", commonPractice: "common practice", fromMemory: "recalled value, check it" } as const;
+export { SEVERITY_NAMES };
 
 export const FindingItem = memo(function FindingItem({ f, compact, onPick }: { f: Finding; compact?: boolean; onPick?: (f: Finding) => void }) {
   const { unitSystem } = useEditorConfig();

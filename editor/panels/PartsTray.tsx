@@ -4,7 +4,7 @@ import { useReactFlow } from "@xyflow/react";
 import { KIND_LIST, type NodeKind } from "@/shared/linkage/kinds";
 import { useEditorConfig, useEditorStoreApi } from "../context";
 import { KindGlyph } from "../nodes/glyphs";
-import { GRID, KIND_MIME } from "../Canvas";
+import { dropCorner, KIND_MIME } from "../canvas/viewport";
 
 export default function PartsTray() {
   const api = useEditorStoreApi();
@@ -17,7 +17,7 @@ export default function PartsTray() {
     const centre = r ? rf.screenToFlowPosition({ x: r.left + r.width / 2, y: r.top + r.height / 2 }) : { x: 0, y: 0 };
     // Step each new part down a little so repeated clicks do not stack exactly.
     const n = api.getState().nodes.length % 8;
-    api.getState().addNode(kind, { x: Math.round((centre.x - 74 + n * 20) / GRID) * GRID, y: Math.round((centre.y - 25 + n * 20) / GRID) * GRID });
+    api.getState().addNode(kind, dropCorner(kind, { x: centre.x + n * 20, y: centre.y + n * 20 }));
   };
 
   return (

@@ -1,28 +1,12 @@
 "use client";
-/** The keyboard sheet ("?"). */
+/** The keyboard sheet ("?"): the mouse gestures, then every command that has keys (editor/commands.ts). */
 import { useEffect, useRef } from "react";
-
-const KEYS: [string, string, boolean][] = [
-  ["Drag port → port", "make a joint", true],
-  ["Click / Shift-drag", "select / box-select", false],
-  ["Ctrl/⌘ + click", "add to the selection", false],
-  ["Ctrl/⌘ A", "select everything", false],
-  ["[  ]", "previous / next part", false],
-  ["Esc", "clear the selection", false],
-  ["Arrows (Shift ×5)", "nudge the selected parts", true],
-  ["Delete / Backspace", "delete the selection", true],
-  ["Ctrl/⌘ D", "duplicate", true],
-  ["Ctrl/⌘ C / V", "copy / paste", true],
-  ["Ctrl/⌘ Z", "undo", true],
-  ["Ctrl/⌘ Shift Z, Ctrl/⌘ Y", "redo", true],
-  ["Ctrl/⌘ S", "save now", true],
-  ["F", "fit the linkage in view", false],
-  ["?", "this sheet", false],
-];
+import { COMMANDS, GESTURES } from "../commands";
 
 export function ShortcutsSheet({ onClose, readOnly }: { onClose: () => void; readOnly: boolean }) {
   const ref = useRef<HTMLButtonElement>(null);
   useEffect(() => ref.current?.focus(), []);
+  const rows = [...GESTURES, ...COMMANDS.filter((c) => c.keys)].filter((r) => !readOnly || !r.edit);
   return (
     <div className="fixed inset-0 z-40 flex items-center justify-center bg-ink/30 p-4" onClick={onClose} role="presentation">
       <div role="dialog" aria-modal="true" aria-labelledby="keys-title" data-testid="shortcuts-sheet" className="w-full max-w-md rounded-lg bg-white p-4 text-ink shadow-xl" onClick={(e) => e.stopPropagation()}>
@@ -36,10 +20,10 @@ export function ShortcutsSheet({ onClose, readOnly }: { onClose: () => void; rea
         </div>
         <table className="w-full text-[12px]">
           <tbody>
-            {KEYS.filter(([, , edit]) => !readOnly || !edit).map(([k, what]) => (
-              <tr key={k} className="border-t border-ink/5">
-                <td className="py-1 pr-3 font-mono text-[11px] whitespace-nowrap">{k}</td>
-                <td className="py-1 text-ink-soft">{what}</td>
+            {rows.map((r) => (
+              <tr key={r.keys} className="border-t border-ink/5">
+                <td className="py-1 pr-3 font-mono text-[11px] whitespace-nowrap">{r.keys}</td>
+                <td className="py-1 text-ink-soft">{r.label}</td>
               </tr>
             ))}
           </tbody>

@@ -1,12 +1,16 @@
 /**
  * What changed between two revisions of a linkage: parts and joints added, removed, and changed,
  * with every changed field as a dotted path and its old → new value. Positions on the canvas are
- * layout, not design, and are reported only as a count of moved parts.
+ * layout, not design, and are reported only as a count of moved parts. Every part and joint carries its
+ * name (shared/linkage/names.ts), and a joint's ends are written by name, not by id. The one difference of
+ * two graphs: the review history and the editor's conflict dialog both show it.
  */
 import type { LinkageGraph } from "../linkage/schema";
+import { endName, indexById, jointName, partName } from "../linkage/names";
 
 export type FieldChange = { path: string; before: unknown; after: unknown };
-export type ItemRef = { id: string; kind?: string; label?: string };
+/** A part (with its kind and typed label) or a joint, and its name as shown. */
+export type ItemRef = { id: string; name: string; kind?: string; label?: string };
 export type ChangedItem = ItemRef & { fields: FieldChange[] };
 export type GraphDiff = {
   linkage: FieldChange[];
@@ -45,38 +49,47 @@ export function diffFields(a: unknown, b: unknown, prefix = ""): FieldChange[] {
   return out;
 }
 
-const endText = (e: { node: string; port: string }) => `${e.node}.${e.port}`;
+const endKey = (e: { node: string; port: string }) => `${e.node}\u0000${e.port}`;
 
-export function diffGraphs(a: LinkageGraph, b: LinkageGraph): GraphDiff {
+type GraphPart = Pick<LinkageGraph, "nodes" | "joints"> & Partial<Pick<LinkageGraph, "name" | "system">>;
+
+/** What changed from `a` (before, or mine) to `b` (after, or theirs). */
+export function diffGraphs(a: GraphPart, b: GraphPart): GraphDiff {
   const linkage = diffFields({ name: a.name, system: a.system }, { name: b.name, system: b.system });
 
   const aNodes = new Map(a.nodes.map((n) => [n.id, n]));
   const bNodes = new Map(b.nodes.map((n) => [n.id, n]));
   const nodes: GraphDiff["nodes"] = { added: [], removed: [], changed: [], moved: 0 };
-  for (const n of b.nodes) if (!aNodes.has(n.id)) nodes.added.push({ id: n.id, kind: n.kind, label: n.label });
-  for (const n of a.nodes) if (!bNodes.has(n.id)) nodes.removed.push({ id: n.id, kind: n.kind, label: n.label });
+  const part = (n: LinkageGraph["nodes"][number]): ItemRef => ({ id: n.id, name: partName(n), kind: n.kind, label: n.label });
+  for (const n of b.nodes) if (!aNodes.has(n.id)) nodes.added.push(part(n));
+  for (const n of a.nodes) if (!bNodes.has(n.id)) nodes.removed.push(part(n));
   for (const n of b.nodes) {
     const old = aNodes.get(n.id);
     if (!old) continue;
     const fields = diffFields({ kind: old.kind, label: old.label, props: old.props }, { kind: n.kind, label: n.label, props: n.props });
-    if (fields.length) nodes.changed.push({ id: n.id, kind: n.kind, label: n.label, fields });
+    if (fields.length) nodes.changed.push({ ...part(n), fields });
     if (old.position.x !== n.position.x || old.position.y !== n.position.y) nodes.moved++;
   }
 
   const aJoints = new Map(a.joints.map((j) => [j.id, j]));
   const bJoints = new Map(b.joints.map((j) => [j.id, j]));
-  const label = (j: LinkageGraph["joints"][number]) => `${endText(j.from)} – ${endText(j.to)}`;
+  const joint = (j: LinkageGraph["joints"][number], g: GraphPart): ItemRef => ({ id: j.id, name: jointName(j, g.nodes) });
+  const end = (e: { node: string; port: string }, g: GraphPart) => endName(indexById(g.nodes).get(e.node), e.port);
   const joints: GraphDiff["joints"] = { added: [], removed: [], changed: [] };
-  for (const j of b.joints) if (!aJoints.has(j.id)) joints.added.push({ id: j.id, label: label(j) });
-  for (const j of a.joints) if (!bJoints.has(j.id)) joints.removed.push({ id: j.id, label: label(j) });
+  for (const j of b.joints) if (!aJoints.has(j.id)) joints.added.push(joint(j, b));
+  for (const j of a.joints) if (!bJoints.has(j.id)) joints.removed.push(joint(j, a));
   for (const j of b.joints) {
     const old = aJoints.get(j.id);
     if (!old) continue;
     const fields = [
-      ...diffFields({ from: endText(old.from), to: endText(old.to) }, { from: endText(j.from), to: endText(j.to) }),
+      // An end moved to another part or port (compared by id), shown by name.
+      ...diffFields({ from: endKey(old.from), to: endKey(old.to) }, { from: endKey(j.from), to: endKey(j.to) }).map((f) => {
+        const k = f.path as "from" | "to";
+        return { path: k, before: end(old[k], a), after: end(j[k], b) };
+      }),
       ...diffFields(old.hardware, j.hardware, "hardware"),
     ];
-    if (fields.length) joints.changed.push({ id: j.id, label: label(j), fields });
+    if (fields.length) joints.changed.push({ ...joint(j, b), fields });
   }
 
   const isSame =

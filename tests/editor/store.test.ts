@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { createEditorStore, toGraph } from "@/editor/store";
-import { diffGraphs } from "@/editor/useAutosave";
+import { diffGraphs } from "@/shared/review/diff";
 import { emptyGraph, graphSchema, type LinkageGraph } from "@/shared/linkage/schema";
 import { analyze } from "@/shared/analysis";
 import type { Report } from "@/shared/analysis/types";
@@ -249,9 +249,11 @@ describe("editor store", () => {
     a.getState().addNode("controlSurface", { x: 0, y: 0 });
     a.getState().updateNode(mine.nodes[0].id, { label: "Left stick" });
     const theirs = { nodes: a.getState().nodes, joints: a.getState().joints.slice(1) };
+    // The conflict dialog's difference: mine → theirs, by name (shared/review/diff.ts).
     const d = diffGraphs(mine, theirs);
-    expect(d.parts.onlyTheirs).toEqual(["Control surface 1"]);
-    expect(d.parts.changed).toEqual(["Control stick 1"]);
-    expect(d.joints.onlyMine).toHaveLength(1);
+    expect(d.nodes.added.map((n) => n.name)).toEqual(["Control surface 1"]);
+    expect(d.nodes.changed.map((n) => n.name)).toEqual(["Left stick"]);
+    expect(d.joints.removed).toHaveLength(1);
+    expect(d.joints.removed[0].name).toBe("Control stick 1, attach ↔ Pushrod 1 A");
   });
 });

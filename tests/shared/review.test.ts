@@ -39,18 +39,20 @@ describe("diffGraphs", () => {
     const d = diffGraphs(a, b);
     expect(d.same).toBe(false);
     expect(d.linkage).toEqual([{ path: "name", before: "Larkspur LX-2 pitch", after: "Pitch, revised" }]);
-    expect(d.nodes.added).toEqual([{ id: "stop-1", kind: "travelStop", label: "Aft stop" }]);
-    expect(d.nodes.removed).toEqual([{ id: "mount-tail", kind: "structureMount", label: "Stabilizer rear spar" }]);
+    expect(d.nodes.added).toEqual([{ id: "stop-1", name: "Aft stop", kind: "travelStop", label: "Aft stop" }]);
+    expect(d.nodes.removed).toEqual([{ id: "mount-tail", name: "Stabilizer rear spar", kind: "structureMount", label: "Stabilizer rear spar" }]);
     expect(d.nodes.changed).toEqual([
-      { id: "bellcrank", kind: "bellcrank", label: "Bellcrank", fields: [
+      { id: "bellcrank", name: "Bellcrank", kind: "bellcrank", label: "Bellcrank", fields: [
         { path: "label", before: "Bellcrank under the seat", after: "Bellcrank" },
         { path: "props.outputArm", before: 4, after: 4.5 },
       ] },
     ]);
     expect(d.joints.removed.map((j) => j.id)).toEqual(["j-elevator-hinge"]);
+    expect(d.joints.removed[0].name).toBe("Elevator, hinge ↔ Stabilizer rear spar, mount"); // named from the graph it was in
     expect(d.joints.changed).toHaveLength(1);
+    expect(d.joints.changed[0].name).toBe("Aft pushrod B ↔ Elevator horn, surface");
     expect(d.joints.changed[0].fields).toEqual([
-      { path: "to", before: "horn.attach", after: "horn.surface" },
+      { path: "to", before: "Elevator horn, attach", after: "Elevator horn, surface" }, // ends by name, compared by id
       { path: "hardware.jamNut.fitted", before: undefined, after: true },
       { path: "hardware.jamNut.tightened", before: undefined, after: false },
       { path: "hardware.shear", before: "single", after: "double" },
@@ -103,5 +105,16 @@ describe("unacknowledgedHazards", () => {
     expect(unacknowledgedHazards(report, g, [ack("jam-nut-missing", fp)]).map((h) => h.code)).toEqual(["retaining-washer-small"]);
     const lapsed = unacknowledgedHazards(report, g, [ack("jam-nut-missing", "old"), ack("retaining-washer-small", fp)]);
     expect(lapsed.map((h) => [h.code, h.lapsed?.id])).toEqual([["jam-nut-missing", "jam-nut-missing"]]);
+  });
+});
+
+describe("diffGraphs names without comparing names", () => {
+  it("a relabelled part changes its joints' names, not the joints", () => {
+    const a = demoPitchLinkage();
+    const b = clone(a);
+    b.nodes.find((n) => n.id === "horn")!.label = "Left elevator horn";
+    const d = diffGraphs(a, b);
+    expect(d.nodes.changed.map((n) => n.name)).toEqual(["Left elevator horn"]);
+    expect(d.joints.changed).toEqual([]);
   });
 });

@@ -1,0 +1,198 @@
+/**
+ * Every editor command, once: what it is called, its keys (shown) and key test, what it does, when it is
+ * enabled and whether it changes the linkage (off for a read-only viewer). The toolbar, the key handler and
+ * the shortcuts sheet all read this list, so a command is added in one place.
+ */
+import type { EditorState, EditorStore } from "./store";
+import { GRID } from "./canvas/viewport";
+
+/** What a command may act on: the store and the editor's own actions. */
+export type CommandCtx = {
+  store: EditorStore;
+  canEdit: boolean;
+  fitAll: (o?: { duration?: number }) => void;
+  saveNow: () => void;
+  toggleSheet: () => void;
+  sheetOpen: () => boolean;
+  closeSheet: () => void;
+  openImport: () => void;
+  exportFile: () => void;
+  exportPicture: () => void;
+  keepPicture: () => void;
+  /** Open or close the geometry view (the run to scale and its motion). */
+  toggleGeometry: () => void;
+  geometryOpen: boolean;
+  /** A picture is being drawn or kept. */
+  pictureBusy: { exporting: boolean; keeping: boolean };
+};
+
+export type Command = {
+  id: string;
+  /** What it does, in the sheet and the button's tooltip. */
+  label: string;
+  /** The keys as shown; absent = no key. */
+  keys?: string;
+  /** The key test (after the "typing in a field" check unless `whileTyping`). */
+  match?: (e: KeyboardEvent) => boolean;
+  /** Also while typing in a field (Ctrl/⌘ S). */
+  whileTyping?: boolean;
+  /** Stop the browser's own action for the key: always, or only when this returns true. */
+  preventDefault?: boolean | ((s: EditorState) => boolean);
+  /** Changes the linkage: off, and left out of the sheet, for someone who may not edit. */
+  edit?: boolean;
+  /** When the toolbar button is enabled (the key still reaches `perform`, which does nothing then). */
+  enabled?: (s: EditorState, c: CommandCtx) => boolean;
+  perform: (c: CommandCtx, e?: KeyboardEvent) => void;
+  /** A toolbar button: its group, text and test id; `hidden` leaves it out. */
+  button?: { group: "edit" | "file" | "view" | "help"; text: string | ((c: CommandCtx) => string); testId?: string; hidden?: (c: CommandCtx) => boolean; pressed?: (c: CommandCtx) => boolean };
+};
+
+const mod = (e: KeyboardEvent) => e.ctrlKey || e.metaKey;
+const key = (e: KeyboardEvent) => e.key.toLowerCase();
+const hasSel = (s: EditorState) => s.selection.nodes.length + s.selection.joints.length > 0;
+const ARROWS: Record<string, [number, number]> = { ArrowLeft: [-1, 0], ArrowRight: [1, 0], ArrowUp: [0, -1], ArrowDown: [0, 1] };
+
+export const COMMANDS: readonly Command[] = [
+  {
+    id: "save", label: "Save now", keys: "Ctrl/⌘ S", whileTyping: true, preventDefault: true, edit: true,
+    match: (e) => mod(e) && key(e) === "s",
+    perform: (c) => c.saveNow(),
+    button: { group: "file", text: "Save", testId: "btn-save" },
+  },
+  {
+    id: "escape", label: "Close this sheet, or clear the selection", keys: "Esc",
+    match: (e) => e.key === "Escape",
+    perform: (c) => (c.sheetOpen() ? c.closeSheet() : c.store.getState().select(null)),
+  },
+  {
+    id: "shortcuts", label: "Keyboard shortcuts (this sheet)", keys: "?", preventDefault: true,
+    match: (e) => e.key === "?" || (e.shiftKey && e.key === "/"),
+    perform: (c) => c.toggleSheet(),
+    button: { group: "help", text: "Keys ?", testId: "btn-shortcuts" },
+  },
+  {
+    id: "selectAll", label: "Select everything", keys: "Ctrl/⌘ A", preventDefault: true,
+    match: (e) => mod(e) && key(e) === "a",
+    perform: (c) => c.store.getState().selectAll(),
+  },
+  {
+    id: "copy", label: "Copy the selected parts", keys: "Ctrl/⌘ C",
+    match: (e) => mod(e) && key(e) === "c",
+    perform: (c) => c.store.getState().copy(),
+  },
+  {
+    id: "nextPart", label: "Previous / next part", keys: "[  ]", preventDefault: true,
+    match: (e) => e.key === "]" || e.key === "[",
+    perform: (c, e) => {
+      const s = c.store.getState();
+      if (s.nodes.length === 0) return;
+      const cur = s.nodes.findIndex((n) => n.id === s.selection.nodes[0]);
+      const next = (cur + (e?.key === "[" ? -1 : 1) + s.nodes.length) % s.nodes.length;
+      s.select({ type: "node", id: s.nodes[next < 0 ? 0 : next].id });
+    },
+  },
+  {
+    id: "undo", label: "Undo", keys: "Ctrl/⌘ Z", preventDefault: true, edit: true,
+    match: (e) => mod(e) && key(e) === "z" && !e.shiftKey,
+    enabled: (s) => s.past.length > 0,
+    perform: (c) => c.store.getState().undo(),
+    button: { group: "edit", text: "Undo", testId: "btn-undo" },
+  },
+  {
+    id: "redo", label: "Redo", keys: "Ctrl/⌘ Shift Z, Ctrl/⌘ Y", preventDefault: true, edit: true,
+    match: (e) => mod(e) && ((key(e) === "z" && e.shiftKey) || key(e) === "y"),
+    enabled: (s) => s.future.length > 0,
+    perform: (c) => c.store.getState().redo(),
+    button: { group: "edit", text: "Redo", testId: "btn-redo" },
+  },
+  {
+    id: "paste", label: "Paste", keys: "Ctrl/⌘ V", edit: true,
+    match: (e) => mod(e) && key(e) === "v",
+    perform: (c) => c.store.getState().paste(),
+  },
+  {
+    id: "duplicate", label: "Duplicate the selected parts", keys: "Ctrl/⌘ D", preventDefault: true, edit: true,
+    match: (e) => mod(e) && key(e) === "d",
+    enabled: hasSel,
+    perform: (c) => c.store.getState().duplicate(),
+    button: { group: "edit", text: "Duplicate" },
+  },
+  {
+    id: "delete", label: "Delete the selection", keys: "Delete / Backspace", preventDefault: true, edit: true,
+    match: (e) => e.key === "Delete" || e.key === "Backspace",
+    enabled: hasSel,
+    perform: (c) => c.store.getState().deleteSelection(),
+    button: { group: "edit", text: "Delete", testId: "btn-delete" },
+  },
+  {
+    id: "fit", label: "Fit the whole linkage in view", keys: "F",
+    match: (e) => !mod(e) && key(e) === "f",
+    perform: (c) => c.fitAll({ duration: 200 }),
+    button: { group: "edit", text: "Fit" },
+  },
+  {
+    id: "nudge", label: "Nudge the selected parts (Shift: ×5)", keys: "Arrows", edit: true,
+    match: (e) => e.key in ARROWS,
+    preventDefault: (s) => s.selection.nodes.length > 0,
+    enabled: (s) => s.selection.nodes.length > 0,
+    perform: (c, e) => {
+      const [dx, dy] = ARROWS[e?.key ?? ""] ?? [0, 0];
+      const step = e?.shiftKey ? GRID * 5 : GRID;
+      c.store.getState().nudge(dx * step, dy * step);
+    },
+  },
+  {
+    id: "import", label: "Replace this linkage with a .json linkage file", edit: true,
+    perform: (c) => c.openImport(),
+    button: { group: "file", text: "Import…", testId: "btn-import" },
+  },
+  {
+    id: "exportFile", label: "Download the linkage file (.json)",
+    perform: (c) => c.exportFile(),
+    button: { group: "file", text: "Export file", testId: "btn-export-json" },
+  },
+  {
+    id: "exportPicture", label: "Download a picture of the whole linkage with its title block",
+    enabled: (_s, c) => !c.pictureBusy.exporting,
+    perform: (c) => c.exportPicture(),
+    button: { group: "file", text: (c) => (c.pictureBusy.exporting ? "Drawing…" : "Picture (PNG)"), testId: "btn-export-png" },
+  },
+  {
+    id: "keepPicture", label: "Keep the picture on the server as this revision's picture for the build log (unsaved changes are saved first)", edit: true,
+    enabled: (_s, c) => !c.pictureBusy.keeping,
+    perform: (c) => c.keepPicture(),
+    button: { group: "file", text: "Keep for the log", testId: "btn-keep-picture", hidden: (c) => !c.canEdit },
+  },
+  {
+    id: "geometry", label: "The run to scale: pivots, arm angles and its motion through the travel",
+    perform: (c) => c.toggleGeometry(),
+    button: { group: "view", text: "Geometry", testId: "btn-geometry", pressed: (c) => c.geometryOpen },
+  },
+];
+
+function isTyping(t: EventTarget | null) {
+  const el = t as HTMLElement | null;
+  if (!el || !el.tagName) return false;
+  return el.tagName === "INPUT" || el.tagName === "TEXTAREA" || el.tagName === "SELECT" || el.isContentEditable;
+}
+
+/** The key handler: the first command whose key test matches, if the person may use it here. */
+export function handleKey(e: KeyboardEvent, c: CommandCtx, commands: readonly Command[] = COMMANDS) {
+  const typing = isTyping(e.target);
+  for (const cmd of commands) {
+    if (!cmd.match || (typing && !cmd.whileTyping) || !cmd.match(e)) continue;
+    const s = c.store.getState();
+    const pd = typeof cmd.preventDefault === "function" ? cmd.preventDefault(s) : cmd.preventDefault;
+    if (pd) e.preventDefault(); // the key belongs to the editor even when its command is off
+    if (cmd.edit && !c.canEdit) return;
+    cmd.perform(c, e);
+    return;
+  }
+}
+
+/** Mouse gestures, for the sheet (React Flow handles them; they are not commands). */
+export const GESTURES: readonly { keys: string; label: string; edit?: boolean }[] = [
+  { keys: "Drag port → port", label: "make a joint", edit: true },
+  { keys: "Click / Shift-drag", label: "select / box-select" },
+  { keys: "Ctrl/⌘ + click", label: "add to the selection" },
+];
