@@ -283,7 +283,7 @@ describe("hardware list and checklist", () => {
 
   it("ticks checklist items with person and time, keeps a note, and prints a PDF", async () => {
     const first = (await viewer.request("GET", `${L()}/checklist`)).body;
-    expect(first.items.length).toBe(36); // 34 joint items (the stick stop adds 3) + 2 whole-linkage items, as in tests/records (demo linkage)
+    expect(first.items.length).toBe(36); // 34 joint items (the stick stop adds 3) + 2 whole-linkage items, as in tests/shared/records (demo linkage)
     const tick = await reviewer.request("PUT", `${L()}/checklist`, { revision: 1, jointId: DEMO_WRONG_JOINT, code: "retaining-washer", ticked: false, note: "Washer 0.438 in, smaller than the 0.500 in housing bore: replace." });
     expect(tick.status).toBe(200);
     const ok = await reviewer.request("PUT", `${L()}/checklist`, { revision: 1, jointId: "j-stick-fwd", code: "jam-nut", ticked: true });

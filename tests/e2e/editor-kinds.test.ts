@@ -6,6 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { launchBrowser, shot, signInPage } from "../support/browser";
+import { dropPart, waitSaved } from "../support/editor-page";
 import { DEMO_BUILD, DEMO_USERS } from "@/db/demo-accounts";
 import { KIND_LIST, PORTS } from "@/shared/linkage/kinds";
 
@@ -42,19 +43,16 @@ describe("each registered part kind in the editor", () => {
       const { kind, name: kindName, hint } = KIND_LIST[i];
       const tray = page.getByTestId(`tray-${kind}`);
       await expect(tray.textContent()).resolves.toBe(`${kindName}${hint}`);
-      const before = await page.locator(".react-flow__node").count();
       const x = 110 + (i % cols) * Math.min(210, (box.width - 200) / (cols - 1));
       const y = 90 + Math.floor(i / cols) * 170;
-      await tray.dragTo(canvas, { targetPosition: { x, y } });
-      await expect.poll(() => page.locator(".react-flow__node").count()).toBe(before + 1);
-      const id = (await page.locator(".react-flow__node").nth(before).getAttribute("data-id"))!;
+      const id = await dropPart(page, kind, x, y);
       const card = page.getByTestId(`node-${id}`);
       await expect(card.getAttribute("data-kind")).resolves.toBe(kind);
       await expect(card.textContent()).resolves.toContain(kindName);
       for (const port of PORTS[kind]) await expect(page.getByTestId(`port-${id}-${port}`).count()).resolves.toBe(1);
       await expect(card.locator(".react-flow__handle").count()).resolves.toBe(PORTS[kind].length);
     }
-    await page.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "saved", null, { timeout: 15_000 });
+    await waitSaved(page);
     await shot(page, "editor-kinds-every-kind");
     // Reloaded, the saved linkage still holds one part of every kind.
     await page.reload();

@@ -11,6 +11,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import sharp from "sharp";
 import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
+import { openEditor as open, waitSaved } from "../support/editor-page";
 import { signIn, type Client } from "../support/http";
 import { testDb } from "../support/db";
 import { testImage } from "../support/upload";
@@ -37,19 +38,11 @@ const errors: string[] = [];
 const editorUrl = (linkageId: string, query = "") => `${APP_URL}/builds/${buildId}/linkages/${linkageId}${query}`;
 const graphPath = (linkageId: string) => `/api/builds/${buildId}/linkages/${linkageId}/graph`;
 
-async function open(p: Page, url: string) {
-  await p.goto(url);
-  await p.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
-  await p.waitForSelector("[data-testid=canvas][data-view=ready]", { timeout: 10_000 });
-}
 const zoomOf = (p: Page) =>
   p.evaluate(() => {
     const t = (document.querySelector(".react-flow__viewport") as HTMLElement).style.transform;
     return Number(/scale\(([\d.]+)\)/.exec(t)?.[1] ?? NaN);
   });
-async function waitSaved(p: Page) {
-  await p.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "saved", null, { timeout: 15_000 });
-}
 
 beforeAll(async () => {
   const build = await testDb("builds").where({ name: DEMO_BUILD.name }).orderBy("created_at").first("id");

@@ -8,6 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
 import sharp from "sharp";
 import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
+import { canvas, connect, dropPart, openJoint, saveStatus, waitSaved } from "../support/editor-page";
 import { DEMO_BUILD, DEMO_USERS } from "@/db/demo-accounts";
 import { EXPORT_SIZE } from "@/editor/export";
 
@@ -25,40 +26,7 @@ beforeAll(async () => {
 });
 afterAll(() => browser?.close());
 
-const canvas = (p: Page) => p.getByTestId("canvas");
-const status = (p: Page) => p.getByTestId("save-status");
-
-async function waitSaved(p: Page) {
-  await p.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "saved", null, { timeout: 15_000 });
-}
-
-/** Drag a kind from the parts tray and drop it at a point of the canvas. */
-async function dropPart(p: Page, kind: string, x: number, y: number): Promise<string> {
-  const before = await p.locator(".react-flow__node").count();
-  await p.getByTestId(`tray-${kind}`).dragTo(canvas(p), { targetPosition: { x, y } });
-  await expect.poll(() => p.locator(".react-flow__node").count()).toBe(before + 1);
-  const id = await p.locator(".react-flow__node").nth(before).getAttribute("data-id");
-  return id!;
-}
-
-async function centre(l: Locator) {
-  const b = await l.boundingBox();
-  if (!b) throw new Error("not on screen");
-  return { x: b.x + b.width / 2, y: b.y + b.height / 2 };
-}
-
-/** Press on one port, move to the other, let go — as a person connects two parts. */
-async function connect(p: Page, from: [string, string], to: [string, string]) {
-  const before = await p.locator(".react-flow__edge").count();
-  const a = await centre(p.getByTestId(`port-${from[0]}-${from[1]}`));
-  const b = await centre(p.getByTestId(`port-${to[0]}-${to[1]}`));
-  await p.mouse.move(a.x, a.y);
-  await p.mouse.down();
-  await p.mouse.move((a.x + b.x) / 2, (a.y + b.y) / 2 + 10, { steps: 6 });
-  await p.mouse.move(b.x, b.y, { steps: 6 });
-  await p.mouse.up();
-  await expect.poll(() => p.locator(".react-flow__edge").count()).toBe(before + 1);
-}
+const status = saveStatus;
 
 describe("linkage editor in a real browser", () => {
   const name = `Pitch run ${Date.now().toString(36)}`;
@@ -103,9 +71,7 @@ describe("linkage editor in a real browser", () => {
   it("fills a joint card: a rod end without a jam nut is flagged, fitting one clears it", async () => {
     const edge = page.locator(".react-flow__edge").nth(1);
     jointId = (await edge.getAttribute("data-id"))!;
-    await page.getByTestId(`joint-${jointId}`).click();
-    const card = page.getByTestId("joint-card");
-    await card.waitFor();
+    const card = await openJoint(page, jointId);
     await card.getByTestId("joint-form-on-rodEnd").check();
     await card.getByTestId("joint-form-rodEnd__thread").selectOption("1/4-28");
     await card.getByTestId("joint-form-rodEnd__ballBore").fill("0.25");

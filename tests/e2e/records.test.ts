@@ -29,7 +29,7 @@ describe("build records in the browser", () => {
     await page.goto(`${APP_URL}/builds/${buildId}/checklist/${linkageId}`);
     const joint = page.getByTestId("checklist-joint-j-stick-fwd");
     await joint.waitFor();
-    expect(await page.getByTestId("checklist-item").count()).toBe(36); // the demo linkage's checklist (tests/records)
+    expect(await page.getByTestId("checklist-item").count()).toBe(36); // the demo linkage's checklist (tests/shared/records)
     await joint.getByLabel("Add a photo of the joint Control stick, attach ↔ Forward pushrod A").setInputFiles({ name: "jam-nut.jpg", mimeType: "image/jpeg", buffer: await testImage("jpeg", 1000, 750) });
     const thumb = joint.getByTestId("joint-photo-thumb");
     await thumb.waitFor({ timeout: 15_000 });

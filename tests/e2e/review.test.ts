@@ -6,6 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
+import { openEditor, openJoint, waitSaved } from "../support/editor-page";
 import { signIn } from "../support/http";
 import { DEMO_USERS } from "@/db/demo-accounts";
 import { demoPitchLinkage, DEMO_WRONG_JOINT } from "@/shared/demo";
@@ -20,12 +21,8 @@ let buildId = "";
 const errors: string[] = [];
 const COMMENT = "The washer under the bolt head is smaller than the rod-end eye, and there is no jam nut.\nSee https://example.test/retaining-washers";
 
-async function waitSaved(p: Page) {
-  await p.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "saved", null, { timeout: 15_000 });
-}
-async function openEditor(p: Page) {
-  await p.goto(editorUrl);
-  await p.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
+async function openReview(p: Page) {
+  await openEditor(p, editorUrl);
   await p.getByTestId(`joint-${DEMO_WRONG_JOINT}`).waitFor();
 }
 const thread = (p: Page) => p.locator(`[data-testid=review-thread][data-subject="joint:${DEMO_WRONG_JOINT}"]`);
@@ -53,7 +50,7 @@ afterAll(() => browser?.close());
 
 describe("review and sign-off in a real browser", () => {
   it("the reviewer comments on the wrong joint", async () => {
-    await openEditor(samPage);
+    await openReview(samPage);
     await samPage.getByTestId(`joint-${DEMO_WRONG_JOINT}`).click();
     await thread(samPage).waitFor();
     await thread(samPage).getByTestId("comment-body").fill(COMMENT);
@@ -72,16 +69,15 @@ describe("review and sign-off in a real browser", () => {
   });
 
   it("the builder sees the marker, fixes the hardware and replies", async () => {
-    await openEditor(danaPage);
+    await openReview(danaPage);
     const marker = danaPage.getByTestId(`review-marker-joint-${DEMO_WRONG_JOINT}`);
     await marker.waitFor({ timeout: 10_000 });
     expect(await marker.getAttribute("data-count")).toBe("1");
     expect(await danaPage.getByTestId("review-bar-open").getAttribute("data-count")).toBe("1");
     await shot(danaPage, "review-02-builder-sees-marker");
 
-    await danaPage.getByTestId(`joint-${DEMO_WRONG_JOINT}`).click();
+    const card = await openJoint(danaPage, DEMO_WRONG_JOINT);
     await thread(danaPage).getByTestId("comment").first().waitFor();
-    const card = danaPage.getByTestId("joint-card");
     await card.getByTestId("joint-form-jamNut__fitted").check();
     await card.getByTestId("joint-form-jamNut__tightened").check();
     await card.getByTestId("joint-form-washerUnderHead__outsideDiameter").fill("0.625");
@@ -96,7 +92,7 @@ describe("review and sign-off in a real browser", () => {
   });
 
   it("the reviewer resolves the thread and signs off the fixed revision", async () => {
-    await openEditor(samPage);
+    await openReview(samPage);
     await samPage.getByTestId(`joint-${DEMO_WRONG_JOINT}`).click();
     await expect.poll(() => thread(samPage).getByTestId("comment").count(), { timeout: 10_000 }).toBe(2);
     expect(await thread(samPage).innerText()).toContain("Fitted a jam nut");
@@ -119,7 +115,7 @@ describe("review and sign-off in a real browser", () => {
   });
 
   it("the builder edits again and the sign-off shows stale", async () => {
-    await openEditor(danaPage);
+    await openReview(danaPage);
     await danaPage.locator('[data-testid=review-bar] [data-testid=signoff-status][data-state="signed"]').waitFor({ timeout: 10_000 });
     await danaPage.getByTestId("joint-j-stick-fwd").click();
     await danaPage.getByTestId("joint-card").getByTestId("joint-form-torque").fill("65");

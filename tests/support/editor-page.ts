@@ -44,3 +44,11 @@ export async function connect(p: Page, from: [string, string], to: [string, stri
   await p.mouse.up();
   await expect.poll(() => p.locator(".react-flow__edge").count()).toBe(before + 1);
 }
+
+/** Select a joint by its badge on the canvas and wait for its card; returns the card. */
+export async function openJoint(p: Page, jointId: string) {
+  await p.getByTestId(`joint-${jointId}`).click();
+  const card = p.getByTestId("joint-card");
+  await card.waitFor();
+  return card;
+}

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { analyze, DEFAULT_SETTINGS, solveFourBar, sweepGraph, MOTION_NOT_CHECKED } from "../../shared/analysis";
-import { mu } from "../../shared/analysis/motion";
+import { analyze, DEFAULT_SETTINGS, solveFourBar, sweepGraph, MOTION_NOT_CHECKED } from "@/shared/analysis";
+import { mu } from "@/shared/analysis/motion";
 import { barRun, type Bar } from "./motion-fixtures";
-import { demoPitchLinkage } from "../../shared/demo";
-import { demoPitchGeometry } from "../../shared/demo-geometry";
+import { demoPitchLinkage } from "@/shared/demo";
+import { demoPitchGeometry } from "@/shared/demo-geometry";
 
 const R = Math.PI / 180;
 const sweep = (bar: Bar, steps = 400, extra = {}) => sweepGraph(barRun(bar, extra), DEFAULT_SETTINGS, steps);

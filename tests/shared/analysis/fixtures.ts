@@ -3,8 +3,8 @@
  * pushrod → horn → elevator, mounted pivots and hinge) that must produce no findings at all; each
  * retention test changes one thing on one joint with withHardware().
  */
-import type { Joint, JointHardware, LinkageGraph, LinkageNode } from "../../shared/linkage/schema";
-import { graphSchema } from "../../shared/linkage/schema";
+import type { Joint, JointHardware, LinkageGraph, LinkageNode } from "@/shared/linkage/schema";
+import { graphSchema } from "@/shared/linkage/schema";
 
 export type RodEnd = NonNullable<JointHardware["rodEnd"]>;
 

@@ -4,9 +4,9 @@
  * its rod-end joints; ultimate with the fitting factor 668 × 1.5 × 1.15 = 1,152.3 lbf (14 CFR 23.303, 23.625).
  */
 import { describe, expect, it } from "vitest";
-import { analyze, selectSpecialFactor, DEFAULT_SETTINGS, type JointResult } from "../../shared/analysis";
-import type { JointHardware, LinkageGraph } from "../../shared/linkage/schema";
-import { bearingUltimate, PLATE_TABLE, tearOutStrength } from "../../shared/hardware";
+import { analyze, selectSpecialFactor, DEFAULT_SETTINGS, type JointResult } from "@/shared/analysis";
+import type { JointHardware, LinkageGraph } from "@/shared/linkage/schema";
+import { bearingUltimate, PLATE_TABLE, tearOutStrength } from "@/shared/hardware";
 import { goodRun, valid, withHardware } from "./fixtures";
 
 const run = (g: LinkageGraph, settings = {}) => analyze(valid(g), settings);

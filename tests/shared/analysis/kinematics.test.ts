@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { fourBarFindings, solveFourBar, sweepFourBar, transmissionAngle } from "../../shared/analysis";
+import { fourBarFindings, solveFourBar, sweepFourBar, transmissionAngle } from "@/shared/analysis";
 
 const bar = { a: 40, b: 120, c: 80, d: 100 }; // mechanism-design textbook worked example (from memory)
 

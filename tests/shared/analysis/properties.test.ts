@@ -1,9 +1,9 @@
 /** Property tests (fast-check): robustness, linearity in the design force, schema rejection with a path. */
 import { describe, expect, it } from "vitest";
 import fc from "fast-check";
-import { analyze, DEFAULT_SETTINGS, type Report } from "../../shared/analysis";
-import { graphSchema, NODE_KINDS, PORTS, THREADS, NUT_TYPES, type NodeKind } from "../../shared/linkage/schema";
-import { generateLinkage } from "../../shared/demo";
+import { analyze, DEFAULT_SETTINGS, type Report } from "@/shared/analysis";
+import { graphSchema, NODE_KINDS, PORTS, THREADS, NUT_TYPES, type NodeKind } from "@/shared/linkage/schema";
+import { generateLinkage } from "@/shared/demo";
 
 const len = fc.double({ min: 0.05, max: 200, noNaN: true });
 const ang = fc.double({ min: -360, max: 360, noNaN: true });

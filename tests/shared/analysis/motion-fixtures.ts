@@ -2,9 +2,9 @@
  * A one-stage run for the motion tests: a stick (input) driving a control horn through one pushrod, pivots
  * placed to scale. Arm lengths and angles are the test's; the pushrod's length follows from the geometry.
  */
-import type { LinkageGraph } from "../../shared/linkage/schema";
-import type { LinkageGeometry } from "../../shared/linkage/geometry";
-import { graphSchema } from "../../shared/linkage/schema";
+import type { LinkageGraph } from "@/shared/linkage/schema";
+import type { LinkageGeometry } from "@/shared/linkage/geometry";
+import { graphSchema } from "@/shared/linkage/schema";
 import { goodBallPivot, goodClamp, goodRodEndJoint } from "./fixtures";
 
 export type Bar = {

@@ -5,8 +5,8 @@
  * 668 × 1.5 × 1.15 = 1,152.3 lbf (14 CFR 23.303, 23.625).
  */
 import { describe, expect, it } from "vitest";
-import { analyze } from "../../shared/analysis";
-import type { JointHardware, LinkageGraph } from "../../shared/linkage/schema";
+import { analyze } from "@/shared/analysis";
+import type { JointHardware, LinkageGraph } from "@/shared/linkage/schema";
 import { goodRun, valid, withHardware } from "./fixtures";
 
 const codes = (g: LinkageGraph, subject?: string) =>

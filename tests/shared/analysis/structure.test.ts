@@ -1,7 +1,7 @@
 /** Structure findings (domain.md §2): each with a graph that trips it and one that does not; never a throw. */
 import { describe, expect, it } from "vitest";
-import { analyze } from "../../shared/analysis";
-import type { LinkageGraph } from "../../shared/linkage/schema";
+import { analyze } from "@/shared/analysis";
+import type { LinkageGraph } from "@/shared/linkage/schema";
 import { goodBallPivot, goodRodEndJoint, goodRun, hardware, j, mount, pushrod, valid } from "./fixtures";
 
 const codes = (g: LinkageGraph) => analyze(valid(g)).findings.map((f) => `${f.code}@${f.subject.id}`);

@@ -36,7 +36,7 @@
  *   MS = 7,363.1/1,152.3 − 1 = +5.390.
  */
 import { describe, expect, it } from "vitest";
-import { analyze } from "../../shared/analysis";
+import { analyze } from "@/shared/analysis";
 import { bellcrank, goodBallPivot, goodClamp, goodRodEndJoint, graph, hardware, horn, j, mount, pushrod, stick, stop, surface, valid } from "./fixtures";
 
 function elevatorRun() {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { AN_BOLT_TABLE, AN_BOLTS_BY_SIZE, THREAD_TABLE, TORQUE_TABLE, TUBE_MATERIALS_BY_NAME, boltShearStrength, tensileStressArea, torqueRange, STEEL_BOLT_FSU } from "../../shared/hardware";
-import { DEFAULT_SETTINGS, settingsSchema } from "../../shared/analysis";
+import { AN_BOLT_TABLE, AN_BOLTS_BY_SIZE, THREAD_TABLE, TORQUE_TABLE, TUBE_MATERIALS_BY_NAME, boltShearStrength, tensileStressArea, torqueRange, STEEL_BOLT_FSU } from "@/shared/hardware";
+import { DEFAULT_SETTINGS, settingsSchema } from "@/shared/analysis";
 
 describe("design pilot forces and factors (domain.md §1)", () => {
   it("defaults to the maximum forces of the published table", () => {

@@ -4,7 +4,7 @@
  * Each test changes one thing. Node ids: pedalL, pedalR, cableL, cableR, pulley, fairlead, tbL, tbR, horn,
  * rudder, floor, fin, stop (on the right pedal, 6 in from its pivot). Numbers are plausible light-aircraft values, invented for the tests.
  */
-import type { LinkageGraph, LinkageNode } from "../../shared/linkage/schema";
+import type { LinkageGraph, LinkageNode } from "@/shared/linkage/schema";
 import { goodBallPivot, goodClamp, graph, horn, j, mount, stop, surface } from "./fixtures";
 
 type Props<K extends LinkageNode["kind"]> = Extract<LinkageNode, { kind: K }>["props"];

@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
-import { columnAllowable, eulerLoad, johnsonLoad, marginOfSafety, transitionSlenderness, tubeSection, MARGIN_CAP } from "../../shared/analysis";
-import { fromSI, toSI } from "../../shared/units";
+import { columnAllowable, eulerLoad, johnsonLoad, marginOfSafety, transitionSlenderness, tubeSection, MARGIN_CAP } from "@/shared/analysis";
+import { fromSI, toSI } from "@/shared/units";
 
 describe("Euler column: the textbook case (domain.md §3)", () => {
   // Published inputs of a textbook exercise: tube Do 20 mm, Di 14 mm, L 1,500 mm, E 207 GPa, pinned ends.

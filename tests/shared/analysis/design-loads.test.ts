@@ -6,8 +6,8 @@
  */
 import { readFileSync } from "node:fs";
 import { describe, expect, it } from "vitest";
-import { analyze } from "../../shared/analysis";
-import { graphSchema, type LinkageGraph } from "../../shared/linkage/schema";
+import { analyze } from "@/shared/analysis";
+import { graphSchema, type LinkageGraph } from "@/shared/linkage/schema";
 import { goodClamp, goodRun, j, stick, mount, goodBallPivot, valid } from "./fixtures";
 
 const run = (g: LinkageGraph, settings = {}) => analyze(valid(g), settings);
@@ -144,7 +144,7 @@ describe("settings below the published minimums", () => {
 });
 
 describe("a file saved before v2 (format version 1, no new fields)", () => {
-  const saved = JSON.parse(readFileSync(new URL("./saved/v1-pitch-run.json", import.meta.url), "utf8"));
+  const saved = JSON.parse(readFileSync(new URL("../saved/v1-pitch-run.json", import.meta.url), "utf8"));
   const g = graphSchema.parse(saved.graph);
   const r = analyze(g);
   it("opens with the same schema", () => {

@@ -3,8 +3,8 @@
  * and not tripped with its source. The base circuit (cable-fixtures.ts) has no findings at all.
  */
 import { describe, expect, it } from "vitest";
-import { analyze } from "../../shared/analysis";
-import type { LinkageGraph } from "../../shared/linkage/schema";
+import { analyze } from "@/shared/analysis";
+import type { LinkageGraph } from "@/shared/linkage/schema";
 import { goodBallPivot, goodClamp, graph, horn, j, mount, pushrod, stick, surface, valid } from "./fixtures";
 import { cable, RIGGED, rudderCircuit, withProps } from "./cable-fixtures";
 

@@ -1,7 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { parseLinkageFile, serializeLinkage } from "../../shared/linkage/io";
-import { demoPitchLinkage } from "../../shared/demo";
-import { formatQuantity, inLbfToNm, inToMm, lbfToN, mpaToPsi, nToLbf, psiToMPa } from "../../shared/units";
+import { parseLinkageFile, serializeLinkage } from "@/shared/linkage/io";
+import { demoPitchLinkage } from "@/shared/demo";
+import { formatQuantity, inLbfToNm, inToMm, lbfToN, mpaToPsi, nToLbf, psiToMPa } from "@/shared/units";
 
 describe("linkage file import/export", () => {
   it("round-trips the demo", () => {

@@ -1,11 +1,11 @@
 import { describe, expect, it } from "vitest";
-import { analyze } from "../../shared/analysis";
-import { graphSchema } from "../../shared/linkage/schema";
-import { parseLinkageFile, serializeLinkage } from "../../shared/linkage/io";
-import { demoPitchLinkage } from "../../shared/demo";
-import { demoPitchGeometry } from "../../shared/demo-geometry";
+import { analyze } from "@/shared/analysis";
+import { graphSchema } from "@/shared/linkage/schema";
+import { parseLinkageFile, serializeLinkage } from "@/shared/linkage/io";
+import { demoPitchLinkage } from "@/shared/demo";
+import { demoPitchGeometry } from "@/shared/demo-geometry";
 import { barRun, type Bar } from "./motion-fixtures";
-import type { LinkageGraph } from "../../shared/linkage/schema";
+import type { LinkageGraph } from "@/shared/linkage/schema";
 
 const square: Bar = { a: 3, c: 3, o2: [0, 0], o4: [30, 0], alpha: 90, beta: 90 }; // parallelogram: surface = stick
 const codes = (g: LinkageGraph) => analyze(g).findings.map((f) => f.code);
