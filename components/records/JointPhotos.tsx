@@ -35,7 +35,7 @@ export function JointPhotos({ buildId, linkageId, jointId, jointName, canEdit, c
         <span key={p.id} className="relative">
           <a href={p.url} target="_blank" rel="noreferrer" title={`${p.name}${p.uploadedBy ? ` — ${p.uploadedBy}` : ""}`} className="block rounded border border-ink/15 hover:border-advisory focus:outline-2 focus:outline-advisory">
             {/* eslint-disable-next-line @next/next/no-img-element */}
-            <img src={p.thumbUrl ?? p.url} alt={`Photo of the joint ${jointName}: ${p.name}`} className="h-14 w-auto rounded" loading="lazy" data-testid="joint-photo-thumb" />
+            <img src={p.thumbUrl ?? p.url} alt={`Photo of the joint ${jointName}: ${p.name}`} width={80} height={56} className="h-14 w-20 rounded bg-slate-100 object-cover" loading="lazy" data-testid="joint-photo-thumb" />
           </a>
           {canEdit && canRemove ? (
             <button type="button" onClick={() => remove.mutate(p.id)} disabled={remove.isPending} aria-label={`Remove ${p.name} from the joint ${jointName}`} title="Remove from this joint (the file stays in the build's uploads)"

@@ -69,6 +69,7 @@ export function applySuggestion(hw: JointHardware, s: Suggestion): JointHardware
     return {
       ...hw,
       rodEnd: {
+        ...cur, // what the library part does not say (ball width, body material, …) stays as recorded
         shank: spec.shank,
         thread: spec.thread,
         hand: spec.hand,

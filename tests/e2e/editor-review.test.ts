@@ -159,7 +159,7 @@ describe("the reviewer in the editor", () => {
     await samPage.mouse.up();
     // A drag on a read-only canvas may pan the view; it never moves a card relative to the others.
     expect(Math.abs((await offset()) - offsetBefore)).toBeLessThan(1);
-    expect(await samPage.locator(".react-flow__node").count()).toBe(9);
+    expect(await samPage.locator(".react-flow__node").count()).toBe(demoPitchLinkage().nodes.length);
     expect(await samPage.locator(".react-flow__edge").count()).toBe(edges);
     await samPage.waitForTimeout(2500); // longer than the autosave quiet period
 
@@ -228,7 +228,7 @@ describe("the builder's records from the editor", () => {
     await shot(danaPage, "editor-review-05b-import-refused");
 
     await input.setInputFiles({ name: "larkspur-pitch.linkage.json", mimeType: "application/json", buffer: Buffer.from(serializeLinkage(demoPitchLinkage())) });
-    await expect.poll(() => danaPage.locator(".react-flow__node").count()).toBe(9);
+    await expect.poll(() => danaPage.locator(".react-flow__node").count()).toBe(demoPitchLinkage().nodes.length);
     expect(await danaPage.getByTestId("import-errors").count()).toBe(0);
     await waitSaved(danaPage);
     const saved = (await danaApi.request("GET", graphPath(linkageId))).body;
@@ -243,6 +243,7 @@ describe("the builder's records from the editor", () => {
     await card.getByLabel(/^Add a photo of the joint .+ ↔ .+/).setInputFiles({ name: "witness-hole.jpg", mimeType: "image/jpeg", buffer: await testImage("jpeg", 800, 600) });
     const thumb = card.getByTestId("joint-photo-thumb");
     await thumb.waitFor({ timeout: 15_000 });
+    await thumb.scrollIntoViewIfNeeded(); // a lazy thumbnail loads once it is in view, as for a person scrolling the card
     await expect.poll(() => thumb.evaluate((img: HTMLImageElement) => img.complete && img.naturalWidth)).toBe(320);
     const rows = await testDb("joint_photos").where({ linkage_id: linkageId, joint_id: jointId });
     expect(rows).toHaveLength(1);

@@ -95,6 +95,9 @@ describe("properties", () => {
     fc.assert(
       fc.property(graphArb, fc.double({ min: 0.1, max: 10, noNaN: true }), fc.boolean(), (raw, k, dual) => {
         const g = graphSchema.parse(raw);
+        // A surface's recorded hinge moment sets its run's loads through 14 CFR 23.395 (bounded by the pilot forces), which is
+        // not linear in the pilot force by design; that case has its own tests. Here every run is sized by the pilot force.
+        for (const n of g.nodes) if (n.kind === "controlSurface") delete (n.props as { hingeMoment?: number }).hingeMoment;
         const base = { ...DEFAULT_SETTINGS, dualControls: dual };
         const pf = base.pilotForce;
         const scaled = { ...base, pilotForce: { pitchStick: pf.pitchStick * k, rollStick: pf.rollStick * k, yawPedal: pf.yawPedal * k, other: pf.other * k, pitchWheel: pf.pitchWheel * k, rollWheel: pf.rollWheel * k } };
