@@ -146,6 +146,9 @@ export type Progress = (done: number, total: number) => Promise<void> | void;
  * each photo is embedded once, from its stored thumbnail (a JPEG, embedded as it is); each tied
  * revision's findings and picture are read and embedded once however many entries name it.
  */
+/** Findings of a revision printed under a log entry; a count names the rest. */
+const LOG_FINDINGS_SHOWN = 6;
+
 export async function logPdf(build: Build, pages: AsyncIterable<LogEntry[]>, count: number, totals: { total: number; bySystem: Record<string, number> }, f: LogFilter, progress?: Progress) {
   const doc = await new Doc(`${build.name} — build log`).init();
   doc.text(`${build.name} — build log`, { size: 18, bold: true, gap: 4 });
@@ -206,9 +209,12 @@ export async function logPdf(build: Build, pages: AsyncIterable<LogEntry[]>, cou
         const { rev, img } = await revisionOf(e.linkageId, e.revision);
         const s = rev?.analysis?.summary;
         doc.text(`Linkage: ${e.linkageName ?? "deleted linkage"}, revision ${e.revision}${s ? ` — ${s.hazard} hazard${s.hazard === 1 ? "" : "s"}, ${s.caution} caution${s.caution === 1 ? "" : "s"}, ${s.advisory} advisor${s.advisory === 1 ? "y" : "ies"}${s.lowestMargin ? `; lowest margin ${s.lowestMargin.value.toFixed(2)} (${s.lowestMargin.what})` : ""}` : ""}`, { size: 9, bold: true, color: s && s.hazard ? HAZARD : INK });
-        for (const fi of (rev?.analysis?.findings ?? []).filter((x) => x.severity !== "advisory").slice(0, 6)) {
+        // The log shows a revision's first findings; the rest are named as a count, never dropped silently.
+        const serious = (rev?.analysis?.findings ?? []).filter((x) => x.severity !== "advisory");
+        for (const fi of serious.slice(0, LOG_FINDINGS_SHOWN)) {
           doc.text(`• ${fi.severity === "hazard" ? "Hazard" : "Caution"}: ${fi.message}`, { size: 8, x: M + 8, gap: 1 });
         }
+        if (serious.length > LOG_FINDINGS_SHOWN) doc.text(`…and ${serious.length - LOG_FINDINGS_SHOWN} more hazard or caution findings: see the linkage's checklist PDF for revision ${e.revision}.`, { size: 8, x: M + 8, gap: 1, color: SOFT });
         if (img) doc.images([{ img, caption: `${e.linkageName ?? "Linkage"} — revision ${e.revision} (picture from the editor)` }], 1, 300);
         else doc.text("(No picture stored for this revision.)", { size: 8, color: SOFT });
       }

@@ -14,7 +14,8 @@ import { Transform, type Readable } from "node:stream";
 import path from "node:path";
 import pg from "pg";
 import * as tar from "tar";
-import { GetObjectCommand, ListObjectsV2Command } from "@aws-sdk/client-s3";
+import { GetObjectCommand } from "@aws-sdk/client-s3";
+import { allKeys } from "../lib/s3-keys";
 import { DUMP, FORMAT, MANIFEST, MANIFEST_SUM, VERSION, mb, pgTool, progress, sha256File, targets, type Manifest, type ObjectEntry } from "./backup-common";
 
 const started = Date.now();
@@ -57,13 +58,7 @@ async function main() {
 
     // 2. Every object, hashed as it is written.
     console.log("▸ Files");
-    const keys: string[] = [];
-    let token: string | undefined;
-    do {
-      const r = await t.s3.send(new ListObjectsV2Command({ Bucket: t.bucket, ContinuationToken: token }));
-      for (const o of r.Contents ?? []) if (o.Key) keys.push(o.Key);
-      token = r.IsTruncated ? r.NextContinuationToken : undefined;
-    } while (token);
+    const keys = await allKeys(t.s3, t.bucket);
     const objects: ObjectEntry[] = [];
     const show = progress("objects", keys.length);
     let total = 0;

@@ -16,7 +16,8 @@ import os from "node:os";
 import path from "node:path";
 import pg from "pg";
 import * as tar from "tar";
-import { DeleteObjectCommand, GetObjectCommand, ListObjectsV2Command, PutObjectCommand } from "@aws-sdk/client-s3";
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand } from "@aws-sdk/client-s3";
+import { allKeys } from "../lib/s3-keys";
 import { DUMP, FORMAT, MANIFEST, MANIFEST_SUM, VERSION, mb, pgTool, progress, sha256File, targets, type Manifest, type Targets } from "./backup-common";
 
 class Refused extends Error {}
@@ -62,16 +63,7 @@ async function verify(archive: string): Promise<Manifest> {
   return m;
 }
 
-async function bucketKeys(t: Targets) {
-  const keys: string[] = [];
-  let token: string | undefined;
-  do {
-    const r = await t.s3.send(new ListObjectsV2Command({ Bucket: t.bucket, ContinuationToken: token }));
-    for (const o of r.Contents ?? []) if (o.Key) keys.push(o.Key);
-    token = r.IsTruncated ? r.NextContinuationToken : undefined;
-  } while (token);
-  return keys;
-}
+const bucketKeys = (t: Targets) => allKeys(t.s3, t.bucket);
 
 const getBytes = async (t: Targets, key: string) => {
   const r = await t.s3.send(new GetObjectCommand({ Bucket: t.bucket, Key: key }));

@@ -35,6 +35,9 @@ function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId
               <span className="block whitespace-pre-wrap no-underline" style={{ textDecoration: "none" }}>&ldquo;{x.statement}&rdquo;</span>
             </li>
           ))}
+          {s.data.signoffs.length > 5 ? (
+            <li className="text-ink-soft" data-testid="signoff-more">…and {s.data.signoffs.length - 5} earlier sign-off{s.data.signoffs.length - 5 === 1 ? "" : "s"}, in the revision history.</li>
+          ) : null}
         </ul>
       )}
       {blocking.length > 0 && (

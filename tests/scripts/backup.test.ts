@@ -9,7 +9,8 @@ import { createHash } from "node:crypto";
 import { mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import knex, { type Knex } from "knex";
-import { CreateBucketCommand, DeleteObjectCommand, GetObjectCommand, ListObjectsV2Command, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { CreateBucketCommand, DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { eachKey } from "@/lib/s3-keys";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { DEMO_BUILD, DEMO_USERS } from "@/db/demo-accounts";
 import { testDb } from "../support/db";
@@ -46,15 +47,10 @@ async function tables(conn: Knex) {
 /** Every object's SHA-256, by key. */
 async function objects(bucket: string) {
   const out: Record<string, string> = {};
-  let token: string | undefined;
-  do {
-    const r = await s3.send(new ListObjectsV2Command({ Bucket: bucket, ContinuationToken: token }));
-    for (const o of r.Contents ?? []) {
-      const body = await s3.send(new GetObjectCommand({ Bucket: bucket, Key: o.Key! }));
-      out[o.Key!] = createHash("sha256").update(await body.Body!.transformToByteArray()).digest("hex");
-    }
-    token = r.IsTruncated ? r.NextContinuationToken : undefined;
-  } while (token);
+  for await (const key of eachKey(s3, bucket)) {
+    const body = await s3.send(new GetObjectCommand({ Bucket: bucket, Key: key }));
+    out[key] = createHash("sha256").update(await body.Body!.transformToByteArray()).digest("hex");
+  }
   return out;
 }
 

@@ -1,6 +1,7 @@
 /** Multipart uploads from tests, test images made with sharp, and a look into the local S3 fake. */
 import { randomUUID } from "node:crypto";
-import { S3Client, DeleteObjectCommand, ListObjectsV2Command, PutObjectCommand } from "@aws-sdk/client-s3";
+import { S3Client, DeleteObjectCommand, PutObjectCommand } from "@aws-sdk/client-s3";
+import { allKeys } from "@/lib/s3-keys";
 import { APP_URL } from "./env";
 import type { Client } from "./http";
 import { testDb } from "./db";
@@ -14,14 +15,7 @@ export const s3Client = new S3Client({ endpoint: S3.endpoint, region: "us-east-1
 
 /** Every key in the bucket under a prefix (e.g. `builds/<id>/`). */
 export async function s3Keys(prefix = ""): Promise<string[]> {
-  const keys: string[] = [];
-  let token: string | undefined;
-  do {
-    const r = await s3Client.send(new ListObjectsV2Command({ Bucket: S3.bucket, Prefix: prefix, ContinuationToken: token }));
-    for (const o of r.Contents ?? []) if (o.Key) keys.push(o.Key);
-    token = r.IsTruncated ? r.NextContinuationToken : undefined;
-  } while (token);
-  return keys.sort();
+  return (await allKeys(s3Client, S3.bucket, prefix)).sort();
 }
 
 export async function upload(client: Client, path: string, file: { bytes: Buffer | Uint8Array; name: string; type?: string }, fields: Record<string, string> = {}, method = "POST") {
@@ -69,7 +63,7 @@ export async function fixtureFile(buildId: string, userId: string | null, o: { k
   return id;
 }
 
-/** Deletes objects from the S3 fake (a test's bulk fixtures: the fake's listing fails past 1,000 keys). */
+/** Deletes objects from the S3 fake (a test's bulk fixtures, so later listings stay short). */
 export async function deleteTestObjects(keys: string[]) {
   let next = 0;
   await Promise.all(Array.from({ length: 16 }, async () => {

@@ -11,11 +11,11 @@ export const dynamic = "force-dynamic";
 
 type Message = { id: string; receivedAt: string; from: string | null; to: string[]; subject: string | null; text: string | null };
 
-/** Newest first, at most `limit`; unreadable files are skipped. */
-function readSink(dir: string, limit = 100): Message[] {
-  if (!existsSync(dir)) return [];
-  return readdirSync(dir)
-    .filter((f) => f.endsWith(".json"))
+/** Newest first, at most `limit` (with how many there are in all); unreadable files are skipped. */
+function readSink(dir: string, limit = 100): { total: number; messages: Message[] } {
+  if (!existsSync(dir)) return { total: 0, messages: [] };
+  const files = readdirSync(dir).filter((f) => f.endsWith(".json"));
+  const messages = files
     .sort()
     .reverse()
     .slice(0, limit)
@@ -27,6 +27,7 @@ function readSink(dir: string, limit = 100): Message[] {
         return [];
       }
     });
+  return { total: files.length, messages };
 }
 
 /**
@@ -37,7 +38,7 @@ export default async function MailSinkPage() {
   const me = await requirePageUser("/admin/mail");
   if (!me.isSiteAdmin) notFound();
   const dir = process.env.LW_MAIL_SINK_DIR;
-  const messages = dir ? readSink(dir) : [];
+  const { total, messages } = dir ? readSink(dir) : { total: 0, messages: [] };
   return (
     <main className="mx-auto max-w-4xl space-y-4 p-6">
       <h1 className="text-lg font-semibold">Mail sink</h1>
@@ -49,7 +50,10 @@ export default async function MailSinkPage() {
         <EmptyState title="Nothing received yet">Messages the app sends appear here (kept in {dir}).</EmptyState>
       ) : (
         <>
-          <p className="text-ink-soft">{messages.length} most recent message{messages.length === 1 ? "" : "s"} received by the local sink, newest first.</p>
+          <p className="text-ink-soft">
+            {total > messages.length ? `The newest ${messages.length} of ${total} messages` : `${messages.length} message${messages.length === 1 ? "" : "s"}`} received by the local sink, newest first.
+            {total > messages.length ? ` The older ones are the files in ${dir}.` : ""}
+          </p>
           <ul className="space-y-3" data-testid="mail-sink-list">
             {messages.map((m) => (
               <li key={m.id} data-testid="mail-sink-item">
