@@ -36,10 +36,11 @@ export function chainGeometry(graph: LinkageGraph): LinkageGeometry {
     parts[ctx.nodes[cur].id] = part(0, attach, { attach: -90, grip: 90 });
   }
   for (let guard = 0; cur >= 0 && guard < ctx.nodes.length; guard++) {
-    const js = jointsAt(ctx, cur, port);
-    if (!js.length) break;
-    const rod = otherNode(ctx, js[0], cur);
-    const far = jointsAt(ctx, rod, otherPort(ctx, js[0], cur) === "a" ? "b" : "a");
+    // The pushrod on this arm (a travel stop or another part may share the port).
+    const j = jointsAt(ctx, cur, port).find((x) => ctx.nodeRole[otherNode(ctx, x, cur)] === "link");
+    if (j === undefined) break;
+    const rod = otherNode(ctx, j, cur);
+    const far = jointsAt(ctx, rod, otherPort(ctx, j, cur) === "a" ? "b" : "a");
     if (!far.length) break;
     const next = otherNode(ctx, far[0], rod);
     const len = (ctx.nodes[rod].props as { length: number }).length;
