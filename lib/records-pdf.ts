@@ -32,6 +32,21 @@ const loadFonts = () => (fontFiles ??= Promise.all([readFile(path.join(FONT_DIR,
 
 export { printable };
 
+/**
+ * The font engine without shaping. pdf-lib asks the font for a string's glyphs (to draw it and to measure it)
+ * and uses only each glyph's id and advance width: kerning and mark positions are never applied. Shaping
+ * (the substitution tables of DejaVu Sans) cost more than half of a long log PDF's time and changes nothing
+ * but the rare ligature, so a string's glyphs come from the font's character map alone: linear in its length.
+ */
+const plainFontkit: typeof fontkit = {
+  ...fontkit,
+  create(buffer: Uint8Array, postscriptName?: string) {
+    const font = fontkit.create(buffer as never, postscriptName) as ReturnType<typeof fontkit.create> & { glyphsForString(s: string): unknown[] };
+    (font as unknown as { layout: (s: string) => { glyphs: unknown[] } }).layout = (s: string) => ({ glyphs: font.glyphsForString(s) });
+    return font;
+  },
+} as typeof fontkit;
+
 class Doc {
   pdf!: PDFDocument;
   font!: PDFFont;
@@ -45,7 +60,7 @@ class Doc {
     this.pdf.setTitle(this.title);
     this.pdf.setProducer("Linkwright");
     this.pdf.setCreator("Linkwright");
-    this.pdf.registerFontkit(fontkit);
+    this.pdf.registerFontkit(plainFontkit);
     const [regular, bold] = await loadFonts();
     this.font = await this.pdf.embedFont(regular, { subset: true });
     this.bold = await this.pdf.embedFont(bold, { subset: true });

@@ -6,7 +6,7 @@
  * build's, the full-log PDF's time, and other requests' p95 while it runs — each beside its target:
  * every page within 2× the demo build and under 300 KB for its first screen; the full-log PDF under
  * 30 s; other requests' p95 under 100 ms during the export. A miss sets exit code 1.
- * Knobs: LW_SKIP_BUILD=1 reuses the build (LW_BENCH_DIST, default .next-bench); LW_BENCH_REUSE=1 reuses the last seeded
+ * Knobs: LW_BENCH_FRACTION=0.2 seeds that fraction of the build; LW_SKIP_BUILD=1 reuses the build (LW_BENCH_DIST, default .next-bench); LW_BENCH_REUSE=1 reuses the last seeded
  * database and bucket; LW_BENCH_KEEP=1 leaves the server up to look at. Not while `npm test` runs: it restarts the test cluster.
  */
 import { spawn, spawnSync } from "node:child_process";
@@ -26,6 +26,13 @@ const DB_URL = localDbUrl(DB, "test");
 const PORT = Number(process.env.LW_TEST_PORT || 3100) + 2;
 const APP = `http://127.0.0.1:${PORT}`;
 const DIST = process.env.LW_BENCH_DIST || ".next-bench";
+/** LW_BENCH_FRACTION=0.2 seeds a fifth of the long build (entries, photos, revisions, comments…) to look at growth quickly. */
+function benchSize() {
+  const f = Number(process.env.LW_BENCH_FRACTION || 1);
+  if (!(f > 0 && f <= 1)) throw new Error("LW_BENCH_FRACTION is a fraction in (0, 1]");
+  const n = (x: number) => Math.max(1, Math.round(x * f));
+  return { ...BENCH_SIZE, entries: n(BENCH_SIZE.entries), revisions: n(BENCH_SIZE.revisions), comments: n(BENCH_SIZE.comments), signoffs: n(BENCH_SIZE.signoffs), parts: n(BENCH_SIZE.parts) };
+}
 const T = { pageRatio: 2, firstScreenKB: 300, pdfS: 30, p95Ms: 100 };
 
 function sh(args: string[], env: Record<string, string> = {}) {
@@ -110,7 +117,7 @@ export async function run() {
     const [rev] = await db("users").insert({ email: "bench-reviewer@bench.linkwright.test", name: "Bench Reviewer", password_hash: await bcrypt.hash("not-used", 4) }).returning("id");
     await db("memberships").insert({ build_id: long.id, user_id: rev.id, role: "reviewer" });
     const s3 = new S3Client({ endpoint: env.S3_ENDPOINT, region: "us-east-1", forcePathStyle: true, credentials: { accessKeyId: "S3RVER", secretAccessKey: "S3RVER" } });
-    seeded = await seedLongBuild(db, { client: s3, bucket: env.S3_BUCKET }, { buildId: long.id, ownerId: owner.id, reviewerId: rev.id, size: BENCH_SIZE, log: (s) => console.log(`  seeding: ${s}`) });
+    seeded = await seedLongBuild(db, { client: s3, bucket: env.S3_BUCKET }, { buildId: long.id, ownerId: owner.id, reviewerId: rev.id, size: benchSize(), log: (s) => console.log(`  seeding: ${s}`) });
     await db.raw("analyze");
     console.log(`Seeded in ${((performance.now() - t0) / 1000).toFixed(0)} s`);
   }
