@@ -15,8 +15,16 @@ export async function buildHardware(buildId: string) {
   const byKey = new Map(states.map((s: { part_key: string; state: HardwareState; updated_at: Date; name: string | null }) => [s.part_key, s]));
   return lines.map((l) => {
     const s = byKey.get(l.key);
-    return { ...l, state: (s?.state ?? "to_order") as HardwareState, stateBy: s?.name ?? null, stateAt: s ? s.updated_at.toISOString() : null };
+    return { ...l, usedInCount: l.usedIn.length, state: (s?.state ?? "to_order") as HardwareState, stateBy: s?.name ?? null, stateAt: s ? s.updated_at.toISOString() : null };
   });
+}
+
+/**
+ * The list as the page shows it: each line names its first `shown` places and counts the rest (a part used at
+ * hundreds of joints would otherwise make the first screen hundreds of kilobytes); `line` gives one line whole.
+ */
+export function listedHardware<L extends { usedIn: unknown[] }>(lines: L[], shown: number): L[] {
+  return lines.map((l) => (l.usedIn.length > shown ? { ...l, usedIn: l.usedIn.slice(0, shown) } : l));
 }
 
 export async function setHardwareState(buildId: string, key: string, state: HardwareState, userId: string) {

@@ -281,6 +281,22 @@ describe("hardware list and checklist", () => {
     expect(csv).toContain('jamNut,Jam nut 1/4-28 LH,,1,Received,"Pitch run: Forward pushrod B ↔ Bellcrank under the seat, in"');
   });
 
+  it("names a line's first three places and counts the rest; ?line= gives that line whole (the CSV always has all)", async () => {
+    const lines = (await viewer.request("GET", `${B()}/hardware`)).body.lines as { key: string; usedIn: unknown[]; usedInCount: number; quantity: number }[];
+    const many = lines.find((l) => l.usedInCount > 3);
+    expect(many, "the demo has a part used at more than three joints").toBeDefined();
+    expect(many!.usedIn).toHaveLength(3);
+    for (const l of lines) expect(l.usedIn.length).toBe(Math.min(3, l.usedInCount));
+    const whole = await viewer.request("GET", `${B()}/hardware?line=${encodeURIComponent(many!.key)}`);
+    expect(whole.status).toBe(200);
+    expect(whole.body.lines).toHaveLength(1);
+    expect(whole.body.lines[0].usedIn).toHaveLength(many!.usedInCount);
+    expect(whole.body.lines[0].usedIn.slice(0, 3)).toEqual(many!.usedIn);
+    expect((await viewer.request("GET", `${B()}/hardware?line=nothing%7Chere`)).status).toBe(404);
+    const bad = await viewer.request("GET", `${B()}/hardware?line=`);
+    expect([bad.status, Object.keys(bad.body.error.fields ?? {})]).toEqual([400, ["line"]]);
+  });
+
   it("ticks checklist items with person and time, keeps a note, and prints a PDF", async () => {
     const first = (await viewer.request("GET", `${L()}/checklist`)).body;
     expect(first.items.length).toBe(36); // 34 joint items (the stick stop adds 3) + 2 whole-linkage items, as in tests/shared/records (demo linkage)

@@ -27,6 +27,12 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
     onSettled: () => qc.invalidateQueries({ queryKey: key }),
     onError: (e) => setError(e instanceof Error ? e.message : String(e)),
   });
+  // A line names its first few places; "show all" fetches that line whole and puts it in the list.
+  const showAll = useMutation({
+    mutationFn: async (lineKey: string) => (await api<{ lines: Line[] }>(`/api/builds/${buildId}/hardware?line=${encodeURIComponent(lineKey)}`)).lines[0],
+    onSuccess: (full) => { if (full) qc.setQueryData<Line[]>(key, (old) => old?.map((l) => (l.key === full.key ? { ...l, usedIn: full.usedIn } : l))); },
+    onError: (e) => setError(e instanceof Error ? e.message : String(e)),
+  });
   const [sorting, setSorting] = useState<SortingState>([]);
   const [filter, setFilter] = useState("");
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
@@ -38,17 +44,28 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
     col.accessor("quantity", { header: "Qty", cell: (c) => <span className="tabular-nums">{c.getValue()}</span> }),
     col.accessor((l) => l.usedIn.map((u) => `${u.linkageName} ${u.jointId} ${u.where}`).join(" "), {
       id: "usedIn", header: "Where used", enableSorting: false,
-      cell: (c) => (
-        <ul className="space-y-0.5">
-          {c.row.original.usedIn.map((u) => (
-            <li key={`${u.linkageId}-${u.jointId}`}>
-              <Link className="text-advisory hover:underline" href={`/builds/${buildId}/linkages/${u.linkageId}?select=${encodeURIComponent(u.jointId)}`} title={`Open ${u.linkageName} with joint ${u.jointId} selected`}>
-                {u.linkageName}: {u.where}
-              </Link>
-            </li>
-          ))}
-        </ul>
-      ),
+      cell: (c) => {
+        const l = c.row.original;
+        return (
+          <ul className="space-y-0.5">
+            {l.usedIn.map((u) => (
+              <li key={`${u.linkageId}-${u.jointId}`}>
+                <Link className="text-advisory hover:underline" href={`/builds/${buildId}/linkages/${u.linkageId}?select=${encodeURIComponent(u.jointId)}`} title={`Open ${u.linkageName} with ${u.where} selected`}>
+                  {u.linkageName}: {u.where}
+                </Link>
+              </li>
+            ))}
+            {l.usedInCount > l.usedIn.length ? (
+              <li>
+                <button type="button" className="min-h-6 text-ink-soft underline hover:text-ink disabled:opacity-60" data-testid="hardware-used-in-more" disabled={showAll.isPending}
+                  onClick={() => showAll.mutate(l.key)}>
+                  {showAll.isPending && showAll.variables === l.key ? "Loading…" : `…and ${l.usedInCount - l.usedIn.length} more place${l.usedInCount - l.usedIn.length === 1 ? "" : "s"}: show all`}
+                </button>
+              </li>
+            ) : null}
+          </ul>
+        );
+      },
     }),
     col.accessor("state", {
       header: "State", filterFn: "equals",
@@ -59,7 +76,7 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
         </Select>
       ) : <span className={STATE_TONE[c.getValue()]}>{HARDWARE_STATE_LABEL[c.getValue()]}</span>,
     }),
-  ], [buildId, canEdit, setState]);
+  ], [buildId, canEdit, setState, showAll]);
 
   const table = useReactTable({
     data: q.data, columns, state: { sorting, globalFilter: filter, columnFilters }, onSortingChange: setSorting, onGlobalFilterChange: setFilter, onColumnFiltersChange: setColumnFilters,

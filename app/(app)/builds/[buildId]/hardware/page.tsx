@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { requirePageBuild } from "@/lib/page-access";
-import { buildHardware } from "@/db/hardware";
+import { buildHardware, listedHardware } from "@/db/hardware";
+import { USED_IN_SHOWN } from "@/shared/schemas/hardware";
 import { BuildNav } from "@/components/BuildNav";
 import { can } from "@/shared/roles";
 import { HardwareTable } from "./HardwareTable";
@@ -10,7 +11,7 @@ export const metadata: Metadata = { title: "Hardware list" };
 export default async function HardwarePage({ params }: { params: Promise<{ buildId: string }> }) {
   const { buildId } = await params;
   const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}/hardware`);
-  const lines = await buildHardware(build.id);
+  const lines = listedHardware(await buildHardware(build.id), USED_IN_SHOWN);
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/hardware" />
