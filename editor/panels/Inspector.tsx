@@ -5,12 +5,12 @@ import { z } from "zod";
 import { hardwareSchema, nodeSchema, type NodeKind } from "@/shared/linkage/schema";
 import { AN_BOLTS_BY_SIZE } from "@/shared/hardware";
 import { useEditorConfig, useEditorStore, useEditorStoreApi, useEditorValue } from "../context";
-import { KIND_NAMES } from "@/shared/linkage/kinds";
+import { KIND_NAMES, ROLES } from "@/shared/linkage/kinds";
 import { jointName } from "@/shared/linkage/names";
 import { inputText } from "../units";
 import { KindGlyph } from "../nodes/glyphs";
 import { SchemaForm } from "./SchemaForm";
-import { HARDWARE_SECTIONS, nodeSections } from "./specs";
+import { jointCardSections, nodeSections } from "./specs";
 import { FindingItem, LinkageFindings } from "./Findings";
 import { JointEvidence, SuggestPart, type RecordsTarget } from "./JointExtras";
 import { JointChecks } from "./JointChecks";
@@ -99,6 +99,23 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
     return j ? jointName(j, s.nodes) : "";
   });
   const epoch = useEditorStore((s) => s.epoch);
+  // The card's sections follow the two parts' names and kinds (a string, so a drag elsewhere does not rebuild them).
+  const ends = useEditorStore((s) => {
+    const j = s.joints.find((x) => x.id === id);
+    if (!j) return "";
+    const a = s.nodes.find((n) => n.id === j.from.node), b = s.nodes.find((n) => n.id === j.to.node);
+    return JSON.stringify([a?.kind, a?.label, b?.kind, b?.label, !!j.hardware.rodEnd]);
+  });
+  const sections = useMemo(() => {
+    const s = api.getState();
+    const j = s.joints.find((x) => x.id === id);
+    return j ? jointCardSections(j, s.nodes) : [];
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [api, id, ends]);
+  const cableEnd = useMemo(() => {
+    const [ak, , bk] = ends ? (JSON.parse(ends) as [string, string, string]) : [];
+    return [ak, bk].some((k) => k && ROLES[k as NodeKind] === "tension");
+  }, [ends]);
   const onValid = useCallback((v: unknown) => api.getState().updateJointHardware(id, v, { coalesce: `joint:${id}` }), [api, id]);
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const value = useMemo(() => joint?.hardware ?? null, [id, epoch, unitSystem]);
@@ -121,11 +138,16 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
       <SubjectFindings subjectKey={`joint:${id}`} />
       <JointChecks jointId={id} />
       {records && joint.hardware.rodEnd && <SuggestPart target={records} joint={joint} />}
+      {cableEnd && (
+        <p className="rounded border border-ink/10 bg-paper px-2 py-1 text-[11px] text-ink-soft" data-testid="cable-terminal-note">
+          A cable&apos;s terminal: the cable, its terminals and the turnbuckle are recorded on their own cards (select the part). Here, record the bolt or clevis pin, nut and washers that hold the terminal.
+        </p>
+      )}
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}
         testId="joint-form"
         schema={hardwareSchema}
-        sections={HARDWARE_SECTIONS}
+        sections={sections}
         value={value as Record<string, unknown>}
         unitSystem={unitSystem}
         disabled={readOnly}

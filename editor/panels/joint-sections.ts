@@ -8,10 +8,11 @@ import { BUSHING_MATERIALS, CLEVIS_RETENTION, PLATE_MATERIALS, ROD_END_BODIES } 
 import { opts } from "../nodes/kinds/format";
 import type { FieldSpec, SectionSpec } from "./SchemaForm";
 
-const member = (side: "from" | "to", which: string): SectionSpec => ({
-  title: `Hole in the ${which} part`,
+/** The member at one side of the joint's hole, titled with that part's name ("Hole in Bellcrank under the seat"). */
+export const member = (side: "from" | "to", part: string): SectionSpec => ({
+  title: `Hole in ${part}`,
   optional: `holes.${side}`,
-  note: `The arm, lug, horn or bracket of the joint's ${which} part that the bolt passes through — for bearing and tear-out at its hole. Leave it off for a rod end's own eye.`,
+  note: `The arm, lug, horn or bracket of ${part} that the bolt passes through — for bearing and tear-out at its hole. Leave it off for a rod end's own eye.`,
   fields: [
     { type: "enum", path: `holes.${side}.material`, label: "Material", options: opts(PLATE_MATERIALS) },
     { type: "number", path: `holes.${side}.thickness`, label: "Thickness", q: "length", hint: "both cheeks together for a fork" },
@@ -21,9 +22,8 @@ const member = (side: "from" | "to", which: string): SectionSpec => ({
   ],
 });
 
+/** The joint card's sections after the nut; the two hole sections are put in per joint (specs.ts, jointCardSections). */
 export const JOINT_EXTRA_SECTIONS: SectionSpec[] = [
-  member("from", "first"),
-  member("to", "second"),
   {
     title: "Stack & bearing rating",
     fields: [

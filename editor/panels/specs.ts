@@ -3,7 +3,10 @@ import { AN_BOLTS, NUT_TYPES, THREADS, type NodeKind } from "@/shared/linkage/sc
 import { EDITOR_KINDS } from "../nodes/kinds";
 import { opts } from "../nodes/kinds/format";
 import type { SectionSpec } from "./SchemaForm";
-import { JOINT_EXTRA_SECTIONS, NUT_EXTRA_FIELDS, ROD_END_EXTRA_FIELDS } from "./joint-sections";
+import { JOINT_EXTRA_SECTIONS, NUT_EXTRA_FIELDS, ROD_END_EXTRA_FIELDS, member } from "./joint-sections";
+import { ROLES } from "@/shared/linkage/kinds";
+import { partName } from "@/shared/linkage/names";
+import type { Joint, LinkageNode } from "@/shared/linkage/schema";
 
 export function nodeSections(kind: NodeKind): SectionSpec[] {
   return [
@@ -20,6 +23,9 @@ const NUT_NAMES: Record<(typeof NUT_TYPES)[number], string> = {
   plain: "Plain, no locking",
   none: "None",
 };
+
+/** Where the two hole sections go in the card (jointCardSections puts them in with the parts' names). */
+const HOLES: SectionSpec = { title: "", fields: [] };
 
 export const HARDWARE_SECTIONS: SectionSpec[] = [
   {
@@ -71,6 +77,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
       ...NUT_EXTRA_FIELDS,
     ],
   },
+  HOLES,
   ...JOINT_EXTRA_SECTIONS,
   {
     title: "Washer under the bolt head",
@@ -101,3 +108,26 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     ],
   },
 ];
+
+const ROD_END_ONLY = new Set(["Rod-end bearing", "Jam nut & thread engagement"]);
+
+/**
+ * The joint card of one joint: the holes titled with the two parts' names; at a cable's or turnbuckle's
+ * terminal (the terminal and the turnbuckle are on those parts' own cards) no rod-end or jam-nut section,
+ * unless a rod end was recorded there before.
+ */
+export function jointCardSections(joint: Joint, nodes: readonly LinkageNode[]): SectionSpec[] {
+  const byId = (id: string) => nodes.find((n) => n.id === id);
+  const from = byId(joint.from.node), to = byId(joint.to.node);
+  const cableEnd = [from, to].some((n) => n && ROLES[n.kind] === "tension") && !joint.hardware.rodEnd;
+  const out: SectionSpec[] = [];
+  for (const s of HARDWARE_SECTIONS) {
+    if (s === HOLES) {
+      out.push(member("from", from ? partName(from) : "the first part"), member("to", to ? partName(to) : "the second part"));
+      continue;
+    }
+    if (cableEnd && ROD_END_ONLY.has(s.title)) continue;
+    out.push(s);
+  }
+  return out;
+}

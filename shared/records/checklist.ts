@@ -7,15 +7,18 @@ import { AN_BOLTS_BY_SIZE, SRC, THREADS_BY_NAME, type AnBoltSize } from "../hard
 import type { Joint, LinkageGraph } from "../linkage/schema";
 import { jointName, partName } from "../linkage/names";
 import type { Report, SourceTag } from "../analysis/types";
+import { CABLE_PART_CODES, cableParts } from "./cable-records";
 
 export const ITEM_CODES = [
   "jam-nut", "witness-hole", "engagement-length", "retaining-washer", "nut-locking", "cotter-pin", "safety-wire",
-  "torque", "torque-stripe", "full-free-travel", "stops-before-limits", "not-checked",
+  "torque", "torque-stripe", "full-free-travel", "stops-before-limits", "not-checked", ...CABLE_PART_CODES,
 ] as const;
 export type ItemCode = (typeof ITEM_CODES)[number];
 
 export type ChecklistItem = {
+  /** The joint's id, the part's id for a part of a cable system, "" for the whole linkage (with `code`, the item's key). */
   jointId: string;
+  subject: "joint" | "part" | "linkage";
   /** Where, in words: the joint's name ("Forward pushrod B ↔ Bellcrank under the seat, in"), or "Whole linkage". */
   where: string;
   code: ItemCode;
@@ -28,7 +31,7 @@ const fmt = (v: number) => String(Number(v.toFixed(3)));
 export function jointItems(j: Joint, where: string): ChecklistItem[] {
   const hw = j.hardware;
   const items: ChecklistItem[] = [];
-  const add = (code: ItemCode, text: string, source: SourceTag) => items.push({ jointId: j.id, where, code, text, source });
+  const add = (code: ItemCode, text: string, source: SourceTag) => items.push({ jointId: j.id, subject: "joint", where, code, text, source });
   const re = hw.rodEnd;
   if (re) {
     add("jam-nut", `Jam nut on the ${re.thread} ${re.hand} rod end tight against the fitting and marked across nut and fitting.`, SRC.jamNut);
@@ -65,11 +68,11 @@ export function linkageItems(g: LinkageGraph): ChecklistItem[] {
     .map((s) => (s.kind === "controlSurface" ? `${partName(s)} ${s.props.travelUp}° up / ${s.props.travelDown}° down` : ""))
     .join("; ");
   const items: ChecklistItem[] = [
-    { jointId: "", where, code: "full-free-travel", text: "Full and free travel from stop to stop with the controls moved by hand: no binding, rubbing or contact with structure or wiring, at every position.", source: { kind: "commonPractice", text: "control-system inspection" } },
+    { jointId: "", subject: "linkage", where, code: "full-free-travel", text: "Full and free travel from stop to stop with the controls moved by hand: no binding, rubbing or contact with structure or wiring, at every position.", source: { kind: "commonPractice", text: "control-system inspection" } },
   ];
   if (surfaces.length || stops.length) {
     items.push({
-      jointId: "", where, code: "stops-before-limits",
+      jointId: "", subject: "linkage", where, code: "stops-before-limits",
       text: `The stops${stops.length ? ` (${stops.map((s) => partName(s)).join(", ")})` : ""} contact before the surface reaches its limits${limits ? ` — ${limits}` : ""}; nothing else in the run acts as the stop.`,
       source: { kind: "commonPractice", text: "control-system inspection: stops take the load, not the surface" },
     });
@@ -82,12 +85,13 @@ const NOT_CHECKED_SRC: SourceTag = { kind: "commonPractice", text: "a check with
 /** The to-do of a joint whose checks could not all be made: what to enter on its card. */
 export function notCheckedItem(jointId: string, where: string, todo: readonly string[]): ChecklistItem {
   const list = todo.map((t) => t.charAt(0).toUpperCase() + t.slice(1)).join("; ");
-  return { jointId, where, code: "not-checked", text: `Not checked yet — to do: ${list}. Then save, so the load-path check can make these checks.`, source: NOT_CHECKED_SRC };
+  return { jointId, subject: "joint", where, code: "not-checked", text: `Not checked yet — to do: ${list}. Then save, so the load-path check can make these checks.`, source: NOT_CHECKED_SRC };
 }
 
 /**
- * Every item of a revision, joints in graph order (each joint's to-do from the report last), then the
- * whole-linkage items. Without a report the to-do items are left out.
+ * Every item of a revision, joints in graph order (each joint's to-do from the report last), then the parts
+ * of a cable system (cables, turnbuckles, pulleys, fairleads), then the whole-linkage items. Without a report
+ * the to-do items are left out.
  */
 export function checklistFor(g: LinkageGraph, report?: Pick<Report, "joints"> | null): ChecklistItem[] {
   const todo = new Map<string, readonly string[]>();
@@ -99,6 +103,7 @@ export function checklistFor(g: LinkageGraph, report?: Pick<Report, "joints"> | 
     const t = todo.get(j.id);
     if (t) out.push(notCheckedItem(j.id, where, t));
   }
+  for (const { node, where, items } of cableParts(g)) for (const i of items) out.push({ jointId: node.id, subject: "part", where, ...i });
   for (const i of linkageItems(g)) out.push(i);
   return out;
 }

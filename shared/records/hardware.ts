@@ -4,7 +4,8 @@
  */
 import { AN_BOLTS_BY_SIZE, type AnBoltSize } from "../hardware";
 import type { Joint, LinkageGraph } from "../linkage/schema";
-import { jointName } from "../linkage/names";
+import { jointName, partName } from "../linkage/names";
+import { cableHardware } from "./cable-records";
 
 export const HARDWARE_STATES = ["to_order", "ordered", "received", "installed", "inspected"] as const;
 export type HardwareState = (typeof HARDWARE_STATES)[number];
@@ -12,7 +13,13 @@ export const HARDWARE_STATE_LABEL: Record<HardwareState, string> = {
   to_order: "To order", ordered: "Ordered", received: "Received", installed: "Installed", inspected: "Inspected",
 };
 
-export type HardwareKind = "rodEnd" | "jamNut" | "bolt" | "nut" | "washer" | "cotterPin";
+export const HARDWARE_KINDS = ["rodEnd", "jamNut", "bolt", "nut", "washer", "cotterPin", "cable", "cableTerminal", "turnbuckle", "pulley", "fairlead"] as const;
+export type HardwareKind = (typeof HARDWARE_KINDS)[number];
+export const HARDWARE_KIND_LABEL: Record<HardwareKind, string> = {
+  rodEnd: "Rod end", jamNut: "Jam nut", bolt: "Bolt", nut: "Nut", washer: "Washer", cotterPin: "Cotter pin",
+  cable: "Cable", cableTerminal: "Cable terminal", turnbuckle: "Turnbuckle", pulley: "Pulley", fairlead: "Fairlead",
+};
+/** Where a line is used: at a joint, or (cable-system parts) the part itself; `jointId` is then the part's id. */
 export type WhereUsed = { linkageId: string; linkageName: string; jointId: string; where: string };
 export type HardwareLine = {
   /** Stable identity of the line: the same part in two joints is one line. */
@@ -79,7 +86,16 @@ export function hardwareList(linkages: { id: string; name: string; graph: Linkag
         line.usedIn.push({ linkageId: l.id, linkageName: l.name, jointId: j.id, where });
       }
     }
+    for (const n of l.graph.nodes) {
+      for (const [key, kind, description, count] of cableHardware(n)) {
+        let line = lines.get(key);
+        if (!line) lines.set(key, (line = { key, kind, description, partNumber: null, quantity: 0, usedIn: [] }));
+        line.quantity += count;
+        // A cable's two terminals are one place: name it once.
+        const last = line.usedIn[line.usedIn.length - 1];
+        if (!(last && last.linkageId === l.id && last.jointId === n.id)) line.usedIn.push({ linkageId: l.id, linkageName: l.name, jointId: n.id, where: partName(n) });
+      }
+    }
   }
-  const order: HardwareKind[] = ["rodEnd", "jamNut", "bolt", "nut", "washer", "cotterPin"];
-  return [...lines.values()].sort((a, b) => order.indexOf(a.kind) - order.indexOf(b.kind) || a.description.localeCompare(b.description));
+  return [...lines.values()].sort((a, b) => HARDWARE_KINDS.indexOf(a.kind) - HARDWARE_KINDS.indexOf(b.kind) || a.description.localeCompare(b.description));
 }

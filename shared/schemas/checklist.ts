@@ -18,6 +18,7 @@ export const tick = z.object({ jointId: z.string(), code: z.string(), tickedBy: 
 export type Tick = z.infer<typeof tick>;
 export const checklistItem = z.object({
   jointId: z.string(),
+  subject: z.enum(["joint", "part", "linkage"]),
   where: z.string(),
   code: z.enum(ITEM_CODES),
   text: z.string(),

@@ -6,13 +6,13 @@ import Link from "next/link";
 import { useMemo, useState } from "react";
 import { api } from "@/components/api-client";
 import { Card, EmptyState, Input, Select } from "@/components/ui";
-import { HARDWARE_STATES, HARDWARE_STATE_LABEL, type HardwareState } from "@/shared/records/hardware";
+import { HARDWARE_KIND_LABEL, HARDWARE_STATES, HARDWARE_STATE_LABEL, type HardwareState } from "@/shared/records/hardware";
 import type { HardwareLineView } from "@/shared/schemas/hardware";
 import { hardwareKeys } from "@/components/query-keys";
 import { DataTable } from "@/components/DataTable";
 
 type Line = HardwareLineView;
-const KIND_LABEL: Record<string, string> = { rodEnd: "Rod end", jamNut: "Jam nut", bolt: "Bolt", nut: "Nut", washer: "Washer", cotterPin: "Cotter pin" };
+const KIND_LABEL: Record<string, string> = HARDWARE_KIND_LABEL;
 const STATE_TONE: Record<HardwareState, string> = { to_order: "text-caution", ordered: "text-advisory", received: "text-ink", installed: "text-ink", inspected: "text-ok" };
 const col = createColumnHelper<Line>();
 

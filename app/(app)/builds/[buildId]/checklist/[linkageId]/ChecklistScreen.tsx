@@ -37,11 +37,11 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
   if (q.isLoading) return <p className="text-ink-soft">Loading the checklist…</p>;
   if (q.error || !q.data) return <p role="alert" className="text-hazard">{String(q.error instanceof Error ? q.error.message : "The checklist could not be loaded.")}</p>;
   const d = q.data;
-  const groups: { jointId: string; where: string; items: Item[] }[] = [];
+  const groups: { jointId: string; subject: Item["subject"]; where: string; items: Item[] }[] = [];
   for (const i of d.items) {
     const last = groups[groups.length - 1];
-    if (last && last.jointId === i.jointId) last.items.push(i);
-    else groups.push({ jointId: i.jointId, where: i.where, items: [i] });
+    if (last && last.jointId === i.jointId && last.subject === i.subject) last.items.push(i);
+    else groups.push({ jointId: i.jointId, subject: i.subject, where: i.where, items: [i] });
   }
   const done = d.items.filter((i) => i.tickedAt).length;
   return (
@@ -60,7 +60,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
       {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
       {d.items.length <= 2 ? <p className="rounded border border-dashed border-ink/25 p-4 text-ink-soft">This revision has no joints yet, so only the travel checks show. Add joints with their hardware in the editor and each one brings its own checks.</p> : null}
       {groups.map((g) => (
-        <section key={g.jointId || "whole"} className="rounded-lg border border-ink/10 bg-white" data-testid={`checklist-joint-${g.jointId || "linkage"}`}>
+        <section key={`${g.subject}:${g.jointId}`} className="rounded-lg border border-ink/10 bg-white" data-testid={g.subject === "part" ? `checklist-part-${g.jointId}` : `checklist-joint-${g.jointId || "linkage"}`}>
           <header className="flex flex-wrap items-center justify-between gap-2 border-b border-ink/10 px-4 py-2">
             <h2 className="text-sm font-semibold">{g.where}</h2>
             {g.jointId ? <Link className="no-print text-xs text-advisory hover:underline" href={`/builds/${p.buildId}/linkages/${p.linkageId}?select=${encodeURIComponent(g.jointId)}`}>Open in the editor</Link> : null}
@@ -68,7 +68,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
           <ul className="divide-y divide-ink/5">
             {g.items.map((i) => <ItemRow key={i.code} i={i} canTick={p.canTick} onChange={(v) => tick.mutate({ jointId: i.jointId, code: i.code, ...v })} />)}
           </ul>
-          {g.jointId ? <div className="border-t border-ink/10 px-4 py-2"><JointPhotos buildId={p.buildId} linkageId={p.linkageId} jointId={g.jointId} jointName={g.where} canEdit={p.canEdit} /></div> : null}
+          {g.subject === "joint" ? <div className="border-t border-ink/10 px-4 py-2"><JointPhotos buildId={p.buildId} linkageId={p.linkageId} jointId={g.jointId} jointName={g.where} canEdit={p.canEdit} /></div> : null}
         </section>
       ))}
       <Caution />

@@ -1,0 +1,37 @@
+// The joint card's sections follow the joint: the holes named after their parts, no rod end at a cable's terminal.
+import { describe, expect, it } from "vitest";
+import { jointCardSections } from "@/editor/panels/specs";
+import { demoPitchLinkage } from "@/shared/demo";
+import { rudderCircuit } from "../shared/analysis/cable-fixtures";
+
+const titles = (s: { title: string }[]) => s.map((x) => x.title);
+
+describe("joint card sections", () => {
+  it("names the holes after the joint's two parts on a pushrod run, with the rod-end sections", () => {
+    const g = demoPitchLinkage();
+    const j = g.joints.find((x) => x.id === "j-fwd-bellcrank")!;
+    const t = titles(jointCardSections(j, g.nodes));
+    expect(t).toContain("Rod-end bearing");
+    expect(t).toContain("Jam nut & thread engagement");
+    expect(t).toContain("Hole in Forward pushrod");
+    expect(t).toContain("Hole in Bellcrank under the seat");
+    expect(t.some((x) => /first part|second part/.test(x))).toBe(false);
+  });
+
+  it("leaves the rod end and jam nut off at a cable's or turnbuckle's terminal", () => {
+    const g = rudderCircuit();
+    const j = g.joints.find((x) => [x.from.node, x.to.node].some((n) => n === "tbL" || n === "cableL"))!;
+    const t = titles(jointCardSections(j, g.nodes));
+    expect(t).not.toContain("Rod-end bearing");
+    expect(t).not.toContain("Jam nut & thread engagement");
+    expect(t).toContain("Bolt");
+    expect(t).toContain("Nut");
+  });
+
+  it("keeps a rod end someone recorded at a cable's terminal, so nothing they entered is hidden", () => {
+    const g = rudderCircuit();
+    const j = g.joints.find((x) => [x.from.node, x.to.node].includes("tbL"))!;
+    const withRodEnd = { ...j, hardware: { ...j.hardware, rodEnd: { shank: "male" as const, thread: "1/4-28" as const, hand: "RH" as const, ballBore: 0.25 } } };
+    expect(titles(jointCardSections(withRodEnd as typeof j, g.nodes))).toContain("Rod-end bearing");
+  });
+});
