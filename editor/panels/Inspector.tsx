@@ -6,7 +6,8 @@ import { hardwareSchema, nodeSchema, type NodeKind } from "@/shared/linkage/sche
 import { AN_BOLTS_BY_SIZE } from "@/shared/hardware";
 import { useEditorConfig, useEditorStore, useEditorStoreApi, useEditorValue } from "../context";
 import { KIND_NAMES, ROLES } from "@/shared/linkage/kinds";
-import { jointName } from "@/shared/linkage/names";
+import { jointName, partName } from "@/shared/linkage/names";
+import { returnCableEnds } from "../store/cable";
 import { inputText } from "../units";
 import { KindGlyph } from "../nodes/glyphs";
 import { SchemaForm } from "./SchemaForm";
@@ -66,14 +67,29 @@ function NodeInspector({ id }: { id: string }) {
     return node ? { label: node.label, props: node.props } : null;
   }, [id, epoch, unitSystem]);
   const sections = useMemo(() => (kind ? nodeSections(kind) : []), [kind]);
+  const label = useEditorValue((s) => {
+    const n = s.nodes.find((x) => x.id === id);
+    return n ? partName(n) : "";
+  });
+  // A cable joined at both ends with no return yet is offered its return cable (editor/store/cable.ts).
+  const returnable = useEditorValue((s) => kind === "cable" && returnCableEnds(s, id) !== null);
   if (!kind || !value) return null;
   return (
     <div className="space-y-2" data-testid="node-form-panel">
       <h3 className="flex items-center gap-1.5 text-sm font-semibold text-ink">
         <KindGlyph kind={kind} /> {KIND_NAMES[kind]}
-        <span className="ml-auto font-mono text-[10px] font-normal text-ink-soft">{id}</span>
+        <span className="ml-auto min-w-0 truncate text-[11px] font-normal text-ink-soft" data-part-id={id}>{label}</span>
       </h3>
       <SubjectFindings subjectKey={`node:${id}`} />
+      {returnable && !readOnly && (
+        <div className="rounded border border-caution/30 bg-caution/5 px-2 py-1.5 text-[11px]" data-testid="return-cable-offer">
+          <p className="text-ink">A cable only pulls. Close the circuit with a return cable between the same two parts, so the control works both ways.</p>
+          <button type="button" className="mt-1 min-h-8 rounded bg-ink px-2 py-1 text-[12px] font-medium text-white hover:bg-ink/90" data-testid="btn-return-cable"
+            onClick={() => api.getState().addReturnCable(id)}>
+            Add the return cable
+          </button>
+        </div>
+      )}
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}
         testId="node-form"

@@ -3,7 +3,7 @@
  * history, dirty tracking, clipboard and the live load-path findings). React Flow renders from it; nothing
  * here talks to the network (saving lives in useAutosave). One store is created per editor mount with
  * `createEditorStore`. Each job has its file: types.ts (state and initial state), graph.ts (edits),
- * history.ts, clipboard.ts, selection.ts, findings.ts (the findings index).
+ * history.ts, clipboard.ts, selection.ts, findings.ts (the findings index), cable.ts (the return cable).
  */
 import { createStore } from "zustand/vanilla";
 import type { LinkageGraph } from "@/shared/linkage/schema";
@@ -14,6 +14,7 @@ import { createHistory } from "./history";
 import { graphActions, toGraph } from "./graph";
 import { clipboardActions } from "./clipboard";
 import { selectionActions } from "./selection";
+import { cableActions } from "./cable";
 import { findingsActions, runEngineOnChange, subjectKey } from "./findings";
 
 export type * from "./types";
@@ -43,6 +44,7 @@ export function createEditorStore(initial: LinkageGraph, opts: EditorOptions = {
       ...history.actions,
       ...clipboardActions(set, get, history.commit, newId),
       ...selectionActions(set, get),
+      ...cableActions(get, history.commit, newId),
       ...findingsActions(set, get, opts),
     };
   });

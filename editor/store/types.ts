@@ -107,7 +107,11 @@ export type SelectionActions = {
 };
 export type FindingsActions = { setSettings: (s: AnalysisSettings | undefined) => void; runAnalysis: () => void };
 
-export type EditorState = EditorData & EditActions & HistoryActions & ClipboardActions & SelectionActions & FindingsActions;
+export type CableActions = {
+  /** Adds the return cable of a cable joined at both ends (editor/store/cable.ts); returns its id or "". */
+  addReturnCable: (cableId: string) => string;
+};
+export type EditorState = EditorData & EditActions & HistoryActions & ClipboardActions & SelectionActions & FindingsActions & CableActions;
 export type EditorStore = StoreApi<EditorState>;
 
 export function initialData(initial: LinkageGraph, opts: EditorOptions): EditorData {

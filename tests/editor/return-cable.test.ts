@@ -1,0 +1,48 @@
+// Drawing a circuit: one cable drawn, its return offered and made in one undoable step, and the check sees one closed circuit.
+import { describe, expect, it } from "vitest";
+import { createEditorStore, toGraph } from "@/editor/store";
+import { returnCableEnds } from "@/editor/store/cable";
+import { emptyGraph } from "@/shared/linkage/schema";
+import { analyze } from "@/shared/analysis";
+
+function sectorToHorn() {
+  let i = 0;
+  const store = createEditorStore(emptyGraph("Elevator cables", "pitch"), { revision: 1, newId: (k) => `${k}-${++i}`, now: () => 0 });
+  const s = () => store.getState();
+  const sector = s().addNode("cableSector", { x: 0, y: 0 });
+  const cable = s().addNode("cable", { x: 200, y: 0 }, { label: "Up cable", props: { size: "1/8", riggingTension: 30, riggingTemperature: 70, tensionMin: 25, tensionMax: 35 } });
+  const horn = s().addNode("controlHorn", { x: 400, y: 0 });
+  return { store, s, sector, cable, horn };
+}
+
+describe("the return cable", () => {
+  it("is not offered until the cable is joined at both ends", () => {
+    const { s, sector, cable } = sectorToHorn();
+    expect(returnCableEnds(s(), cable)).toBeNull();
+    s().connect({ node: sector, port: "out" }, { node: cable, port: "a" });
+    expect(returnCableEnds(s(), cable)).toBeNull();
+    expect(s().addReturnCable(cable)).toBe("");
+    expect(s().notice?.text).toMatch(/not joined at both ends/);
+  });
+
+  it("joins the same two ports, copies the cable's make but not its rigging reading, and is one step to undo", () => {
+    const { s, sector, cable, horn } = sectorToHorn();
+    s().connect({ node: sector, port: "out" }, { node: cable, port: "a" });
+    s().connect({ node: cable, port: "b" }, { node: horn, port: "attach" });
+    expect(analyze(toGraph(s())).findings.map((f) => f.code)).not.toContain("linkage-loop");
+    const before = { nodes: s().nodes.length, joints: s().joints.length };
+    const id = s().addReturnCable(cable);
+    expect(id).not.toBe("");
+    const ret = s().nodes.find((n) => n.id === id)!;
+    expect(ret).toMatchObject({ kind: "cable", label: "Up cable (return)", props: { size: "1/8", tensionMin: 25, tensionMax: 35 } });
+    expect((ret.props as { riggingTension?: number }).riggingTension).toBeUndefined();
+    const ends = s().joints.filter((j) => j.from.node === id).map((j) => [j.from.port, j.to.node, j.to.port]);
+    expect(ends).toEqual([["a", sector, "out"], ["b", horn, "attach"]]);
+    expect(returnCableEnds(s(), cable)).toBeNull(); // offered once
+    expect(returnCableEnds(s(), id)).toBeNull();
+    const g = toGraph(s());
+    expect(analyze(g).findings.filter((f) => f.code === "cable-pushes" || f.code === "linkage-loop")).toEqual([]);
+    s().undo();
+    expect({ nodes: s().nodes.length, joints: s().joints.length }).toEqual(before);
+  });
+});
