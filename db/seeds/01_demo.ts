@@ -1,11 +1,13 @@
 /**
  * The invented demo scenario: build "Larkspur LX-2", owner Dana Ortiz, reviewer Sam Okafor, viewer
- * Lee Park, with a pitch linkage that has one deliberately wrong joint. Idempotent: run it any number of times.
+ * Lee Park, with a pitch linkage that has one deliberately wrong joint and a yaw cable run with one fault (a turnbuckle
+ * with too many threads showing). Idempotent: run it any number of times.
  */
 import type { Knex } from "knex";
 import bcrypt from "bcryptjs";
 import { DEMO_BUILD, DEMO_USERS } from "../demo-accounts";
 import { demoPitchLinkage } from "../../shared/demo";
+import { demoRudderLinkage } from "../../shared/demo-rudder";
 import { analyze } from "../../shared/analysis";
 
 export async function seed(knex: Knex): Promise<void> {
@@ -41,6 +43,9 @@ export async function seed(knex: Knex): Promise<void> {
       analysis: JSON.stringify(analyze(graph)),
       author_id: owner,
     });
+    const rudder = demoRudderLinkage();
+    const [yaw] = await trx("linkages").insert({ build_id: build.id, name: rudder.name, system: "yaw", current_revision: 1 }).returning("id");
+    await trx("linkage_revisions").insert({ linkage_id: yaw.id, revision: 1, graph: JSON.stringify(rudder), analysis: JSON.stringify(analyze(rudder)), author_id: owner });
     // A few log entries and a small build parts library, so the records pages are not empty on first look.
     const day = (daysAgo: number) => new Date(Date.now() - daysAgo * 86_400_000).toISOString().slice(0, 10);
     await trx("log_entries").insert([

@@ -57,3 +57,24 @@ describe("generateLinkage", () => {
     expect(g.nodes.filter((n) => n.kind === "controlSurface").length).toBeGreaterThan(1);
   });
 });
+
+describe("demo: Larkspur LX-2 yaw cable run", async () => {
+  const { demoRudderLinkage, DEMO_RUDDER_FAULT_PART } = await import("../../shared/demo-rudder");
+  const g = demoRudderLinkage();
+  const r = analyze(g);
+
+  it("is a valid linkage file, pedals → cables over a pulley and through a fairlead → turnbuckles → rudder horn", () => {
+    const p = graphSchema.safeParse(g);
+    expect(p.success).toBe(true);
+    expect(p.data).toEqual(g);
+    const kinds = new Set(g.nodes.map((n) => n.kind));
+    for (const k of ["cablePedal", "cable", "pulley", "fairlead", "turnbuckle", "controlHorn", "controlSurface", "travelStop"]) expect(kinds.has(k as never), k).toBe(true);
+  });
+  it("shows exactly the one fault a reviewer would catch: the right turnbuckle with five threads showing (AC 43.13-1B: at most three)", () => {
+    expect(r.findings.map((f) => [f.severity, f.code, f.subject.id])).toEqual([["hazard", "turnbuckle-threads-showing", DEMO_RUDDER_FAULT_PART]]);
+  });
+  it("is one closed circuit, not a loop, with every cable checked against its breaking strength", () => {
+    expect(r.cables.every((c) => c.inCircuit)).toBe(true);
+    expect(r.summary.lowestMargin?.what).toBeDefined();
+  });
+});
