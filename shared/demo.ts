@@ -224,3 +224,19 @@ export function generateLinkage(nodeCount: number): LinkageGraph {
   });
   return { formatVersion: FORMAT_VERSION, name: `generated ${n}`, system: "pitch", nodes, joints };
 }
+
+/**
+ * A worst case for fan-in (benchmarks and the hardening tests): `sticks` sticks (one the chain's own), each
+ * on its own mount, all driving the first pushrod of generateLinkage's chain; `parts` parts in all.
+ */
+export function fanInLinkage(sticks: number, parts = 2 * sticks + 60): LinkageGraph {
+  const g = generateLinkage(Math.max(7, parts - 2 * (sticks - 1)));
+  const first = g.joints.find((j) => j.from.node === "stick" && j.from.port === "attach" && j.to.port === "a")!;
+  for (let i = 1; i < sticks; i++) {
+    g.nodes.push({ id: `fan-s${i}`, kind: "stick", label: "", position: { x: -220, y: i * 180 }, props: { gripArm: 20, attachArm: 6, axis: "pitch", travelFwd: 15, travelAft: 15 } });
+    g.nodes.push({ id: `fan-m${i}`, kind: "structureMount", label: "", position: { x: -440, y: i * 180 }, props: { note: "" } });
+    g.joints.push(joint(`fan-jp${i}`, [`fan-s${i}`, "pivot"], [`fan-m${i}`, "mount"], ballPivot("AN5", 120)));
+    g.joints.push(joint(`fan-ja${i}`, [`fan-s${i}`, "attach"], [first.to.node, "a"], rodEndJoint("RH", 6000)));
+  }
+  return { ...g, name: `fan-in ${sticks}` };
+}

@@ -108,9 +108,24 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
     if (wJ[j] === 0 && f > 0) touchedJ.push(j);
     if (f > wJ[j]) wJ[j] = f;
   };
-  const recPivot = (n: number, r: number) => {
-    for (const k of jointsAt(ctx, n, "pivot")) recJ(k, r);
+  // Each port's joint list is handled once per walk, so a walk is linear in parts + joints however many
+  // joints share a port: lists whose joints all carry a load (pivots, hinges, a cable's ends, a guide's
+  // mounting) keep the largest value and are applied at the end of the walk; lists the force goes on
+  // through are pushed the first time the walk reaches them (in a tree that is the only time; around a
+  // loop, which structure.ts reports, the first path reached wins).
+  const listMax = new Map<number[], number>();
+  const forwarded = new Set<number[]>();
+  const recList = (list: number[], r: number) => {
+    if (list.length === 0) return;
+    const m = listMax.get(list);
+    if (m === undefined || r > m) listMax.set(list, r);
   };
+  const pushList = (list: number[], from: number, f: number, m: number, skip = -1) => {
+    if (list.length === 0 || forwarded.has(list)) return;
+    forwarded.add(list);
+    for (const k of list) if (k !== skip) push(k, from, f, m);
+  };
+  const recPivot = (n: number, r: number) => recList(jointsAt(ctx, n, "pivot"), r);
 
   let stamp = 0;
   for (let i = 0; i < N; i++) {
@@ -123,7 +138,7 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
     let reaches = false;
     driven[i] = 1;
     recPivot(i, fg + fp);
-    for (const k of jointsAt(ctx, i, "attach")) push(k, i, fp, 0);
+    pushList(jointsAt(ctx, i, "attach"), i, fp, 0);
 
     while (sp > 0) {
       sp--;
@@ -142,7 +157,7 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
           if (f > wA[n]) wA[n] = f;
           forwardSamePort(j, n, port, f);
           const exit = port === "a" ? "b" : port === "b" ? "a" : null;
-          if (exit) for (const k of jointsAt(ctx, n, exit)) push(k, n, f, 0);
+          if (exit) pushList(jointsAt(ctx, n, exit), n, f, 0);
           break;
         }
         case "tension": {
@@ -155,7 +170,9 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
           if (wA[n] === 0 && t > 0) touchedN.push(n);
           if (t > wA[n]) wA[n] = t;
           forwardSamePort(j, n, port, f);
-          for (const k of jointsAt(ctx, n, port === "a" ? "b" : "a")) { recJ(k, t); push(k, n, f, 0); }
+          const ends = jointsAt(ctx, n, port === "a" ? "b" : "a");
+          recList(ends, t);
+          pushList(ends, n, f, 0);
           // Pulleys and fairleads on the run carry the two legs' resultant, and so does their mounting.
           for (const k of jointsAt(ctx, n, "run")) {
             const g = otherNode(ctx, k, n);
@@ -165,7 +182,7 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
             recJ(k, r);
             if (!driven[g]) driven[g] = 1;
             const gp = ctx.ports[g];
-            if (gp) for (const q in gp) if (q !== "cable") for (const kk of gp[q]) recJ(kk, r);
+            if (gp) for (const q in gp) if (q !== "cable") recList(gp[q], r);
           }
           break;
         }
@@ -176,7 +193,7 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
           const fo = port === "in" ? f * ratio(inArm, outArm) : f * ratio(outArm, inArm);
           const crank = ENGINE[node.kind] as Extract<EngineInfo<unknown>, { role: "crank" }>;
           recPivot(n, crank.pivotLoad(f, fo, node.props));
-          for (const k of jointsAt(ctx, n, port === "in" ? "out" : "in")) push(k, n, fo, 0);
+          pushList(jointsAt(ctx, n, port === "in" ? "out" : "in"), n, fo, 0);
           break;
         }
         case "input": {
@@ -192,14 +209,14 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
           forwardSamePort(j, n, port, f);
           const horn = ENGINE[node.kind] as Extract<EngineInfo<unknown>, { role: "horn" }>;
           const m = f * horn.effectiveArm(node.props);
-          for (const k of jointsAt(ctx, n, "surface")) push(k, n, f, m);
+          pushList(jointsAt(ctx, n, "surface"), n, f, m);
           break;
         }
         case "surface": {
           reaches = true;
           if (wM[n] === 0 && moment > 0) touchedN.push(n);
           if (moment > wM[n]) wM[n] = moment;
-          for (const k of jointsAt(ctx, n, "hinge")) recJ(k, f);
+          recList(jointsAt(ctx, n, "hinge"), f);
           break;
         }
         default:
@@ -207,6 +224,9 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
       }
     }
     inputs.push({ node: i, gripForce: fg, linkForce: fp, reachesSurface: reaches });
+    for (const [list, r] of listMax) for (const k of list) recJ(k, r);
+    listMax.clear();
+    forwarded.clear();
 
     // Combine this input's loads into the totals and clear the walk arrays.
     for (const j of touchedJ) {
@@ -226,6 +246,6 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
 
   function forwardSamePort(via: number, n: number, port: string, f: number) {
     const list = jointsAt(ctx, n, port);
-    if (list.length > 1) for (const k of list) if (k !== via) push(k, n, f, 0);
+    if (list.length > 1) pushList(list, n, f, 0, via);
   }
 }

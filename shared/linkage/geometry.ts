@@ -49,7 +49,7 @@ export const geometrySchema = z
   })
   .superRefine((g, ctx) => {
     const n = Object.keys(g.parts).length;
-    if (n > 20_000) ctx.addIssue({ code: "custom", path: ["parts"], message: `geometry of ${n} parts; at most 20,000` });
+    if (n > 10_000) ctx.addIssue({ code: "custom", path: ["parts"], message: `geometry of ${n} parts; at most 10,000` });
   });
 export type LinkageGeometry = z.infer<typeof geometrySchema>;
 

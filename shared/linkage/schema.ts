@@ -6,11 +6,18 @@
  */
 import { z } from "zod";
 import { inches, force, systemSchema, type ControlSystem } from "./fields";
-import { KIND_LIST, PORTS, type KindDef } from "./kinds";
+import { KIND_LIST, PORTS, roleOf, type KindDef } from "./kinds";
 import { geometrySchema } from "./geometry";
 import { jointExtraFields, nutExtraFields, rodEndExtraFields } from "./joint-extras";
 
 export const FORMAT_VERSION = 1 as const;
+
+/**
+ * What one linkage may hold. The check walks the run once from every stick, pedal and wheel, so its work is
+ * (inputs + 1) × (parts + joints): capping the inputs keeps it linear in the graph's size. A real run has
+ * one to four inputs (dual controls, two pedal sets); a whole aircraft's controls are several linkages.
+ */
+export const GRAPH_LIMITS = { parts: 10_000, joints: 20_000, inputs: 64 } as const;
 
 const id = z.string().min(1, "id is empty").max(64, "id is longer than 64 characters");
 
@@ -115,12 +122,15 @@ export const graphSchema = z
     formatVersion: z.literal(FORMAT_VERSION, { error: "formatVersion must be 1" }),
     name: z.string().max(120).default(""),
     system: systemSchema.default("other"),
-    nodes: z.array(nodeSchema).max(20_000),
-    joints: z.array(jointSchema).max(40_000),
+    nodes: z.array(nodeSchema).max(GRAPH_LIMITS.parts, `a linkage holds at most ${GRAPH_LIMITS.parts.toLocaleString("en-US")} parts`),
+    joints: z.array(jointSchema).max(GRAPH_LIMITS.joints, `a linkage holds at most ${GRAPH_LIMITS.joints.toLocaleString("en-US")} joints`),
     /** Optional: pivots to scale and arm angles (geometry.ts); without it motion is not checked. */
     geometry: geometrySchema.optional(),
   })
   .superRefine((g, ctx) => {
+    const inputs = g.nodes.reduce((k, n) => (roleOf(n.kind) === "input" ? k + 1 : k), 0);
+    if (inputs > GRAPH_LIMITS.inputs)
+      ctx.addIssue({ code: "custom", path: ["nodes"], message: `a linkage has at most ${GRAPH_LIMITS.inputs} sticks, pedals and wheels (this one has ${inputs}); draw separate runs as separate linkages` });
     const ids = new Map<string, LinkageNode>();
     g.nodes.forEach((n, i) => {
       if (ids.has(n.id)) ctx.addIssue({ code: "custom", path: ["nodes", i, "id"], message: `duplicate node id "${n.id}"` });

@@ -5,7 +5,8 @@
  */
 import { analyze, analyzeMotion, DEFAULT_SETTINGS, sweepGraph } from "../../shared/analysis";
 import { buildContext } from "../../shared/analysis/context";
-import { generateLinkage } from "../../shared/demo";
+import { fanInLinkage, generateLinkage } from "../../shared/demo";
+import { GRAPH_LIMITS } from "../../shared/linkage/schema";
 import { chainGeometry } from "../../shared/demo-geometry";
 
 function median(xs: number[]): number {
@@ -34,21 +35,26 @@ function time(fn: () => unknown, targetMs = 400): number {
   return median(samples);
 }
 
-export type EngineBenchRow = { parts: number; joints: number; jsonKB: number; analyzeMs: number; parseMs: number; ratio: number; usPerPart: number };
+export type EngineBenchRow = { graph: string; parts: number; joints: number; jsonKB: number; analyzeMs: number; parseMs: number; ratio: number; usPerPart: number };
 
 export async function run(): Promise<{ ok: boolean; rows: EngineBenchRow[] }> {
   const rows: EngineBenchRow[] = [];
-  for (const n of [60, 1000, 10000]) {
-    const g = generateLinkage(n);
+  const graphs: [string, ReturnType<typeof generateLinkage>][] = [60, 1000, 10000].map((n) => [`chain ${n}`, generateLinkage(n)]);
+  // Fan-in (issue 16): as many sticks as a linkage may have, all on one pushrod, alone and at the head of
+  // the longest chain a linkage may hold. Each input walks the run once, so these are the worst cases.
+  graphs.push([`fan-in ${GRAPH_LIMITS.inputs}`, fanInLinkage(GRAPH_LIMITS.inputs)]);
+  graphs.push([`fan-in ${GRAPH_LIMITS.inputs} + chain`, fanInLinkage(GRAPH_LIMITS.inputs, GRAPH_LIMITS.parts)]);
+  for (const [name, g] of graphs) {
+    const n = g.nodes.length;
     const json = JSON.stringify(g);
     for (let i = 0; i < 20; i++) analyze(g); // warm up
     const analyzeMs = time(() => analyze(g));
     const parseMs = time(() => JSON.parse(json));
-    rows.push({ parts: n, joints: g.joints.length, jsonKB: Math.round(json.length / 1024), analyzeMs, parseMs, ratio: analyzeMs / parseMs, usPerPart: (analyzeMs * 1000) / n });
+    rows.push({ graph: name, parts: n, joints: g.joints.length, jsonKB: Math.round(json.length / 1024), analyzeMs, parseMs, ratio: analyzeMs / parseMs, usPerPart: (analyzeMs * 1000) / n });
   }
   console.log("engine: analyze() on generated linkages (median per call)");
   console.table(rows.map((r) => ({
-    parts: r.parts, joints: r.joints, "JSON KB": r.jsonKB, "analyze ms": r.analyzeMs.toFixed(3), "JSON.parse ms": r.parseMs.toFixed(3),
+    graph: r.graph, parts: r.parts, joints: r.joints, "JSON KB": r.jsonKB, "analyze ms": r.analyzeMs.toFixed(3), "JSON.parse ms": r.parseMs.toFixed(3),
     "analyze / parse": r.ratio.toFixed(2), "µs per part": r.usPerPart.toFixed(2),
   })));
   const small = rows[0], big = rows[2], mid = rows[1];
@@ -76,6 +82,8 @@ export async function run(): Promise<{ ok: boolean; rows: EngineBenchRow[] }> {
     [`1,000-step sweep of a 60-part run with geometry under 20 ms`, stages > 10 && sweepMs < 20, `${sweepMs.toFixed(2)} ms (${stages} four-bars)`],
     [`a run without geometry costs what it did (motion check under 1 % of its analysis)`, noGeoMotionMs < small.analyzeMs * 0.01, `${((noGeoMotionMs / small.analyzeMs) * 100).toFixed(3)} %`],
     [`10,000 parts under 2 × JSON.parse`, big.ratio < 2, `${big.ratio.toFixed(2)} ×`],
+    [`fan-in of ${GRAPH_LIMITS.inputs} sticks under 5 × JSON.parse (each stick walks the run)`, rows[3].ratio < 5, `${rows[3].ratio.toFixed(2)} ×`],
+    [`${GRAPH_LIMITS.inputs} sticks on a ${rows[4].parts}-part chain under 8 × JSON.parse`, rows[4].ratio < 8, `${rows[4].ratio.toFixed(2)} ×`],
     [`linear growth (analyze/parse ratio 1,000 → 10,000 parts grows < 2 ×)`, growth < 2,
       `${growth.toFixed(2)} × (raw µs per part ${rawGrowth.toFixed(2)} ×, JSON.parse per part ${parseGrowth.toFixed(2)} ×)`],
   ] as const;
