@@ -2,6 +2,8 @@ import "server-only";
 import type { z } from "zod";
 import { fieldError } from "@/lib/errors";
 import type { Build } from "@/db/builds";
+import { can, type Role } from "@/shared/roles";
+import { forbidden } from "@/lib/errors";
 import { getLinkage, getRevision } from "@/db/linkages";
 import { LARGE_EXPORT_BYTES, PDF_BYTES_PER_ENTRY, PDF_BYTES_PER_REVISION_PICTURE, exportParams, slug, type ExportKind } from "@/shared/schemas/exports";
 
@@ -14,14 +16,15 @@ export type RunContext<P> = {
   /** Fraction done (0–1) and a short note ("1,200 of 5,003 entries"). */
   progress: (fraction: number, note: string) => Promise<void>;
 };
-export type ExportResult = { body: Buffer; contentType: string; filename: string };
+/** The file made: in memory (`body`), or on disk (`file`, streamed to storage, then `cleanup`). */
+export type ExportResult = { contentType: string; filename: string } & ({ body: Buffer } | { file: string; size: number; cleanup: () => Promise<void> });
 
 type Kind<K extends ExportKind> = {
   /**
    * On the request: checks what the parameters name against the build (a 4xx if not), and returns
    * the job's label and estimated size. Cheap: no export work here.
    */
-  prepare: (build: Build, params: z.infer<(typeof exportParams)[K]>) => Promise<{ label: string; estimatedBytes: number | null }>;
+  prepare: (build: Build, params: z.infer<(typeof exportParams)[K]>, role: Role) => Promise<{ label: string; estimatedBytes: number | null }>;
   /** In the worker process: makes the file. */
   run: (ctx: RunContext<z.infer<(typeof exportParams)[K]>>) => Promise<ExportResult>;
 };
@@ -86,5 +89,30 @@ export const KINDS: { [K in ExportKind]: Kind<K> } = {
       return { body: Buffer.from(csv + "\r\n", "utf8"), contentType: "text/csv; charset=utf-8", filename: `${slug(build.name)}-hardware.csv` };
     },
   },
+  "build-archive": {
+    async prepare(build, _p, role) {
+      if (!can(role, "manage")) throw forbidden("Only the build's owner can export the whole build.");
+      const [{ n: files }] = await (await import("@/db/index")).db("files").where({ build_id: build.id }).count<{ n: string }[]>("* as n");
+      return { label: `Whole build archive — log, linkages, checklists, ${Number(files).toLocaleString("en-US")} file${Number(files) === 1 ? "" : "s"}, hardware list`, estimatedBytes: null };
+    },
+    async run({ build, progress }) {
+      const [{ makeArchive }, { listLinkages }, { serializeLinkage }] = await Promise.all([import("./archive"), import("@/db/linkages"), import("@/shared/linkage/io")]);
+      const bodyOf = async (r: ExportResult) => ("body" in r ? r.body : Buffer.alloc(0));
+      const quiet = async () => {};
+      const a = await makeArchive(build, progress, {
+        logPdf: async () => bodyOf(await KINDS["log-pdf"].run({ build, params: {}, progress: quiet })),
+        hardwareCsv: async () => bodyOf(await KINDS["hardware-csv"].run({ build, params: {}, progress: quiet })),
+        linkages: async () => {
+          const out = [];
+          for (const l of await listLinkages(build.id)) {
+            const rev = await getRevision(l.id);
+            if (!rev) continue;
+            out.push({ name: l.name, file: serializeLinkage(rev.graph), checklistPdf: async () => bodyOf(await KINDS["checklist-pdf"].run({ build, params: { linkageId: l.id, revision: rev.revision }, progress: quiet })) });
+          }
+          return out;
+        },
+      });
+      return { file: a.file, size: a.size, cleanup: a.cleanup, contentType: "application/x-tar", filename: `${slug(build.name)}-archive-${new Date().toISOString().slice(0, 10)}.tar` };
+    },
+  },
 };
-

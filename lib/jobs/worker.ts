@@ -4,7 +4,7 @@ import type PgBoss from "pg-boss";
 import { db } from "@/db/index";
 import { toBuild, type BuildRow } from "@/db/builds";
 import { claimExport, failExport, finishExport, heartbeat, markMailed, orphanedExports, reportProgress, requeueOrphan, type ExportRow } from "@/db/exports";
-import { deleteObject, putObject } from "@/lib/storage";
+import { deleteObject, putObject, putObjectFile } from "@/lib/storage";
 import { sendMail } from "@/lib/mail";
 import { appUrl } from "@/lib/urls";
 import { exportParams, LARGE_EXPORT_BYTES } from "@/shared/schemas/exports";
@@ -51,8 +51,15 @@ async function runExport(exportId: string, queueJobId: string) {
     const key = `builds/${row.build_id}/exports/${row.id}/${result.filename}`;
     if (row.result_key && row.result_key !== key) await deleteObject(row.result_key).catch(() => {});
     await reportProgress(row.id, ME, 0.97, "Storing the file");
-    await putObject(key, result.body, result.contentType);
-    const done = await finishExport(row.id, ME, { key, name: result.filename, type: result.contentType, size: result.body.length });
+    let size: number;
+    if ("body" in result) {
+      await putObject(key, result.body, result.contentType);
+      size = result.body.length;
+    } else {
+      try { await putObjectFile(key, result.file, result.size, result.contentType); } finally { await result.cleanup(); }
+      size = result.size;
+    }
+    const done = await finishExport(row.id, ME, { key, name: result.filename, type: result.contentType, size });
     if (done) await mailIfLeft(done);
   } catch (e) {
     const why = e instanceof ExportFailure ? e.message : `The export stopped on an error: ${(e as Error)?.message ?? String(e)}. Retry it; if it fails again, tell the site admin.`;

@@ -6,7 +6,7 @@ import { z } from "zod";
 import { logFilter } from "./log";
 import { isoTime, pageFields, REVISION_MAX } from "./common";
 
-export const EXPORT_KINDS = ["log-pdf", "checklist-pdf", "hardware-csv"] as const;
+export const EXPORT_KINDS = ["log-pdf", "checklist-pdf", "hardware-csv", "build-archive"] as const;
 export type ExportKind = (typeof EXPORT_KINDS)[number];
 
 export const exportParams = {
@@ -16,12 +16,14 @@ export const exportParams = {
     revision: z.number().int().min(1).max(REVISION_MAX).optional(),
   }).strict(),
   "hardware-csv": z.object({}).strict(),
+  "build-archive": z.object({}).strict(),
 } satisfies Record<ExportKind, z.ZodTypeAny>;
 
 export const exportRequest = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("log-pdf"), params: exportParams["log-pdf"].default({}) }),
   z.object({ kind: z.literal("checklist-pdf"), params: exportParams["checklist-pdf"] }),
   z.object({ kind: z.literal("hardware-csv"), params: exportParams["hardware-csv"].default({}) }),
+  z.object({ kind: z.literal("build-archive"), params: exportParams["build-archive"].default({}) }),
 ], { error: `kind is one of ${EXPORT_KINDS.join(", ")}` });
 export type ExportRequest = z.infer<typeof exportRequest>;
 

@@ -4,6 +4,10 @@
  * someone who left; and the queue is the database (a job put in through pg-boss alone is run).
  */
 import { randomUUID } from "node:crypto";
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import os from "node:os";
+import path from "node:path";
+import * as tar from "tar";
 import PgBoss from "pg-boss";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { makeBuild, makeUser, testDb } from "../support/db";
@@ -75,12 +79,13 @@ describe("exports as background jobs", () => {
   });
 
   it("a failed job says why, and a retry runs it again", async () => {
-    const id = await queueDirect({ kind: "build-archive", label: "Build archive" });
+    // A checklist of a linkage that is gone by the time the worker runs.
+    const id = await queueDirect({ kind: "checklist-pdf", label: "Checklist", params: JSON.stringify({ linkageId: randomUUID() }) });
     const failed = await waitForJob(owner, buildId, id);
     expect(failed.status).toBe("failed");
-    expect(failed.error).toBe('This server does not know exports of the kind "build-archive".');
+    expect(failed.error).toBe("The linkage was deleted before its checklist could be printed.");
     expect((await owner.request("GET", `${B()}/exports/${id}/download`)).status).toBe(409);
-    await testDb("export_jobs").where({ id }).update({ kind: "hardware-csv" });
+    await testDb("export_jobs").where({ id }).update({ kind: "hardware-csv", params: "{}" });
     const again = await owner.request("POST", `${B()}/exports/${id}/retry`);
     expect([again.status, again.body.job.status]).toEqual([202, "queued"]);
     const done = await waitForJob(owner, buildId, id);
@@ -118,5 +123,33 @@ describe("exports as background jobs", () => {
     await exportFile(owner, buildId, "hardware-csv"); // polled throughout
     await new Promise((res) => setTimeout(res, 1000));
     expect((await csvMail(0)).length).toBe(1);
+  });
+
+  it("archives the whole build for its owner: log PDF, each linkage's file and checklist, every stored file, the hardware CSV", async () => {
+    expect((await viewer.request("POST", `${B()}/exports`, { kind: "build-archive", params: {} })).status).toBe(403);
+    const { job, bytes } = await exportFile(owner, buildId, "build-archive");
+    expect(job.resultName).toMatch(/-archive-\d{4}-\d{2}-\d{2}\.tar$/);
+    const dir = mkdtempSync(path.join(os.tmpdir(), "lw-archive-test-"));
+    try {
+      writeFileSync(path.join(dir, "a.tar"), bytes);
+      const names: string[] = [];
+      await tar.t({ file: path.join(dir, "a.tar"), onReadEntry: (e) => { names.push(e.path); } });
+      const top = names[0].split("/")[0];
+      const inFiles = names.filter((n) => n.startsWith(`${top}/files/`) && !n.endsWith("/"));
+      const stored = Number((await testDb("files").where({ build_id: buildId }).count<{ n: string }[]>("* as n"))[0].n);
+      expect(stored).toBeGreaterThan(300); // the fixture's 400 photos
+      expect(inFiles).toHaveLength(stored);
+      const linkages = await testDb("linkages").where({ build_id: buildId }).select("name");
+      for (const n of [`${top}/build-log.pdf`, `${top}/hardware-list.csv`, `${top}/README.txt`]) expect(names).toContain(n);
+      expect(names.filter((n) => n.endsWith(".linkage.json"))).toHaveLength(linkages.length);
+      expect(names.filter((n) => n.endsWith("-checklist.pdf"))).toHaveLength(linkages.length);
+      await tar.x({ file: path.join(dir, "a.tar"), cwd: dir });
+      const readme = readFileSync(path.join(dir, top, "README.txt"), "utf8");
+      expect(readme).toContain(`${stored} files`);
+      expect(readme).toMatch(/qualified inspector/); // the caution
+      expect(readFileSync(path.join(dir, top, "build-log.pdf")).subarray(0, 5).toString()).toBe("%PDF-");
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
   });
 });

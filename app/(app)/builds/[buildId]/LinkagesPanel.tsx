@@ -6,6 +6,8 @@ import { api, ApiFailure } from "@/components/api-client";
 import { Badge, Button, Card, EmptyState, Input, Select } from "@/components/ui";
 import { SYSTEMS, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
 import { parseLinkageFile } from "@/shared/linkage/io";
+import { STARTER_NAME, starterPitchRun } from "@/shared/starter";
+import { useRouter } from "next/navigation";
 
 import { linkageKeys } from "@/components/query-keys";
 import type { Linkage } from "@/shared/schemas/linkages";
@@ -37,6 +39,13 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
   const create = useMutation({
     mutationFn: (v: { name: string; system: ControlSystem; graph?: LinkageGraph }) => api<{ linkage: Linkage }>(`/api/builds/${buildId}/linkages`, { body: v }),
     onSuccess: () => { setAdding(false); setError(null); invalidate(); },
+    onError,
+  });
+  // A newcomer's starting run (shared/starter.ts), opened in the editor at once.
+  const router = useRouter();
+  const starter = useMutation({
+    mutationFn: () => api<{ linkage: Linkage }>(`/api/builds/${buildId}/linkages`, { body: { name: STARTER_NAME, system: "pitch", graph: starterPitchRun() } }),
+    onSuccess: ({ linkage }) => { invalidate(); router.push(`/builds/${buildId}/linkages/${linkage.id}`); },
     onError,
   });
   const rename = useMutation({
@@ -92,9 +101,21 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
       ) : null}
       {error ? <p role="alert" className="mb-3 text-xs text-hazard">{error}</p> : null}
       {linkages.length === 0 ? (
-        <EmptyState title="No linkages yet">
+        <EmptyState
+          title="No linkages yet"
+          action={canEdit && !adding ? (
+            <div className="flex flex-wrap justify-center gap-2" data-testid="starting-choices">
+              <Button size="sm" disabled={starter.isPending} onClick={() => starter.mutate()} data-testid="start-from-starter"
+                title="Stick, two pushrods, bellcrank, horn, elevator, brackets and a stop, at placeholder sizes, with every joint's hardware blank">
+                {starter.isPending ? "Creating…" : "Start from a typical pitch run"}
+              </Button>
+              <Button size="sm" tone="secondary" onClick={() => setAdding(true)} data-testid="start-from-nothing">Draw from nothing</Button>
+            </div>
+          ) : undefined}
+        >
           One linkage per control run: pitch, roll, yaw, flaps, trim. Draw it from the pilot&apos;s input to the surface,
           then fill in the hardware at each joint to see loads and findings.
+          {canEdit ? " Start from a typical pitch run (its sizes are placeholders for your plans' dimensions), draw one from nothing, or bring a linkage file with Import a file." : ""}
         </EmptyState>
       ) : (
         <table className="w-full text-left">

@@ -4,6 +4,8 @@ import { BuildNav } from "@/components/BuildNav";
 import { can } from "@/shared/roles";
 import { settingsSchema } from "@/shared/analysis/types";
 import { SettingsForm } from "./SettingsForm";
+import { Card } from "@/components/ui";
+import { ExportButton } from "@/components/records/ExportButton";
 
 export const metadata: Metadata = { title: "Build settings" };
 
@@ -13,7 +15,17 @@ export default async function SettingsPage({ params }: { params: Promise<{ build
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/settings" />
-      <main className="mx-auto max-w-4xl p-6">
+      <main className="mx-auto max-w-4xl space-y-6 p-6">
+        {can(role, "manage") ? (
+          <Card title="Keep a copy of the whole build">
+            <p className="mb-2 text-ink-soft">
+              One archive (.tar) with the build log as a PDF, every linkage as a file with its checklist, every photo and document
+              as uploaded, and the hardware list as CSV — the record to keep beside the aircraft&apos;s papers. It is made in the
+              background; you can leave this page and the link comes by e-mail.
+            </p>
+            <ExportButton buildId={build.id} kind="build-archive" params={{}} testId="build-archive">Make the archive</ExportButton>
+          </Card>
+        ) : null}
         <SettingsForm
           buildId={build.id}
           canManage={can(role, "manage")}
