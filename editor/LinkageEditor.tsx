@@ -21,7 +21,8 @@ import Inspector, { type ReviewSlot } from "./panels/Inspector";
 import { CAUTION, FindingsList, SummaryStrip } from "./panels/Findings";
 import { useAutosave } from "./useAutosave";
 import { ConflictDialog } from "./panels/ConflictDialog";
-import { ShortcutsSheet } from "./panels/ShortcutsSheet";
+// The shortcuts sheet loads when it is first opened.
+const ShortcutsSheet = dynamic(() => import("./panels/ShortcutsSheet").then((m) => m.ShortcutsSheet), { ssr: false });
 import { readDeepLink } from "./view";
 import { handleKey, type CommandCtx } from "./commands";
 import { Toolbar } from "./toolbar/Toolbar";

@@ -3,7 +3,7 @@
 import { useCallback, useRef, useState } from "react";
 import { parseLinkageFile, serializeLinkage } from "@/shared/linkage/io";
 import { toGraph, type EditorStore } from "./store";
-import { downloadBlob, fileSafe } from "./export";
+import { downloadBlob, fileSafe } from "./download";
 
 export function useLinkageFile(store: EditorStore, linkageName: string, afterImport: () => void) {
   const fileRef = useRef<HTMLInputElement>(null);

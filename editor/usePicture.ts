@@ -9,7 +9,7 @@ import { subjectName } from "@/shared/linkage/names";
 import type { ControlSystem } from "@/shared/linkage/schema";
 import { uploadFile } from "@/components/api-client";
 import type { EditorStore } from "./store";
-import { downloadBlob, exportLinkagePng, fileSafe } from "./export";
+import { downloadBlob, fileSafe } from "./download";
 import { nodeLines } from "./nodes";
 import { CAUTION } from "./panels/Findings";
 import type { UnitSystem } from "./units";
@@ -58,6 +58,8 @@ export function usePicture(o: Opts) {
       if (!el) throw new Error("the canvas is not on the page");
       const s = store.getState();
       const lm = s.report?.summary.lowestMargin;
+      // The drawing code and html-to-image load on first use, not with the editor.
+      const { exportLinkagePng } = await import("./export");
       const blob = await exportLinkagePng({
         viewportEl: el,
         nodes: rf.getNodes() as Node[],

@@ -1,26 +1,29 @@
 /**
- * US ↔ SI conversion at the edges, through mathjs units (the engine computes in lbf, in, in·lbf, psi).
- * mathjs defines 1 lbf = 4.4482216152605 N exactly, so lbf→N and in·lbf→N·m are exact.
+ * US ↔ SI conversion at the edges (the engine computes in lbf, in, in·lbf, psi), by exact factors:
+ * the inch is 25.4 mm exactly and the pound-force 4.4482216152605 N exactly (0.45359237 kg × 9.80665 m/s²,
+ * NIST SP 811 appendix B), so every factor below is exact to the digits a double holds.
  */
-import { unit } from "mathjs";
 
 export type UnitSystem = "US" | "SI";
 export type QuantityKind = "force" | "length" | "torque" | "stress" | "area" | "angle";
 
-/** The unit of each kind in each system, as mathjs names them, and as shown. */
-const UNITS: Record<QuantityKind, { US: [string, string]; SI: [string, string] }> = {
-  force: { US: ["lbf", "lbf"], SI: ["N", "N"] },
-  length: { US: ["in", "in"], SI: ["mm", "mm"] },
-  torque: { US: ["lbf in", "in·lbf"], SI: ["N m", "N·m"] },
-  stress: { US: ["psi", "psi"], SI: ["MPa", "MPa"] },
-  area: { US: ["in^2", "in²"], SI: ["mm^2", "mm²"] },
-  angle: { US: ["deg", "°"], SI: ["deg", "°"] },
+const IN_MM = 25.4; // NIST SP 811 B.8: inch = 2.54 × 10⁻² m exactly
+const LBF_N = 4.4482216152605; // NIST SP 811 B.8: pound-force (avoirdupois pound × standard gravity) exactly
+
+/** The label of each kind in each system, and how many SI units one US unit is. */
+const UNITS: Record<QuantityKind, { US: string; SI: string; siPerUs: number }> = {
+  force: { US: "lbf", SI: "N", siPerUs: LBF_N },
+  length: { US: "in", SI: "mm", siPerUs: IN_MM },
+  torque: { US: "in·lbf", SI: "N·m", siPerUs: (IN_MM / 1000) * LBF_N },
+  stress: { US: "psi", SI: "MPa", siPerUs: LBF_N / (IN_MM * IN_MM) }, // N/mm² = MPa
+  area: { US: "in²", SI: "mm²", siPerUs: IN_MM * IN_MM },
+  angle: { US: "°", SI: "°", siPerUs: 1 },
 };
 
 /** Convert a value of `kind` from one system to the other. */
 export function convert(value: number, kind: QuantityKind, from: UnitSystem, to: UnitSystem): number {
   if (from === to || kind === "angle") return value;
-  return unit(value, UNITS[kind][from][0]).toNumber(UNITS[kind][to][0]);
+  return from === "US" ? value * UNITS[kind].siPerUs : value / UNITS[kind].siPerUs;
 }
 
 /** US (engine) value → SI. */
@@ -38,7 +41,7 @@ export const psiToMPa = (v: number) => toSI(v, "stress");
 export const mpaToPsi = (v: number) => fromSI(v, "stress");
 
 export function unitLabel(kind: QuantityKind, system: UnitSystem): string {
-  return UNITS[kind][system][1];
+  return UNITS[kind][system];
 }
 
 /**
