@@ -5,6 +5,7 @@
 const benches: [name: string, load: () => Promise<{ run: () => Promise<{ ok: boolean }> }>][] = [
   ["engine", () => import("./engine")],
   ["editor", () => import("./editor")],
+  ["open", () => import("./open")],
 ];
 
 async function main() {

@@ -5,16 +5,19 @@ import type LinkageEditorType from "@/editor/LinkageEditor";
 import { ReviewThread, type ReviewMe } from "@/components/review/ReviewThread";
 import { ReviewMarkers } from "@/components/review/ReviewMarkers";
 import { EditorReviewBar } from "@/components/review/EditorReviewBar";
+import { StoredFindings, StoredFindingsContext, type Stored } from "./StoredFindings";
 
 // The canvas measures the DOM: render it in the browser only.
-const LinkageEditor = dynamic(() => import("@/editor/LinkageEditor"), {
-  ssr: false,
-  loading: () => <div className="flex h-[calc(100vh-3.5rem)] items-center justify-center text-ink-soft">Opening the linkage…</div>,
-});
+// Until its script is loaded, the findings stored with the revision show in its place (rendered on the server).
+const LinkageEditor = dynamic(() => import("@/editor/LinkageEditor"), { ssr: false, loading: StoredFindings });
 
-type Props = ComponentProps<typeof LinkageEditorType> & { review?: Omit<ReviewMe, "canComment"> };
+type Props = ComponentProps<typeof LinkageEditorType> & { review?: Omit<ReviewMe, "canComment">; stored?: Stored };
 
-export function EditorScreen({ review, ...props }: Props) {
+export function EditorScreen({ review, stored, ...props }: Props) {
+  return <StoredFindingsContext.Provider value={stored ?? null}><Screen review={review} {...props} /></StoredFindingsContext.Provider>;
+}
+
+function Screen({ review, ...props }: Omit<Props, "stored">) {
   if (!review) return <LinkageEditor {...props} />;
   const me: ReviewMe = { ...review, canComment: props.canComment };
   return (

@@ -26,6 +26,7 @@ export default async function LinkagePage({ params }: { params: Promise<{ buildI
       unitSystem={user.unitSystem}
       settings={settingsSchema.parse(build.analysisSettings ?? {})}
       review={{ userId: user.id, canAcknowledge: can(role, "acknowledge"), canSignOff: can(role, "signOff") }}
+      stored={{ revision: rev.revision, findings: rev.analysis?.findings ?? null }}
     />
   );
 }
