@@ -150,8 +150,9 @@ describe("linkage editor in a real browser", () => {
     // The first page is now stale: its edit gets the dialog.
     await page.getByTestId(`node-${ids.horn}`).click();
     await page.getByTestId("node-form-label").fill("Elevator horn, left");
-    await page.getByTestId("btn-save").click();
+    // Save now — unless the autosave (1.5 s after the edit) got there first on a slow machine and the dialog is already up.
     const dialog = page.getByTestId("conflict-dialog");
+    if (!(await dialog.isVisible())) await page.getByTestId("btn-save").click({ trial: false, timeout: 5_000 }).catch(async (e) => { if (!(await dialog.isVisible())) throw e; });
     await dialog.waitFor({ timeout: 10_000 });
     await expect(dialog.getByTestId("conflict-author").textContent()).resolves.toContain(DEMO_USERS[0].name);
     await expect(dialog.getByTestId("conflict-diff").textContent()).resolves.toMatch(/only in theirs.*Travel stop/s);
