@@ -212,15 +212,24 @@ export async function findInvitation(token: string) {
 }
 
 /** Single use: the update only succeeds while the invitation is open and unexpired. */
-export async function acceptInvitation(token: string, userId: string) {
+/**
+ * Accepts an open invitation for the signed-in user — only the account whose e-mail it was sent to; a link
+ * forwarded to (or intercepted by) someone else is refused and stays open for the invited person.
+ * Returns the membership, "wrongAccount" (with the address it was sent to), or null (used, expired, withdrawn).
+ */
+export async function acceptInvitation(token: string, userId: string, userEmail: string): Promise<{ buildId: string; role: Role } | { wrongAccount: string } | null> {
   return db.transaction(async (trx) => {
     const [inv] = await trx("invitations")
       .where("token_hash", hashToken(token))
       .whereNull("accepted_at")
       .where("expires_at", ">", trx.fn.now())
+      .whereRaw("lower(email) = lower(?)", [userEmail])
       .update({ accepted_at: trx.fn.now(), accepted_by: userId })
       .returning(["build_id", "role"]);
-    if (!inv) return null;
+    if (!inv) {
+      const open = await trx("invitations").where("token_hash", hashToken(token)).whereNull("accepted_at").where("expires_at", ">", trx.fn.now()).first("email");
+      return open ? { wrongAccount: open.email as string } : null;
+    }
     const existing = await trx("memberships").where({ build_id: inv.build_id, user_id: userId }).first();
     if (!existing) await trx("memberships").insert({ build_id: inv.build_id, user_id: userId, role: inv.role });
     await audit({ buildId: inv.build_id, userId, action: "invitation.accept", detail: { role: inv.role } }, trx);

@@ -17,3 +17,9 @@ export type Invitation = z.infer<typeof invitation>;
 
 export const membersResponse = z.object({ members: z.array(member) });
 export const invitationsResponse = z.object({ invitations: z.array(invitation) });
+
+/** An address shown to someone who is not its owner: "d…@example.test" (the first letter and the domain). */
+export function maskEmail(email: string): string {
+  const at = email.lastIndexOf("@");
+  return at > 0 ? `${email[0]}…${email.slice(at)}` : "another address";
+}

@@ -29,7 +29,7 @@ async function freshContext(): Promise<Omit<Ctx, "x">> {
   const ids = await makeBuild({ owner: users.owner, builder: users.builder, reviewer: users.reviewer, viewer: users.viewer, extra });
   const token = randomBytes(24).toString("base64url");
   await testDb("invitations").insert({
-    build_id: ids.buildId, email: "x@tests.linkwright.test", role: "viewer",
+    build_id: ids.buildId, email: users.outsider.email, role: "viewer", // only the invited address may accept it
     token_hash: createHash("sha256").update(token).digest("hex"), expires_at: testDb.raw("now() + interval '1 day'"),
   });
   return { ...ids, extraId: extra.id, token, users };

@@ -50,6 +50,13 @@ describe("accounts and sign-in", () => {
     // the token itself is not stored, only its hash
     expect(await testDb("invitations").where({ token_hash: token }).first()).toBeUndefined();
 
+    // Someone else with the link (forwarded, or read over a shoulder) cannot take the place; it stays open.
+    const forwarded = await signIn((await makeUser("forwarded-to")).email);
+    const refused = await forwarded.request("POST", `/api/invitations/${token}`);
+    expect([refused.status, refused.body.error.code]).toEqual([403, "forbidden"]);
+    expect(refused.body.error.message).toMatch(/sent to i…@tests\.linkwright\.test/);
+    expect(await testDb("memberships").where({ build_id: ids.buildId })).toHaveLength(1);
+
     await anonymous().request("POST", "/api/sign-up", { name: "Invited Reviewer", email, password: "reviewer password" });
     const invitee = await signIn(email, "reviewer password");
     expect((await invitee.request("GET", `/api/builds/${ids.buildId}`)).status).toBe(404);

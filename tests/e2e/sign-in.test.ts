@@ -44,4 +44,19 @@ describe("sign-in in a real browser", () => {
     await page.goto(`${APP_URL}/builds`);
     expect(new URL(page.url()).pathname).toBe("/sign-in");
   });
+
+  it("after signing in goes only to a page of this site: another origin in `next` lands on the builds list", async () => {
+    const viewer = DEMO_USERS[3];
+    for (const next of ["/\\evil.example", "/%09/evil.example", "//evil.example", "https://evil.example/"]) {
+      const context = await browser.newContext();
+      const page = await context.newPage();
+      await page.goto(`${APP_URL}/sign-in?next=${next.startsWith("/%") ? next : encodeURIComponent(next)}`);
+      await page.getByLabel("E-mail").fill(viewer.email);
+      await page.getByLabel("Password").fill(viewer.password);
+      await page.getByRole("button", { name: "Sign in" }).click();
+      await page.waitForURL((u) => u.pathname === "/builds", { timeout: 15_000 });
+      expect(new URL(page.url()).origin, next).toBe(APP_URL);
+      await context.close();
+    }
+  });
 });

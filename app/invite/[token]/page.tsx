@@ -4,6 +4,7 @@ import { getSessionUser } from "@/lib/auth";
 import { findInvitation } from "@/db/builds";
 import { ROLE_LABEL } from "@/shared/roles";
 import { AcceptInvitation } from "./AcceptInvitation";
+import { maskEmail } from "@/shared/schemas/members";
 
 export const metadata: Metadata = { title: "Invitation" };
 
@@ -20,7 +21,13 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
       ) : (
         <>
           <p className="mt-2">You are invited to <strong>{inv.build_name}</strong> as <strong>{ROLE_LABEL[inv.role]}</strong>.</p>
-          {user ? (
+          {user && user.email.toLowerCase() !== String(inv.email).toLowerCase() ? (
+            <p className="mt-4 rounded bg-caution/10 p-2 text-sm" data-testid="invite-wrong-account">
+              This invitation was sent to {maskEmail(String(inv.email))}, and you are signed in as {user.email}. Only the invited
+              address can accept it: <Link className="text-advisory underline" href="/sign-out">sign out</Link> and
+              sign in (or create an account) with that address, or ask the build&apos;s owner to invite this one.
+            </p>
+          ) : user ? (
             <AcceptInvitation token={token} signedInAs={user.email} />
           ) : (
             <p className="mt-4 space-x-3">

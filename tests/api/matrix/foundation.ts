@@ -31,7 +31,8 @@ export const rows: Record<string, Row> = {
   "GET /api/builds/[buildId]/invitations":              { expect: manage(200), path: (c) => `${B(c)}/invitations` },
   "POST /api/builds/[buildId]/invitations":             { expect: manage(201), path: (c) => `${B(c)}/invitations`, body: () => ({ email: unique(), role: "reviewer" }) },
   "DELETE /api/builds/[buildId]/invitations/[invitationId]": { expect: manage(200), path: (c) => `${B(c)}/invitations/${c.invitationId}` },
-  "POST /api/invitations/[token]":                      { expect: signedIn(200), path: (c) => `/api/invitations/${c.token}` },
+  // Sent to the outsider's address: anyone else signed in is refused (403), the invitation staying open.
+  "POST /api/invitations/[token]":                      { expect: { owner: 403, builder: 403, reviewer: 403, viewer: 403, outsider: 200, anon: 401 }, path: (c) => `/api/invitations/${c.token}` },
   "GET /api/builds/[buildId]/linkages":                 { expect: read, path: (c) => `${B(c)}/linkages` },
   "POST /api/builds/[buildId]/linkages":                { expect: edit(201), path: (c) => `${B(c)}/linkages`, body: () => ({ name: "Roll run", system: "roll" }) },
   "GET /api/builds/[buildId]/linkages/[linkageId]":     { expect: read, path: L },
