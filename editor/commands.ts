@@ -5,6 +5,7 @@
  */
 import type { EditorState, EditorStore } from "./store";
 import { GRID } from "./canvas/viewport";
+import { returnableCable } from "./store/cable";
 
 /** What a command may act on: the store and the editor's own actions. */
 export type CommandCtx = {
@@ -129,6 +130,17 @@ export const COMMANDS: readonly Command[] = [
     match: (e) => !mod(e) && key(e) === "f",
     perform: (c) => c.fitAll({ duration: 200 }),
     button: { group: "edit", text: "Fit" },
+  },
+  {
+    id: "returnCable", label: "Add the return cable of the selected cable (or of the joint just drawn to it)", keys: "R", edit: true,
+    match: (e) => !mod(e) && !e.altKey && key(e) === "r",
+    enabled: (s) => returnableCable(s) !== null,
+    perform: (c) => {
+      const s = c.store.getState();
+      const cable = returnableCable(s);
+      if (cable) s.addReturnCable(cable);
+      else s.setNotice("Select a cable joined at both ends (or the joint just drawn to it) to add its return cable.");
+    },
   },
   {
     id: "nudge", label: "Nudge the selected parts (Shift: ×5)", keys: "Arrows", edit: true,

@@ -7,7 +7,6 @@ import { AN_BOLTS_BY_SIZE } from "@/shared/hardware";
 import { useEditorConfig, useEditorStore, useEditorStoreApi, useEditorValue } from "../context";
 import { KIND_NAMES, ROLES } from "@/shared/linkage/kinds";
 import { jointName, partName } from "@/shared/linkage/names";
-import { returnCableEnds } from "../store/cable";
 import { inputText } from "../units";
 import { KindGlyph } from "../nodes/glyphs";
 import { SchemaForm } from "./SchemaForm";
@@ -15,6 +14,7 @@ import { jointCardSections, nodeSections } from "./specs";
 import { FindingItem, LinkageFindings } from "./Findings";
 import { JointEvidence, SuggestPart, type RecordsTarget } from "./JointExtras";
 import { JointChecks } from "./JointChecks";
+import { ReturnCableOffer } from "./ReturnCableOffer";
 
 export type ReviewSlot = (sel: { type: "node" | "joint" | "linkage"; id: string }) => React.ReactNode;
 
@@ -71,8 +71,6 @@ function NodeInspector({ id }: { id: string }) {
     const n = s.nodes.find((x) => x.id === id);
     return n ? partName(n) : "";
   });
-  // A cable joined at both ends with no return yet is offered its return cable (editor/store/cable.ts).
-  const returnable = useEditorValue((s) => kind === "cable" && returnCableEnds(s, id) !== null);
   if (!kind || !value) return null;
   return (
     <div className="space-y-2" data-testid="node-form-panel">
@@ -81,15 +79,7 @@ function NodeInspector({ id }: { id: string }) {
         <span className="ml-auto min-w-0 truncate text-[11px] font-normal text-ink-soft" data-part-id={id}>{label}</span>
       </h3>
       <SubjectFindings subjectKey={`node:${id}`} />
-      {returnable && !readOnly && (
-        <div className="rounded border border-caution/30 bg-caution/5 px-2 py-1.5 text-[11px]" data-testid="return-cable-offer">
-          <p className="text-ink">A cable only pulls. Close the circuit with a return cable between the same two parts, so the control works both ways.</p>
-          <button type="button" className="mt-1 min-h-8 rounded bg-ink px-2 py-1 text-[12px] font-medium text-white hover:bg-ink/90" data-testid="btn-return-cable"
-            onClick={() => api.getState().addReturnCable(id)}>
-            Add the return cable
-          </button>
-        </div>
-      )}
+      <ReturnCableOffer />
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}
         testId="node-form"
@@ -152,6 +142,7 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
         <span className="block text-[11px] font-normal text-ink-soft">{name}</span>
       </h3>
       <SubjectFindings subjectKey={`joint:${id}`} />
+      <ReturnCableOffer />
       <JointChecks jointId={id} />
       {records && joint.hardware.rodEnd && <SuggestPart target={records} joint={joint} />}
       {cableEnd && (

@@ -34,6 +34,22 @@ export function returnCableEnds(s: Pick<EditorState, "nodes" | "joints">, cableI
   return { a, b };
 }
 
+/**
+ * The cable the selection would add a return to: the one selected cable, or the cable at either end of the one
+ * selected joint (the joint just drawn), when it has no return yet; otherwise null.
+ */
+export function returnableCable(s: Pick<EditorState, "nodes" | "joints" | "selection">): string | null {
+  const { nodes, joints } = s.selection;
+  let ids: string[] = [];
+  if (nodes.length === 1 && joints.length === 0) ids = [nodes[0]];
+  else if (joints.length === 1 && nodes.length === 0) {
+    const j = s.joints.find((x) => x.id === joints[0]);
+    if (j) ids = [j.from.node, j.to.node];
+  }
+  for (const id of ids) if (returnCableEnds(s, id)) return id;
+  return null;
+}
+
 export function cableActions(get: Get, commit: Commit, newId: (kind: string) => string): CableActions {
   return {
     /** Adds the return cable of `cableId` (same size and make, no rigging reading of its own) and joins it; returns its id or "". */

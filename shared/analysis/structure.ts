@@ -54,8 +54,10 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[], cc?: C
     checkPort(ctx, j, nodes[f], jt.from.port, out);
     checkPort(ctx, j, nodes[t], jt.to.port, out);
     if (!hasHardware(jt.hardware) && !needsNoHardware(ctx, j)) {
+      // A cable's or turnbuckle's terminal is held by a bolt or clevis pin and its nut; it has no rod end.
+      const terminal = ctx.nodeRole[f] === "tension" || ctx.nodeRole[t] === "tension";
       out.push(finding("joint-hardware-missing", "caution", jointSubject(jt.id),
-        `The joint ${jointLabel(ctx, j)} has no hardware recorded (no bolt, nut, rod end or bearing), so nothing about it can be checked. Fill in its joint card.`, SRC.structure));
+        `The joint ${jointLabel(ctx, j)} has no hardware recorded (${terminal ? "no bolt or clevis pin and nut holding the terminal" : "no bolt, nut, rod end or bearing"}), so nothing about it can be checked. Fill in its joint card.`, SRC.structure));
     }
   }
 

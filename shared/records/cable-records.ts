@@ -18,6 +18,12 @@ export type CablePartCode = (typeof CABLE_PART_CODES)[number];
 const TERMINAL_WORD: Record<string, string> = { swaged: "swaged terminal", nicopress: "nicopress sleeve", thimble: "thimble and bushing" };
 const fmt = (v: number) => String(Number(v.toFixed(3)));
 
+/** What the cable's card holds of the last rigging, so the inspector compares the new reading with it. */
+function recorded(p: Extract<LinkageNode, { kind: "cable" }>["props"]): string {
+  if (p.riggingTension === undefined) return " No reading is on the cable's card yet: enter it there too, so the check can compare it with the range.";
+  return ` On the cable's card: ${fmt(p.riggingTension)} lbf${p.riggingTemperature !== undefined ? ` at ${fmt(p.riggingTemperature)} °F` : ", temperature not recorded"}.`;
+}
+
 /** The checklist items of one part of a cable system (none for other kinds). */
 export function cablePartItems(n: LinkageNode): CablePartItem[] {
   switch (n.kind) {
@@ -25,7 +31,7 @@ export function cablePartItems(n: LinkageNode): CablePartItem[] {
       const p = n.props;
       const range = p.tensionMin !== undefined && p.tensionMax !== undefined ? ` — the designer's range is ${fmt(p.tensionMin)} to ${fmt(p.tensionMax)} lbf${p.rangeTemperature !== undefined ? ` at ${fmt(p.rangeTemperature)} °F` : ""}` : "";
       return [
-        { code: "cable-tension", text: `Rigging tension measured with a tensiometer on this cable, reading and air temperature written here${range}.`, source: CABLE_SRC.rigging },
+        { code: "cable-tension", text: `Rigging tension measured with a tensiometer on this cable, reading and air temperature written here${range}.${recorded(p)}`, source: CABLE_SRC.rigging },
         { code: "cable-terminals", text: `Terminals (A: ${TERMINAL_WORD[p.terminalA] ?? p.terminalA}, B: ${TERMINAL_WORD[p.terminalB] ?? p.terminalB}) made and gauged as their maker says; no kinks or broken wires at the terminal.`, source: TERMINALS },
         { code: "cable-wear", text: `${p.size} in ${p.construction.replace("x", "×")} cable wiped along its length with a cloth, closely at each pulley and fairlead: no broken wires, flattened strands or corrosion.`, source: CABLE_WEAR },
       ];

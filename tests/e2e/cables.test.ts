@@ -1,7 +1,7 @@
 /**
  * Cable runs in the editor, in Debian Chromium: the builder draws a pedal, one cable and the rudder horn, sees
- * the check say a lone cable would have to push, adds the return cable from the cable's card and the finding
- * clears; then opens the demo's yaw run, finds the right turnbuckle's hazard (five threads showing, at most
+ * the check say a lone cable would have to push, takes the return cable offered on the card of the joint just
+ * drawn (key R) and the finding clears; a cable's own card offers it too (button); then opens the demo's yaw run, finds the right turnbuckle's hazard (five threads showing, at most
  * three allowed: AC 43.13-1B), corrects it on the turnbuckle's card and the hazard clears after saving.
  * Screenshots: tests/artifacts/cables-*.png.
  */
@@ -53,11 +53,12 @@ describe("drawing a cable circuit", () => {
     await connect(page, [cable, "b"], [horn, "attach"]);
     await expect.poll(() => finding("cable-pushes").count(), { timeout: 10_000 }).toBe(1);
 
-    await page.getByTestId(`node-${cable}`).click();
+    // The joint just drawn is selected, and its card offers the return cable at once; R takes the offer.
     const offer = page.getByTestId("return-cable-offer");
     await offer.waitFor();
+    expect(await offer.getAttribute("data-cable")).toBe(cable);
     await shot(page, "cables-01-return-offered");
-    await offer.getByTestId("btn-return-cable").click();
+    await page.keyboard.press("r");
     await expect.poll(() => page.locator("[data-kind=cable]").count()).toBe(2);
     await expect.poll(() => finding("cable-pushes").count(), { timeout: 10_000 }).toBe(0);
     await expect.poll(() => finding("linkage-loop").count()).toBe(0);
@@ -66,6 +67,15 @@ describe("drawing a cable circuit", () => {
     const saved = await testDb("linkages as l").join("linkage_revisions as r", function () { this.on("r.linkage_id", "l.id").andOn("r.revision", "l.current_revision"); }).where("l.name", name).first("r.graph");
     expect(saved.graph.nodes.filter((n: { kind: string }) => n.kind === "cable")).toHaveLength(2);
     await shot(page, "cables-02-circuit-closed");
+
+    // Undone, the cable's own card offers it again, and its button makes it.
+    await page.keyboard.press("Control+z");
+    await expect.poll(() => page.locator("[data-kind=cable]").count()).toBe(1);
+    await page.getByTestId(`node-${cable}`).click();
+    await offer.getByTestId("btn-return-cable").click();
+    await expect.poll(() => page.locator("[data-kind=cable]").count()).toBe(2);
+    await expect.poll(() => finding("cable-pushes").count(), { timeout: 10_000 }).toBe(0);
+    await waitSaved(page);
   });
 });
 

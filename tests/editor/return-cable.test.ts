@@ -1,7 +1,8 @@
 // Drawing a circuit: one cable drawn, its return offered and made in one undoable step, and the check sees one closed circuit.
 import { describe, expect, it } from "vitest";
 import { createEditorStore, toGraph } from "@/editor/store";
-import { returnCableEnds } from "@/editor/store/cable";
+import { returnCableEnds, returnableCable } from "@/editor/store/cable";
+import { COMMANDS, handleKey, type CommandCtx } from "@/editor/commands";
 import { emptyGraph } from "@/shared/linkage/schema";
 import { analyze } from "@/shared/analysis";
 
@@ -44,5 +45,36 @@ describe("the return cable", () => {
     expect(analyze(g).findings.filter((f) => f.code === "cable-pushes" || f.code === "linkage-loop")).toEqual([]);
     s().undo();
     expect({ nodes: s().nodes.length, joints: s().joints.length }).toEqual(before);
+  });
+});
+
+describe("the return cable from the joint just drawn, and by key", () => {
+  const press = (store: ReturnType<typeof sectorToHorn>["store"], canEdit = true) =>
+    handleKey({ key: "r", ctrlKey: false, metaKey: false, shiftKey: false, altKey: false, target: null, preventDefault: () => {} } as unknown as KeyboardEvent,
+      { store, canEdit } as unknown as CommandCtx);
+
+  it("is offered on the joint that closes the cable's second end (the selection after drawing it)", () => {
+    const { s, sector, cable, horn } = sectorToHorn();
+    s().connect({ node: sector, port: "out" }, { node: cable, port: "a" });
+    expect(returnableCable(s())).toBeNull(); // the first end only
+    const joint = s().connect({ node: cable, port: "b" }, { node: horn, port: "attach" });
+    expect(s().selection).toEqual({ nodes: [], joints: [joint.ok ? joint.value : ""] });
+    expect(returnableCable(s())).toBe(cable);
+    s().select({ type: "node", id: horn });
+    expect(returnableCable(s())).toBeNull(); // not a cable, not a joint
+  });
+
+  it("R adds it once; R does nothing for someone who may not edit", () => {
+    const { store, s, sector, cable, horn } = sectorToHorn();
+    s().connect({ node: sector, port: "out" }, { node: cable, port: "a" });
+    s().connect({ node: cable, port: "b" }, { node: horn, port: "attach" });
+    press(store, false);
+    expect(s().nodes.filter((n) => n.kind === "cable")).toHaveLength(1);
+    press(store);
+    expect(s().nodes.filter((n) => n.kind === "cable")).toHaveLength(2);
+    press(store); // the new cable is selected and already has its return
+    expect(s().nodes.filter((n) => n.kind === "cable")).toHaveLength(2);
+    expect(s().notice?.text).toMatch(/Select a cable joined at both ends/);
+    expect(COMMANDS.find((c) => c.id === "returnCable")!.keys).toBe("R");
   });
 });

@@ -233,3 +233,65 @@ describe("control wheel (14 CFR 23.397(b))", () => {
     expect(has(withProps(pitch, "wheel", { designForce: 100 }), "wheel-force-below-minimum")).toBe(false);
   });
 });
+
+/** The "not checked" and drawing findings: each asked for when its input is missing, and absent from the base circuit. */
+describe("what a cable run needs recorded or joined before it can be checked", () => {
+  const without = (g: LinkageGraph, ids: string[]) => ({ ...g, joints: g.joints.filter((x) => !ids.includes(x.id)) });
+  it("a cable or turnbuckle with one end joined and the other open", () => {
+    const c = codes(without(rudderCircuit(), ["tbLa"]));
+    expect(c).toContain("cable-end-open@cableL");
+    expect(c).toContain("cable-end-open@tbL");
+    expect(has(rudderCircuit(), "cable-end-open")).toBe(false);
+  });
+  it("a cable with no tabled breaking strength (1/4 in 7×7 is in neither table) is not checked, never passed", () => {
+    const g = withProps(rudderCircuit(), "cableR", { size: "1/4", construction: "7x7" });
+    expect(codes(g)).toContain("cable-strength-unknown@cableR");
+    const r = run(g).cables.find((x) => x.nodeId === "cableR")!;
+    expect([r.breakingStrength, r.margin]).toEqual([null, null]);
+    expect(has(rudderCircuit(), "cable-strength-unknown")).toBe(false);
+  });
+  it("a pulley not joined to structure, and one joined to a cable's end instead of its run", () => {
+    expect(codes(without(rudderCircuit(), ["pulleyAxle"]))).toContain("guide-unmounted@pulley");
+    const onEnd = rudderCircuit();
+    onEnd.joints = onEnd.joints.map((x) => (x.id === "overP" ? { ...x, from: { node: "cableL", port: "b" } } : x));
+    expect(codes(onEnd)).toContain("guide-on-cable-end@pulley");
+    expect(codes(rudderCircuit()).filter((x) => x.startsWith("guide-"))).toEqual([]);
+  });
+  it("a pulley's groove, guards and rating asked for when not recorded (14 CFR 23.689(b))", () => {
+    expect(codes(withProps(rudderCircuit(), "pulley", { grooveFor: undefined }))).toContain("pulley-groove-unrecorded@pulley");
+    expect(codes(withProps(rudderCircuit(), "pulley", { guards: undefined }))).toContain("pulley-guards-unrecorded@pulley");
+    const unrated = run(withProps(rudderCircuit(), "pulley", { ratedLoad: undefined })).findings.find((f) => f.code === "pulley-rating-missing")!;
+    expect(unrated.severity).toBe("advisory");
+    // The 310.6 lbf resultant of the hand-worked case above, limit.
+    expect(unrated.numbers[0].value).toBeCloseTo(2 * 600 * Math.sin((15 * Math.PI) / 180), 6);
+  });
+  it("a turnbuckle's threads asked for when either end is not recorded (AC 43.13-1B 7-166)", () => {
+    expect(codes(withProps(rudderCircuit(), "tbR", { threadsShowingA: undefined }))).toContain("turnbuckle-threads-unrecorded@tbR");
+    expect(has(rudderCircuit(), "turnbuckle-threads-unrecorded")).toBe(false);
+  });
+});
+
+describe("a cable's terminal asks for no rod end", () => {
+  const terminals = ["pedL", "hornL"];
+  const bare = (over: Record<string, unknown>) => {
+    const g = rudderCircuit();
+    for (const x of g.joints) if (terminals.includes(x.id)) x.hardware = { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "", ...over } as typeof x.hardware;
+    return g;
+  };
+  const about = (g: LinkageGraph) => {
+    const r = run(g);
+    return [...r.findings.filter((f) => terminals.includes(f.subject.id)).map((f) => f.message), ...r.joints.filter((x) => terminals.includes(x.jointId)).flatMap((x) => x.todo ?? [])].join("\n");
+  };
+  it("with nothing recorded: the card is asked for the bolt or clevis pin and nut, not a rod end", () => {
+    const text = about(bare({}));
+    expect(text).toContain("no bolt or clevis pin and nut holding the terminal");
+    expect(text).not.toMatch(/rod end|jam nut|witness/i);
+    // A pushrod's end still names the rod end (the same finding elsewhere).
+    const rod = graph([stick("s", 20, 5), mount("m"), pushrod("p", "4130N", 0.75, 0.035, 20)], [j("x", ["s", "attach"], ["p", "a"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" })]);
+    expect(run(rod).findings.find((f) => f.code === "joint-hardware-missing")!.message).toContain("rod end");
+  });
+  it("with a bolt and nut but no holes recorded: the to-do names the holes, never a rod end", () => {
+    const text = about(bare({ bolt: { size: "AN3", material: "steel", grip: 0.5, stack: 0.5, threadsProtruding: 2 }, nut: { type: "castellatedCotter", pattern: "shear", cotterPinNew: true } }));
+    expect(text).not.toMatch(/rod end|jam nut|witness/i);
+  });
+});

@@ -19,6 +19,12 @@ describe("checklist of a cable circuit", () => {
     expect(items.find((i) => i.jointId === "cableL" && i.code === "cable-wear")!.text).toMatch(/pulley and fairlead/);
   });
 
+  it("quotes the reading on the cable's card beside the item, or says there is none", () => {
+    const text = (id: string) => items.find((i) => i.jointId === id && i.code === "cable-tension")!.text;
+    expect(text("cableL")).toContain("On the cable's card: 30 lbf at 70 °F."); // the fixture's invented rigging record
+    expect(text("cableR")).toContain("No reading is on the cable's card yet");
+  });
+
   it("asks each turnbuckle to be safetied with at most three threads showing (AC 43.13-1B), and free over the travel (23.689(e))", () => {
     expect(of("tbL")).toEqual(["turnbuckle-safety", "turnbuckle-free"]);
     const s = items.find((i) => i.jointId === "tbL" && i.code === "turnbuckle-safety")!;
