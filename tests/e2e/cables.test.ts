@@ -99,6 +99,15 @@ describe("the demo's yaw run", () => {
       .where("l.name", demoRudderLinkage().name).orderBy("l.created_at").first("r.graph", "r.analysis");
     expect(row.graph.nodes.find((n: { id: string }) => n.id === DEMO_RUDDER_FAULT_PART).props.threadsShowingB).toBe(3);
     expect(row.analysis.summary.hazard).toBe(0);
+
+    // Its checklist screen: a group per cable part, the tension item with the reading on the cable's card.
+    await page.goto(page.url().replace(/\/linkages\/([0-9a-f-]{36}).*$/, "/checklist/$1"));
+    const left = page.getByTestId("checklist-part-rd-cable-left");
+    await left.waitFor();
+    await expect(left.textContent()).resolves.toContain("On the cable's card: 30 lbf at 68 °F.");
+    for (const id of ["rd-cable-right", "rd-tb-left", DEMO_RUDDER_FAULT_PART, "rd-pulley", "rd-fairlead"])
+      await expect(page.getByTestId(`checklist-part-${id}`).count()).resolves.toBe(1);
+    await shot(page, "cables-04-checklist");
     expect(errors).toEqual([]);
   });
 });
