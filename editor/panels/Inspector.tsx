@@ -143,7 +143,7 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
       </h3>
       <SubjectFindings subjectKey={`joint:${id}`} />
       <ReturnCableOffer />
-      <JointChecks jointId={id} />
+      <JointChecks jointId={id} cableEnd={cableEnd} />
       {records && joint.hardware.rodEnd && <SuggestPart target={records} joint={joint} />}
       {cableEnd && (
         <p className="rounded border border-ink/10 bg-paper px-2 py-1 text-[11px] text-ink-soft" data-testid="cable-terminal-note">

@@ -11,7 +11,8 @@ function marginText(c: JointCheck) {
   return c.margin >= 999 ? "no load" : `${c.margin >= 0 ? "+" : ""}${c.margin.toFixed(2)}`;
 }
 
-export function JointChecks({ jointId }: { jointId: string }) {
+/** `cableEnd`: the joint holds a cable's or turnbuckle's terminal, which has no rod end. */
+export function JointChecks({ jointId, cableEnd }: { jointId: string; cableEnd?: boolean }) {
   const r = useEditorStore((s) => s.report?.joints.find((j) => j.jointId === jointId));
   if (!r || !r.checks) return null;
   const done = r.checks.filter((c) => c.status === "computed");
@@ -48,7 +49,7 @@ export function JointChecks({ jointId }: { jointId: string }) {
           </tbody>
         </table>
       ) : (
-        r.todo.length === 0 && <p className="px-2 py-1 text-[11px] text-ink-soft">Add a bolt, rod end or bearing to this joint to have it checked.</p>
+        r.todo.length === 0 && <p className="px-2 py-1 text-[11px] text-ink-soft" data-testid="joint-checks-empty">{cableEnd ? "Add the bolt or clevis pin and nut holding the terminal to have this joint checked." : "Add a bolt, rod end or bearing to this joint to have it checked."}</p>
       )}
     </section>
   );

@@ -57,6 +57,8 @@ describe("drawing a cable circuit", () => {
     const offer = page.getByTestId("return-cable-offer");
     await offer.waitFor();
     expect(await offer.getAttribute("data-cable")).toBe(cable);
+    // A terminal's card asks for what holds it, not for a rod end.
+    await expect(page.getByTestId("joint-checks-empty").textContent()).resolves.toContain("clevis pin and nut holding the terminal");
     await shot(page, "cables-01-return-offered");
     await page.keyboard.press("r");
     await expect.poll(() => page.locator("[data-kind=cable]").count()).toBe(2);
