@@ -20,7 +20,8 @@ const fmt = (v: number) => String(Number(v.toFixed(3)));
 
 /** What the cable's card holds of the last rigging, so the inspector compares the new reading with it. */
 function recorded(p: Extract<LinkageNode, { kind: "cable" }>["props"]): string {
-  if (p.riggingTension === undefined) return " No reading is on the cable's card yet: enter it there too, so the check can compare it with the range.";
+  // One reading per circuit is enough for the check (the circuit's cables share it); this one may be on the other cable.
+  if (p.riggingTension === undefined) return " No reading on this cable's card.";
   return ` On the cable's card: ${fmt(p.riggingTension)} lbf${p.riggingTemperature !== undefined ? ` at ${fmt(p.riggingTemperature)} °F` : ", temperature not recorded"}.`;
 }
 

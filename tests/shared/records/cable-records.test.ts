@@ -22,7 +22,7 @@ describe("checklist of a cable circuit", () => {
   it("quotes the reading on the cable's card beside the item, or says there is none", () => {
     const text = (id: string) => items.find((i) => i.jointId === id && i.code === "cable-tension")!.text;
     expect(text("cableL")).toContain("On the cable's card: 30 lbf at 70 °F."); // the fixture's invented rigging record
-    expect(text("cableR")).toContain("No reading is on the cable's card yet");
+    expect(text("cableR")).toContain("No reading on this cable's card.");
   });
 
   it("asks each turnbuckle to be safetied with at most three threads showing (AC 43.13-1B), and free over the travel (23.689(e))", () => {
