@@ -39,13 +39,45 @@ export const MAX_FAILS_PER_EMAIL = 5;
 export const MAX_FAILS_PER_IP = 30;
 
 /** Failed sign-ins in the last window, per e-mail and per IP. */
-export async function recentFailures(email: string, ip: string) {
+/**
+ * Failed sign-ins slow further guesses at an address rather than lock its owner out: after
+ * MAX_FAILS_PER_EMAIL failures in the window, each further try must wait 15 s, doubling with every failure,
+ * at most BACKOFF_MAX_S — so someone failing another person's address on purpose delays them by at most a
+ * minute, while guessing is held to about one try a minute. Per address of the client, a hard limit.
+ */
+export const BACKOFF_BASE_S = 15; // common practice, no source: exponential backoff after a few failures
+export const BACKOFF_MAX_S = 60; // common practice, no source
+
+/**
+ * One sign-in attempt, counted before the password is checked: the attempt's row is written first and the
+ * failures counted after, so any number of guesses sent at the same moment cannot run past the limit
+ * (each sees the others). Returns the attempt's id to settle, or why to refuse (the row is then removed:
+ * a refused try checks no password).
+ */
+export async function beginAttempt(email: string, ip: string): Promise<{ id: string } | { refused: "ip" } | { refused: "email"; waitS: number }> {
+  const [row] = await db("sign_in_attempts").insert({ email: email.slice(0, 254), ip: ip.slice(0, 64) }).returning(["id", "created_at"]);
   const since = db.raw(`now() - interval '${WINDOW_MIN} minutes'`);
-  const [byEmail] = await db("sign_in_attempts").whereRaw("lower(email) = lower(?)", [email]).where("created_at", ">", since).count<{ count: string }[]>("* as count");
-  const [byIp] = await db("sign_in_attempts").where({ ip }).where("created_at", ">", since).count<{ count: string }[]>("* as count");
-  return { email: Number(byEmail.count), ip: Number(byIp.count) };
+  const [byEmail, byIp] = await Promise.all([
+    db("sign_in_attempts").whereRaw("lower(email) = lower(?)", [email]).where("created_at", ">", since)
+      .first(db.raw("count(*)::int as n"), db.raw("max(created_at) filter (where id <> ?) as prev", [row.id])),
+    db("sign_in_attempts").where({ ip: ip.slice(0, 64) }).where("created_at", ">", since).first(db.raw("count(*)::int as n")),
+  ]);
+  const earlier = byEmail.n - 1;
+  if (byIp.n > MAX_FAILS_PER_IP) {
+    await db("sign_in_attempts").where({ id: row.id }).del();
+    return { refused: "ip" };
+  }
+  if (earlier >= MAX_FAILS_PER_EMAIL && byEmail.prev) {
+    const waitS = Math.min(BACKOFF_MAX_S, BACKOFF_BASE_S * 2 ** (earlier - MAX_FAILS_PER_EMAIL));
+    const since = (row.created_at.getTime() - new Date(byEmail.prev).getTime()) / 1000;
+    if (since < waitS) {
+      await db("sign_in_attempts").where({ id: row.id }).del();
+      return { refused: "email", waitS: Math.ceil(waitS - since) };
+    }
+  }
+  return { id: row.id };
 }
-export const recordFailure = (email: string, ip: string) => db("sign_in_attempts").insert({ email: email.slice(0, 254), ip: ip.slice(0, 64) });
+/** A successful sign-in clears the address's failures (its own attempt among them). */
 export const clearFailures = (email: string) => db("sign_in_attempts").whereRaw("lower(email) = lower(?)", [email]).del();
 
 export async function listUsersForAdmin() {

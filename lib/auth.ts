@@ -3,8 +3,8 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { getServerSession } from "next-auth";
 import { z } from "zod";
-import { findUserByEmail, findUserById, recentFailures, recordFailure, clearFailures, toPublicUser, MAX_FAILS_PER_EMAIL, MAX_FAILS_PER_IP } from "@/db/users";
-import { checkPassword } from "./passwords";
+import { beginAttempt, clearFailures, findUserByEmail, findUserById, toPublicUser } from "@/db/users";
+import { checkPassword, checkAgainstNothing } from "./passwords";
 
 const credentials = z.object({ email: z.string().trim().email().max(254), password: z.string().min(1).max(200) });
 
@@ -27,17 +27,17 @@ export const authOptions: NextAuthOptions = {
         if (!parsed.success) return null;
         const { email, password } = parsed.data;
         const ip = clientIp(req?.headers as Record<string, unknown> | undefined);
-        const fails = await recentFailures(email, ip);
-        if (fails.email >= MAX_FAILS_PER_EMAIL || fails.ip >= MAX_FAILS_PER_IP) {
-          // The same answer as a wrong password would leak nothing, but the builder deserves to know why.
-          throw new Error("Too many failed sign-ins. Wait 15 minutes and try again.");
+        const attempt = await beginAttempt(email, ip);
+        // The builder deserves to know why; the answer is the same whether or not the address has an account.
+        if ("refused" in attempt) {
+          throw new Error(attempt.refused === "ip"
+            ? "Too many failed sign-ins from this address. Wait 15 minutes and try again."
+            : `Too many failed sign-ins for this e-mail. Wait ${attempt.waitS} seconds and try again.`);
         }
         const user = await findUserByEmail(email);
-        const ok = user ? await checkPassword(password, user.password_hash) : false;
-        if (!user || !ok) {
-          await recordFailure(email, ip);
-          return null;
-        }
+        // An unknown address costs a password check too, so the time taken does not tell whether it has an account.
+        const ok = user ? await checkPassword(password, user.password_hash) : await checkAgainstNothing(password);
+        if (!user || !ok) return null; // the attempt stays counted as a failure
         await clearFailures(email);
         return { id: user.id, email: user.email, name: user.name };
       },

@@ -29,13 +29,40 @@ describe("accounts and sign-in", () => {
     expect(again.body.error.fields.email).toBeTruthy();
   });
 
-  it("five failed sign-ins lock that e-mail for a while, even with the right password; others are not affected", async () => {
+  it("five failed sign-ins make that e-mail wait (even with the right password), and only for a while; others are not affected", async () => {
     const victim = await makeUser("victim");
     const bystander = await makeUser("bystander");
     for (let i = 0; i < 5; i++) expect(await attempt(victim.email, "wrong password")).toBe("refused");
     expect(await attempt(victim.email, "correct horse battery staple")).toBe("refused");
     expect(await attempt(bystander.email, "correct horse battery staple")).toBe("signed in");
-    expect(Number((await testDb("sign_in_attempts").where({ email: victim.email }).count("* as n"))[0].n)).toBe(5);
+    expect(Number((await testDb("sign_in_attempts").where({ email: victim.email }).count("* as n"))[0].n)).toBe(5); // the refused try checked nothing
+    // Someone failing the victim's address on purpose delays the victim, never shuts them out: once the wait
+    // (15 s after the fifth failure, at most a minute) has passed, the right password signs in.
+    await testDb("sign_in_attempts").where({ email: victim.email }).update({ created_at: testDb.raw("created_at - interval '61 seconds'") });
+    expect(await attempt(victim.email, "correct horse battery staple")).toBe("signed in");
+    expect(Number((await testDb("sign_in_attempts").where({ email: victim.email }).count("* as n"))[0].n)).toBe(0);
+  });
+
+  it("guesses sent at the same moment cannot run past the limit: at most five passwords are checked", async () => {
+    const target = await makeUser("parallel-target");
+    const results = await Promise.all(Array.from({ length: 16 }, () => attempt(target.email, "wrong password")));
+    expect(results.every((r) => r === "refused")).toBe(true);
+    const checked = Number((await testDb("sign_in_attempts").where({ email: target.email }).count("* as n"))[0].n);
+    expect(checked).toBeGreaterThan(0);
+    expect(checked).toBeLessThanOrEqual(5);
+  });
+
+  it("takes as long for an unknown e-mail as for a known one with a wrong password (a password check either way)", async () => {
+    const known = await makeUser("timing-known");
+    const time = async (email: string) => { const t0 = performance.now(); await attempt(email, "wrong password"); return performance.now() - t0; };
+    const med = (xs: number[]) => [...xs].sort((a, b) => a - b)[xs.length >> 1];
+    const k: number[] = [], u: number[] = [];
+    for (let i = 0; i < 4; i++) { // four each: under the five-failure limit
+      k.push(await time(known.email));
+      u.push(await time(`nobody-${randomUUID().slice(0, 8)}@tests.linkwright.test`));
+    }
+    // Median of each; an unknown address that skipped the hash would answer in a fraction of the time.
+    expect(med(u) / med(k)).toBeGreaterThan(0.6);
   });
 
   it("an invitation link brings a new person into the build with the invited role, once", async () => {
