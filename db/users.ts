@@ -7,6 +7,8 @@ export type UserRow = {
   email: string;
   name: string;
   password_hash: string;
+  /** Raised at sign-out: a cookie issued with an older version is refused. */
+  session_version: number;
   is_site_admin: boolean;
   unit_system: "US" | "SI";
   created_at: Date;
@@ -115,3 +117,6 @@ export async function getNotify(userId: string): Promise<NotifyPref> {
   return (row?.notify as NotifyPref) ?? "all";
 }
 export const setNotify = (userId: string, notify: NotifyPref) => db("users").where({ id: userId }).update({ notify });
+
+/** Ends every session of the user on the server: cookies issued before carry an older version and are refused. */
+export const endSessions = (id: string) => db("users").where({ id }).increment("session_version", 1);

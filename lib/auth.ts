@@ -3,7 +3,7 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { getServerSession } from "next-auth";
 import { z } from "zod";
-import { beginAttempt, clearFailures, findUserByEmail, findUserById, toPublicUser } from "@/db/users";
+import { beginAttempt, clearFailures, endSessions, findUserByEmail, findUserById, toPublicUser } from "@/db/users";
 import { checkPassword, checkAgainstNothing } from "./passwords";
 
 const credentials = z.object({ email: z.string().trim().email().max(254), password: z.string().min(1).max(200) });
@@ -39,14 +39,25 @@ export const authOptions: NextAuthOptions = {
         const ok = user ? await checkPassword(password, user.password_hash) : await checkAgainstNothing(password);
         if (!user || !ok) return null; // the attempt stays counted as a failure
         await clearFailures(email);
-        return { id: user.id, email: user.email, name: user.name };
+        return { id: user.id, email: user.email, name: user.name, sv: user.session_version };
       },
     }),
   ],
   callbacks: {
+    /** The cookie carries the user's session version from sign-in (see getSessionUser). */
+    async jwt({ token, user }) {
+      if (user) token.sv = (user as { sv?: number }).sv ?? 0;
+      return token;
+    },
     async session({ session, token }) {
-      if (session.user && token.sub) (session.user as { id?: string }).id = token.sub;
+      if (session.user && token.sub) Object.assign(session.user, { id: token.sub, sv: typeof token.sv === "number" ? token.sv : 0 });
       return session;
+    },
+  },
+  events: {
+    /** Signing out ends the session on the server too: a copy of the cookie is refused from now on. */
+    async signOut({ token }) {
+      if (token?.sub) await endSessions(token.sub);
     },
   },
 };
@@ -54,9 +65,11 @@ export const authOptions: NextAuthOptions = {
 /** The signed-in user, read fresh from the database (a deleted user is signed out). */
 export async function getSessionUser() {
   const session = await getServerSession(authOptions);
-  const id = (session?.user as { id?: string } | undefined)?.id;
-  if (!id) return null;
-  const row = await findUserById(id);
-  return row ? toPublicUser(row) : null;
+  const u = session?.user as { id?: string; sv?: number } | undefined;
+  if (!u?.id) return null;
+  const row = await findUserById(u.id);
+  // A deleted user, or a cookie from before the user signed out (a copy of it), is signed out.
+  if (!row || (u.sv ?? 0) !== row.session_version) return null;
+  return toPublicUser(row);
 }
 export type SessionUser = NonNullable<Awaited<ReturnType<typeof getSessionUser>>>;

@@ -1,7 +1,7 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, describe, expect, it } from "vitest";
 import { makeBuild, makeUser, testDb } from "../support/db";
-import { anonymous, signIn } from "../support/http";
+import { anonymous, client, signIn } from "../support/http";
 import { APP_URL } from "../support/env";
 
 afterAll(() => testDb.destroy());
@@ -41,6 +41,28 @@ describe("accounts and sign-in", () => {
     await testDb("sign_in_attempts").where({ email: victim.email }).update({ created_at: testDb.raw("created_at - interval '61 seconds'") });
     expect(await attempt(victim.email, "correct horse battery staple")).toBe("signed in");
     expect(Number((await testDb("sign_in_attempts").where({ email: victim.email }).count("* as n"))[0].n)).toBe(0);
+  });
+
+  it("signing out ends the session on the server: a copy of the cookie is refused afterwards, other sessions too", async () => {
+    const u = await makeUser("signs-out");
+    const me = await signIn(u.email);
+    const phone = await signIn(u.email); // a second session of the same account
+    const stolen = client(me.cookie); // the same cookie, copied before sign-out
+    expect((await stolen.request("GET", "/api/me")).status).toBe(200);
+    // Sign out as the browser does: next-auth's sign-out endpoint with its CSRF token.
+    const csrf = await fetch(`${APP_URL}/api/auth/csrf`, { headers: { cookie: me.cookie } });
+    const csrfCookie = (csrf.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).join("; ");
+    const { csrfToken } = await csrf.json();
+    const out = await fetch(`${APP_URL}/api/auth/signout`, {
+      method: "POST", redirect: "manual",
+      headers: { "content-type": "application/x-www-form-urlencoded", cookie: `${me.cookie}; ${csrfCookie}` },
+      body: new URLSearchParams({ csrfToken, json: "true" }),
+    });
+    expect(out.status).toBeLessThan(400);
+    const after = await stolen.request("GET", "/api/me");
+    expect([after.status, after.body.error.code]).toEqual([401, "unauthorized"]);
+    expect((await phone.request("GET", "/api/me")).status).toBe(401); // every session of that account ends
+    expect((await (await signIn(u.email)).request("GET", "/api/me")).status).toBe(200); // signing in again works
   });
 
   it("guesses sent at the same moment cannot run past the limit: at most five passwords are checked", async () => {
