@@ -101,11 +101,16 @@ async function updateBuildIn(trx: Knex, buildId: string, userId: string, patch: 
   return toBuild(row);
 }
 
-/** Deletes the build and everything in it; returns the storage keys of its files, for the caller to remove. */
-export async function deleteBuild(buildId: string): Promise<string[]> {
+/**
+ * Deletes the build and everything in it but its audit events, and records who deleted it (same transaction);
+ * returns the storage keys of its files, for the caller to remove.
+ */
+export async function deleteBuild(buildId: string, userId: string): Promise<string[]> {
   return db.transaction(async (trx) => {
     const files = await trx("files").where({ build_id: buildId }).select("key", "thumb_key");
+    const b = await trx("builds").where({ id: buildId }).first("name", "model", "registration");
     await trx("builds").where({ id: buildId }).del();
+    await audit({ buildId, userId, action: "build.delete", detail: { name: b?.name ?? null, model: b?.model ?? null, registration: b?.registration ?? null, files: files.length } }, trx);
     return files.flatMap((f: { key: string; thumb_key: string | null }) => (f.thumb_key ? [f.key, f.thumb_key] : [f.key]));
   });
 }

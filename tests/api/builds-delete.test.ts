@@ -1,4 +1,4 @@
-/** Deleting a build removes its rows and its stored files; another build's files stay. */
+/** Deleting a build removes its rows and its stored files (its audit events stay, with who deleted it); another build's files stay. */
 import { afterAll, describe, expect, it } from "vitest";
 import { makeBuild, makeUser, testDb } from "../support/db";
 import { signIn } from "../support/http";
@@ -20,6 +20,7 @@ describe("deleting a build", () => {
     expect(doomedKeys.length).toBe(2); // the photo and its thumbnail
     const keptKeys = await s3Keys(`builds/${kept.buildId}/`);
 
+    expect((await c.request("PATCH", `/api/builds/${doomed.buildId}`, { name: "Doomed build" })).status).toBe(200); // an event before
     const r = await c.request("DELETE", `/api/builds/${doomed.buildId}`);
     expect(r.status).toBe(200);
     expect(r.body.filesRemoved).toBe(2);
@@ -28,5 +29,9 @@ describe("deleting a build", () => {
     expect(await testDb("linkages").where({ build_id: doomed.buildId }).first()).toBeUndefined();
     expect(await testDb("files").where({ build_id: doomed.buildId }).first()).toBeUndefined();
     expect((await c.request("GET", `/api/builds/${doomed.buildId}`)).status).toBe(404);
+    // Its audit events stay, with who deleted it and when.
+    const events = await testDb("audit_events").where({ build_id: doomed.buildId }).orderBy("id");
+    expect(events.map((e: { action: string }) => e.action)).toContain("build.update");
+    expect(events.at(-1)).toMatchObject({ action: "build.delete", user_id: owner.id, detail: { name: "Doomed build", files: 1 } });
   });
 });

@@ -16,8 +16,8 @@ export const PATCH = withBuild("manage", async ({ req, user, build }) => {
   return json({ build: await updateBuild(build.id, user.id, { ...body, analysisSettings }, reanalyze) });
 });
 
-export const DELETE = withBuild("manage", async ({ build }) => {
-  const keys = await deleteBuild(build.id);
+export const DELETE = withBuild("manage", async ({ build, user }) => {
+  const keys = await deleteBuild(build.id, user.id);
   // The rows are gone; the stored objects follow (a failure here leaves orphans, never dangling rows).
   await Promise.allSettled(keys.map((k) => deleteObject(k)));
   return json({ deleted: true, filesRemoved: keys.length });
