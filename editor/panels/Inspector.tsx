@@ -15,6 +15,7 @@ import { FindingItem, LinkageFindings } from "./Findings";
 import { JointEvidence, SuggestPart, type RecordsTarget } from "./JointExtras";
 import { JointChecks } from "./JointChecks";
 import { ReturnCableOffer } from "./ReturnCableOffer";
+import { CableEndFields } from "./CableEndFields";
 
 export type ReviewSlot = (sel: { type: "node" | "joint" | "linkage"; id: string }) => React.ReactNode;
 
@@ -147,9 +148,10 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
       {records && joint.hardware.rodEnd && <SuggestPart target={records} joint={joint} />}
       {cableEnd && (
         <p className="rounded border border-ink/10 bg-paper px-2 py-1 text-[11px] text-ink-soft" data-testid="cable-terminal-note">
-          A cable&apos;s terminal: the cable, its terminals and the turnbuckle are recorded on their own cards (select the part). Here, record the bolt or clevis pin, nut and washers that hold the terminal.
+          A cable&apos;s terminal: its end of the cable or turnbuckle is below (kept on that part&apos;s card too). Then record the bolt or clevis pin, nut and washers that hold the terminal.
         </p>
       )}
+      <CableEndFields jointId={id} />
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}
         testId="joint-form"

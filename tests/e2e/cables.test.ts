@@ -8,7 +8,7 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { launchBrowser, shot, signInPage } from "../support/browser";
-import { connect, dropPart, waitSaved } from "../support/editor-page";
+import { connect, dropPart, openJoint, waitSaved } from "../support/editor-page";
 import { testDb } from "../support/db";
 import { DEMO_BUILD, DEMO_USERS } from "@/db/demo-accounts";
 import { DEMO_RUDDER_FAULT_PART, demoRudderLinkage } from "@/shared/demo-rudder";
@@ -82,19 +82,29 @@ describe("drawing a cable circuit", () => {
 });
 
 describe("the demo's yaw run", () => {
-  it("shows the turnbuckle's hazard, and correcting its threads on the card clears it", async () => {
+  it("shows the turnbuckle's hazard on its joint's card and its own, and correcting its threads clears it", async () => {
     await page.goto(page.url().replace(/\/linkages\/.*$/, ""));
     await page.getByTestId("linkage-row").filter({ hasText: demoRudderLinkage().name }).first().getByRole("link").first().click();
     await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
     await expect.poll(() => finding("turnbuckle-threads-showing").count(), { timeout: 10_000 }).toBe(1);
+    // The joint at the turnbuckle's aft end shows that end's threads and its safetying, not rod-end fields.
+    const card = await openJoint(page, "rd-j-horn-right");
+    const threads = card.getByTestId(`turnbuckle-threads-${DEMO_RUDDER_FAULT_PART}-b`);
+    expect(await threads.inputValue()).toBe("5");
+    expect(await card.getByTestId(`turnbuckle-locking-${DEMO_RUDDER_FAULT_PART}`).inputValue()).toBe("clip");
+    expect(await card.getByText("Rod-end bearing").count()).toBe(0);
+    await threads.fill("4");
+    await expect.poll(() => finding("turnbuckle-threads-showing").count(), { timeout: 10_000 }).toBe(1); // still over 3
+    // Corrected on the turnbuckle's own card (the same value: one home), the hazard clears.
     await finding("turnbuckle-threads-showing").click();
     const form = page.getByTestId("node-form");
     await form.waitFor();
     const field = form.getByLabel("Threads showing at B");
-    expect(await field.inputValue()).toBe("5");
+    expect(await field.inputValue()).toBe("4");
     await field.fill("3");
     await field.press("Tab");
     await expect.poll(() => finding("turnbuckle-threads-showing").count(), { timeout: 10_000 }).toBe(0);
+    expect(await (await openJoint(page, "rd-j-horn-right")).getByTestId(`turnbuckle-threads-${DEMO_RUDDER_FAULT_PART}-b`).inputValue()).toBe("3");
     await waitSaved(page);
     await shot(page, "cables-03-turnbuckle-fixed");
     const row = await testDb("linkages as l").join("linkage_revisions as r", function () { this.on("r.linkage_id", "l.id").andOn("r.revision", "l.current_revision"); })

@@ -1,6 +1,7 @@
 // The joint card's sections follow the joint: the holes named after their parts, no rod end at a cable's terminal.
 import { describe, expect, it } from "vitest";
 import { jointCardSections } from "@/editor/panels/specs";
+import { cableEnds } from "@/editor/panels/CableEndFields";
 import { demoPitchLinkage } from "@/shared/demo";
 import { rudderCircuit } from "../shared/analysis/cable-fixtures";
 
@@ -33,5 +34,24 @@ describe("joint card sections", () => {
     const j = g.joints.find((x) => [x.from.node, x.to.node].includes("tbL"))!;
     const withRodEnd = { ...j, hardware: { ...j.hardware, rodEnd: { shank: "male" as const, thread: "1/4-28" as const, hand: "RH" as const, ballBore: 0.25 } } };
     expect(titles(jointCardSections(withRodEnd as typeof j, g.nodes))).toContain("Rod-end bearing");
+  });
+});
+
+describe("cable ends on a joint's card", () => {
+  const g = rudderCircuit();
+  const endsOf = (id: string) => {
+    const j = g.joints.find((x) => x.id === id)!;
+    const n = (k: string) => g.nodes.find((x) => x.id === k);
+    return cableEnds([n(j.from.node), j.from.port, n(j.to.node), j.to.port]).map((e) => `${e.node.id}:${e.port}`);
+  };
+  it("names the cable's end and the turnbuckle's end a joint holds", () => {
+    expect(endsOf("tbLa")).toEqual(["cableL:b", "tbL:a"]); // cable B ↔ turnbuckle A
+    expect(endsOf("hornL")).toEqual(["tbL:b"]); // turnbuckle B ↔ horn
+    expect(endsOf("pedL")).toEqual(["cableL:a"]);
+  });
+  it("has none where a pulley guides the cable's run, or on a pushrod run", () => {
+    expect(endsOf("overP")).toEqual([]);
+    expect(endsOf("pivL")).toEqual([]);
+    expect(cableEnds([])).toEqual([]);
   });
 });
