@@ -31,7 +31,7 @@ describe("linkage file import/export", () => {
   });
 });
 
-describe("units through mathjs", () => {
+describe("units by exact factors (NIST SP 811)", () => {
   it("converts force, length, torque and stress", () => {
     expect(lbfToN(1)).toBeCloseTo(4.4482216152605, 12); // domain.md: 1 lbf = 4.4482216152605 N exactly
     expect(nToLbf(4.4482216152605)).toBeCloseTo(1, 12);
