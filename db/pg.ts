@@ -91,8 +91,12 @@ export function dataDir(port: number, kind: "app" | "test" = "app"): string {
 export const appCluster = (): Cluster => ({ name: "app", port: PG_PORT, dir: dataDir(PG_PORT, "app"), durable: true });
 export const testCluster = (): Cluster => ({ name: "test", port: TEST_PG_PORT, dir: dataDir(TEST_PG_PORT, "test"), durable: false });
 
+/**
+ * This cluster is up: its own socket in its data folder answers. (A server of another checkout on the same TCP
+ * port does not count: asking 127.0.0.1 would take it for this one.)
+ */
 export function isReady(c: Cluster, bin = ensureBinaries()) {
-  return spawnSync(path.join(bin, "pg_isready"), ["-h", "127.0.0.1", "-p", String(c.port)], { encoding: "utf8" }).status === 0;
+  return spawnSync(path.join(bin, "pg_isready"), ["-h", c.dir, "-p", String(c.port)], { encoding: "utf8" }).status === 0;
 }
 
 /** SQL as the superuser, over the Unix socket in the data folder. */
@@ -159,7 +163,13 @@ function drift(c: Cluster, bin: string) {
 
 function start(c: Cluster, bin: string) {
   log(`starting the ${c.name} cluster on 127.0.0.1:${c.port} (${c.durable ? "durable" : "fsync off, for tests only"})`);
-  asPg(path.join(bin, "pg_ctl"), ["-D", c.dir, "-l", path.join(c.dir, "server.log"), "-w", "-t", "60", "start"]);
+  try {
+    asPg(path.join(bin, "pg_ctl"), ["-D", c.dir, "-l", path.join(c.dir, "server.log"), "-w", "-t", "60", "start"]);
+  } catch (e) {
+    const taken = spawnSync(path.join(bin, "pg_isready"), ["-h", "127.0.0.1", "-p", String(c.port)], { encoding: "utf8" }).status === 0;
+    if (taken) throw new Error(`Port ${c.port} is already used by another PostgreSQL server (another checkout?). Stop it, or give this checkout other ports: LW_PG_PORT (the test cluster takes LW_PG_PORT + 100).`);
+    throw e;
+  }
 }
 
 /** Starts a cluster made by up() (e.g. after a test stopped it). */
