@@ -39,7 +39,7 @@ function expectRefused(c: { port: number; dir: string }) {
 describe("the test cluster", () => {
   it("runs on its own port and folder, trading durability for speed", () => {
     expect(TEST_CLUSTER.port).toBe(Number(process.env.LW_TEST_PG_PORT || Number(process.env.LW_PG_PORT || 54329) + 100));
-    expect(TEST_CLUSTER.dir).toMatch(/pg-test-\d+$/);
+    expect(TEST_CLUSTER.dir).toMatch(/(pg-test|-test)-\d+$/);
     expect(testClusterSetting("fsync")).toBe("off");
     expect(testClusterSetting("password_encryption")).toBe("scram-sha-256");
   });
