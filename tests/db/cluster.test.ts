@@ -15,7 +15,6 @@ import { TEST_CLUSTER, restartTestCluster, testClusterRunning, testClusterSettin
 import { makeUser } from "../support/db";
 import { signIn } from "../support/http";
 
-const ROOT = path.resolve(__dirname, "../..");
 const isRoot = process.getuid?.() === 0;
 
 /** psql as `nobody`, without any password (-w: never prompt). */
@@ -66,7 +65,8 @@ describe("restarting the test cluster from a test", () => {
 
 describe("a cluster made by an older version (trust, fsync off)", () => {
   const port = TEST_CLUSTER.port + 50;
-  const scratch: Cluster = { name: "scratch", port, dir: path.join(ROOT, ".data", `pg-scratch-${port}`), durable: true };
+  // Beside the test cluster's folder: a place the postgres user can reach (inside the checkout, or outside it when it cannot enter the checkout).
+  const scratch: Cluster = { name: "scratch", port, dir: `${TEST_CLUSTER.dir}-scratch-${port}`, durable: true };
   afterAll(() => {
     stop(scratch);
     rmSync(scratch.dir, { recursive: true, force: true });
