@@ -7,6 +7,7 @@
  * not load. `LW_SKIP_BUILD=1` reuses the build in LW_BENCH_DIST (default .next-bench).
  */
 import { spawn, spawnSync } from "node:child_process";
+import { existsSync } from "node:fs";
 import path from "node:path";
 import knex from "knex";
 import { chromium, type BrowserContext } from "playwright-core";
@@ -54,7 +55,8 @@ export async function run() {
   const { startLocalServices } = await import("../../scripts/services.mjs");
   const env: Record<string, string> = { ...(process.env as Record<string, string>), LW_SERVICES_MODE: "bench", DATABASE_URL: DB_URL, NEXT_DIST_DIR: DIST, NEXTAUTH_SECRET: "bench-secret-not-for-production", NEXTAUTH_URL: APP, NEXT_TELEMETRY_DISABLED: "1", LW_WORKER: "0" };
   const services = await startLocalServices(env);
-  if (process.env.LW_SKIP_BUILD !== "1") sh(["node_modules/next/dist/bin/next", "build"], { ...env, NODE_ENV: "production" });
+  // LW_SKIP_BUILD=1 reuses the build, when there is one.
+  if (process.env.LW_SKIP_BUILD !== "1" || !existsSync(path.join(ROOT, DIST, "BUILD_ID"))) sh(["node_modules/next/dist/bin/next", "build"], { ...env, NODE_ENV: "production" });
   const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { cwd: ROOT, env: { ...env, NODE_ENV: "production" }, stdio: "ignore" });
   const db = knex({ client: "pg", connection: DB_URL, pool: { min: 0, max: 2 } });
   const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium", args: ["--headless", "--no-sandbox", "--disable-gpu", "--no-first-run", "--disable-background-networking"] });
