@@ -120,3 +120,16 @@ export async function fileKeys(buildId: string, ids: string[]) {
   const rows = await db<FileRow>("files").where("build_id", buildId).whereIn("id", ids).select("id", "key", "thumb_key", "content_type", "kind");
   return new Map(rows.map((r) => [r.id, { key: r.key, thumbKey: r.thumb_key, contentType: r.content_type, kind: r.kind }]));
 }
+
+export const countFiles = (buildId: string) => countOf(db("files as f").where("f.build_id", buildId));
+
+/** Every stored file of a build, oldest first, a page at a time (the whole-build archive reads them all). */
+export async function* eachFileOldestFirst(buildId: string, pageSize = 200) {
+  let after: string[] | null = null;
+  for (;;) {
+    const p: { items: FileRow[]; next: string[] | null } = await keysetPage<FileRow>(db("files as f").where("f.build_id", buildId).select("f.id", "f.key", "f.name", "f.created_at"), FILE_KEYS, { limit: pageSize, after }, "asc");
+    if (p.items.length) yield p.items;
+    if (!p.next) return;
+    after = p.next;
+  }
+}

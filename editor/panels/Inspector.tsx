@@ -119,10 +119,10 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
     return j ? jointCardSections(j, s.nodes) : [];
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [api, id, ends]);
-  const cableEnd = useMemo(() => {
-    const [ak, , bk] = ends ? (JSON.parse(ends) as [string, string, string]) : [];
-    return [ak, bk].some((k) => k && ROLES[k as NodeKind] === "tension");
-  }, [ends]);
+  const cableEnd = useEditorStore((s) => {
+    const j = s.joints.find((x) => x.id === id);
+    return !!j && [j.from.node, j.to.node].some((n) => { const k = s.nodes.find((x) => x.id === n)?.kind; return !!k && ROLES[k] === "tension"; });
+  });
   const onValid = useCallback((v: unknown) => api.getState().updateJointHardware(id, v, { coalesce: `joint:${id}` }), [api, id]);
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const value = useMemo(() => joint?.hardware ?? null, [id, epoch, unitSystem]);

@@ -14,7 +14,7 @@ import { Readable } from "node:stream";
 import { pipeline } from "node:stream/promises";
 import * as tar from "tar";
 import type { Build } from "@/db/builds";
-import { db } from "@/db/index";
+import { countFiles, eachFileOldestFirst } from "@/db/files";
 import { slug } from "@/shared/schemas/exports";
 import { CAUTION_TEXT } from "@/shared/caution";
 import type { RunContext } from "./kinds";
@@ -35,7 +35,7 @@ export async function makeArchive(build: Build, progress: RunContext<unknown>["p
     await mkdir(path.join(root, "linkages"), { recursive: true });
     await mkdir(path.join(root, "files"), { recursive: true });
     await progress(0.02, "Reading the build's files");
-    const total = Number((await db("files").where({ build_id: build.id }).count<{ n: string }[]>("* as n"))[0].n);
+    const total = await countFiles(build.id);
 
     await progress(0.05, "Laying out the build log");
     await writeFile(path.join(root, "build-log.pdf"), await parts.logPdf());
@@ -53,12 +53,7 @@ export async function makeArchive(build: Build, progress: RunContext<unknown>["p
     // Every stored file, oldest first, a page of rows at a time; two files of the same name both kept.
     const used = new Set<string>();
     let done = 0, missing = 0;
-    let after: { created_at: Date; id: string } | null = null;
-    for (;;) {
-      const q = db("files").where({ build_id: build.id }).orderBy([{ column: "created_at" }, { column: "id" }]).limit(200).select("id", "key", "name", "kind", "created_at");
-      if (after) q.whereRaw("(created_at, id) > (?, ?::uuid)", [after.created_at, after.id]);
-      const rows: { id: string; key: string; name: string; kind: string; created_at: Date }[] = await q;
-      if (!rows.length) break;
+    for await (const rows of eachFileOldestFirst(build.id)) {
       for (const r of rows) {
         let name = `${r.created_at.toISOString().slice(0, 10)}-${safeName(r.name)}`;
         if (used.has(name)) name = `${r.created_at.toISOString().slice(0, 10)}-${r.id.slice(0, 8)}-${safeName(r.name)}`;
@@ -69,8 +64,6 @@ export async function makeArchive(build: Build, progress: RunContext<unknown>["p
         done++;
         if (done % 20 === 0 || done === total) await progress(0.4 + 0.5 * (done / Math.max(1, total)), `${done.toLocaleString("en-US")} of ${total.toLocaleString("en-US")} files`);
       }
-      const last = rows[rows.length - 1];
-      after = { created_at: last.created_at, id: last.id };
     }
 
     await writeFile(path.join(root, "README.txt"), [

@@ -1,9 +1,8 @@
 import "server-only";
 import type { z } from "zod";
-import { fieldError } from "@/lib/errors";
+import { fieldError, forbidden } from "@/lib/errors";
 import type { Build } from "@/db/builds";
 import { can, type Role } from "@/shared/roles";
-import { forbidden } from "@/lib/errors";
 import { getLinkage, getRevision } from "@/db/linkages";
 import { LARGE_EXPORT_BYTES, PDF_BYTES_PER_ENTRY, PDF_BYTES_PER_REVISION_PICTURE, exportParams, slug, type ExportKind } from "@/shared/schemas/exports";
 
@@ -92,12 +91,15 @@ export const KINDS: { [K in ExportKind]: Kind<K> } = {
   "build-archive": {
     async prepare(build, _p, role) {
       if (!can(role, "manage")) throw forbidden("Only the build's owner can export the whole build.");
-      const [{ n: files }] = await (await import("@/db/index")).db("files").where({ build_id: build.id }).count<{ n: string }[]>("* as n");
-      return { label: `Whole build archive — log, linkages, checklists, ${Number(files).toLocaleString("en-US")} file${Number(files) === 1 ? "" : "s"}, hardware list`, estimatedBytes: null };
+      const files = await (await import("@/db/files")).countFiles(build.id);
+      return { label: `Whole build archive — log, linkages, checklists, ${files.toLocaleString("en-US")} file${files === 1 ? "" : "s"}, hardware list`, estimatedBytes: null };
     },
     async run({ build, progress }) {
       const [{ makeArchive }, { listLinkages }, { serializeLinkage }] = await Promise.all([import("./archive"), import("@/db/linkages"), import("@/shared/linkage/io")]);
-      const bodyOf = async (r: ExportResult) => ("body" in r ? r.body : Buffer.alloc(0));
+      const bodyOf = async (r: ExportResult) => {
+        if ("body" in r) return r.body;
+        throw new Error("an archive part was made on disk; only in-memory parts are expected here");
+      };
       const quiet = async () => {};
       const a = await makeArchive(build, progress, {
         logPdf: async () => bodyOf(await KINDS["log-pdf"].run({ build, params: {}, progress: quiet })),
