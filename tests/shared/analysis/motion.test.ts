@@ -110,17 +110,23 @@ describe("motion: properties of random assemblable four-bars", () => {
         closure = Math.max(closure, Math.abs(Math.hypot(e.bx - e.ax, e.by - e.ay) - e.st.b)); // loop closure
         // Virtual work: T_out·ω_out = T_in·ω_in, so the torque ratio found by statics is 1 / gearing.
         virtualWork = Math.max(virtualWork, Math.abs(sw.forceRatio[0][k] * Math.abs(sw.stageGearing[0][k]) - 1));
-        // Away from toggle (|sin μ| ≥ 0.3 at both ends) the central difference of the positions matches the gearing.
+        // Away from toggle (|sin μ| ≥ 0.3 at both ends) the five-point central difference of the positions
+        // (error ∝ step⁴; the three-point one sat right at 1 % on sharply curved runs) matches the gearing.
         const clear = Math.abs(Math.sin(mu(sw.cosA[0][k]) * R)) >= 0.3 && Math.abs(Math.sin(mu(sw.cosB[0][k]) * R)) >= 0.3;
-        if (clear && k > 0 && sw.ok[k - 1] && k + 1 < sw.theta.length && sw.ok[k + 1]) {
-          const slope = (sw.rot[1][k + 1] - sw.rot[1][k - 1]) / (sw.rot[0][k + 1] - sw.rot[0][k - 1]);
+        if (clear && k > 1 && k + 2 < sw.theta.length && sw.ok[k - 2] && sw.ok[k - 1] && sw.ok[k + 1] && sw.ok[k + 2]) {
+          const d5 = (r: ArrayLike<number>) => -r[k + 2] + 8 * r[k + 1] - 8 * r[k - 1] + r[k - 2];
+          const slope = d5(sw.rot[1]) / d5(sw.rot[0]);
           slopeErr = Math.max(slopeErr, Math.abs(slope - sw.stageGearing[0][k]) / Math.max(1, Math.abs(slope)));
         }
       }
       expect(closure).toBeLessThan(1e-9);
       expect(virtualWork).toBeLessThan(1e-9);
-      expect(slopeErr).toBeLessThan(1e-2); // central difference, error ∝ step²
-    }), { numRuns: 60 });
+      expect(slopeErr).toBeLessThan(1e-3); // five-point central difference, error ∝ step⁴
+    }), {
+      numRuns: 60,
+      // Always tried: the case that once sat at 1.00000000004 % with the three-point difference.
+      examples: [[{ a: 5.3914329976259, c: 1, d: 10, rise: 0, alpha: 60, beta: 60, travel: 19.99999999998999 }]],
+    });
   }, 60_000);
 });
 
