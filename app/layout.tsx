@@ -12,7 +12,11 @@ export const metadata: Metadata = {
 export default function RootLayout({ children }: { children: React.ReactNode }) {
   return (
     <html lang="en" className={inter.variable}>
-      <body className="min-h-screen font-sans text-sm">{children}</body>
+      <body className="min-h-screen font-sans text-sm">
+        {/* The first stop of every page: past the header and the build's tabs to what the page is for. */}
+        <a href="#main" className="skip-link">Skip to the main content</a>
+        {children}
+      </body>
     </html>
   );
 }

@@ -14,14 +14,14 @@ export function UserMenu({ name, email, unitSystem, isSiteAdmin = false }: { nam
   }
   return (
     <div className="flex items-center gap-3 text-xs">
-      <div role="group" aria-label="Units" className="flex overflow-hidden rounded border border-ink/20">
+      <div role="group" aria-label="Units" className="flex rounded border border-ink/20">
         {(["US", "SI"] as const).map((u) => (
           <button
             key={u}
             type="button"
             aria-pressed={units === u}
             onClick={() => switchUnits(u)}
-            className={`px-2 py-1 ${units === u ? "bg-ink text-white" : "bg-white text-ink hover:bg-ink/5"}`}
+            className={`min-h-6 px-2 py-1 first:rounded-l last:rounded-r ${units === u ? "bg-ink text-white" : "bg-white text-ink hover:bg-ink/5"}`}
             title={u === "US" ? "US customary: lbf, in, in·lbf" : "SI: N, mm, N·m"}
           >
             {u}

@@ -83,3 +83,17 @@ export function Badge({ tone = "neutral", children }: { tone?: "neutral" | "haza
   };
   return <span className={`inline-flex items-center rounded px-1.5 py-0.5 text-xs font-medium ${map[tone]}`}>{children}</span>;
 }
+
+/** A page's main landmark: the skip link's target (id "main"), focusable from it without a frame. */
+export function Main({ className = "", children, ...rest }: React.HTMLAttributes<HTMLElement>) {
+  return (
+    <main id="main" tabIndex={-1} className={className} {...rest}>
+      {children}
+    </main>
+  );
+}
+
+/** A table that may be wider than a phone: it scrolls in its own box, the first column kept (globals.css). */
+export function TableBox({ children, className = "" }: { children: React.ReactNode; className?: string }) {
+  return <div className={`table-box ${className}`}>{children}</div>;
+}

@@ -5,12 +5,12 @@
  * opening view) in canvas/viewport.ts.
  */
 import { useRef } from "react";
-import { Background, BackgroundVariant, ConnectionMode, ControlButton, Controls, MiniMap, ReactFlow } from "@xyflow/react";
+import { Background, BackgroundVariant, ConnectionMode, ControlButton, Controls, MiniMap, ReactFlow, type AriaLabelConfig } from "@xyflow/react";
 import { useEditorConfig } from "./context";
 import { nodeTypes, type PartFlowNode } from "./nodes";
 import { edgeTypes, type JointFlowEdge } from "./joints/JointEdge";
 import type { SubjectRef } from "./store";
-import { NodesToFlow, useFlowEdges, useFlowHandlers } from "./canvas/adapters";
+import { CANVAS_KEYS_ID, jointNameId, NodesToFlow, useFlowEdges, useFlowHandlers } from "./canvas/adapters";
 import { GRID, SNAP_GRID, useFitAll, useOpeningView } from "./canvas/viewport";
 
 export { GRID, KIND_MIME, linkageBounds, subjectCentre, useFitAll, useFocusSubject, FIT_ALL } from "./canvas/viewport";
@@ -19,6 +19,31 @@ export { GRID, KIND_MIME, linkageBounds, subjectCentre, useFitAll, useFocusSubje
 // and every subscribed node and edge re-checks (a new `defaultEdgeOptions` re-renders every edge), so
 // an inline literal here costs a full store pass on every render of the canvas, i.e. every drag frame.
 const DEFAULT_EDGE_OPTIONS = { type: "joint" } as const;
+
+const KEYS_TEXT = "Enter or Space opens its card. Arrow keys move a selected part, J joins it to another part, L lists the run, question mark lists every key.";
+/** React Flow's own words, in ours. */
+const ARIA: Partial<AriaLabelConfig> = {
+  "node.a11yDescription.default": KEYS_TEXT,
+  "node.a11yDescription.keyboardDisabled": KEYS_TEXT,
+  "edge.a11yDescription.default": "Enter or Space opens the joint's card with its hardware and findings.",
+  "controls.ariaLabel": "Zoom and fit",
+  "controls.zoomIn.ariaLabel": "Zoom in",
+  "controls.zoomOut.ariaLabel": "Zoom out",
+  "controls.fitView.ariaLabel": "Fit the whole linkage in view",
+  "controls.interactive.ariaLabel": "Lock or unlock the canvas",
+  "minimap.ariaLabel": "Overview of the whole linkage",
+  "handle.ariaLabel": "Port",
+};
+
+/** A focused joint's badge (drawn outside the SVG) shows the focus too; set on the element, no re-render. */
+function markJointFocus(t: EventTarget, on: boolean) {
+  const el = t as Element;
+  if (typeof el.closest !== "function") return;
+  const id = el.closest(".react-flow__edge")?.getAttribute("data-id");
+  if (!id) return;
+  const badge = document.getElementById(jointNameId(id))?.parentElement;
+  if (badge) badge.dataset.focused = on ? "true" : "false";
+}
 
 export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
   const { readOnly } = useEditorConfig();
@@ -29,7 +54,8 @@ export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
   const fitAll = useFitAll();
 
   return (
-    <div ref={wrap} className="h-full w-full" style={ready ? undefined : { opacity: 0 }} data-view={ready ? "ready" : "opening"} onDragOver={h.onDragOver} onDrop={h.onDrop} data-testid="canvas">
+    <div ref={wrap} className="h-full w-full" style={ready ? undefined : { opacity: 0 }} data-view={ready ? "ready" : "opening"} onDragOver={h.onDragOver} onDrop={h.onDrop} data-testid="canvas" onFocus={(e) => markJointFocus(e.target, true)} onBlur={(e) => markJointFocus(e.target, false)}>
+      <p id={CANVAS_KEYS_ID} className="sr-only">{KEYS_TEXT}</p>
       <ReactFlow<PartFlowNode, JointFlowEdge>
         edges={edges}
         nodeTypes={nodeTypes}
@@ -54,6 +80,7 @@ export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
         connectionRadius={28}
         defaultEdgeOptions={DEFAULT_EDGE_OPTIONS}
         onlyRenderVisibleElements
+        ariaLabelConfig={ARIA}
       >
         <NodesToFlow readOnly={readOnly} />
         <Background variant={BackgroundVariant.Dots} gap={GRID * 2} size={1} color="#cfd4da" />

@@ -15,9 +15,13 @@ import type { AnalysisSettings } from "@/shared/analysis/types";
 import { analyze } from "@/shared/analysis";
 import { EditorConfigContext, EditorStoreContext } from "./context";
 import { createEditorStore, type EditorStore } from "./store";
-import Canvas, { useFitAll } from "./Canvas";
+import Canvas, { useFitAll, useFocusSubject } from "./Canvas";
 import PartsTray from "./panels/PartsTray";
-import Inspector, { type ReviewSlot } from "./panels/Inspector";
+import Inspector, { CARD_TITLE_ID, type ReviewSlot } from "./panels/Inspector";
+import { RunList } from "./panels/RunList";
+import { JoinDialog } from "./panels/JoinDialog";
+import { FindingsAnnouncer } from "./panels/FindingsAnnouncer";
+import type { SubjectRef } from "./store";
 import { CAUTION, FindingsList, SummaryStrip } from "./panels/Findings";
 import { useAutosave } from "./useAutosave";
 import { ConflictDialog } from "./panels/ConflictDialog";
@@ -69,9 +73,22 @@ function ImportErrors({ errors, onDismiss }: { errors: string[]; onDismiss: () =
   );
 }
 
+/** Run `f` on the next frames until it returns true (React commits the selection, React Flow mounts a part). */
+function untilFrame(f: () => boolean, frames = 12) {
+  const step = (n: number) => requestAnimationFrame(() => { if (!f() && n > 0) step(n - 1); });
+  step(frames);
+}
+const PHONE = "(max-width: 767px)";
+
 function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
   const { store, canEdit, buildName, linkageName, system } = props;
   const fitAll = useFitAll();
+  const focusSubject = useFocusSubject();
+  // On a phone the run opens as a list (the diagram one tap away); elsewhere as the diagram.
+  const [listOpen, setListOpen] = useState(() => typeof window !== "undefined" && window.matchMedia?.(PHONE).matches);
+  const listRef = useRef(listOpen);
+  listRef.current = listOpen;
+  const [joinFor, setJoinFor] = useState<string | null>(null);
   const rootRef = useRef<HTMLDivElement>(null);
   const [sheet, setSheet] = useState(false);
   const [geoOpen, setGeoOpen] = useState(false);
@@ -116,8 +133,43 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
       toggleGeometry: () => setGeoOpen((v) => !v),
       geometryOpen: geoOpen,
       pictureBusy: { exporting, keeping },
+      openCard: (subject: SubjectRef) => {
+        store.getState().select(subject);
+        const want = `${subject.type}:${subject.id}`;
+        untilFrame(() => {
+          const h = document.getElementById(CARD_TITLE_ID);
+          if (!h || h.dataset.subject !== want) return false;
+          h.focus();
+          return true;
+        });
+      },
+      returnFocus: (from: EventTarget | null) => {
+        const el = from as Element | null;
+        if (!el || typeof el.closest !== "function" || !el.closest("[data-card-panel]")) return false;
+        const sel = store.getState().selection;
+        const subject: SubjectRef | null = sel.nodes.length ? { type: "node", id: sel.nodes[0] } : sel.joints.length ? { type: "joint", id: sel.joints[0] } : null;
+        if (!subject) return false;
+        const find = () =>
+          listRef.current
+            ? document.querySelector<HTMLElement>(`[data-run-item="${subject.type}:${CSS.escape(subject.id)}"]`)
+            : document.querySelector<HTMLElement>(`.react-flow__${subject.type === "node" ? "node" : "edge"}[data-id="${CSS.escape(subject.id)}"]`);
+        const now = find();
+        if (now) now.focus();
+        else {
+          // Not drawn (off screen): bring it into view, then focus it once React Flow has mounted it.
+          if (!listRef.current) focusSubject(subject, { duration: 0 });
+          untilFrame(() => { const t = find(); t?.focus(); return !!t; });
+        }
+        return true;
+      },
+      openJoin: () => {
+        const sel = store.getState().selection.nodes;
+        if (sel.length === 1) setJoinFor(sel[0]);
+      },
+      toggleList: () => setListOpen((v) => !v),
+      listOpen,
     }),
-    [store, canEdit, fitAll, saveNow, file.openImport, file.exportFile, exportPicture, keepPicture, exporting, keeping, geoOpen],
+    [store, canEdit, fitAll, saveNow, file.openImport, file.exportFile, exportPicture, keepPicture, exporting, keeping, geoOpen, focusSubject, listOpen],
   );
 
   // Keyboard: one handler over the command list (editor/commands.ts).
@@ -129,7 +181,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
 
   const closeSheet = useCallback(() => setSheet(false), []);
   return (
-    <div ref={rootRef} className={`flex ${props.fill ? "h-full" : "h-[calc(100vh-3.5rem)]"} min-h-0 flex-col overflow-hidden bg-paper text-ink`} data-testid="linkage-editor">
+    <div ref={rootRef} className={`flex ${props.fill ? "md:h-full" : "md:h-[calc(100vh-3.5rem)]"} flex-col bg-paper text-ink md:min-h-0 md:overflow-hidden`} data-testid="linkage-editor" data-view={listOpen ? "list" : "diagram"}>
       <Toolbar
         ctx={ctx}
         title={{ linkageName, system, buildName, revision }}
@@ -139,10 +191,11 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
       />
       <SummaryStrip system={system} settings={props.settings} />
       {file.importErrors && <ImportErrors errors={file.importErrors} onDismiss={file.dismissErrors} />}
-      <div className="flex min-h-0 flex-1">
-        {canEdit && <PartsTray />}
-        <main className={`relative min-w-0 flex-1 ${geoOpen ? "hidden lg:block" : ""}`} aria-label="Linkage canvas">
-          <Canvas opening={opening} />
+      <div className="flex flex-col md:min-h-0 md:flex-1 md:flex-row">
+        {canEdit && <div className="hidden md:flex"><PartsTray /></div>}
+        <main id="main" tabIndex={-1} className={`relative min-w-0 md:flex-1 ${listOpen ? "" : "h-[70vh] md:h-auto"} ${geoOpen ? "hidden lg:block" : ""}`} aria-label={listOpen ? "Parts and joints of the linkage" : "Linkage canvas"}>
+          {listOpen ? <RunList onOpen={ctx.openCard} /> : <Canvas opening={opening} />}
+          <FindingsAnnouncer />
           {notice && (
             <div role="status" data-testid="notice" className="pointer-events-none absolute bottom-4 left-1/2 z-10 max-w-lg -translate-x-1/2 rounded bg-ink px-3 py-1.5 text-[12px] text-white shadow-lg">
               {notice.text}
@@ -154,11 +207,11 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
             <GeometryPanel onClose={() => setGeoOpen(false)} />
           </div>
         )}
-        <aside className="flex w-[360px] shrink-0 flex-col border-l border-ink/10 bg-paper" aria-label="Inspector and findings">
-          <div className="min-h-0 flex-[3] overflow-y-auto">
+        <aside className="flex w-full shrink-0 flex-col border-t border-ink/10 bg-paper md:w-[360px] md:border-l md:border-t-0" aria-label="Card and findings" data-card-panel>
+          <div className="md:min-h-0 md:flex-[3] md:overflow-y-auto">
             <Inspector buildId={props.buildId} linkageId={props.linkageId} linkageName={linkageName} reviewSlot={props.reviewSlot} />
           </div>
-          <div className="flex min-h-0 flex-[2] flex-col border-t border-ink/10 bg-white">
+          <div className="flex flex-col border-t border-ink/10 bg-white md:min-h-0 md:flex-[2]">
             <FindingsList />
           </div>
           <p className="border-t border-ink/10 bg-paper px-3 py-1.5 text-[10px] leading-3 text-ink-soft" data-testid="caution">
@@ -167,6 +220,20 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         </aside>
       </div>
       {sheet && <ShortcutsSheet onClose={closeSheet} readOnly={!canEdit} />}
+      {joinFor && (
+        <JoinDialog
+          nodeId={joinFor}
+          onClose={() => {
+            const id = joinFor;
+            setJoinFor(null);
+            untilFrame(() => { const t = document.querySelector<HTMLElement>(listOpen ? `[data-run-item="node:${CSS.escape(id)}"]` : `.react-flow__node[data-id="${CSS.escape(id)}"]`); t?.focus(); return !!t; });
+          }}
+          onJoined={(jointId) => {
+            setJoinFor(null);
+            ctx.openCard({ type: "joint", id: jointId });
+          }}
+        />
+      )}
       {autosave.conflict && autosave.difference && (
         <ConflictDialog current={autosave.conflict} difference={autosave.difference} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} />
       )}

@@ -3,7 +3,7 @@
  * enabled and whether it changes the linkage (off for a read-only viewer). The toolbar, the key handler and
  * the shortcuts sheet all read this list, so a command is added in one place.
  */
-import type { EditorState, EditorStore } from "./store";
+import type { EditorState, EditorStore, SubjectRef } from "./store";
 import { GRID } from "./canvas/viewport";
 import { returnableCable } from "./store/cable";
 
@@ -25,6 +25,15 @@ export type CommandCtx = {
   geometryOpen: boolean;
   /** A picture is being drawn or kept. */
   pictureBusy: { exporting: boolean; keeping: boolean };
+  /** Select a part or joint and move the focus to its card. */
+  openCard: (s: SubjectRef) => void;
+  /** If the focus is in the card panel, put it back on the selected part or joint (canvas or list); true if it did. */
+  returnFocus: (from: EventTarget | null) => boolean;
+  /** Open the keyboard join for the selected part. */
+  openJoin: () => void;
+  /** Switch between the diagram and the list of the run. */
+  toggleList: () => void;
+  listOpen: boolean;
 };
 
 export type Command = {
@@ -51,6 +60,17 @@ export type Command = {
 const mod = (e: KeyboardEvent) => e.ctrlKey || e.metaKey;
 const key = (e: KeyboardEvent) => e.key.toLowerCase();
 const hasSel = (s: EditorState) => s.selection.nodes.length + s.selection.joints.length > 0;
+const plain = (e: KeyboardEvent, k: string) => !mod(e) && !e.altKey && !e.shiftKey && key(e) === k;
+/** The part or joint a keyboard event's target is on the canvas (React Flow's own wrappers carry data-id). */
+export function canvasSubject(t: EventTarget | null): SubjectRef | null {
+  const el = t as Element | null;
+  if (!el || typeof el.closest !== "function") return null;
+  const n = el.closest(".react-flow__node");
+  if (n?.getAttribute("data-id")) return { type: "node", id: n.getAttribute("data-id")! };
+  const j = el.closest(".react-flow__edge");
+  if (j?.getAttribute("data-id")) return { type: "joint", id: j.getAttribute("data-id")! };
+  return null;
+}
 const ARROWS: Record<string, [number, number]> = { ArrowLeft: [-1, 0], ArrowRight: [1, 0], ArrowUp: [0, -1], ArrowDown: [0, 1] };
 
 export const COMMANDS: readonly Command[] = [
@@ -61,9 +81,22 @@ export const COMMANDS: readonly Command[] = [
     button: { group: "file", text: "Save", testId: "btn-save" },
   },
   {
-    id: "escape", label: "Close this sheet, or clear the selection", keys: "Esc",
+    id: "openCard", label: "Open the card of the part or joint in focus on the canvas", keys: "Enter / Space",
+    match: (e) => (e.key === "Enter" || e.key === " ") && !mod(e) && canvasSubject(e.target) !== null,
+    preventDefault: true,
+    perform: (c, e) => {
+      const s = canvasSubject(e?.target ?? null);
+      if (s) c.openCard(s);
+    },
+  },
+  {
+    id: "escape", label: "Close this sheet; from a card, back to its part or joint; else clear the selection", keys: "Esc", whileTyping: true,
     match: (e) => e.key === "Escape",
-    perform: (c) => (c.sheetOpen() ? c.closeSheet() : c.store.getState().select(null)),
+    perform: (c, e) => {
+      if (c.sheetOpen()) return c.closeSheet();
+      if (c.returnFocus(e?.target ?? null)) return;
+      if (!isTyping(e?.target ?? null)) c.store.getState().select(null);
+    },
   },
   {
     id: "shortcuts", label: "Keyboard shortcuts (this sheet)", keys: "?", preventDefault: true,
@@ -143,7 +176,18 @@ export const COMMANDS: readonly Command[] = [
     },
   },
   {
-    id: "nudge", label: "Nudge the selected parts (Shift: ×5)", keys: "Arrows", edit: true,
+    id: "join", label: "Join the selected part to another part (pick the two ports)", keys: "J", edit: true,
+    match: (e) => plain(e, "j"),
+    enabled: (s) => s.selection.nodes.length === 1,
+    perform: (c) => {
+      const s = c.store.getState();
+      if (s.selection.nodes.length === 1) c.openJoin();
+      else s.setNotice("Select one part (Enter on it, or choose it in the list) to join it to another.");
+    },
+    button: { group: "edit", text: "Join…", testId: "btn-join" },
+  },
+  {
+    id: "nudge", label: "Move the selected parts one grid step, each press one undo step (Shift: ×5)", keys: "Arrows", edit: true,
     match: (e) => e.key in ARROWS,
     preventDefault: (s) => s.selection.nodes.length > 0,
     enabled: (s) => s.selection.nodes.length > 0,
@@ -154,31 +198,42 @@ export const COMMANDS: readonly Command[] = [
     },
   },
   {
-    id: "import", label: "Replace this linkage with a .json linkage file", edit: true,
+    id: "import", label: "Replace this linkage with a .json linkage file", keys: "I", edit: true,
+    match: (e) => plain(e, "i"),
     perform: (c) => c.openImport(),
     button: { group: "file", text: "Import…", testId: "btn-import" },
   },
   {
-    id: "exportFile", label: "Download the linkage file (.json)",
+    id: "exportFile", label: "Download the linkage file (.json)", keys: "E",
+    match: (e) => plain(e, "e"),
     perform: (c) => c.exportFile(),
     button: { group: "file", text: "Export file", testId: "btn-export-json" },
   },
   {
-    id: "exportPicture", label: "Download a picture of the whole linkage with its title block",
+    id: "exportPicture", label: "Download a picture of the whole linkage with its title block", keys: "P",
+    match: (e) => plain(e, "p"),
     enabled: (_s, c) => !c.pictureBusy.exporting,
     perform: (c) => c.exportPicture(),
     button: { group: "file", text: (c) => (c.pictureBusy.exporting ? "Drawing…" : "Picture (PNG)"), testId: "btn-export-png" },
   },
   {
-    id: "keepPicture", label: "Keep the picture on the server as this revision's picture for the build log (unsaved changes are saved first)", edit: true,
+    id: "keepPicture", label: "Keep the picture on the server as this revision's picture for the build log (unsaved changes are saved first)", keys: "K", edit: true,
+    match: (e) => plain(e, "k"),
     enabled: (_s, c) => !c.pictureBusy.keeping,
     perform: (c) => c.keepPicture(),
     button: { group: "file", text: "Keep for the log", testId: "btn-keep-picture", hidden: (c) => !c.canEdit },
   },
   {
-    id: "geometry", label: "The run to scale: pivots, arm angles and its motion through the travel",
+    id: "geometry", label: "The run to scale: pivots, arm angles and its motion through the travel", keys: "G",
+    match: (e) => plain(e, "g"),
     perform: (c) => c.toggleGeometry(),
     button: { group: "view", text: "Geometry", testId: "btn-geometry", pressed: (c) => c.geometryOpen },
+  },
+  {
+    id: "list", label: "The run as a list along the load path (or back to the diagram)", keys: "L",
+    match: (e) => plain(e, "l"),
+    perform: (c) => c.toggleList(),
+    button: { group: "view", text: (c) => (c.listOpen ? "Diagram" : "List"), testId: "btn-list", pressed: (c) => c.listOpen },
   },
 ];
 

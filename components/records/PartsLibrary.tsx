@@ -156,14 +156,16 @@ function ImportCsv({ apiBase }: { apiBase: string }) {
         </div>
         {message ? <p role="status" className="text-sm font-medium">{message}</p> : null}
         {report && report.errors.length ? (
-          <table className="w-full text-left text-xs" data-testid="csv-report">
-            <thead className="uppercase tracking-wide text-ink-soft"><tr><th className="py-1">Row</th><th>Part number</th><th>Column</th><th>Problem</th></tr></thead>
-            <tbody>
-              {report.errors.flatMap((r) => r.errors.map((e, i) => (
-                <tr key={`${r.row}-${i}`} className="border-t border-ink/10"><td className="py-1 tabular-nums">{i === 0 ? r.row : ""}</td><td className="font-mono">{i === 0 ? r.partNumber ?? "" : ""}</td><td>{e.column}</td><td className="text-hazard">{e.message}</td></tr>
-              )))}
-            </tbody>
-          </table>
+          <div className="table-box">
+            <table className="w-full text-left text-xs" data-testid="csv-report">
+              <thead className="uppercase tracking-wide text-ink-soft"><tr><th className="py-1">Row</th><th>Part number</th><th>Column</th><th>Problem</th></tr></thead>
+              <tbody>
+                {report.errors.flatMap((r) => r.errors.map((e, i) => (
+                  <tr key={`${r.row}-${i}`} className="border-t border-ink/10"><td className="py-1 tabular-nums">{i === 0 ? r.row : ""}</td><td className="font-mono">{i === 0 ? r.partNumber ?? "" : ""}</td><td>{e.column}</td><td className="text-hazard">{e.message}</td></tr>
+                )))}
+              </tbody>
+            </table>
+          </div>
         ) : null}
       </div>
     </Card>

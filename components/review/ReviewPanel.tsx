@@ -1,5 +1,6 @@
 "use client";
 /** The linkage's review panel: sign-off state and form, what still blocks it, revision history and diff, e-mail setting. */
+import { findingTitle } from "@/shared/analysis/finding-title";
 import { useState } from "react";
 import { LoadMore } from "@/components/paged";
 import { ApiFailure } from "@/components/api-client";
@@ -46,7 +47,7 @@ function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId
           <ul className="list-disc pl-4">
             {blocking.map((f, i) => (
               <li key={i}>
-                <span className="font-mono">{f.code}</span> on {f.subjectName}
+                <span data-code={f.code}>{findingTitle(f.code)}</span> at {f.subjectName}
                 {f.lapsed ? " (acknowledgement lapsed)" : ""}
               </li>
             ))}
@@ -81,7 +82,7 @@ function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId
               {refused.hazards.length > 0 && (
                 <ul className="list-disc pl-4">
                   {refused.hazards.map((h, i) => (
-                    <li key={i}>{h.code} on {h.subjectName}: {h.message}</li>
+                    <li key={i} data-code={h.code}>{findingTitle(h.code)} at {h.subjectName}: {h.message}</li>
                   ))}
                 </ul>
               )}

@@ -4,6 +4,7 @@
  * replies, edit-within-the-window, resolve / reopen, and the acknowledgements of the subject's findings.
  * With nothing selected it shows the linkage's review panel: sign-off, history and diff.
  */
+import { findingTitle } from "@/shared/analysis/finding-title";
 import { useState } from "react";
 import { LoadMore } from "@/components/paged";
 import type { Subject } from "@/shared/analysis/types";
@@ -144,7 +145,7 @@ function SubjectFindingsReview({ findings, me, actions }: { findings: FindingVie
           <li key={key} data-testid={`review-finding-${f.code}`} data-acknowledged={ack ? "yes" : f.lapsed ? "lapsed" : "no"} className="rounded border border-ink/10 bg-white p-1.5 text-[11px]">
             <div className="flex items-center gap-1">
               <span className={`font-semibold ${f.severity === "hazard" ? "text-hazard" : f.severity === "caution" ? "text-caution" : "text-advisory"}`}>{f.severity}</span>
-              <span className="font-mono text-ink-soft">{f.code}</span>
+              <span className="font-semibold text-ink-soft" data-code={f.code}>{findingTitle(f.code)}</span>
               {me.canAcknowledge && !ack && (
                 <button type="button" data-testid={`ack-open-${f.code}`} className="ml-auto text-advisory hover:underline" onClick={() => { setOpen(open === key ? null : key); setReason(""); }}>
                   Acknowledge…

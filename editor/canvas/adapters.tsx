@@ -15,6 +15,12 @@ import { SEVERITY_HEX } from "../presentation";
 import type { EditorState } from "../store";
 import { dropCorner, KIND_MIME } from "./viewport";
 
+/** The ids of the hidden elements that hold a part's and a joint's accessible names (drawn by the card and the badge). */
+export const partNameId = (id: string) => `part-name-${id}`;
+export const jointNameId = (id: string) => `joint-name-${id}`;
+/** The hidden line that tells a screen reader the canvas keys (drawn by Canvas). */
+export const CANVAS_KEYS_ID = "canvas-keys";
+
 type NodeCacheEntry = { src: EditorState["nodes"][number]; sel: boolean; m: EditorState["measured"][string] | undefined; ro: boolean; rf: PartFlowNode };
 type EdgeCacheEntry = { src: EditorState["joints"][number]; sel: boolean; rf: JointFlowEdge };
 
@@ -42,6 +48,8 @@ function toFlowNodes(s: EditorState, readOnly: boolean, cache: Map<string, NodeC
       initialHeight: size.height,
       handles: m ? undefined : layoutHandles(n.kind, size),
       draggable: !readOnly,
+      // Heard as "part" named by the card's own hidden name (kind, label, findings: editor/a11y.ts).
+      domAttributes: { "aria-roledescription": "part", "aria-labelledby": partNameId(n.id), "aria-describedby": CANVAS_KEYS_ID },
     };
     cache.set(n.id, { src: n, sel: isSel, m, ro: readOnly, rf });
     return rf;
@@ -96,6 +104,8 @@ export function useFlowEdges(): JointFlowEdge[] {
         targetHandle: j.to.port,
         data: { joint: j },
         selected: isSel,
+        // aria-labelledby wins over React Flow's own "Edge from <id> to <id>" label: the joint is heard by its name.
+        domAttributes: { "aria-roledescription": "joint", "aria-labelledby": jointNameId(j.id) },
       };
       next.set(j.id, { src: j, sel: isSel, rf });
       return rf;

@@ -9,6 +9,8 @@ import { BaseEdge, EdgeLabelRenderer, getBezierPath, type Edge, type EdgeProps }
 import type { Joint } from "@/shared/linkage/schema";
 import { useEditorStoreApi, useEditorValue } from "../context";
 import { SEVERITY_HEX } from "../presentation";
+import { jointAccessibleName } from "../a11y";
+import { jointNameId } from "../canvas/adapters";
 
 export type JointEdgeData = { joint: Joint };
 export type JointFlowEdge = Edge<JointEdgeData, "joint">;
@@ -90,6 +92,8 @@ export const JointEdge = memo(function JointEdge(props: EdgeProps<JointFlowEdge>
   const [path, lx, ly] = getBezierPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition });
   const tone = worst ? SEVERITY_HEX[worst] : selected ? INK : MUTED;
   const chips = data ? hardwareChips(data.joint.hardware) : [];
+  // A string: recomputed on store changes but re-renders only when a name or the findings change.
+  const spoken = useEditorValue((s) => (data ? jointAccessibleName(data.joint, s.nodes, badge) : ""));
   return (
     <>
       <BaseEdge id={id} path={path} interactionWidth={16} style={{ stroke: tone, strokeWidth: selected ? 3 : 2 }} />
@@ -105,6 +109,7 @@ export const JointEdge = memo(function JointEdge(props: EdgeProps<JointFlowEdge>
             api.getState().select({ type: "joint", id }, e.shiftKey || e.metaKey || e.ctrlKey);
           }}
         >
+          <span id={jointNameId(id)} className="sr-only">{spoken}</span>
           {chips.map((c) => (
             <span key={c.key} data-chip={c.key} data-state={c.state} className="flex items-center">
               <ChipGlyph chip={c} />

@@ -9,6 +9,8 @@ import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
 import { SEVERITY_BG, SEVERITY_BORDER } from "../presentation";
 import { useEditorConfig, useEditorValue } from "../context";
 import { partName } from "@/shared/linkage/names";
+import { partAccessibleName } from "../a11y";
+import { partNameId } from "../canvas/adapters";
 import type { UnitSystem } from "../units";
 import { KindGlyph } from "./glyphs";
 import { EDITOR_KIND_LIST, EDITOR_KINDS } from "./kinds";
@@ -39,7 +41,8 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
         selected ? "ring-2 ring-ink ring-offset-1" : "",
       ].join(" ")}
     >
-      <div className="flex items-center gap-1.5">
+      <span id={partNameId(id)} className="sr-only">{partAccessibleName({ kind, label }, badge)}</span>
+      <div className="flex items-center gap-1.5" aria-hidden="true">
         <KindGlyph kind={kind} className="h-4 w-4 shrink-0 text-ink-soft" />
         <div className="min-w-0 flex-1 truncate text-[12px] font-semibold leading-4" title={label}>
           {partName({ kind, label })}

@@ -78,7 +78,7 @@ export function FindingsList() {
                 type="button"
                 onClick={() => setOpen((o) => ({ ...o, [sev]: !o[sev] }))}
                 aria-expanded={open[sev]}
-                className={`flex w-full items-center gap-1 px-1 py-0.5 text-[11px] font-semibold ${SEVERITY_TEXT[sev]}`}
+                className={`flex min-h-6 w-full items-center gap-1 px-1 py-1 text-[11px] font-semibold ${SEVERITY_TEXT[sev]}`}
               >
                 <span aria-hidden="true">{open[sev] ? "▾" : "▸"}</span> {SEVERITY_NAMES[sev]} · {list.length}
               </button>

@@ -17,6 +17,9 @@ import { JointChecks } from "./JointChecks";
 import { ReturnCableOffer } from "./ReturnCableOffer";
 import { CableEndFields } from "./CableEndFields";
 
+/** The card's heading: where the focus goes when a part or joint is opened from the canvas or the list. */
+export const CARD_TITLE_ID = "editor-card-title";
+
 export type ReviewSlot = (sel: { type: "node" | "joint" | "linkage"; id: string }) => React.ReactNode;
 
 const formSchemas = new Map<NodeKind, z.ZodType>();
@@ -75,7 +78,7 @@ function NodeInspector({ id }: { id: string }) {
   if (!kind || !value) return null;
   return (
     <div className="space-y-2" data-testid="node-form-panel">
-      <h3 className="flex items-center gap-1.5 text-sm font-semibold text-ink">
+      <h3 id={CARD_TITLE_ID} tabIndex={-1} data-subject={`node:${id}`} className="flex items-center gap-1.5 text-sm font-semibold text-ink">
         <KindGlyph kind={kind} /> {KIND_NAMES[kind]}
         <span className="ml-auto min-w-0 truncate text-[11px] font-normal text-ink-soft" data-part-id={id}>{label}</span>
       </h3>
@@ -138,7 +141,7 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
   if (!joint || !value) return null;
   return (
     <div className="space-y-2" data-testid="joint-card">
-      <h3 className="text-sm font-semibold text-ink">
+      <h3 id={CARD_TITLE_ID} tabIndex={-1} data-subject={`joint:${id}`} className="text-sm font-semibold text-ink">
         Joint card
         <span className="block text-[11px] font-normal text-ink-soft">{name}</span>
       </h3>
@@ -175,6 +178,7 @@ function JointInspector({ id, records }: { id: string; records?: RecordsTarget }
 }
 
 function LinkageOverview({ linkageName }: { linkageName: string }) {
+  const { readOnly } = useEditorConfig();
   const { nodes, joints, sel } = useEditorStore((s) => ({ nodes: s.nodes.length, joints: s.joints.length, sel: s.selection.nodes.length + s.selection.joints.length }));
   return (
     <div className="space-y-2 text-[12px] text-ink" data-testid="linkage-overview">
@@ -183,7 +187,12 @@ function LinkageOverview({ linkageName }: { linkageName: string }) {
         {nodes} part{nodes === 1 ? "" : "s"}, {joints} joint{joints === 1 ? "" : "s"}
         {sel > 1 ? ` · ${sel} selected` : ""}.
       </p>
-      <p className="text-ink-soft">Select a part to edit its dimensions, or a joint to fill in its hardware card.</p>
+      <p className="text-ink-soft">
+        {readOnly
+          ? "Choose a part or a joint to read its card, its findings and its comments."
+          : "Choose a part to enter its dimensions, or a joint to fill in its hardware card."}{" "}
+        On the diagram, Tab to it and press Enter; or press L for the list of the run.
+      </p>
       <LinkageFindings />
     </div>
   );

@@ -138,7 +138,7 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
       if (sel.size === 0) return;
       const moves = s.nodes.filter((n) => sel.has(n.id)).map((n) => ({ id: n.id, position: { x: n.position.x + dx, y: n.position.y + dy } }));
       const byId = new Map(moves.map((m) => [m.id, m.position]));
-      commit({ nodes: s.nodes.map((n) => (byId.has(n.id) ? { ...n, position: byId.get(n.id)! } : n)) }, { coalesce: `nudge:${[...sel].join(",")}`, structural: false });
+      commit({ nodes: s.nodes.map((n) => (byId.has(n.id) ? { ...n, position: byId.get(n.id)! } : n)) }, { structural: false }); // each press one undo step
     },
 
     setMeasured(sizes) {

@@ -35,6 +35,12 @@ function setup(canEdit = true) {
     toggleGeometry: () => calls.push("geometry"),
     geometryOpen: false,
     pictureBusy: { exporting: false, keeping: false },
+    openCard: (x) => calls.push(`card ${x.type}:${x.id}`),
+    // the card panel is marked by a target whose name is "card" in these tests
+    returnFocus: (from) => (from as { name?: string } | null)?.name === "card" && !!calls.push("back"),
+    openJoin: () => calls.push("join"),
+    toggleList: () => calls.push("list"),
+    listOpen: false,
   };
   return { store, ctx, calls, sheet: () => sheet };
 }
@@ -52,7 +58,7 @@ describe("the command list", () => {
 
   it("claims each key event for one command at most", () => {
     const events: Key[] = [];
-    for (const key of ["a", "c", "d", "f", "s", "v", "y", "z", "?", "/", "[", "]", "Escape", "Delete", "Backspace", "ArrowLeft", "ArrowUp"])
+    for (const key of ["a", "c", "d", "e", "f", "g", "i", "j", "k", "l", "p", "r", "s", "v", "y", "z", "?", "/", "[", "]", "Enter", " ", "Escape", "Delete", "Backspace", "ArrowLeft", "ArrowUp"])
       for (const ctrlKey of [false, true]) for (const shiftKey of [false, true]) events.push({ key, ctrlKey, shiftKey });
     for (const k of events) {
       const e = { ctrlKey: false, metaKey: false, shiftKey: false, ...k } as KeyboardEvent;
@@ -92,6 +98,55 @@ describe("the command list", () => {
     // Typing in a field keeps its keys.
     press(ctx, { key: "a", ctrlKey: true, target: { tagName: "TEXTAREA" } });
     expect(s().selection.nodes.length).toBeLessThan(s().nodes.length);
+  });
+
+  it("gives every toolbar command a key, so the sheet lists it and the keyboard reaches it", () => {
+    for (const c of COMMANDS.filter((x) => x.button)) expect(c.keys, c.id).toBeTruthy();
+  });
+
+  it("opens the card of the part or joint in focus on the canvas with Enter or Space, and Escape comes back", () => {
+    const { store, ctx, calls } = setup();
+    // React Flow's wrappers carry data-id; a fake element answers closest() as the DOM would.
+    const onCanvas = (cls: string, id: string) => ({ tagName: "DIV", closest: (sel: string) => (sel === cls ? { getAttribute: () => id } : null) });
+    expect(press(ctx, { key: "Enter", target: onCanvas(".react-flow__node", "horn") })).toBe(true);
+    expect(press(ctx, { key: " ", target: onCanvas(".react-flow__edge", "j-aft-horn") })).toBe(true);
+    expect(calls).toEqual(["card node:horn", "card joint:j-aft-horn"]);
+    // Enter anywhere else is the browser's (a button, a link).
+    expect(press(ctx, { key: "Enter", target: { tagName: "BUTTON", closest: () => null } })).toBe(false);
+    store.getState().select({ type: "node", id: "horn" });
+    press(ctx, { key: "Escape", target: { tagName: "INPUT", name: "card" } }); // from a field of the card
+    expect(calls.at(-1)).toBe("back");
+    expect(store.getState().selection.nodes).toEqual(["horn"]); // the part stays selected
+    press(ctx, { key: "Escape", target: { tagName: "INPUT", name: "elsewhere" } }); // typing elsewhere: nothing
+    expect(store.getState().selection.nodes).toEqual(["horn"]);
+    press(ctx, { key: "Escape" });
+    expect(store.getState().selection.nodes).toEqual([]);
+  });
+
+  it("moves a part one grid step per arrow press, each press its own undo step", () => {
+    const { store, ctx } = setup();
+    const s = () => store.getState();
+    s().select({ type: "node", id: s().nodes[0].id });
+    const p0 = s().nodes[0].position;
+    press(ctx, { key: "ArrowRight" });
+    press(ctx, { key: "ArrowDown" });
+    expect(s().nodes[0].position).toEqual({ x: p0.x + GRID, y: p0.y + GRID });
+    press(ctx, { key: "z", ctrlKey: true });
+    expect(s().nodes[0].position).toEqual({ x: p0.x + GRID, y: p0.y });
+    press(ctx, { key: "z", ctrlKey: true });
+    expect(s().nodes[0].position).toEqual(p0);
+  });
+
+  it("opens the keyboard join for one selected part only, and switches to the list with L", () => {
+    const { store, ctx, calls } = setup();
+    press(ctx, { key: "j" });
+    expect(calls).toEqual([]);
+    expect(store.getState().notice?.text).toMatch(/Select one part/);
+    store.getState().select({ type: "node", id: "horn" });
+    press(ctx, { key: "j" });
+    press(ctx, { key: "l" });
+    press(ctx, { key: "j", ctrlKey: true }); // not with a modifier
+    expect(calls).toEqual(["join", "list"]);
   });
 
   it("leaves the linkage alone for someone who may not edit, but lets them select and look", () => {

@@ -2,7 +2,7 @@ import Link from "next/link";
 import type { Metadata } from "next";
 import { requirePageUser } from "@/lib/page-access";
 import { listBuildsForUser } from "@/db/builds";
-import { Badge, Caution, EmptyState } from "@/components/ui";
+import { Badge, Caution, EmptyState, Main } from "@/components/ui";
 import { ROLE_LABEL } from "@/shared/roles";
 
 export const metadata: Metadata = { title: "Builds" };
@@ -11,7 +11,7 @@ export default async function BuildsPage() {
   const user = await requirePageUser("/builds");
   const builds = await listBuildsForUser(user.id);
   return (
-    <main className="mx-auto max-w-5xl space-y-6 p-6">
+    <Main className="mx-auto max-w-5xl space-y-6 p-6">
       <div className="flex items-center justify-between">
         <h1 className="text-xl font-semibold">Your builds</h1>
         <Link href="/builds/new" className="rounded bg-ink px-3 py-1.5 font-medium text-white hover:bg-ink/90">New build</Link>
@@ -46,6 +46,6 @@ export default async function BuildsPage() {
         </ul>
       )}
       <Caution />
-    </main>
+    </Main>
   );
 }

@@ -1,3 +1,4 @@
+import { Main } from "@/components/ui";
 import Link from "next/link";
 import type { Metadata } from "next";
 import { getSessionUser } from "@/lib/auth";
@@ -14,7 +15,7 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
   const open = inv && !inv.accepted_at && inv.expires_at > new Date();
   const here = `/invite/${token}`;
   return (
-    <main className="mx-auto mt-16 max-w-md rounded-lg border border-ink/10 bg-white p-6">
+    <Main className="mx-auto mt-16 max-w-md rounded-lg border border-ink/10 bg-white p-6">
       <p className="text-lg font-semibold">Linkwright invitation</p>
       {!open ? (
         <p className="mt-2 text-ink-soft">This invitation link has been used, has expired or was withdrawn. Ask the build&apos;s owner for a new one.</p>
@@ -37,6 +38,6 @@ export default async function InvitePage({ params }: { params: Promise<{ token: 
           )}
         </>
       )}
-    </main>
+    </Main>
   );
 }

@@ -3,7 +3,7 @@ import { notFound } from "next/navigation";
 import { existsSync, readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { requirePageUser } from "@/lib/page-access";
-import { Card, EmptyState } from "@/components/ui";
+import { Card, EmptyState, Main } from "@/components/ui";
 import { LinkifiedText } from "@/components/review/LinkifiedText";
 
 export const metadata: Metadata = { title: "Mail sink" };
@@ -40,7 +40,7 @@ export default async function MailSinkPage() {
   const dir = process.env.LW_MAIL_SINK_DIR;
   const { total, messages } = dir ? readSink(dir) : { total: 0, messages: [] };
   return (
-    <main className="mx-auto max-w-4xl space-y-4 p-6">
+    <Main className="mx-auto max-w-4xl space-y-4 p-6">
       <h1 className="text-lg font-semibold">Mail sink</h1>
       {!dir ? (
         <EmptyState title="No local mail sink">
@@ -71,6 +71,6 @@ export default async function MailSinkPage() {
           </ul>
         </>
       )}
-    </main>
+    </Main>
   );
 }

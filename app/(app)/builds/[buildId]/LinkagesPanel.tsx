@@ -118,47 +118,49 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
           {canEdit ? " Start from a typical pitch run (its sizes are placeholders for your plans' dimensions), draw one from nothing, or bring a linkage file with Import a file." : ""}
         </EmptyState>
       ) : (
-        <table className="w-full text-left">
-          <thead className="text-xs uppercase tracking-wide text-ink-soft">
-            <tr className="[&>th]:pr-3"><th className="py-1">Name</th><th>System</th><th>Findings</th><th>Last change</th><th className="sr-only">Actions</th></tr>
-          </thead>
-          <tbody>
-            {linkages.map((l) => (
-              <tr key={l.id} className="border-t border-ink/10 [&>td]:pr-3" data-testid="linkage-row">
-                <td className="py-2">
-                  {renaming === l.id ? (
-                    <form className="flex gap-1" onSubmit={(e) => { e.preventDefault(); rename.mutate({ id: l.id, name: String(new FormData(e.currentTarget).get("name")) }); }}>
-                      <Input name="name" defaultValue={l.name} autoFocus aria-label="New name" />
-                      <Button size="sm" type="submit">Save</Button>
-                      <Button size="sm" tone="ghost" type="button" onClick={() => setRenaming(null)}>Cancel</Button>
-                    </form>
-                  ) : (
-                    <Link href={`/builds/${buildId}/linkages/${l.id}`} className="font-medium text-advisory hover:underline">{l.name}</Link>
-                  )}
-                </td>
-                <td>{SYSTEM_LABEL[l.system]}</td>
-                <td className="space-x-1 whitespace-nowrap">
-                  {l.summary ? (
-                    <>
-                      {l.summary.hazard ? <Badge tone="hazard">{l.summary.hazard} hazard{l.summary.hazard > 1 ? "s" : ""}</Badge> : null}
-                      {l.summary.caution ? <Badge tone="caution">{l.summary.caution} caution{l.summary.caution > 1 ? "s" : ""}</Badge> : null}
-                      {!l.summary.hazard && !l.summary.caution ? <Badge tone="ok">none open</Badge> : null}
-                    </>
-                  ) : <span className="text-xs text-ink-soft">not checked</span>}
-                </td>
-                <td className="text-xs text-ink-soft">rev {l.revision} · {new Date(l.updatedAt).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" })}{l.lastAuthor ? ` · ${l.lastAuthor}` : ""}</td>
-                <td className="whitespace-nowrap text-right">
-                  {canEdit && renaming !== l.id ? (
-                    <span className="space-x-1">
-                      <Button size="sm" tone="ghost" onClick={() => setRenaming(l.id)}>Rename</Button>
-                      <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Delete "${l.name}" and all its revisions? This cannot be undone.`)) remove.mutate(l.id); }}>Delete</Button>
-                    </span>
-                  ) : null}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <div className="table-box">
+          <table className="w-full text-left">
+            <thead className="text-xs uppercase tracking-wide text-ink-soft">
+              <tr className="[&>th]:pr-3"><th className="py-1">Name</th><th>System</th><th>Findings</th><th>Last change</th><th className="sr-only">Actions</th></tr>
+            </thead>
+            <tbody>
+              {linkages.map((l) => (
+                <tr key={l.id} className="border-t border-ink/10 [&>td]:pr-3" data-testid="linkage-row">
+                  <td className="py-2">
+                    {renaming === l.id ? (
+                      <form className="flex gap-1" onSubmit={(e) => { e.preventDefault(); rename.mutate({ id: l.id, name: String(new FormData(e.currentTarget).get("name")) }); }}>
+                        <Input name="name" defaultValue={l.name} autoFocus aria-label="New name" />
+                        <Button size="sm" type="submit">Save</Button>
+                        <Button size="sm" tone="ghost" type="button" onClick={() => setRenaming(null)}>Cancel</Button>
+                      </form>
+                    ) : (
+                      <Link href={`/builds/${buildId}/linkages/${l.id}`} className="font-medium text-advisory hover:underline">{l.name}</Link>
+                    )}
+                  </td>
+                  <td>{SYSTEM_LABEL[l.system]}</td>
+                  <td className="space-x-1 whitespace-nowrap">
+                    {l.summary ? (
+                      <>
+                        {l.summary.hazard ? <Badge tone="hazard">{l.summary.hazard} hazard{l.summary.hazard > 1 ? "s" : ""}</Badge> : null}
+                        {l.summary.caution ? <Badge tone="caution">{l.summary.caution} caution{l.summary.caution > 1 ? "s" : ""}</Badge> : null}
+                        {!l.summary.hazard && !l.summary.caution ? <Badge tone="ok">none open</Badge> : null}
+                      </>
+                    ) : <span className="text-xs text-ink-soft">not checked</span>}
+                  </td>
+                  <td className="text-xs text-ink-soft">rev {l.revision} · {new Date(l.updatedAt).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" })}{l.lastAuthor ? ` · ${l.lastAuthor}` : ""}</td>
+                  <td className="whitespace-nowrap text-right">
+                    {canEdit && renaming !== l.id ? (
+                      <span className="space-x-1">
+                        <Button size="sm" tone="ghost" onClick={() => setRenaming(l.id)}>Rename</Button>
+                        <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Delete "${l.name}" and all its revisions? This cannot be undone.`)) remove.mutate(l.id); }}>Delete</Button>
+                      </span>
+                    ) : null}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       )}
     </Card>
   );

@@ -4,7 +4,7 @@ import { listLinkages } from "@/db/linkages";
 import { listMembers } from "@/db/builds";
 import { recentActivity } from "@/db/activity";
 import { BuildNav } from "@/components/BuildNav";
-import { Badge, Card, Caution } from "@/components/ui";
+import { Badge, Card, Caution, Main } from "@/components/ui";
 import { can, ROLE_LABEL } from "@/shared/roles";
 import { LinkagesPanel } from "./LinkagesPanel";
 import { recentEntries } from "@/db/log";
@@ -30,7 +30,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="" extra={<Badge>{ROLE_LABEL[role]}</Badge>} />
-      <main className="mx-auto grid max-w-6xl gap-6 p-6 lg:grid-cols-3">
+      <Main className="mx-auto grid max-w-6xl gap-6 p-6 lg:grid-cols-3">
         <div className="space-y-6 lg:col-span-2">
           <p className="text-ink-soft">{build.model || "Model not set"}{build.registration ? ` · ${build.registration}` : ""}</p>
           <LinkagesPanel buildId={build.id} initial={linkages} canEdit={can(role, "edit")} />
@@ -81,7 +81,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
             )}
           </Card>
         </aside>
-      </main>
+      </Main>
     </>
   );
 }

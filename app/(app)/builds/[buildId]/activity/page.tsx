@@ -1,3 +1,4 @@
+import { Main } from "@/components/ui";
 import type { Metadata } from "next";
 import { requirePageBuild } from "@/lib/page-access";
 import { pageActivity } from "@/db/activity";
@@ -14,11 +15,11 @@ export default async function ActivityPage({ params }: { params: Promise<{ build
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="" />
-      <main className="mx-auto max-w-3xl space-y-4 p-6">
+      <Main className="mx-auto max-w-3xl space-y-4 p-6">
         <h1 className="text-xl font-semibold">Activity</h1>
         <p className="text-ink-soft">Everything done in this build, newest first: who did it and when.</p>
         <ActivityList buildId={build.id} first={{ activity: first.items, total: first.total, nextCursor: encodeCursor(first.next) }} />
-      </main>
+      </Main>
     </>
   );
 }

@@ -3,7 +3,7 @@ import Link from "next/link";
 import { requirePageBuild } from "@/lib/page-access";
 import { listLinkages } from "@/db/linkages";
 import { BuildNav } from "@/components/BuildNav";
-import { Card, EmptyState } from "@/components/ui";
+import { Card, EmptyState, Main } from "@/components/ui";
 import { db } from "@/db/index";
 
 export const metadata: Metadata = { title: "Checklist" };
@@ -20,7 +20,7 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/checklist" />
-      <main className="mx-auto max-w-4xl space-y-4 p-6">
+      <Main className="mx-auto max-w-4xl space-y-4 p-6">
         <div>
           <h1 className="text-xl font-semibold">Inspection checklist</h1>
           <p className="text-ink-soft">Generated from each linkage&apos;s joints: the checks its hardware calls for, then travel and stops. Ticks belong to one revision — an edit to the linkage starts a fresh list.</p>
@@ -39,7 +39,7 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
             </ul>
           </Card>
         )}
-      </main>
+      </Main>
     </>
   );
 }

@@ -1,3 +1,4 @@
+import { Main } from "@/components/ui";
 import type { Metadata } from "next";
 import { requirePageBuild } from "@/lib/page-access";
 import { pageFiles } from "@/db/files";
@@ -14,9 +15,9 @@ export default async function FilesPage({ params }: { params: Promise<{ buildId:
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/files" />
-      <main className="mx-auto max-w-6xl p-6">
+      <Main className="mx-auto max-w-6xl p-6">
         <FilesScreen buildId={build.id} first={{ files: first.items, total: first.total, nextCursor: encodeCursor(first.next) }} />
-      </main>
+      </Main>
     </>
   );
 }

@@ -1,3 +1,4 @@
+import { Main } from "@/components/ui";
 import type { Metadata } from "next";
 import { requirePageBuild } from "@/lib/page-access";
 import { buildHardware, listedHardware } from "@/db/hardware";
@@ -15,9 +16,9 @@ export default async function HardwarePage({ params }: { params: Promise<{ build
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/hardware" />
-      <main className="mx-auto max-w-6xl p-6">
+      <Main className="mx-auto max-w-6xl p-6">
         <HardwareTable buildId={build.id} canEdit={can(role, "edit")} initial={lines} />
-      </main>
+      </Main>
     </>
   );
 }

@@ -67,14 +67,16 @@ export function LogScreen(p: { buildId: string; canEdit: boolean; initial: First
       <div className="grid gap-6 lg:grid-cols-3">
         <Card title={`Hours — ${hours(data.totals.total)}`} className="lg:col-span-1">
           {Object.keys(data.totals.bySystem).length === 0 ? <p className="text-ink-soft">No hours logged{isDefault ? " yet" : " in this selection"}.</p> : (
-            <table className="w-full text-sm" data-testid="hours-by-system">
-              <thead className="text-xs uppercase tracking-wide text-ink-soft"><tr><th className="text-left font-medium">System</th><th className="text-right font-medium">Hours</th></tr></thead>
-              <tbody>
-                {Object.entries(data.totals.bySystem).sort((a, b) => b[1] - a[1]).map(([s, h]) => (
-                  <tr key={s} className="border-t border-ink/10"><td className="py-1"><span className="mr-2 inline-block h-2 w-2 rounded-sm" style={{ background: SERIES[s] }} />{SYSTEM_LABEL[s] ?? s}</td><td className="text-right tabular-nums">{hours(h)}</td></tr>
-                ))}
-              </tbody>
-            </table>
+            <div className="table-box">
+              <table className="w-full text-sm" data-testid="hours-by-system">
+                <thead className="text-xs uppercase tracking-wide text-ink-soft"><tr><th className="text-left font-medium">System</th><th className="text-right font-medium">Hours</th></tr></thead>
+                <tbody>
+                  {Object.entries(data.totals.bySystem).sort((a, b) => b[1] - a[1]).map(([s, h]) => (
+                    <tr key={s} className="border-t border-ink/10"><td className="py-1"><span className="mr-2 inline-block h-2 w-2 rounded-sm" style={{ background: SERIES[s] }} />{SYSTEM_LABEL[s] ?? s}</td><td className="text-right tabular-nums">{hours(h)}</td></tr>
+                  ))}
+                </tbody>
+              </table>
+            </div>
           )}
           <p className="mt-2 text-xs text-ink-soft">An entry about several systems counts toward each, so the rows can add up to more than the total.</p>
         </Card>

@@ -1,3 +1,4 @@
+import { Main } from "@/components/ui";
 import type { Metadata } from "next";
 import { requirePageBuild } from "@/lib/page-access";
 import { hourTotals, pageEntries } from "@/db/log";
@@ -16,9 +17,9 @@ export default async function LogPage({ params }: { params: Promise<{ buildId: s
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/log" />
-      <main className="mx-auto max-w-6xl p-6">
+      <Main className="mx-auto max-w-6xl p-6">
         <LogScreen buildId={build.id} canEdit={can(role, "edit")} initial={{ entries: first.items, total: first.total, nextCursor: encodeCursor(first.next), totals }} linkages={linkages.map((l) => ({ id: l.id, name: l.name, revision: l.revision }))} />
-      </main>
+      </Main>
     </>
   );
 }

@@ -48,29 +48,31 @@ export function MembersManager(p: { buildId: string; me: string; canManage: bool
     <div className="space-y-6">
       {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
       <Card title="Members">
-        <table className="w-full text-left">
-          <thead className="text-xs uppercase tracking-wide text-ink-soft"><tr><th className="py-1">Name</th><th>E-mail</th><th>Role</th><th className="sr-only">Actions</th></tr></thead>
-          <tbody>
-            {members.data.map((m) => (
-              <tr key={m.userId} className="border-t border-ink/10" data-testid="member-row">
-                <td className="py-2 font-medium">{m.name}{m.userId === p.me ? <span className="text-ink-soft"> (you)</span> : null}</td>
-                <td className="text-ink-soft">{m.email}</td>
-                <td>
-                  {p.canManage ? (
-                    <Select aria-label={`Role of ${m.name}`} value={m.role} onChange={(e) => setRole.mutate({ userId: m.userId, role: e.target.value as Role })} className="w-32">
-                      {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
-                    </Select>
-                  ) : ROLE_LABEL[m.role]}
-                </td>
-                <td className="text-right">
-                  {p.canManage && m.userId !== p.me ? (
-                    <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Remove ${m.name} from this build?`)) remove.mutate(m.userId); }}>Remove</Button>
-                  ) : null}
-                </td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <div className="table-box">
+          <table className="w-full text-left">
+            <thead className="text-xs uppercase tracking-wide text-ink-soft"><tr><th className="py-1">Name</th><th>E-mail</th><th>Role</th><th className="sr-only">Actions</th></tr></thead>
+            <tbody>
+              {members.data.map((m) => (
+                <tr key={m.userId} className="border-t border-ink/10" data-testid="member-row">
+                  <td className="py-2 font-medium">{m.name}{m.userId === p.me ? <span className="text-ink-soft"> (you)</span> : null}</td>
+                  <td className="text-ink-soft">{m.email}</td>
+                  <td>
+                    {p.canManage ? (
+                      <Select aria-label={`Role of ${m.name}`} value={m.role} onChange={(e) => setRole.mutate({ userId: m.userId, role: e.target.value as Role })} className="w-32">
+                        {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
+                      </Select>
+                    ) : ROLE_LABEL[m.role]}
+                  </td>
+                  <td className="text-right">
+                    {p.canManage && m.userId !== p.me ? (
+                      <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Remove ${m.name} from this build?`)) remove.mutate(m.userId); }}>Remove</Button>
+                    ) : null}
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
       </Card>
       {p.canManage ? (
         <Card title="Add someone">

@@ -1,3 +1,4 @@
+import { Main } from "@/components/ui";
 import type { Metadata } from "next";
 import { requirePageBuild } from "@/lib/page-access";
 import { listInvitations, listMembers } from "@/db/builds";
@@ -15,9 +16,9 @@ export default async function MembersPage({ params }: { params: Promise<{ buildI
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/members" />
-      <main className="mx-auto max-w-4xl p-6">
+      <Main className="mx-auto max-w-4xl p-6">
         <MembersManager buildId={build.id} me={user.id} canManage={manage} initialMembers={members} initialInvitations={invitations} />
-      </main>
+      </Main>
     </>
   );
 }

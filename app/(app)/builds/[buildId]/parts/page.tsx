@@ -1,3 +1,4 @@
+import { Main } from "@/components/ui";
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageBuild } from "@/lib/page-access";
@@ -13,9 +14,9 @@ export default async function BuildPartsPage({ params }: { params: Promise<{ bui
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/parts" extra={<Link href="/parts" className="text-sm text-ink-soft hover:underline">My parts →</Link>} />
-      <main className="mx-auto max-w-6xl p-6">
+      <Main className="mx-auto max-w-6xl p-6">
         <PartsLibrary apiBase={`/api/builds/${build.id}/parts`} canEdit={can(role, "edit")} title="Parts library" intro="The parts bought for this aircraft, shared by its members. Suggestions on a joint draw from this library and from each member's own." />
-      </main>
+      </Main>
     </>
   );
 }

@@ -4,7 +4,7 @@ import { BuildNav } from "@/components/BuildNav";
 import { can } from "@/shared/roles";
 import { settingsSchema } from "@/shared/analysis/types";
 import { SettingsForm } from "./SettingsForm";
-import { Card } from "@/components/ui";
+import { Card, Main } from "@/components/ui";
 import { ExportButton } from "@/components/records/ExportButton";
 
 export const metadata: Metadata = { title: "Build settings" };
@@ -15,7 +15,7 @@ export default async function SettingsPage({ params }: { params: Promise<{ build
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/settings" />
-      <main className="mx-auto max-w-4xl space-y-6 p-6">
+      <Main className="mx-auto max-w-4xl space-y-6 p-6">
         {can(role, "manage") ? (
           <Card title="Keep a copy of the whole build">
             <p className="mb-2 text-ink-soft">
@@ -32,7 +32,7 @@ export default async function SettingsPage({ params }: { params: Promise<{ build
           details={{ name: build.name, model: build.model, registration: build.registration ?? "" }}
           settings={settingsSchema.parse(build.analysisSettings ?? {})}
         />
-      </main>
+      </Main>
     </>
   );
 }

@@ -1,3 +1,4 @@
+import { Main } from "@/components/ui";
 import type { Metadata } from "next";
 import { requirePageLinkage } from "@/lib/page-access";
 import { BuildNav } from "@/components/BuildNav";
@@ -14,9 +15,9 @@ export default async function LinkageChecklist({ params, searchParams }: { param
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/checklist" />
-      <main className="mx-auto max-w-5xl p-6">
+      <Main className="mx-auto max-w-5xl p-6">
         <ChecklistScreen buildId={build.id} linkageId={linkage.id} linkageName={linkage.name} revision={rev} canTick={can(role, "comment")} canEdit={can(role, "edit")} />
-      </main>
+      </Main>
     </>
   );
 }

@@ -21,9 +21,9 @@ function Screen({ review, ...props }: Omit<Props, "stored">) {
   if (!review) return <LinkageEditor {...props} />;
   const me: ReviewMe = { ...review, canComment: props.canComment };
   return (
-    <div className="flex h-[calc(100vh-3.5rem)] flex-col">
+    <div className="flex flex-col md:h-[calc(100vh-3.5rem)]">
       <EditorReviewBar buildId={props.buildId} linkageId={props.linkageId} />
-      <div className="relative min-h-0 flex-1">
+      <div className="relative md:min-h-0 md:flex-1">
         <LinkageEditor {...props} fill reviewSlot={(subject) => <ReviewThread key={`${subject.type}:${subject.id}`} buildId={props.buildId} linkageId={props.linkageId} subject={subject} me={me} />} />
         <ReviewMarkers buildId={props.buildId} linkageId={props.linkageId} />
       </div>

@@ -21,7 +21,7 @@ export const GET = withLinkage("read", { revision: "current" }, async ({ build, 
 export const POST = withLinkage("acknowledge", { revision: "current" }, async ({ req, user, build, linkage, revision: rev }) => {
   const body = await parseBody(req, acknowledgementCreate);
   const finding = reportOf(build, rev).findings.find((f) => f.code === body.code && f.subject.type === body.subject.type && f.subject.id === body.subject.id);
-  if (!finding) throw fieldError("code", `No finding "${body.code}" on that subject in revision ${rev.revision}`);
+  if (!finding) throw fieldError("code", `That finding is not on that part or joint in revision ${rev.revision} (it may have been fixed); reload to see the current findings.`);
   const acknowledgement = await createAcknowledgement({
     buildId: build.id,
     linkageId: linkage.id,

@@ -1,0 +1,141 @@
+/**
+ * Every page by screen reader rules and at phone width, in Debian's Chromium: axe-core (from npm) finds no
+ * WCAG 2.0 / 2.1 / 2.2 A or AA violation at 1366 and 390 px wide, signed in as the demo's owner, reviewer and
+ * site admin (and signed out on the sign-in pages); and no page is wider than a 390 px screen
+ * (document.documentElement.scrollWidth). Every page starts with a skip link to its main landmark.
+ */
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import { afterAll, beforeAll, describe, expect, it } from "vitest";
+import type { Browser, BrowserContext, Page } from "playwright-core";
+import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
+import { testDb } from "../support/db";
+import { DEMO_BUILD, DEMO_USERS } from "@/db/demo-accounts";
+
+const AXE = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
+const TAGS = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22a", "wcag22aa"];
+const WIDTHS = [1366, 390] as const;
+
+let browser: Browser;
+let buildId: string;
+let linkageId: string;
+
+type Violation = { id: string; impact: string; help: string; nodes: { target: string[]; failureSummary?: string }[] };
+
+/** Loads a page, waits until it has settled (the editor until its view is drawn), runs axe, measures the width. */
+async function check(page: Page, url: string) {
+  await page.goto(`${APP_URL}${url}`, { waitUntil: "networkidle" });
+  if (url.includes("/linkages/")) {
+    await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
+    await page.waitForFunction(() => document.querySelector("[data-testid=run-list]") || document.querySelector("[data-testid=canvas][data-view=ready]"), null, { timeout: 15_000 });
+  }
+  await page.evaluate(AXE);
+  const violations = (await page.evaluate(
+    (tags) =>
+      // @ts-expect-error axe is the script evaluated above
+      window.axe.run(document, { runOnly: { type: "tag", values: tags }, resultTypes: ["violations"] }).then((r: { violations: Violation[] }) =>
+        r.violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.slice(0, 5).map((n) => ({ target: n.target, failureSummary: n.failureSummary })) })),
+      ),
+    TAGS,
+  )) as Violation[];
+  const widths = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, view: window.innerWidth }));
+  const skip = await page.evaluate(() => {
+    const a = document.querySelector("a.skip-link");
+    return { first: document.body.querySelector("a, button, input, select, textarea, [tabindex]") === a, target: !!document.getElementById("main") };
+  });
+  return { violations, widths, skip };
+}
+
+async function signedIn(email: string, password: string, width: number): Promise<{ ctx: BrowserContext; page: Page }> {
+  const ctx = await browser.newContext({ viewport: { width, height: width < 500 ? 844 : 900 }, hasTouch: width < 500, isMobile: width < 500 });
+  const page = await ctx.newPage();
+  await signInPage(page, email, password);
+  return { ctx, page };
+}
+
+beforeAll(async () => {
+  browser = await launchBrowser();
+  const b = await testDb("builds").where({ name: DEMO_BUILD.name }).orderBy("created_at").first("id");
+  buildId = b.id;
+  const l = await testDb("linkages").where({ build_id: buildId }).orderBy("created_at").first("id");
+  linkageId = l.id;
+});
+afterAll(async () => { await browser?.close(); await testDb.destroy(); });
+
+const buildPages = () => ["", "/log", "/files", "/hardware", "/parts", "/checklist", `/checklist/${linkageId}`, "/members", "/settings", "/activity", `/linkages/${linkageId}`].map((p) => `/builds/${buildId}${p}`);
+
+const ROLES = [
+  { who: "owner", user: DEMO_USERS[0], pages: () => ["/builds", "/builds/new", "/parts", ...buildPages()] },
+  { who: "reviewer", user: DEMO_USERS[1], pages: () => ["/builds", ...buildPages()] },
+  { who: "site admin", user: DEMO_USERS[3], pages: () => ["/builds", "/admin/users", "/admin/mail", "/parts"] },
+];
+
+describe("axe-core and phone width on every page", () => {
+  for (const width of WIDTHS) {
+    for (const role of ROLES) {
+      it(`as the ${role.who} at ${width} px: no WCAG A/AA violation, nothing wider than the screen, a skip link first`, async () => {
+        const { ctx, page } = await signedIn(role.user.email, role.user.password, width);
+        const problems: string[] = [];
+        try {
+          for (const url of role.pages()) {
+            const r = await check(page, url);
+            for (const v of r.violations) problems.push(`${url}: ${v.id} (${v.impact}) ${v.help} — ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+            if (r.widths.scroll > r.widths.view) problems.push(`${url}: ${r.widths.scroll} px wide in a ${r.widths.view} px window`);
+            if (!r.skip.first || !r.skip.target) problems.push(`${url}: the skip link is not the first stop, or there is no #main`);
+            if (width === 390 && problems.some((p) => p.startsWith(url))) await shot(page, `a11y-${role.who.replace(" ", "-")}-${width}-${url.split("/").slice(3).join("-") || "home"}`);
+          }
+        } finally {
+          await ctx.close();
+        }
+        expect(problems).toEqual([]);
+      }, 240_000);
+    }
+  }
+
+  it("signed out, the sign-in and sign-up pages at both widths", async () => {
+    const problems: string[] = [];
+    for (const width of WIDTHS) {
+      const ctx = await browser.newContext({ viewport: { width, height: 844 } });
+      const page = await ctx.newPage();
+      for (const url of ["/sign-in", "/sign-up"]) {
+        const r = await check(page, url);
+        for (const v of r.violations) problems.push(`${url}@${width}: ${v.id} ${v.help} — ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+        if (r.widths.scroll > r.widths.view) problems.push(`${url}@${width}: ${r.widths.scroll} px wide`);
+      }
+      await ctx.close();
+    }
+    expect(problems).toEqual([]);
+  }, 60_000);
+
+  it("the check itself works: a planted image without a text alternative and a too-wide box are both caught", async () => {
+    const { ctx, page } = await signedIn(DEMO_USERS[0].email, DEMO_USERS[0].password, 390);
+    await page.goto(`${APP_URL}/builds`);
+    await page.evaluate(() => {
+      const img = document.createElement("img");
+      img.src = "/icon.svg";
+      document.getElementById("main")!.append(img);
+      const wide = document.createElement("div");
+      wide.style.width = "600px";
+      wide.style.height = "1px";
+      document.getElementById("main")!.append(wide);
+    });
+    await page.evaluate(AXE);
+    const ids = (await page.evaluate(() =>
+      // @ts-expect-error axe is the script evaluated above
+      window.axe.run(document, { runOnly: { type: "tag", values: ["wcag2a"] } }).then((r: { violations: { id: string }[] }) => r.violations.map((v) => v.id)),
+    )) as string[];
+    expect(ids).toContain("image-alt");
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeGreaterThan(390);
+    await ctx.close();
+  });
+
+  it("the skip link takes the keyboard past the header to the page's main content", async () => {
+    const { ctx, page } = await signedIn(DEMO_USERS[0].email, DEMO_USERS[0].password, 1366);
+    await page.goto(`${APP_URL}/builds/${buildId}/hardware`);
+    await page.keyboard.press("Tab");
+    expect(await page.evaluate(() => document.activeElement?.textContent)).toMatch(/Skip to the main content/);
+    await page.keyboard.press("Enter");
+    expect(await page.evaluate(() => document.activeElement?.id)).toBe("main");
+    await ctx.close();
+  });
+});
