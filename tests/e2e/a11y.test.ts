@@ -11,6 +11,9 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
 import { testDb } from "../support/db";
 import { DEMO_BUILD, DEMO_USERS } from "@/db/demo-accounts";
+import { analyze } from "@/shared/analysis";
+import { checklistFor } from "@/shared/records/checklist";
+import type { LinkageGraph } from "@/shared/linkage/schema";
 
 const AXE = readFileSync(createRequire(import.meta.url).resolve("axe-core/axe.min.js"), "utf8");
 const TAGS = ["wcag2a", "wcag2aa", "wcag21a", "wcag21aa", "wcag22a", "wcag22aa"];
@@ -19,6 +22,9 @@ const WIDTHS = [1366, 390] as const;
 let browser: Browser;
 let buildId: string;
 let linkageId: string;
+/** Codes and ids that must never reach a person: finding and checklist codes, hyphenated part and joint ids, uuids. */
+let forbidden: string[] = [];
+const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
 
 type Violation = { id: string; impact: string; help: string; nodes: { target: string[]; failureSummary?: string }[] };
 
@@ -38,12 +44,15 @@ async function check(page: Page, url: string) {
       ),
     TAGS,
   )) as Violation[];
+  const text = await page.evaluate(() => document.body.innerText);
+  const codes = forbidden.filter((c) => new RegExp(`(^|[^\\w-])${c}($|[^\\w-])`).test(text));
+  if (UUID.test(text)) codes.push(`an id (${text.match(UUID)![0]})`);
   const widths = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, view: window.innerWidth }));
   const skip = await page.evaluate(() => {
     const a = document.querySelector("a.skip-link");
     return { first: document.body.querySelector("a, button, input, select, textarea, [tabindex]") === a, target: !!document.getElementById("main") };
   });
-  return { violations, widths, skip };
+  return { violations, widths, skip, codes };
 }
 
 async function signedIn(email: string, password: string, width: number): Promise<{ ctx: BrowserContext; page: Page }> {
@@ -59,6 +68,16 @@ beforeAll(async () => {
   buildId = b.id;
   const l = await testDb("linkages").where({ build_id: buildId }).orderBy("created_at").first("id");
   linkageId = l.id;
+  const revs = await testDb("linkages as l").join("linkage_revisions as r", "r.linkage_id", "l.id").where("l.build_id", buildId).select("r.graph");
+  const set = new Set<string>();
+  for (const { graph } of revs as { graph: LinkageGraph }[]) {
+    const report = analyze(graph);
+    for (const f of report.findings) set.add(f.code);
+    for (const i of checklistFor(graph, report)) set.add(i.code);
+    for (const x of [...graph.nodes, ...graph.joints]) if (x.id.includes("-")) set.add(x.id);
+  }
+  forbidden = [...set].filter((c) => c.includes("-")); // a one-word code ("torque") is also a plain word
+  expect(forbidden).toContain("jam-nut-missing");
 });
 afterAll(async () => { await browser?.close(); await testDb.destroy(); });
 
@@ -73,13 +92,14 @@ const ROLES = [
 describe("axe-core and phone width on every page", () => {
   for (const width of WIDTHS) {
     for (const role of ROLES) {
-      it(`as the ${role.who} at ${width} px: no WCAG A/AA violation, nothing wider than the screen, a skip link first`, async () => {
+      it(`as the ${role.who} at ${width} px: no WCAG A/AA violation, nothing wider than the screen, a skip link first, no code or id shown`, async () => {
         const { ctx, page } = await signedIn(role.user.email, role.user.password, width);
         const problems: string[] = [];
         try {
           for (const url of role.pages()) {
             const r = await check(page, url);
             for (const v of r.violations) problems.push(`${url}: ${v.id} (${v.impact}) ${v.help} — ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
+            if (r.codes.length) problems.push(`${url}: shows ${r.codes.join(", ")} to a person`);
             if (r.widths.scroll > r.widths.view) problems.push(`${url}: ${r.widths.scroll} px wide in a ${r.widths.view} px window`);
             if (!r.skip.first || !r.skip.target) problems.push(`${url}: the skip link is not the first stop, or there is no #main`);
             if (width === 390 && problems.some((p) => p.startsWith(url))) await shot(page, `a11y-${role.who.replace(" ", "-")}-${width}-${url.split("/").slice(3).join("-") || "home"}`);
