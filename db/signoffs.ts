@@ -4,8 +4,9 @@ import { db } from "./index";
 import { audit } from "./audit";
 import { person, personName } from "./people";
 import type { Signoff } from "@/shared/schemas/signoffs";
+import { recordFingerprint } from "@/lib/record-fingerprint";
 
-type SignoffRow = { id: string; linkage_id: string; revision: number; reviewer_id: string | null; reviewer_name: string | null; statement: string; created_at: Date };
+type SignoffRow = { id: string; linkage_id: string; revision: number; reviewer_id: string | null; reviewer_name: string | null; statement: string; created_at: Date; record_fingerprint: string | null };
 const toSignoff = (r: SignoffRow, current: number): Signoff => ({
   id: r.id,
   revision: r.revision,
@@ -13,6 +14,7 @@ const toSignoff = (r: SignoffRow, current: number): Signoff => ({
   statement: r.statement,
   createdAt: r.created_at.toISOString(),
   stale: r.revision < current,
+  fingerprint: r.record_fingerprint,
 });
 
 export async function listSignoffs(linkageId: string, currentRevision: number) {
@@ -25,8 +27,17 @@ export async function listSignoffs(linkageId: string, currentRevision: number) {
   return rows.map((r: SignoffRow) => toSignoff(r, currentRevision));
 }
 
-export async function createSignoff(s: { buildId: string; linkageId: string; revision: number; reviewerId: string; statement: string }) {
-  const [row] = await db("signoffs").insert({ linkage_id: s.linkageId, revision: s.revision, reviewer_id: s.reviewerId, statement: s.statement }).returning("id");
+/** Records a sign-off with the fingerprint of what it signs (lib/record-fingerprint.ts), in one transaction. */
+export async function createSignoff(s: { buildId: string; linkageId: string; revision: number; reviewerId: string; statement: string; graph: unknown }) {
+  const row = await db.transaction(async (trx) => {
+    const [r] = await trx("signoffs").insert({ linkage_id: s.linkageId, revision: s.revision, reviewer_id: s.reviewerId, statement: s.statement }).returning(["id", "created_at"]);
+    const fp = recordFingerprint({
+      buildId: s.buildId, linkageId: s.linkageId, revision: s.revision, graph: s.graph,
+      signoff: { id: r.id, reviewerId: s.reviewerId, statement: s.statement, signedAt: new Date(r.created_at).toISOString() },
+    });
+    await trx("signoffs").where({ id: r.id }).update({ record_fingerprint: fp });
+    return r as { id: string };
+  });
   await audit({ buildId: s.buildId, userId: s.reviewerId, action: "linkage.signoff", detail: { linkageId: s.linkageId, revision: s.revision } });
   return (await listSignoffs(s.linkageId, s.revision)).find((x) => x.id === row.id)!;
 }
@@ -68,4 +79,35 @@ export async function reviewSummaryForBuild(buildId: string) {
     out[r.linkage_id].signoff = { revision: r.revision, reviewerName: personName(r.reviewer_name), at: r.created_at.toISOString(), stale: r.revision < r.current_revision };
   }
   return out;
+}
+
+/** The newest sign-off of one revision, if any. */
+export async function signoffOfRevision(linkageId: string, revision: number, currentRevision: number) {
+  const r = await db("signoffs as s").leftJoin("users as u", "u.id", "s.reviewer_id").where({ "s.linkage_id": linkageId, "s.revision": revision }).orderBy("s.created_at", "desc").first("s.*", "u.name as reviewer_name");
+  return r ? toSignoff(r as SignoffRow, currentRevision) : null;
+}
+
+/**
+ * What a record's fingerprint names: the signed revision, its linkage and build, who signed and when, and
+ * whether it still covers the linkage as it is (no later revision, linkage not deleted). Null when no
+ * sign-off has that fingerprint.
+ */
+export async function signedRevisionByFingerprint(fingerprint: string) {
+  const r = await db("signoffs as s")
+    .join("linkages as l", "l.id", "s.linkage_id")
+    .join("builds as b", "b.id", "l.build_id")
+    .leftJoin("users as u", "u.id", "s.reviewer_id")
+    .where("s.record_fingerprint", fingerprint)
+    .first("s.revision", "s.created_at", "u.name as reviewer_name", "l.name as linkage_name", "l.current_revision", "b.name as build_name", "b.registration");
+  if (!r) return null;
+  return {
+    buildName: r.build_name as string,
+    registration: (r.registration as string | null) ?? null,
+    linkageName: r.linkage_name as string,
+    revision: r.revision as number,
+    signedBy: personName(r.reviewer_name),
+    signedAt: new Date(r.created_at).toISOString(),
+    currentRevision: r.current_revision as number,
+    current: r.revision === r.current_revision,
+  };
 }

@@ -10,6 +10,12 @@ import type { Tick } from "@/db/checklist";
 import type { Build } from "@/db/builds";
 import type { Linkage } from "@/db/linkages";
 import type { ChecklistItem } from "@/shared/records/checklist";
+import type { Joint, LinkageGraph } from "@/shared/linkage/schema";
+import type { AckLike, FindingState } from "@/shared/review/hazards";
+import { indexById, jointName } from "@/shared/linkage/names";
+import { jointParts } from "@/shared/records/hardware";
+import { findingTitle } from "@/shared/analysis/finding-title";
+import { groupFingerprint } from "./record-fingerprint";
 import { CAUTION_TEXT } from "@/shared/caution";
 import { getObject } from "./storage";
 import { printable, wrapText } from "./pdf-wrap";
@@ -92,6 +98,11 @@ class Doc {
     }
     this.y -= o.gap ?? 2;
   }
+  /** A section heading, kept with at least the start of what follows it. */
+  heading(t: string) {
+    this.ensure(70);
+    this.text(t, { size: 12, bold: true, gap: 3 });
+  }
   rule() {
     this.ensure(8);
     this.page.drawLine({ start: { x: M, y: this.y - 3 }, end: { x: PAGE.w - M, y: this.y - 3 }, thickness: 0.5, color: SOFT });
@@ -108,12 +119,17 @@ class Doc {
     const cellW = (PAGE.w - 2 * M - gap * (perRow - 1)) / perRow;
     for (let i = 0; i < imgs.length; i += perRow) {
       const row = imgs.slice(i, i + perRow);
-      const sized = row.map((r, k) => ({ ...r, ...this.image(r.img, cellW, cellH, M + k * (cellW + gap)) }));
-      const h = Math.max(...sized.map((s) => s.h)) + 14;
+      // A caption takes up to three lines; a longer one ends in "…" (it says it goes on).
+      const sized = row.map((r, k) => {
+        const all = this.wrap(printable(r.caption, this.font), 7, this.font, cellW);
+        const lines = all.length > 3 ? [...all.slice(0, 2), `${all[2].replace(/.$/, "")}…`] : all;
+        return { ...r, lines, ...this.image(r.img, cellW, cellH, M + k * (cellW + gap)) };
+      });
+      const h = Math.max(...sized.map((s) => s.h + 5 + 9 * Math.max(1, s.lines.length)));
       this.ensure(h);
       sized.forEach((s, k) => {
         s.draw(this.y);
-        this.page.drawText(this.wrap(printable(s.caption, this.font), 7, this.font, cellW)[0] ?? "", { x: M + k * (cellW + gap), y: this.y - s.h - 9, size: 7, font: this.font, color: SOFT });
+        s.lines.forEach((l, i) => this.page.drawText(l, { x: M + k * (cellW + gap), y: this.y - s.h - 9 - 9 * i, size: 7, font: this.font, color: SOFT }));
       });
       this.y -= h + 4;
     }
@@ -253,14 +269,11 @@ export async function logPdf(build: Build, pages: AsyncIterable<LogEntry[]>, cou
   return doc.finish();
 }
 
-export async function checklistPdf(build: Build, linkage: Linkage, revision: number, items: ChecklistItem[], ticks: Tick[]) {
-  const doc = await new Doc(`${build.name} — ${linkage.name} checklist`).init();
-  doc.text(`Inspection checklist — ${linkage.name}`, { size: 18, bold: true, gap: 4 });
-  doc.text(`${build.name}${build.registration ? ` (${build.registration})` : ""} · revision ${revision}${revision !== linkage.revision ? ` (current is ${linkage.revision})` : ""} · printed ${new Date().toISOString().slice(0, 10)}`, { color: SOFT, gap: 6 });
+/** The checklist's items grouped by where they are, each with its box, who ticked it and when, and its source. */
+function drawChecklist(doc: Doc, items: ChecklistItem[], ticks: Tick[]) {
   const byKey = new Map(ticks.map((t) => [`${t.jointId}|${t.code}`, t]));
   const done = items.filter((i) => byKey.get(`${i.jointId}|${i.code}`)?.tickedAt).length;
   doc.text(`${done} of ${items.length} items ticked.`, { size: 10, bold: true, gap: 6 });
-  doc.rule();
   let where = "";
   for (const i of items) {
     if (i.where !== where) {
@@ -280,5 +293,122 @@ export async function checklistPdf(build: Build, linkage: Linkage, revision: num
     doc.text(`${t?.tickedAt ? `Ticked by ${t.tickedBy} on ${t.tickedAt.slice(0, 16).replace("T", " ")} UTC` : "Not ticked — initials: ________  date: ________"} · source: ${i.source.text}`, { size: 7, x: M + 20, color: SOFT, gap: t?.note ? 0 : 5 });
     if (t?.note) doc.text(`Note: ${t.note}`, { size: 8, x: M + 20, gap: 5 });
   }
+}
+
+export async function checklistPdf(build: Build, linkage: Linkage, revision: number, items: ChecklistItem[], ticks: Tick[]) {
+  const doc = await new Doc(`${build.name} — ${linkage.name} checklist`).init();
+  doc.text(`Inspection checklist — ${linkage.name}`, { size: 18, bold: true, gap: 4 });
+  doc.text(`${build.name}${build.registration ? ` (${build.registration})` : ""} · revision ${revision}${revision !== linkage.revision ? ` (current is ${linkage.revision})` : ""} · printed ${new Date().toISOString().slice(0, 10)}`, { color: SOFT, gap: 6 });
+  doc.rule();
+  drawChecklist(doc, items, ticks);
+  return doc.finish();
+}
+
+const SOURCE_WORD: Record<string, string> = { published: "published", commonPractice: "common practice", fromMemory: "recalled value, check it" };
+const SEVERITY_WORD: Record<string, string> = { hazard: "Hazard", caution: "Caution", advisory: "Advisory" };
+
+/** What one signed-off revision's record holds (lib/jobs/kinds.ts "revision-record" gathers it). */
+export type RevisionRecord = {
+  build: Build;
+  linkage: Linkage;
+  revision: number;
+  graph: LinkageGraph;
+  findings: (FindingState & { acknowledgement: (AckLike & { by?: { name: string }; reason?: string }) | null })[];
+  items: ChecklistItem[];
+  ticks: Tick[];
+  photos: { jointId: string; name: string; key: string; thumbKey: string | null }[];
+  picture: { key: string } | null;
+  signoff: { reviewerName: string; statement: string; signedAt: string };
+  fingerprint: string;
+  /** A later revision exists: the sign-off no longer covers the linkage as it is. */
+  superseded: number | null;
+  verifyUrl: string;
+};
+
+/** A joint's hardware in one line: the parts it calls for and the states a reviewer checks. */
+function hardwareLine(j: Joint): string {
+  const parts = jointParts(j).map(([, , text, pn]) => (pn ? `${text} (${pn})` : text));
+  const h = j.hardware;
+  const states: string[] = [];
+  if (h.rodEnd) {
+    states.push(h.jamNut?.fitted ? (h.jamNut.tightened ? "jam nut tightened" : "jam nut fitted, not confirmed tight") : "no jam nut recorded");
+    states.push(h.engagement?.witnessHoleVerified ? "witness hole checked" : "witness hole not checked");
+  }
+  if (h.torque !== undefined) states.push(`torque ${h.torque} in·lbf`);
+  if (h.torqueStripe) states.push("torque stripe applied");
+  if (h.bearing) states.push(`turns on ${h.bearing === "rodEnd" ? "the rod end" : h.bearing === "ballBearing" ? "a ball bearing" : h.bearing === "plainBushing" ? "a plain bushing" : h.bearing === "clevisPin" ? "a clevis pin" : "nothing (fixed)"}`);
+  const all = [...parts, ...states];
+  return all.length ? all.join("; ") : "No hardware recorded.";
+}
+
+/**
+ * The record an inspector keeps of one signed-off revision: its fingerprint, the picture, every joint's
+ * hardware, every finding numbered with its source and acknowledgement, the checklist with who ticked what
+ * and when, the joints' photos as thumbnails, the reviewer's statement and sign-off, and the caution on
+ * every page. The fingerprint is also in the PDF's keywords, where the verification page reads it.
+ */
+export async function revisionRecordPdf(r: RevisionRecord) {
+  const doc = await new Doc(`${r.build.name} — ${r.linkage.name}, revision ${r.revision} record`).init();
+  doc.pdf.setSubject(`Record of a signed-off revision. Fingerprint ${r.fingerprint}`);
+  doc.pdf.setKeywords([`linkwright-record-fingerprint:${r.fingerprint}`]);
+  doc.text(`Revision record — ${r.linkage.name}, revision ${r.revision}`, { size: 18, bold: true, gap: 4 });
+  doc.text(`${r.build.name}${r.build.registration ? ` (${r.build.registration})` : ""} · ${r.build.model || "model not set"} · printed ${new Date().toISOString().slice(0, 10)}`, { color: SOFT, gap: 6 });
+  doc.text(`Signed off by ${r.signoff.reviewerName} on ${r.signoff.signedAt.slice(0, 16).replace("T", " ")} UTC.`, { size: 11, bold: true, gap: 2 });
+  doc.text(r.superseded ? `Superseded: the linkage has since changed (revision ${r.superseded} is current); this sign-off covers revision ${r.revision} only.` : "This is the linkage's current revision.", { size: 9, color: r.superseded ? HAZARD : INK, gap: 4 });
+  doc.text("Fingerprint of the signed revision", { size: 8, color: SOFT, gap: 0 });
+  doc.text(groupFingerprint(r.fingerprint), { size: 10, bold: true, gap: 1 });
+  doc.text(`Check this record: open ${r.verifyUrl} and upload this PDF or type the fingerprint.`, { size: 8, color: SOFT, gap: 6 });
+  doc.rule();
+
+  doc.heading("Picture");
+  const pic = r.picture ? await embedStored(doc, r.picture.key, 1000) : null;
+  if (pic) doc.images([{ img: pic, caption: `${r.linkage.name} — revision ${r.revision}, as kept from the editor` }], 1, 300);
+  else doc.text("No picture was kept for this revision (the editor's \"Keep for the log\").", { size: 9, color: SOFT, gap: 4 });
+  doc.rule();
+
+  const nodes = indexById(r.graph.nodes);
+  doc.heading(`Joints and their hardware (${r.graph.joints.length})`);
+  if (!r.graph.joints.length) doc.text("This revision has no joints.", { size: 9, color: SOFT });
+  for (const j of r.graph.joints) {
+    doc.ensure(30);
+    doc.text(jointName(j, nodes), { size: 9, bold: true, gap: 0 });
+    doc.text(hardwareLine(j), { size: 8, x: M + 10, gap: 4 });
+  }
+  doc.rule();
+
+  doc.heading(`Findings (${r.findings.length})`);
+  if (!r.findings.length) doc.text("The load-path check found nothing in this revision.", { size: 9, color: SOFT });
+  r.findings.forEach((f, i) => {
+    doc.ensure(40);
+    doc.text(`${i + 1}. ${SEVERITY_WORD[f.severity] ?? f.severity} — ${findingTitle(f.code)} — ${f.subjectName}`, { size: 9, bold: true, color: f.severity === "hazard" ? HAZARD : INK, gap: 0 });
+    doc.text(f.message, { size: 8, x: M + 10, gap: 0 });
+    doc.text(`Source: ${SOURCE_WORD[f.source.kind] ?? f.source.kind} — ${f.source.text}`, { size: 7, x: M + 10, color: SOFT, gap: 0 });
+    const a = f.acknowledgement;
+    doc.text(a ? `Acknowledged by ${a.by?.name ?? "a reviewer"} on ${a.createdAt.slice(0, 10)}: ${a.reason ?? ""}` : f.severity === "hazard" ? "Not acknowledged." : "No acknowledgement needed for a sign-off.", { size: 8, x: M + 10, gap: 5 });
+  });
+  doc.rule();
+
+  doc.heading("Checklist");
+  drawChecklist(doc, r.items, r.ticks);
+  doc.rule();
+
+  doc.heading(`Photos of the joints (${r.photos.length})`);
+  const joints = indexById(r.graph.joints);
+  const shots = await pool(r.photos, 6, async (p) => {
+    const bytes = await getObject(p.thumbKey ?? p.key);
+    if (!bytes) return null;
+    const img = await doc.pdf.embedJpg(bytes[0] === 0xff && bytes[1] === 0xd8 ? new Uint8Array(bytes) : await reencoded(bytes, 320));
+    const j = joints.get(p.jointId);
+    return { img, caption: `${j ? jointName(j, nodes) : "a joint no longer in the drawing"} — ${p.name}` };
+  });
+  const found = shots.filter((x): x is { img: PDFImage; caption: string } => !!x);
+  if (found.length) doc.images(found, 3, 140);
+  else doc.text("No photos attached to this linkage's joints.", { size: 9, color: SOFT });
+  if (found.length < r.photos.length) doc.text(`${r.photos.length - found.length} photo(s) could not be read from storage.`, { size: 8, color: HAZARD });
+  doc.rule();
+
+  doc.heading("Reviewer's statement");
+  doc.text(r.signoff.statement, { size: 10, gap: 4 });
+  doc.text(`— ${r.signoff.reviewerName}, ${r.signoff.signedAt.slice(0, 10)} · revision ${r.revision} · fingerprint ${groupFingerprint(r.fingerprint)}`, { size: 8, color: SOFT });
   return doc.finish();
 }

@@ -16,7 +16,8 @@ const mb = (b: number) => (b < 1e6 ? `${Math.max(1, Math.round(b / 1e3))} kB` : 
  */
 export function ExportButton(p: { buildId: string; kind: ExportKind; params: object; estimateUrl?: string; testId?: string; children: React.ReactNode }) {
   const base = `/api/builds/${p.buildId}/exports`;
-  const memo = `lw-export:${p.buildId}:${p.kind}`;
+  // One remembered job per kind and parameters (a record of revision 3 is not the one of revision 2).
+  const memo = `lw-export:${p.buildId}:${p.kind}:${JSON.stringify(p.params)}`;
   const [jobId, setJobId] = useState<string | null>(null);
   const [asking, setAsking] = useState(false);
   useEffect(() => setJobId(window.localStorage.getItem(memo)), [memo]);

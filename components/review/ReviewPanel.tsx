@@ -9,6 +9,7 @@ import { showValue, type ChangedItem, type GraphDiff } from "@/shared/review/dif
 import { useAcknowledgements, useDiff, useNotify, useReviewActions, useRevisions, useSignoffs } from "./api";
 import type { ReviewMe } from "./ReviewThread";
 import { SignoffBadge } from "./SignoffBadge";
+import { ExportButton } from "@/components/records/ExportButton";
 
 const when = (iso: string) => new Date(iso).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" });
 const box = "w-full rounded border border-ink/20 bg-white px-2 py-1 text-[12px] text-ink focus:border-advisory focus:outline-none";
@@ -34,11 +35,19 @@ function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId
             <li key={x.id} data-testid="signoff-item" data-stale={x.stale ? "yes" : "no"} className={x.stale ? "text-ink-soft line-through decoration-ink/30" : ""}>
               r{x.revision} · {x.reviewer.name} · {when(x.createdAt)}
               <span className="block whitespace-pre-wrap no-underline" style={{ textDecoration: "none" }}>&ldquo;{x.statement}&rdquo;</span>
+              {x.fingerprint && (
+                <span className="mt-0.5 block no-underline" style={{ textDecoration: "none" }}>
+                  <ExportButton buildId={buildId} kind="revision-record" params={{ linkageId, revision: x.revision }} testId={`record-pdf-${x.revision}`}>
+                    Record PDF of r{x.revision}
+                  </ExportButton>
+                </span>
+              )}
             </li>
           ))}
           {s.data.signoffs.length > 5 ? (
             <li className="text-ink-soft" data-testid="signoff-more">…and {s.data.signoffs.length - 5} earlier sign-off{s.data.signoffs.length - 5 === 1 ? "" : "s"}, in the revision history.</li>
           ) : null}
+          <li><a href="/verify" className="text-advisory underline" target="_blank" rel="noreferrer">Check a record PDF against the signed revisions</a></li>
         </ul>
       )}
       {blocking.length > 0 && (

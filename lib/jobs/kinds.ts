@@ -117,4 +117,43 @@ export const KINDS: { [K in ExportKind]: Kind<K> } = {
       return { file: a.file, size: a.size, cleanup: a.cleanup, contentType: "application/x-tar", filename: `${slug(build.name)}-archive-${new Date().toISOString().slice(0, 10)}.tar` };
     },
   },
+  "revision-record": {
+    async prepare(build, p) {
+      const linkage = await getLinkage(build.id, p.linkageId);
+      if (!linkage) throw fieldError("params.linkageId", "not a linkage of this build", "That linkage is not in this build.");
+      if (!(await getRevision(linkage.id, p.revision))) throw fieldError("params.revision", "no such revision", "That linkage has no such revision.");
+      const { signoffOfRevision } = await import("@/db/signoffs");
+      if (!(await signoffOfRevision(linkage.id, p.revision, linkage.revision)))
+        throw fieldError("params.revision", "not signed off", `Revision ${p.revision} of ${linkage.name} has no sign-off yet: a record is made of a signed-off revision.`);
+      return { label: `Revision record PDF — ${linkage.name}, revision ${p.revision}`, estimatedBytes: null };
+    },
+    async run({ build, params: p, progress }) {
+      const [{ signoffOfRevision }, { listAcknowledgements }, { listTicks }, { listJointPhotos, getRevisionPictureRow }, { checklistFor }, { revisionRecordPdf }, { analyze }, { findingStates }, { appUrl }] = await Promise.all([
+        import("@/db/signoffs"), import("@/db/acknowledgements"), import("@/db/checklist"), import("@/db/files"), import("@/shared/records/checklist"), import("@/lib/records-pdf"), import("@/shared/analysis"), import("@/shared/review/hazards"), import("@/lib/urls"),
+      ]);
+      const linkage = await getLinkage(build.id, p.linkageId);
+      if (!linkage) throw new ExportFailure("The linkage was deleted before its record could be made.");
+      const rev = await getRevision(linkage.id, p.revision);
+      if (!rev) throw new ExportFailure(`Revision ${p.revision} of ${linkage.name} no longer exists.`);
+      const signoff = await signoffOfRevision(linkage.id, rev.revision, linkage.revision);
+      if (!signoff?.fingerprint) throw new ExportFailure(`Revision ${rev.revision} of ${linkage.name} has no sign-off with a fingerprint.`);
+      await progress(0.2, "Reading the findings, acknowledgements and ticks");
+      const report = rev.analysis ?? analyze(rev.graph, build.analysisSettings);
+      const [acks, ticks, photos, picture] = await Promise.all([listAcknowledgements(linkage.id), listTicks(linkage.id, rev.revision), listJointPhotos(build.id, linkage.id), getRevisionPictureRow(build.id, linkage.id, rev.revision)]);
+      const keys = await (await import("@/db/files")).fileKeys(build.id, photos.map((x) => x.id));
+      await progress(0.4, `Laying out ${rev.graph.joints.length} joints and ${photos.length} photos`);
+      const bytes = await revisionRecordPdf({
+        build, linkage, revision: rev.revision, graph: rev.graph,
+        findings: findingStates(report, rev.graph, acks) as never,
+        items: checklistFor(rev.graph, report), ticks,
+        photos: photos.filter((x) => x.kind !== "pdf" && keys.has(x.id)).map((x) => ({ jointId: x.jointId, name: x.name, key: keys.get(x.id)!.key, thumbKey: keys.get(x.id)!.thumbKey })),
+        picture: picture ? { key: picture.key } : null,
+        signoff: { reviewerName: signoff.reviewer.name, statement: signoff.statement, signedAt: signoff.createdAt },
+        fingerprint: signoff.fingerprint,
+        superseded: rev.revision < linkage.revision ? linkage.revision : null,
+        verifyUrl: `${appUrl()}/verify`,
+      });
+      return { body: Buffer.from(bytes), contentType: "application/pdf", filename: `${slug(build.name)}-${slug(linkage.name)}-rev${rev.revision}-record.pdf` };
+    },
+  },
 };

@@ -6,7 +6,7 @@ import { z } from "zod";
 import { logFilter } from "./log";
 import { isoTime, pageFields, REVISION_MAX } from "./common";
 
-export const EXPORT_KINDS = ["log-pdf", "checklist-pdf", "hardware-csv", "build-archive"] as const;
+export const EXPORT_KINDS = ["log-pdf", "checklist-pdf", "hardware-csv", "build-archive", "revision-record"] as const;
 export type ExportKind = (typeof EXPORT_KINDS)[number];
 
 export const exportParams = {
@@ -17,6 +17,11 @@ export const exportParams = {
   }).strict(),
   "hardware-csv": z.object({}).strict(),
   "build-archive": z.object({}).strict(),
+  /** The inspector's record of one signed-off revision (the newest sign-off of it). */
+  "revision-record": z.object({
+    linkageId: z.string({ error: "linkageId is required" }).uuid("linkageId must be a linkage id"),
+    revision: z.number({ error: "revision is required" }).int().min(1).max(REVISION_MAX),
+  }).strict(),
 } satisfies Record<ExportKind, z.ZodTypeAny>;
 
 export const exportRequest = z.discriminatedUnion("kind", [
@@ -24,6 +29,7 @@ export const exportRequest = z.discriminatedUnion("kind", [
   z.object({ kind: z.literal("checklist-pdf"), params: exportParams["checklist-pdf"] }),
   z.object({ kind: z.literal("hardware-csv"), params: exportParams["hardware-csv"].default({}) }),
   z.object({ kind: z.literal("build-archive"), params: exportParams["build-archive"].default({}) }),
+  z.object({ kind: z.literal("revision-record"), params: exportParams["revision-record"] }),
 ], { error: `kind is one of ${EXPORT_KINDS.join(", ")}` });
 export type ExportRequest = z.infer<typeof exportRequest>;
 

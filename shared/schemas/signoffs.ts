@@ -12,6 +12,8 @@ export const signoff = z.object({
   createdAt: isoTime,
   /** A later revision exists: the sign-off no longer covers the linkage as it is. */
   stale: z.boolean(),
+  /** The fingerprint printed on the revision's record PDF (lib/record-fingerprint.ts). */
+  fingerprint: z.string().nullable(),
 });
 export type Signoff = z.infer<typeof signoff>;
 export const signoffStatus = z.object({ state: z.enum(["none", "signed", "stale"]), latest: signoff.nullable() });

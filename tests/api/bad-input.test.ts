@@ -39,6 +39,7 @@ const NO_BODY = new Set([
   "POST /api/invitations/[token]", // no body
   "POST /api/builds/[buildId]/exports/[jobId]/retry", // no body: retries the job the path names
   "PATCH /api/admin/users/[userId]", // tests/api/admin.test.ts (needs a site admin)
+  "POST /api/verify/file", // an upload, not JSON: a text file, a PDF that is no record and an unreadable one in tests/api/revision-record.test.ts
 ]);
 
 let owner: Client;

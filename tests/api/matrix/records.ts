@@ -4,7 +4,16 @@ import { demoPitchLinkage } from "@/shared/demo";
 import { testDb } from "../../support/db";
 import { fixtureFile, putTestObject, testImage, upload, uploadRaw } from "../../support/upload";
 import type { Client } from "../../support/http";
-import { edit, comment, read, signedIn, type BadInput, type Ctx, type Row } from "./types";
+import { anyone, edit, comment, read, signedIn, type BadInput, type Ctx, type Row } from "./types";
+import { PDFDocument } from "pdf-lib";
+
+/** A PDF with a record fingerprint in its keywords that names no sign-off: checked, and answered "no match". */
+async function unknownRecord() {
+  const d = await PDFDocument.create();
+  d.addPage();
+  d.setKeywords([`linkwright-record-fingerprint:${"0".repeat(64)}`]);
+  return Buffer.from(await d.save());
+}
 
 const B = (c: Ctx) => `/api/builds/${c.buildId}`;
 const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
@@ -74,6 +83,8 @@ export const rows: Record<string, Row> = {
   "GET /api/builds/[buildId]/exports/[jobId]":            { expect: read, path: (c) => `${B(c)}/exports/${c.x.job}`, prepare: exportJob("done") },
   "POST /api/builds/[buildId]/exports/[jobId]/retry":     { expect: read202, path: (c) => `${B(c)}/exports/${c.x.job}/retry`, prepare: exportJob("failed") },
   "GET /api/builds/[buildId]/exports/[jobId]/download":   { expect: read, path: (c) => `${B(c)}/exports/${c.x.job}/download`, prepare: exportJob("done") },
+  "POST /api/verify":                                     { expect: anyone(200), path: () => "/api/verify", body: () => ({ fingerprint: "0".repeat(64) }) },
+  "POST /api/verify/file":                                { expect: anyone(200), path: () => "/api/verify/file", send: async (cl) => upload(cl, "/api/verify/file", { bytes: await unknownRecord(), name: "record.pdf", type: "application/pdf" }) },
   "GET /api/parts":                                       { expect: signedIn(200), path: () => "/api/parts" },
   "POST /api/parts":                                      { expect: signedIn(201), path: () => "/api/parts", body: () => rodEnd() },
   "PUT /api/parts/[partId]":                              { expect: signedIn(200), path: () => "", prepare: personalParts, send: (cl, c) => asOwnPart(cl, c, "PUT", rodEnd()) },
@@ -116,6 +127,7 @@ export const badInput: BadInput = {
   "PUT /api/builds/[buildId]/parts/[partId]": { path: (c) => `${B(c)}/parts/${someId}`, bodies: [[{ ...rodEnd(), spec: "strong" }, "spec"]] },
   "POST /api/builds/[buildId]/parts/import": { path: (c) => `${B(c)}/parts/import`, bodies: [[{}, "csv"]] },
   "PUT /api/builds/[buildId]/hardware": { path: (c) => `${B(c)}/hardware`, bodies: [[{ key: "x", state: "lost" }, "state"], [{ state: "ordered" }, "key"]] },
-  "POST /api/builds/[buildId]/exports": { path: (c) => `${B(c)}/exports`, bodies: [[{ kind: "zip" }, "kind"], [{ kind: "log-pdf", params: { from: "soon" } }, "params.from"], [{ kind: "checklist-pdf", params: {} }, "params.linkageId"], [{ kind: "checklist-pdf", params: { linkageId: someId } }, "params.linkageId"], [{ kind: "hardware-csv", params: { extra: 1 } }, "params"]] },
+  "POST /api/builds/[buildId]/exports": { path: (c) => `${B(c)}/exports`, bodies: [[{ kind: "zip" }, "kind"], [{ kind: "log-pdf", params: { from: "soon" } }, "params.from"], [{ kind: "checklist-pdf", params: {} }, "params.linkageId"], [{ kind: "checklist-pdf", params: { linkageId: someId } }, "params.linkageId"], [{ kind: "hardware-csv", params: { extra: 1 } }, "params"], [{ kind: "revision-record", params: { linkageId: someId } }, "params.revision"], [{ kind: "revision-record", params: { revision: 1 } }, "params.linkageId"]] },
+  "POST /api/verify": { path: () => "/api/verify", bodies: [[{ fingerprint: "abc" }, "fingerprint"], [{}, "fingerprint"], [{ fingerprint: 42 }, "fingerprint"], [{ fingerprint: "0".repeat(64), extra: 1 }, "_"]] },
   "PUT /api/builds/[buildId]/linkages/[linkageId]/checklist": { path: (c) => `${L(c)}/checklist`, bodies: [[{ revision: 1, code: "polish", ticked: true }, "code"], [{ revision: 1, code: "jam-nut" }, "ticked"]] },
 };

@@ -34,7 +34,7 @@ export const POST = withLinkage("signOff", async ({ req, user, build, linkage })
       `${hazards.length} hazard${hazards.length === 1 ? "" : "s"} in revision ${rev.revision} ${hazards.length === 1 ? "has" : "have"} no acknowledgement. Fix ${hazards.length === 1 ? "it" : "them"} or acknowledge with a reason before signing off.`,
       hazards.map((h) => ({ code: h.code, subject: h.subject, subjectName: h.subjectName, message: h.message, lapsed: !!h.lapsed })),
     );
-  const signoff = await createSignoff({ buildId: build.id, linkageId: linkage.id, revision: rev.revision, reviewerId: user.id, statement: body.statement });
+  const signoff = await createSignoff({ buildId: build.id, linkageId: linkage.id, revision: rev.revision, reviewerId: user.id, statement: body.statement, graph: rev.graph });
   await notifySignoff({
     owners: await buildOwners(build.id),
     reviewerId: user.id,
