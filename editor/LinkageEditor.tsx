@@ -12,7 +12,7 @@ import dynamic from "next/dynamic";
 import { useStore } from "zustand";
 import type { ControlSystem, LinkageGraph } from "@/shared/linkage/schema";
 import type { AnalysisSettings } from "@/shared/analysis/types";
-import { analyze } from "@/shared/analysis";
+import type { Report } from "@/shared/analysis/types";
 import { EditorConfigContext, EditorStoreContext } from "./context";
 import { createEditorStore, type EditorStore } from "./store";
 import Canvas, { useFitAll, useFocusSubject } from "./Canvas";
@@ -44,7 +44,7 @@ export type LinkageEditorProps = {
   linkageId: string;
   linkageName: string;
   system: ControlSystem;
-  initial: { revision: number; graph: LinkageGraph; authorName: string; createdAt: string };
+  initial: { revision: number; graph: LinkageGraph; authorName: string; createdAt: string; /** The server's check of this revision with the build's settings. */ report?: Report | null };
   canEdit: boolean;
   canComment: boolean;
   unitSystem: "US" | "SI";
@@ -74,7 +74,7 @@ function ImportErrors({ errors, onDismiss }: { errors: string[]; onDismiss: () =
 }
 
 /** Run `f` on the next frames until it returns true (React commits the selection, React Flow mounts a part). */
-function untilFrame(f: () => boolean, frames = 12) {
+function untilFrame(f: () => boolean, frames = 120) {
   const step = (n: number) => requestAnimationFrame(() => { if (!f() && n > 0) step(n - 1); });
   step(frames);
 }
@@ -245,7 +245,12 @@ export default function LinkageEditor(props: LinkageEditorProps) {
   const [store] = useState(() =>
     createEditorStore(
       { ...props.initial.graph, name: props.initial.graph.name || props.linkageName, system: props.initial.graph.system ?? props.system },
-      { revision: props.initial.revision, readOnly: !props.canEdit, settings: props.settings, analyze, analysisDelay: 120 },
+      {
+        revision: props.initial.revision, readOnly: !props.canEdit, settings: props.settings, analysisDelay: 120,
+        // The engine is fetched on the first change; until then the findings are the server's report of this revision.
+        initialReport: props.initial.report ?? null,
+        loadAnalyze: () => import("@/shared/analysis").then((m) => m.analyze),
+      },
     ),
   );
   return (

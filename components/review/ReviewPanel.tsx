@@ -202,7 +202,7 @@ function NotifySetting() {
   );
 }
 
-export function ReviewPanel({ buildId, linkageId, me, unresolved }: { buildId: string; linkageId: string; me: ReviewMe; unresolved: Record<string, number> }) {
+export function ReviewPanel({ buildId, linkageId, me, unresolved, names }: { buildId: string; linkageId: string; me: ReviewMe; unresolved: Record<string, number>; names: Record<string, string> }) {
   const openSubjects = Object.entries(unresolved).filter(([k]) => !k.startsWith("linkage:"));
   return (
     <div className="space-y-3 rounded border border-ink/10 bg-white p-2" data-testid="review-panel">
@@ -212,8 +212,8 @@ export function ReviewPanel({ buildId, linkageId, me, unresolved }: { buildId: s
           <p className={heading}>Open threads</p>
           <ul>
             {openSubjects.map(([k, n]) => (
-              <li key={k}>
-                {k.replace(":", " ")} — {n} open
+              <li key={k} data-subject={k}>
+                {names[k] ?? "a part or joint no longer in the drawing"} — {n} open
               </li>
             ))}
           </ul>

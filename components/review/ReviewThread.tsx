@@ -204,7 +204,7 @@ export function ReviewThread({ buildId, linkageId, subject, me }: Props) {
   const what = subject.type === "linkage" ? "the linkage as a whole" : `this ${subject.type === "joint" ? "joint" : "part"}`;
   return (
     <section data-testid="review-thread" data-subject={`${subject.type}:${subject.id}`} className="space-y-2 text-ink">
-      {subject.type === "linkage" && <ReviewPanel buildId={buildId} linkageId={linkageId} me={me} unresolved={comments.unresolved} />}
+      {subject.type === "linkage" && <ReviewPanel buildId={buildId} linkageId={linkageId} me={me} unresolved={comments.unresolved} names={comments.unresolvedNames} />}
       <h4 className="flex items-center gap-2 text-[12px] font-semibold">
         Review of {what}
         <span data-testid="review-open-count" data-count={open} className={`rounded-full px-1.5 text-[10px] ${open ? "bg-caution/15 text-caution" : "bg-ink/5 text-ink-soft"}`}>

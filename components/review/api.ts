@@ -35,7 +35,7 @@ export function useComments(buildId: string, linkageId: string, subject: Subject
     getNextPageParam: (last) => last.nextCursor ?? undefined,
   });
   const first = q.data?.pages[0];
-  return { ...q, comments: q.data?.pages.flatMap((p) => p.comments) ?? [], total: first?.total ?? 0, unresolved: first?.unresolved ?? {} };
+  return { ...q, comments: q.data?.pages.flatMap((p) => p.comments) ?? [], total: first?.total ?? 0, unresolved: first?.unresolved ?? {}, unresolvedNames: first?.unresolvedNames ?? {} };
 }
 
 /** Open threads per subject key ("joint:j1" → 2), for markers on the canvas and the review bar (counted over every thread). */

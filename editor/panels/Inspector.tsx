@@ -1,181 +1,19 @@
 "use client";
 /** The right-hand inspector: the node properties form or the joint card of the selection, with its findings. */
-import { useCallback, useMemo, useState } from "react";
-import { z } from "zod";
-import { hardwareSchema, nodeSchema, type NodeKind } from "@/shared/linkage/schema";
-import { AN_BOLTS_BY_SIZE } from "@/shared/hardware";
-import { useEditorConfig, useEditorStore, useEditorStoreApi, useEditorValue } from "../context";
-import { KIND_NAMES, ROLES } from "@/shared/linkage/kinds";
-import { jointName, partName } from "@/shared/linkage/names";
-import { inputText } from "../units";
-import { KindGlyph } from "../nodes/glyphs";
-import { SchemaForm } from "./SchemaForm";
-import { jointCardSections, nodeSections } from "./specs";
-import { FindingItem, LinkageFindings } from "./Findings";
-import { JointEvidence, SuggestPart, type RecordsTarget } from "./JointExtras";
-import { JointChecks } from "./JointChecks";
-import { ReturnCableOffer } from "./ReturnCableOffer";
-import { CableEndFields } from "./CableEndFields";
+import dynamic from "next/dynamic";
+import { useEditorConfig, useEditorStore } from "../context";
+import { LinkageFindings } from "./Findings";
+import type { RecordsTarget } from "./JointExtras";
+import { CARD_TITLE_ID } from "./card-title";
 
-/** The card's heading: where the focus goes when a part or joint is opened from the canvas or the list. */
-export const CARD_TITLE_ID = "editor-card-title";
+export { CARD_TITLE_ID };
+
+const loadingCard = () => <p className="p-1 text-[12px] text-ink-soft" data-testid="card-loading">Opening the card…</p>;
+/** The cards load when a part or joint is first opened (the form library and photo panel are not in the first load). */
+const NodeInspector = dynamic(() => import("./Cards").then((m) => m.NodeInspector), { ssr: false, loading: loadingCard });
+const JointInspector = dynamic(() => import("./Cards").then((m) => m.JointInspector), { ssr: false, loading: loadingCard });
 
 export type ReviewSlot = (sel: { type: "node" | "joint" | "linkage"; id: string }) => React.ReactNode;
-
-const formSchemas = new Map<NodeKind, z.ZodType>();
-function nodeFormSchema(kind: NodeKind) {
-  let s = formSchemas.get(kind);
-  if (!s) {
-    const opt = nodeSchema.options.find((o) => o.shape.kind.value === kind)!;
-    s = z.object({ label: opt.shape.label, props: opt.shape.props });
-    formSchemas.set(kind, s);
-  }
-  return s;
-}
-
-function SubjectFindings({ subjectKey }: { subjectKey: string }) {
-  const findings = useEditorStore((s) => s.findingsBySubject[subjectKey] ?? []);
-  if (findings.length === 0)
-    return (
-      <p data-testid="subject-findings-none" className="rounded bg-ok/10 px-2 py-1 text-[11px] text-ok">
-        No findings here from the live check.
-      </p>
-    );
-  return (
-    <ul data-testid="subject-findings" className="space-y-1">
-      {findings.map((f, i) => (
-        <FindingItem key={`${f.code}-${i}`} f={f} compact />
-      ))}
-    </ul>
-  );
-}
-
-function NodeInspector({ id }: { id: string }) {
-  const api = useEditorStoreApi();
-  const { unitSystem, readOnly } = useEditorConfig();
-  // Only the kind: the node object changes on every drag frame, and the form must not re-render for moves.
-  const kind = useEditorValue((s) => s.nodes.find((n) => n.id === id)?.kind);
-  const epoch = useEditorValue((s) => s.epoch);
-  const [pending, setPending] = useState(0);
-  const onValid = useCallback(
-    (v: { label: string; props: unknown }) => {
-      setPending(0);
-      api.getState().updateNode(id, v, { coalesce: `node:${id}` });
-    },
-    [api, id],
-  );
-  // The form's starting values only change when the node changes from outside the form.
-  // eslint-disable-next-line react-hooks/exhaustive-deps
-  const value = useMemo(() => {
-    const node = api.getState().nodes.find((n) => n.id === id);
-    return node ? { label: node.label, props: node.props } : null;
-  }, [id, epoch, unitSystem]);
-  const sections = useMemo(() => (kind ? nodeSections(kind) : []), [kind]);
-  const label = useEditorValue((s) => {
-    const n = s.nodes.find((x) => x.id === id);
-    return n ? partName(n) : "";
-  });
-  if (!kind || !value) return null;
-  return (
-    <div className="space-y-2" data-testid="node-form-panel">
-      <h3 id={CARD_TITLE_ID} tabIndex={-1} data-subject={`node:${id}`} className="flex items-center gap-1.5 text-sm font-semibold text-ink">
-        <KindGlyph kind={kind} /> {KIND_NAMES[kind]}
-        <span className="ml-auto min-w-0 truncate text-[11px] font-normal text-ink-soft" data-part-id={id}>{label}</span>
-      </h3>
-      <SubjectFindings subjectKey={`node:${id}`} />
-      <ReturnCableOffer />
-      <SchemaForm
-        key={`${id}:${epoch}:${unitSystem}`}
-        testId="node-form"
-        schema={nodeFormSchema(kind)}
-        sections={sections}
-        value={value as Record<string, unknown>}
-        unitSystem={unitSystem}
-        disabled={readOnly}
-        onValid={onValid as never}
-        onInvalid={setPending}
-      />
-      {pending > 0 && <span className="sr-only">{pending} fields need attention</span>}
-    </div>
-  );
-}
-
-function JointInspector({ id, records }: { id: string; records?: RecordsTarget }) {
-  const api = useEditorStoreApi();
-  const { unitSystem, readOnly } = useEditorConfig();
-  const joint = useEditorStore((s) => s.joints.find((j) => j.id === id));
-  const name = useEditorStore((s) => {
-    const j = s.joints.find((x) => x.id === id);
-    return j ? jointName(j, s.nodes) : "";
-  });
-  const epoch = useEditorStore((s) => s.epoch);
-  // The card's sections follow the two parts' names and kinds (a string, so a drag elsewhere does not rebuild them).
-  const ends = useEditorStore((s) => {
-    const j = s.joints.find((x) => x.id === id);
-    if (!j) return "";
-    const a = s.nodes.find((n) => n.id === j.from.node), b = s.nodes.find((n) => n.id === j.to.node);
-    return JSON.stringify([a?.kind, a?.label, b?.kind, b?.label, !!j.hardware.rodEnd]);
-  });
-  const sections = useMemo(() => {
-    const s = api.getState();
-    const j = s.joints.find((x) => x.id === id);
-    return j ? jointCardSections(j, s.nodes) : [];
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [api, id, ends]);
-  const cableEnd = useEditorStore((s) => {
-    const j = s.joints.find((x) => x.id === id);
-    return !!j && [j.from.node, j.to.node].some((n) => { const k = s.nodes.find((x) => x.id === n)?.kind; return !!k && ROLES[k] === "tension"; });
-  });
-  const onValid = useCallback((v: unknown) => api.getState().updateJointHardware(id, v, { coalesce: `joint:${id}` }), [api, id]);
-  // eslint-disable-next-line react-hooks/exhaustive-deps
-  const value = useMemo(() => joint?.hardware ?? null, [id, epoch, unitSystem]);
-  const onFieldChange = useCallback(
-    (path: string, v: string | boolean, set: (p: string, val: string) => void) => {
-      // Picking an AN size fills the shank diameter (and the rod-end thread is left to the builder).
-      if (path === "bolt.size" && typeof v === "string" && v in AN_BOLTS_BY_SIZE) {
-        set("bolt.diameter", inputText(AN_BOLTS_BY_SIZE[v as keyof typeof AN_BOLTS_BY_SIZE].diameter, "length", unitSystem));
-      }
-    },
-    [unitSystem],
-  );
-  if (!joint || !value) return null;
-  return (
-    <div className="space-y-2" data-testid="joint-card">
-      <h3 id={CARD_TITLE_ID} tabIndex={-1} data-subject={`joint:${id}`} className="text-sm font-semibold text-ink">
-        Joint card
-        <span className="block text-[11px] font-normal text-ink-soft">{name}</span>
-      </h3>
-      <SubjectFindings subjectKey={`joint:${id}`} />
-      <ReturnCableOffer />
-      <JointChecks jointId={id} cableEnd={cableEnd} />
-      {records && joint.hardware.rodEnd && <SuggestPart target={records} joint={joint} />}
-      {cableEnd && (
-        <p className="rounded border border-ink/10 bg-paper px-2 py-1 text-[11px] text-ink-soft" data-testid="cable-terminal-note">
-          A cable&apos;s terminal: its end of the cable or turnbuckle is below (kept on that part&apos;s card too). Then record the bolt or clevis pin, nut and washers that hold the terminal.
-        </p>
-      )}
-      <CableEndFields jointId={id} />
-      <SchemaForm
-        key={`${id}:${epoch}:${unitSystem}`}
-        testId="joint-form"
-        schema={hardwareSchema}
-        sections={sections}
-        value={value as Record<string, unknown>}
-        unitSystem={unitSystem}
-        disabled={readOnly}
-        onValid={onValid}
-        onFieldChange={onFieldChange}
-      />
-      {records ? (
-        <JointEvidence target={records} jointId={id} />
-      ) : (
-        <p className="text-[10px] text-ink-soft">
-          Photos: {joint.hardware.photos.length === 0 ? "none attached" : `${joint.hardware.photos.length} attached`}
-        </p>
-      )}
-    </div>
-  );
-}
 
 function LinkageOverview({ linkageName }: { linkageName: string }) {
   const { readOnly } = useEditorConfig();

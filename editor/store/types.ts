@@ -26,6 +26,10 @@ export type EditorOptions = {
   settings?: AnalysisSettings;
   /** The load-path engine; absent = no live findings (tests may inject a fake). */
   analyze?: AnalyzeFn;
+  /** Or the engine fetched on first use (the editor's first load then carries none). */
+  loadAnalyze?: () => Promise<AnalyzeFn>;
+  /** The server's report of the opening revision: shown at once; the engine runs after the first change. */
+  initialReport?: Report | null;
   /** ms after the last structural change before the engine runs; 0 = synchronously. */
   analysisDelay?: number;
   historyLimit?: number;

@@ -43,6 +43,8 @@ export const commentsResponse = z.object({
   ...pageFields,
   /** Open threads per subject ("joint:j1" → 2). */
   unresolved: z.record(z.string(), z.number().int()),
+  /** The same subjects by name ("Aft pushrod B ↔ Elevator horn, attach"). */
+  unresolvedNames: z.record(z.string(), z.string()),
   editMinutes: z.number().int(),
 });
 export const commentPatched = z.object({ comment, thread: comment.nullable().optional() });

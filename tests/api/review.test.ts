@@ -54,6 +54,7 @@ describe("comments", () => {
     expect(list.status).toBe(200);
     expect(list.body.comments.map((x: { body: string }) => x.body)).toEqual(["Is this washer big enough?\nSee https://example.test/washers", "x", "reply to the reply"]);
     expect(list.body.unresolved).toEqual({ [`joint:${DEMO_WRONG_JOINT}`]: 1 });
+    expect(list.body.unresolvedNames).toEqual({ [`joint:${DEMO_WRONG_JOINT}`]: "Aft pushrod B ↔ Elevator horn, attach" }); // names, not ids
     expect((await c.outsider.request("GET", `${L()}/comments`)).status).toBe(404);
   });
 

@@ -24,6 +24,7 @@ let buildId: string;
 let linkageId: string;
 /** Codes and ids that must never reach a person: finding and checklist codes, hyphenated part and joint ids, uuids. */
 let forbidden: string[] = [];
+let commentId: string | null = null;
 const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/i;
 
 type Violation = { id: string; impact: string; help: string; nodes: { target: string[]; failureSummary?: string }[] };
@@ -56,7 +57,7 @@ async function check(page: Page, url: string) {
 }
 
 async function signedIn(email: string, password: string, width: number): Promise<{ ctx: BrowserContext; page: Page }> {
-  const ctx = await browser.newContext({ viewport: { width, height: width < 500 ? 844 : 900 }, hasTouch: width < 500, isMobile: width < 500 });
+  const ctx = await browser.newContext({ viewport: { width, height: width < 500 ? 844 : width < 1000 ? 1180 : 900 }, hasTouch: width < 1000, isMobile: width < 1000 });
   const page = await ctx.newPage();
   await signInPage(page, email, password);
   return { ctx, page };
@@ -76,10 +77,18 @@ beforeAll(async () => {
     for (const i of checklistFor(graph, report)) set.add(i.code);
     for (const x of [...graph.nodes, ...graph.joints]) if (x.id.includes("-")) set.add(x.id);
   }
+  // An open thread on a joint, so the review panel's list of open threads (by name) is on the page too.
+  const reviewer = await testDb("users").where({ email: DEMO_USERS[1].email }).first("id");
+  const [c] = await testDb("comments").insert({ build_id: buildId, linkage_id: linkageId, subject_type: "joint", subject_id: "j-aft-horn", author_id: reviewer.id, body: "Jam nut? (a11y sweep)", revision: 1 }).returning("id");
+  commentId = c.id;
   forbidden = [...set].filter((c) => c.includes("-")); // a one-word code ("torque") is also a plain word
   expect(forbidden).toContain("jam-nut-missing");
 });
-afterAll(async () => { await browser?.close(); await testDb.destroy(); });
+afterAll(async () => {
+  await browser?.close();
+  if (commentId) await testDb("comments").where({ id: commentId }).del();
+  await testDb.destroy();
+});
 
 const buildPages = () => ["", "/log", "/files", "/hardware", "/parts", "/checklist", `/checklist/${linkageId}`, "/members", "/settings", "/activity", `/linkages/${linkageId}`].map((p) => `/builds/${buildId}${p}`);
 
@@ -90,8 +99,9 @@ const ROLES = [
 ];
 
 describe("axe-core and phone width on every page", () => {
-  for (const width of WIDTHS) {
-    for (const role of ROLES) {
+  // Every role at desktop and phone width; the owner on a tablet (820 × 1180) too.
+  for (const width of [...WIDTHS, 820]) {
+    for (const role of width === 820 ? ROLES.slice(0, 1) : ROLES) {
       it(`as the ${role.who} at ${width} px: no WCAG A/AA violation, nothing wider than the screen, a skip link first, no code or id shown`, async () => {
         const { ctx, page } = await signedIn(role.user.email, role.user.password, width);
         const problems: string[] = [];

@@ -1,9 +1,10 @@
-import { describe, expect, it } from "vitest";
+import { describe, expect, it, vi } from "vitest";
 import { createEditorStore, toGraph } from "@/editor/store";
 import { diffGraphs } from "@/shared/review/diff";
 import { emptyGraph, graphSchema, type LinkageGraph } from "@/shared/linkage/schema";
 import { analyze } from "@/shared/analysis";
 import type { Report } from "@/shared/analysis/types";
+import { DEMO_WRONG_JOINT, demoPitchLinkage } from "@/shared/demo";
 
 function counterIds() {
   let i = 0;
@@ -170,6 +171,27 @@ describe("editor store", () => {
     expect(runs).toBe(runsAfterAdd);
     s().undo();
     expect(s().nodes[0].position).toEqual({ x: 0, y: 0 });
+  });
+
+  it("opens on the server's report without its engine, and fetches the engine once on the first change", async () => {
+    const g = demoPitchLinkage();
+    let loads = 0;
+    const store = make(g, {
+      analysisDelay: 0,
+      initialReport: analyze(g),
+      loadAnalyze: async () => { loads++; return analyze; },
+    });
+    const s = () => store.getState();
+    expect(s().badgeBySubject[`joint:${DEMO_WRONG_JOINT}`]).toMatchObject({ worst: "hazard" }); // findings at once
+    s().setSettings(s().settings); // the same settings: nothing to re-check
+    s().select({ type: "node", id: "horn" });
+    s().nudge(10, 0); // a move changes no number
+    expect(loads).toBe(0);
+    const j = s().joints.find((x) => x.id === DEMO_WRONG_JOINT)!;
+    s().updateJointHardware(j.id, { ...j.hardware, jamNut: { fitted: true, tightened: true } });
+    s().updateJointHardware(j.id, { ...j.hardware, jamNut: { fitted: true, tightened: true }, note: "fitted" });
+    await vi.waitFor(() => expect((s().findingsBySubject[`joint:${DEMO_WRONG_JOINT}`] ?? []).some((f) => f.code === "jam-nut-missing")).toBe(false));
+    expect(loads).toBe(1);
   });
 
   it("form edits are validated by the shared schema and coalesced into one step", () => {

@@ -2,7 +2,7 @@
 import dynamic from "next/dynamic";
 import type { ComponentProps } from "react";
 import type LinkageEditorType from "@/editor/LinkageEditor";
-import { ReviewThread, type ReviewMe } from "@/components/review/ReviewThread";
+import type { ReviewMe } from "@/components/review/ReviewThread";
 import { ReviewMarkers } from "@/components/review/ReviewMarkers";
 import { EditorReviewBar } from "@/components/review/EditorReviewBar";
 import { StoredFindings, StoredFindingsContext, type Stored } from "./StoredFindings";
@@ -10,6 +10,12 @@ import { StoredFindings, StoredFindingsContext, type Stored } from "./StoredFind
 // The canvas measures the DOM: render it in the browser only.
 // Until its script is loaded, the findings stored with the revision show in its place (rendered on the server).
 const LinkageEditor = dynamic(() => import("@/editor/LinkageEditor"), { ssr: false, loading: StoredFindings });
+// The review thread (comments, acknowledgements, sign-off) loads beside the editor, not in its first chunks:
+// it waits for its own data from the API anyway.
+const ReviewThread = dynamic(() => import("@/components/review/ReviewThread").then((m) => m.ReviewThread), {
+  ssr: false,
+  loading: () => <p className="p-1 text-[11px] text-ink-soft">Loading the review…</p>,
+});
 
 type Props = ComponentProps<typeof LinkageEditorType> & { review?: Omit<ReviewMe, "canComment">; stored?: Stored };
 

@@ -4,6 +4,7 @@ import { requirePageLinkage } from "@/lib/page-access";
 import { getRevision } from "@/db/linkages";
 import { can } from "@/shared/roles";
 import { settingsSchema } from "@/shared/analysis/types";
+import { analyze } from "@/shared/analysis";
 import { EditorScreen } from "./EditorScreen";
 
 export const metadata: Metadata = { title: "Linkage" };
@@ -13,6 +14,7 @@ export default async function LinkagePage({ params }: { params: Promise<{ buildI
   const { build, role, user, linkage } = await requirePageLinkage(buildId, linkageId, `/builds/${buildId}/linkages/${linkageId}`);
   const rev = await getRevision(linkage.id);
   if (!rev) notFound();
+  const settings = settingsSchema.parse(build.analysisSettings ?? {});
   return (
     <EditorScreen
       buildId={build.id}
@@ -20,11 +22,12 @@ export default async function LinkagePage({ params }: { params: Promise<{ buildI
       linkageId={linkage.id}
       linkageName={linkage.name}
       system={linkage.system}
-      initial={{ revision: rev.revision, graph: rev.graph, authorName: rev.author.name, createdAt: rev.createdAt }}
+      // The check of this revision with the build's settings now, so the editor shows findings before (and without) its engine.
+      initial={{ revision: rev.revision, graph: rev.graph, authorName: rev.author.name, createdAt: rev.createdAt, report: analyze(rev.graph, settings) }}
       canEdit={can(role, "edit")}
       canComment={can(role, "comment")}
       unitSystem={user.unitSystem}
-      settings={settingsSchema.parse(build.analysisSettings ?? {})}
+      settings={settings}
       review={{ userId: user.id, canAcknowledge: can(role, "acknowledge"), canSignOff: can(role, "signOff") }}
       stored={{ revision: rev.revision, findings: rev.analysis?.findings ?? null }}
     />

@@ -6,7 +6,7 @@ import { createComment, getComment, linkageAudience, pageThreads, THREAD_KEYS, u
 import type { Comment } from "@/shared/schemas/comments";
 import { pageBody, readPage } from "@/lib/paging";
 import { subjectExists } from "@/lib/review";
-import { subjectPhrase } from "@/shared/linkage/names";
+import { subjectName, subjectPhrase } from "@/shared/linkage/names";
 import { notifyComment } from "@/lib/review-mail";
 
 const withWindow = (c: Comment) => ({ ...c, editableUntil: new Date(Date.parse(c.createdAt) + COMMENT_EDIT_MINUTES * 60_000).toISOString() });
@@ -15,11 +15,16 @@ const withWindow = (c: Comment) => ({ ...c, editableUntil: new Date(Date.parse(c
  * A page of the linkage's threads (or one subject's: `?subjectType=joint&subjectId=j1`), newest first
  * (`?cursor=&limit=`), each with its replies; `total` threads in all; open-thread counts per subject.
  */
-export const GET = withLinkage("read", async ({ req, linkage }) => {
+export const GET = withLinkage("read", { revision: "current" }, async ({ req, linkage, revision }) => {
   const sp = req.nextUrl.searchParams;
   const subject = sp.has("subjectType") ? parseParams({ type: sp.get("subjectType"), id: sp.get("subjectId") }, subjectSchema) : undefined;
   const [p, unresolved] = await Promise.all([pageThreads(linkage.id, subject, readPage(req, THREAD_KEYS)), unresolvedCounts(linkage.id)]);
-  return json({ ...pageBody("comments", { items: p.items.map(withWindow), next: p.next }, p.total), unresolved, editMinutes: COMMENT_EDIT_MINUTES });
+  // Each subject with open threads by the name a person reads (from the current revision), never its id.
+  const unresolvedNames = Object.fromEntries(Object.keys(unresolved).map((k) => {
+    const [type, ...id] = k.split(":");
+    return [k, subjectName(revision.graph, { type: type as "node" | "joint" | "linkage", id: id.join(":") })];
+  }));
+  return json({ ...pageBody("comments", { items: p.items.map(withWindow), next: p.next }, p.total), unresolved, unresolvedNames, editMinutes: COMMENT_EDIT_MINUTES });
 });
 
 /** A new thread on a node, a joint or the linkage, or a reply (`parentId`) in an existing thread. */
