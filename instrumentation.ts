@@ -1,6 +1,12 @@
-/** Next calls this once when a server instance starts: it starts the export worker beside it (lib/jobs/supervisor.ts). */
+/**
+ * Next calls this once when a server instance starts, before it serves a request: it records each
+ * request's connection address for the sign-in limit (lib/peer-address.ts) and starts the export worker
+ * beside it (lib/jobs/supervisor.ts).
+ */
 export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs" || process.env.NEXT_PHASE === "phase-production-build") return;
+  const { recordPeerAddresses } = await import("./lib/peer-address");
+  recordPeerAddresses();
   const { superviseWorker } = await import("./lib/jobs/supervisor");
   superviseWorker();
 }

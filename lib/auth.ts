@@ -5,13 +5,32 @@ import { getServerSession } from "next-auth";
 import { z } from "zod";
 import { beginAttempt, clearFailures, endSessions, findUserByEmail, findUserById, toPublicUser } from "@/db/users";
 import { checkPassword, checkAgainstNothing } from "./passwords";
+import { clientIp, trustedProxyHops } from "./client-ip";
 
 const credentials = z.object({ email: z.string().trim().email().max(254), password: z.string().min(1).max(200) });
 
-function clientIp(headers: Record<string, unknown> | undefined): string {
-  const fwd = headers?.["x-forwarded-for"];
-  const first = typeof fwd === "string" ? fwd.split(",")[0].trim() : "";
-  return first || "local";
+/** How many proxies of our own stand in front (README, "Behind a proxy"); read at start, a bad value stops the app. */
+const PROXY_HOPS = trustedProxyHops();
+
+/** Checks an e-mail and password, counting the attempt against the e-mail and the client's address first. */
+async function authorize(raw: unknown, req: { headers?: unknown } | undefined) {
+  const parsed = credentials.safeParse(raw);
+  if (!parsed.success) return null;
+  const { email, password } = parsed.data;
+  const ip = clientIp(req?.headers as Record<string, unknown> | undefined, PROXY_HOPS);
+  const attempt = await beginAttempt(email, ip);
+  // The builder deserves to know why; the answer is the same whether or not the address has an account.
+  if ("refused" in attempt) {
+    throw new Error(attempt.refused === "ip"
+      ? "Too many failed sign-ins from this address. Wait 15 minutes and try again."
+      : `Too many failed sign-ins for this e-mail. Wait ${attempt.waitS} seconds and try again.`);
+  }
+  const user = await findUserByEmail(email);
+  // An unknown address costs a password check too, so the time taken does not tell whether it has an account.
+  const ok = user ? await checkPassword(password, user.password_hash) : await checkAgainstNothing(password);
+  if (!user || !ok) return null; // the attempt stays counted as a failure
+  await clearFailures(email);
+  return { id: user.id, email: user.email, name: user.name, sv: user.session_version };
 }
 
 export const authOptions: NextAuthOptions = {
@@ -22,25 +41,7 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "E-mail and password",
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
-      async authorize(raw, req) {
-        const parsed = credentials.safeParse(raw);
-        if (!parsed.success) return null;
-        const { email, password } = parsed.data;
-        const ip = clientIp(req?.headers as Record<string, unknown> | undefined);
-        const attempt = await beginAttempt(email, ip);
-        // The builder deserves to know why; the answer is the same whether or not the address has an account.
-        if ("refused" in attempt) {
-          throw new Error(attempt.refused === "ip"
-            ? "Too many failed sign-ins from this address. Wait 15 minutes and try again."
-            : `Too many failed sign-ins for this e-mail. Wait ${attempt.waitS} seconds and try again.`);
-        }
-        const user = await findUserByEmail(email);
-        // An unknown address costs a password check too, so the time taken does not tell whether it has an account.
-        const ok = user ? await checkPassword(password, user.password_hash) : await checkAgainstNothing(password);
-        if (!user || !ok) return null; // the attempt stays counted as a failure
-        await clearFailures(email);
-        return { id: user.id, email: user.email, name: user.name, sv: user.session_version };
-      },
+      authorize: (raw, req) => authorize(raw, req),
     }),
   ],
   callbacks: {
