@@ -6,6 +6,8 @@ import { z } from "zod";
 import { beginAttempt, clearFailures, endSessions, findUserByEmail, findUserById, toPublicUser } from "@/db/users";
 import { checkPassword, checkAgainstNothing } from "./passwords";
 import { clientIp, trustedProxyHops } from "./client-ip";
+import { isDatabaseUnavailable } from "@/db/unavailable";
+import { DB_UNAVAILABLE_MESSAGE } from "@/shared/unavailable";
 
 const credentials = z.object({ email: z.string().trim().email().max(254), password: z.string().min(1).max(200) });
 
@@ -41,7 +43,10 @@ export const authOptions: NextAuthOptions = {
     CredentialsProvider({
       name: "E-mail and password",
       credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
-      authorize: (raw, req) => authorize(raw, req),
+      // The sign-in page shows a thrown error's message: a lost database is said in words, not as a socket error.
+      authorize: (raw, req) => authorize(raw, req).catch((e: unknown) => {
+        throw isDatabaseUnavailable(e) ? new Error(DB_UNAVAILABLE_MESSAGE) : e;
+      }),
     }),
   ],
   callbacks: {

@@ -1,5 +1,6 @@
 import { NextResponse } from "next/server";
 import type { z } from "zod";
+import { DB_RETRY_AFTER_S, DB_UNAVAILABLE_MESSAGE } from "@/shared/unavailable";
 
 /**
  * Every error code the API answers with, and its HTTP status: a closed list. Routes never write a code
@@ -30,6 +31,7 @@ export const ERROR_STATUS = {
   unreadable_image: 415,
   csv_rows_invalid: 422,
   server_error: 500,
+  unavailable: 503,
 } as const;
 export type ErrorCode = keyof typeof ERROR_STATUS;
 /** `{ "path.to.field": "what is wrong with it" }` */
@@ -50,7 +52,8 @@ export class ApiError extends Error {
   toResponse() {
     return NextResponse.json(
       { error: { code: this.code, message: this.message, ...(this.fields ? { fields: this.fields } : {}), ...(this.extra ?? {}) } },
-      { status: this.status },
+      // A 503 says when to come back.
+      { status: this.status, headers: this.code === "unavailable" ? { "retry-after": String(DB_RETRY_AFTER_S) } : undefined },
     );
   }
 }
@@ -63,6 +66,8 @@ export const unauthorized = () => new ApiError("unauthorized", "Sign in to conti
 export const notFound = (what = "build") => new ApiError("not_found", `No such ${what}, or you are not a member of it.`);
 export const forbidden = (message: string) => new ApiError("forbidden", message);
 export const serverError = () => new ApiError("server_error", "Something went wrong on the server. Nothing was changed.");
+/** The database is not answering (db/unavailable.ts): 503 with Retry-After. */
+export const unavailable = () => new ApiError("unavailable", DB_UNAVAILABLE_MESSAGE);
 
 /** 400 naming one field: `fieldError("subject.id", "No joint \"j9\" in revision 3")`. */
 export const fieldError = (path: string, message: string, summary = "Some fields need attention.") =>

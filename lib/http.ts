@@ -1,7 +1,8 @@
 import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
 import type { z } from "zod";
-import { ApiError, fieldError, invalid, notFound, serverError, unauthorized, forbidden } from "./errors";
+import { ApiError, fieldError, invalid, notFound, serverError, unauthorized, forbidden, unavailable } from "./errors";
+import { isDatabaseUnavailable } from "@/db/unavailable";
 import { getSessionUser, type SessionUser } from "./auth";
 import { getMembership, type Build } from "@/db/builds";
 import { getLinkage, getRevision, type Linkage, type Revision } from "@/db/linkages";
@@ -51,6 +52,11 @@ export function parseParams<S extends z.ZodTypeAny>(params: unknown, schema: S):
 
 function errorResponse(e: unknown) {
   if (e instanceof ApiError) return e.toResponse();
+  if (isDatabaseUnavailable(e)) {
+    // One line, not a stack per request: every request fails the same way until the database is back.
+    console.warn(`database not answering: ${(e as Error).message?.split("\n")[0] ?? e}`);
+    return unavailable().toResponse();
+  }
   console.error(e);
   return serverError().toResponse();
 }
