@@ -6,7 +6,9 @@
  */
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useRef, useState } from "react";
-import { api, ACCEPT_PHOTOS, uploadFile } from "@/components/api-client";
+import { api, ACCEPT_PHOTOS, ApiFailure, uploadFile } from "@/components/api-client";
+import { dismissQueued, queuePhoto } from "@/components/offline/queue";
+import { useOfflineQueue } from "@/components/offline/useQueue";
 import { jointKeys } from "@/components/query-keys";
 import type { StoredFile } from "@/shared/schemas/files";
 
@@ -17,8 +19,20 @@ export function JointPhotos({ buildId, linkageId, jointId, jointName, canEdit, c
   const input = useRef<HTMLInputElement>(null);
   const [error, setError] = useState<string | null>(null);
   const photos = useQuery({ queryKey: key, queryFn: async () => (await api<{ photos: StoredFile[] }>(url)).photos });
+  const queued = useOfflineQueue().filter((q) => q.kind === "photo" && q.url === url);
   const add = useMutation({
-    mutationFn: async (files: File[]) => { for (const f of files) await uploadFile(url, f); },
+    // Without network a photo is kept on this device and uploaded when the network returns.
+    mutationFn: async (files: File[]) => {
+      for (const [k, f] of files.entries()) {
+        try {
+          await uploadFile(url, f);
+        } catch (e) {
+          if (!(e instanceof ApiFailure && e.offline)) throw e;
+          for (const rest of files.slice(k)) await queuePhoto({ url, jointId, file: rest });
+          return;
+        }
+      }
+    },
     onSuccess: () => { setError(null); qc.invalidateQueries({ queryKey: key }); },
     onError: (e) => { setError(e instanceof Error ? e.message : String(e)); qc.invalidateQueries({ queryKey: key }); },
   });
@@ -43,12 +57,17 @@ export function JointPhotos({ buildId, linkageId, jointId, jointName, canEdit, c
           ) : null}
         </span>
       ))}
-      {list.length === 0 && !photos.isLoading ? <span className="text-xs text-ink-soft">No photo yet — a close-up of the witness hole, jam nut and washer is the evidence an inspector asks for.</span> : null}
+      {queued.map((q) => q.kind === "photo" && (
+        <span key={q.id} className="flex items-center gap-1 rounded border border-dashed border-advisory/50 px-2 py-1 text-xs" data-testid="joint-photo-queued">
+          {q.error ? <span className="text-hazard">{q.name}: not uploaded — {q.error} <button type="button" className="underline" onClick={() => void dismissQueued(q.id)}>dismiss</button></span> : <>{q.name} — kept on this device, uploaded when the network is back</>}
+        </span>
+      ))}
+      {list.length === 0 && queued.length === 0 && !photos.isLoading ? <span className="text-xs text-ink-soft">No photo yet — a close-up of the witness hole, jam nut and washer is the evidence an inspector asks for.</span> : null}
       {canEdit ? (
         <>
           <input ref={input} type="file" accept={ACCEPT_PHOTOS} multiple className="sr-only" id={`photo-${linkageId}-${jointId}`} aria-label={`Add a photo of the joint ${jointName}`}
             onChange={(e) => { const files = [...(e.target.files ?? [])]; e.target.value = ""; if (files.length) add.mutate(files); }} />
-          <label htmlFor={`photo-${linkageId}-${jointId}`} className="cursor-pointer rounded border border-dashed border-ink/30 px-2 py-1 text-xs text-ink-soft hover:border-ink hover:text-ink focus-within:outline">
+          <label htmlFor={`photo-${linkageId}-${jointId}`} className="touch-target inline-flex cursor-pointer items-center rounded border border-dashed border-ink/30 px-2 py-1 text-xs text-ink-soft hover:border-ink hover:text-ink focus-within:outline">
             {add.isPending ? "Uploading…" : "+ Photo"}
           </label>
         </>

@@ -3,7 +3,9 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import type { z } from "zod";
 import { useEffect, useState } from "react";
-import { api } from "@/components/api-client";
+import { api, ApiFailure } from "@/components/api-client";
+import { queueTick, resolveConflict, type QueuedTick } from "@/components/offline/queue";
+import { useOfflineQueue } from "@/components/offline/useQueue";
 import { Button, Caution } from "@/components/ui";
 import { JointPhotos } from "@/components/records/JointPhotos";
 import { ExportButton } from "@/components/records/ExportButton";
@@ -19,24 +21,35 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
   const qc = useQueryClient();
   const q = useQuery({ queryKey: key, queryFn: () => api<Data>(`${url}${p.revision ? `?revision=${p.revision}` : ""}`) });
   const [error, setError] = useState<string | null>(null);
+  const queued = useOfflineQueue();
   const tick = useMutation({
-    mutationFn: (v: { jointId: string; code: string; ticked: boolean; note?: string }) => api(url, { method: "PUT", body: { revision: q.data!.revision, ...v } }),
-    // Optimistic: the box shows the new state at once; the server's person and time replace it.
-    onMutate: (v) => {
-      qc.setQueryData<Data>(key, (old) => old && {
-        ...old,
-        items: old.items.map((x) => x.jointId === v.jointId && x.code === v.code
-          ? { ...x, tickedAt: v.ticked ? x.tickedAt ?? new Date().toISOString() : null, tickedBy: v.ticked ? x.tickedBy ?? "you" : null, note: v.note ?? x.note }
-          : x),
-      });
+    // Without network the change is kept on this device and sent when the network returns (components/offline).
+    mutationFn: async (v: { jointId: string; code: string; ticked: boolean; note?: string }) => {
+      const revision = q.data!.revision;
+      try {
+        await api(url, { method: "PUT", body: { revision, ...v } });
+        return { queued: false };
+      } catch (e) {
+        if (!(e instanceof ApiFailure && e.offline)) throw e;
+        const seen = q.data!.items.find((x) => x.jointId === v.jointId && x.code === v.code);
+        await queueTick({ url, revision, ...v, base: { tickedAt: seen?.tickedAt ?? null, tickedBy: seen?.tickedBy ?? null, note: seen?.note ?? "" } });
+        return { queued: true };
+      }
     },
-    onSuccess: () => setError(null),
-    onSettled: () => qc.invalidateQueries({ queryKey: key }),
-    onError: (e) => setError(e instanceof Error ? e.message : String(e)),
+    onSuccess: (r) => {
+      setError(null);
+      if (!r.queued) void qc.invalidateQueries({ queryKey: key });
+    },
+    onError: (e) => { setError(e instanceof Error ? e.message : String(e)); void qc.invalidateQueries({ queryKey: key }); },
   });
   if (q.isLoading) return <p className="text-ink-soft">Loading the checklist…</p>;
   if (q.error || !q.data) return <p role="alert" className="text-hazard">{String(q.error instanceof Error ? q.error.message : "The checklist could not be loaded.")}</p>;
-  const d = q.data;
+  // What this device changed without network shows over the server's state until it is sent.
+  const mine = queued.filter((x): x is QueuedTick => x.kind === "tick" && x.url === url && x.revision === q.data!.revision);
+  const d = { ...q.data, items: q.data.items.map((i) => {
+    const m = mine.find((x) => x.jointId === i.jointId && x.code === i.code);
+    return m ? { ...i, tickedAt: m.ticked ? (i.tickedAt ?? m.at) : null, tickedBy: m.ticked ? "you (not sent yet)" : null, note: m.note ?? i.note, pending: m } : i;
+  }) };
   const groups: { jointId: string; subject: Item["subject"]; where: string; items: Item[] }[] = [];
   for (const i of d.items) {
     const last = groups[groups.length - 1];
@@ -58,6 +71,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
         </div>
       </div>
       {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
+      <OfflineBanner ticks={mine} photos={queued.filter((x) => x.kind === "photo" && x.url.startsWith(`/api/builds/${p.buildId}/linkages/${p.linkageId}/`)).length} />
       {d.items.length <= 2 ? <p className="rounded border border-dashed border-ink/25 p-4 text-ink-soft">This revision has no joints yet, so only the travel checks show. Add joints with their hardware in the editor and each one brings its own checks.</p> : null}
       {groups.map((g) => (
         <section key={`${g.subject}:${g.jointId}`} className="rounded-lg border border-ink/10 bg-white" data-testid={g.subject === "part" ? `checklist-part-${g.jointId}` : `checklist-joint-${g.jointId || "linkage"}`}>
@@ -76,7 +90,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
   );
 }
 
-function ItemRow({ i, canTick, onChange }: { i: Item; canTick: boolean; onChange: (v: { ticked: boolean; note?: string }) => void }) {
+function ItemRow({ i, canTick, onChange }: { i: Item & { pending?: QueuedTick }; canTick: boolean; onChange: (v: { ticked: boolean; note?: string }) => void }) {
   const id = `ck-${i.jointId}-${i.code}`;
   const [note, setNote] = useState(i.note);
   const [editing, setEditing] = useState(false);
@@ -85,12 +99,14 @@ function ItemRow({ i, canTick, onChange }: { i: Item; canTick: boolean; onChange
   useEffect(() => setChecked(!!i.tickedAt), [i.tickedAt]);
   return (
     <li className={`flex gap-3 px-4 py-2 ${i.code === "not-checked" ? "bg-caution/10" : ""}`} data-testid="checklist-item" data-code={i.code}>
-      <input id={id} type="checkbox" className="mt-1 h-4 w-4" checked={checked} disabled={!canTick} onChange={(e) => { setChecked(e.target.checked); onChange({ ticked: e.target.checked }); }} />
+      <input id={id} type="checkbox" className="mt-1 h-5 w-5 shrink-0" checked={checked} disabled={!canTick} onChange={(e) => { setChecked(e.target.checked); onChange({ ticked: e.target.checked }); }} />
       <div className="flex-1">
         <label htmlFor={id} className="text-sm">{i.text}</label>
         <p className="text-xs text-ink-soft">
           {i.tickedAt ? <>Ticked by {i.tickedBy} · {new Date(i.tickedAt).toLocaleString("en-CA")}</> : "Not ticked"} · source: {i.source.text}
         </p>
+        {i.pending && !i.pending.conflict ? <p className="text-xs font-medium text-advisory" data-testid="item-pending">Kept on this device — sent when the network is back.</p> : null}
+        {i.pending?.conflict ? <Conflict q={i.pending} /> : null}
         {editing ? (
           <form className="mt-1 flex gap-2" onSubmit={(e) => { e.preventDefault(); onChange({ ticked: !!i.tickedAt, note }); setEditing(false); }}>
             <input aria-label={`Note on: ${i.text}`} className="flex-1 rounded border border-ink/20 px-2 py-1 text-xs" value={note} onChange={(e) => setNote(e.target.value)} autoFocus maxLength={2000}
@@ -102,5 +118,47 @@ function ItemRow({ i, canTick, onChange }: { i: Item; canTick: boolean; onChange
         ) : canTick ? <button type="button" className="no-print mt-1 text-xs text-advisory hover:underline" onClick={() => setEditing(true)}>Add a note</button> : null}
       </div>
     </li>
+  );
+}
+
+/** Offline: what waits on this device to be sent, and the conflicts that need a choice. */
+function OfflineBanner({ ticks, photos }: { ticks: QueuedTick[]; photos: number }) {
+  const [online, setOnline] = useState(true);
+  useEffect(() => {
+    const f = () => setOnline(navigator.onLine);
+    f();
+    window.addEventListener("online", f);
+    window.addEventListener("offline", f);
+    return () => { window.removeEventListener("online", f); window.removeEventListener("offline", f); };
+  }, []);
+  const waiting = ticks.filter((t) => !t.conflict).length + photos;
+  const conflicts = ticks.filter((t) => t.conflict).length;
+  if (online && !waiting && !conflicts) return null;
+  return (
+    <div role="status" data-testid="offline-banner" className={`rounded border px-3 py-2 text-sm ${conflicts ? "border-caution/40 bg-caution/10" : "border-advisory/30 bg-advisory/5"}`}>
+      {!online ? <p className="font-semibold">No network. Ticks, notes and photos are kept on this device and sent when it is back.</p> : null}
+      {waiting ? <p data-testid="offline-waiting">{waiting} change{waiting === 1 ? "" : "s"} waiting to be sent.</p> : null}
+      {conflicts ? <p className="font-semibold text-caution" data-testid="offline-conflicts">{conflicts} item{conflicts === 1 ? " was" : "s were"} changed by someone else while you were offline: choose below which to keep.</p> : null}
+    </div>
+  );
+}
+
+function Conflict({ q }: { q: QueuedTick }) {
+  const qc = useQueryClient();
+  const theirs = q.conflict!;
+  const say = (t: { tickedAt: string | null; tickedBy?: string | null; note?: string }) => `${t.tickedAt ? "ticked" : "not ticked"}${t.note ? `, note “${t.note}”` : ""}`;
+  const choose = async (keep: "mine" | "theirs") => {
+    await resolveConflict(q.id, keep);
+    await qc.invalidateQueries();
+  };
+  return (
+    <div className="mt-1 rounded border border-caution/40 bg-caution/10 p-2 text-xs" data-testid="item-conflict">
+      <p><span className="font-semibold">Changed meanwhile</span> by {theirs.tickedBy ?? "someone"}: {say(theirs)}.</p>
+      <p><span className="font-semibold">Yours, made offline:</span> {say({ tickedAt: q.ticked ? q.at : null, note: q.note ?? theirs.note })}.</p>
+      <div className="mt-1 flex gap-2">
+        <Button size="sm" onClick={() => void choose("mine")} data-testid="conflict-keep-mine">Keep mine</Button>
+        <Button size="sm" tone="secondary" onClick={() => void choose("theirs")} data-testid="conflict-keep-theirs">Keep theirs</Button>
+      </div>
+    </div>
   );
 }
