@@ -29,7 +29,10 @@ export function UserMenu({ name, email, unitSystem, isSiteAdmin = false }: { nam
         ))}
       </div>
       {isSiteAdmin ? <Link href="/admin/users" className="rounded px-2 py-1 hover:bg-ink/5">Users</Link> : null}
-      <span className="hidden text-ink-soft sm:inline" title={email}>{name}</span>
+      <Link href="/account" className="rounded px-2 py-1 text-ink-soft hover:bg-ink/5" title={`${email} — your account`}>
+        <span className="sm:hidden">Account</span>
+        <span className="hidden sm:inline">{name}</span>
+      </Link>
       <Link href="/sign-out" className="rounded px-2 py-1 hover:bg-ink/5">Sign out</Link>
     </div>
   );

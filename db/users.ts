@@ -119,4 +119,8 @@ export async function getNotify(userId: string): Promise<NotifyPref> {
 export const setNotify = (userId: string, notify: NotifyPref) => db("users").where({ id: userId }).update({ notify });
 
 /** Ends every session of the user on the server: cookies issued before carry an older version and are refused. */
+/** A new password: every session of the account ends with it (cookies carry the old session version). */
+export const setPassword = (id: string, passwordHash: string) =>
+  db("users").where({ id }).update({ password_hash: passwordHash, session_version: db.raw("session_version + 1") });
+
 export const endSessions = (id: string) => db("users").where({ id }).increment("session_version", 1);

@@ -18,9 +18,14 @@ export function useOfflineQueue(): Queued[] {
     const off = subscribeQueue(load);
     if (navigator.onLine) send();
     window.addEventListener("online", send);
+    // And every few seconds while something waits: a try made as the network came back may have failed.
+    const retry = setInterval(() => {
+      if (navigator.onLine) void listQueue().then((q) => { if (q.some((x) => !(x.kind === "tick" && x.conflict) && !(x.kind === "photo" && x.error))) send(); }).catch(() => {});
+    }, 5000);
     return () => {
       live = false;
       off();
+      clearInterval(retry);
       window.removeEventListener("online", send);
     };
   }, [qc]);

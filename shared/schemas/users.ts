@@ -8,6 +8,12 @@ export const signUpInput = z.object({
   password: z.string().min(10, "Use at least 10 characters").max(200, "At most 200 characters"),
 });
 
+/** A new password for the signed-in account; every session ends with it (the person signs in again). */
+export const passwordChange = z.object({
+  currentPassword: z.string({ error: "Enter your current password" }).min(1, "Enter your current password").max(200, "At most 200 characters"),
+  newPassword: z.string({ error: "Enter a new password" }).min(10, "Use at least 10 characters").max(200, "At most 200 characters"),
+}).strict();
+
 export const UNIT_SYSTEMS = ["US", "SI"] as const;
 export const mePatch = z.object({ unitSystem: z.enum(UNIT_SYSTEMS) });
 export const publicUser = z.object({ id: z.string(), email: z.string(), name: z.string(), isSiteAdmin: z.boolean(), unitSystem: z.enum(UNIT_SYSTEMS) });

@@ -16,6 +16,7 @@ const CASES: BadInput = {
   ...BAD_INPUT,
   "POST /api/sign-up": { path: () => "/api/sign-up", bodies: [[{ name: "", email: "not-an-email", password: "short" }, "email"], [{ name: 7 }, "name"]] },
   "PATCH /api/me": { path: () => "/api/me", bodies: [[{ unitSystem: "imperial" }, "unitSystem"]] },
+  "POST /api/me/password": { path: () => "/api/me/password", bodies: [[{ currentPassword: "", newPassword: "a long enough new password" }, "currentPassword"], [{ currentPassword: "whatever it is", newPassword: "short" }, "newPassword"], [{ newPassword: "a long enough new password" }, "currentPassword"]] },
   "POST /api/analyze": { path: () => "/api/analyze", bodies: [[{ graph: { formatVersion: 2, nodes: [], joints: [] } }, "graph.formatVersion"], [{ graph: { formatVersion: 1, nodes: [nodeWithoutArms], joints: [] } }, "graph.nodes.0.props.gripArm"]] },
   "POST /api/builds": { path: () => "/api/builds", bodies: [[{ name: "" }, "name"], [{ name: "ok", registration: "no spaces!" }, "registration"]] },
   "PATCH /api/builds/[buildId]": { path: B, bodies: [[{ name: 12 }, "name"], [{ analysisSettings: { ultimateFactor: -1 } }, "analysisSettings.ultimateFactor"]] },

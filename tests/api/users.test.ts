@@ -29,6 +29,23 @@ describe("accounts and sign-in", () => {
     expect(again.body.error.fields.email).toBeTruthy();
   });
 
+  it("a password change checks the current one, ends every session (a copied cookie too), and the new one signs in", async () => {
+    const u = await makeUser("password-change");
+    const a = await signIn(u.email);
+    const copy = client(a.cookie); // the same cookie, as if copied to another device
+    const wrong = await a.request("POST", "/api/me/password", { currentPassword: "not it at all", newPassword: "a brand new passphrase" });
+    expect([wrong.status, Object.keys(wrong.body.error.fields)]).toEqual([400, ["currentPassword"]]);
+    const same = await a.request("POST", "/api/me/password", { currentPassword: "correct horse battery staple", newPassword: "correct horse battery staple" });
+    expect([same.status, Object.keys(same.body.error.fields)]).toEqual([400, ["newPassword"]]);
+    expect((await copy.request("GET", "/api/me")).status).toBe(200); // nothing changed yet
+    const ok = await a.request("POST", "/api/me/password", { currentPassword: "correct horse battery staple", newPassword: "a brand new passphrase" });
+    expect([ok.status, ok.body]).toEqual([200, { changed: true, signedOut: true }]);
+    expect((await a.request("GET", "/api/me")).status).toBe(401);
+    expect((await copy.request("GET", "/api/me")).status).toBe(401);
+    expect(await attempt(u.email, "correct horse battery staple")).toBe("refused");
+    expect(await attempt(u.email, "a brand new passphrase")).toBe("signed in");
+  });
+
   it("five failed sign-ins make that e-mail wait (even with the right password), and only for a while; others are not affected", async () => {
     const victim = await makeUser("victim");
     const bystander = await makeUser("bystander");

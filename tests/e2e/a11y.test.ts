@@ -93,7 +93,7 @@ afterAll(async () => {
 const buildPages = () => ["", "/log", "/files", "/hardware", "/parts", "/checklist", `/checklist/${linkageId}`, "/members", "/settings", "/activity", `/linkages/${linkageId}`].map((p) => `/builds/${buildId}${p}`);
 
 const ROLES = [
-  { who: "owner", user: DEMO_USERS[0], pages: () => ["/builds", "/builds/new", "/parts", ...buildPages()] },
+  { who: "owner", user: DEMO_USERS[0], pages: () => ["/builds", "/builds/new", "/parts", "/account", ...buildPages()] },
   { who: "reviewer", user: DEMO_USERS[1], pages: () => ["/builds", ...buildPages()] },
   { who: "site admin", user: DEMO_USERS[3], pages: () => ["/builds", "/admin/users", "/admin/mail", "/parts"] },
 ];
@@ -127,7 +127,7 @@ describe("axe-core and phone width on every page", () => {
     for (const width of WIDTHS) {
       const ctx = await browser.newContext({ viewport: { width, height: 844 } });
       const page = await ctx.newPage();
-      for (const url of ["/sign-in", "/sign-up"]) {
+      for (const url of ["/sign-in", "/sign-up", "/verify", "/sign-in?password=changed"]) {
         const r = await check(page, url);
         for (const v of r.violations) problems.push(`${url}@${width}: ${v.id} ${v.help} — ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
         if (r.widths.scroll > r.widths.view) problems.push(`${url}@${width}: ${r.widths.scroll} px wide`);

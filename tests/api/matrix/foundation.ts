@@ -16,6 +16,8 @@ export const rows: Record<string, Row> = {
   "POST /api/sign-up":                                  { expect: anyone(201), path: () => "/api/sign-up", body: () => ({ name: "New Person", email: unique(), password: "long enough password" }) },
   "GET /api/me":                                        { expect: signedIn(200), path: () => "/api/me" },
   "PATCH /api/me":                                      { expect: signedIn(200), path: () => "/api/me", body: () => ({ unitSystem: "US" }) },
+  // A wrong current password (a right one would end the shared test users' sessions): signed in 400, else 401.
+  "POST /api/me/password":                              { expect: { ...signedIn(400), anon: 401 }, path: () => "/api/me/password", body: () => ({ currentPassword: "not the password at all", newPassword: "a long enough new password" }) },
   "POST /api/analyze":                                  { expect: signedIn(200), path: () => "/api/analyze", body: () => ({ graph: emptyGraph() }) },
   "GET /api/admin/users":                              { expect: adminOnly, path: () => "/api/admin/users" },
   "PATCH /api/admin/users/[userId]":                    { expect: adminOnly, path: (c) => `/api/admin/users/${c.extraId}`, body: () => ({ isSiteAdmin: true }) },
