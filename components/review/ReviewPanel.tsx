@@ -188,6 +188,23 @@ function HistorySection({ buildId, linkageId }: { buildId: string; linkageId: st
   );
 }
 
+/** What a reviewer looks at first when the linkage changed after its last sign-off: the changes since, field by field. */
+function SinceSignoff({ buildId, linkageId }: { buildId: string; linkageId: string }) {
+  const s = useSignoffs(buildId, linkageId);
+  const latest = s.data?.status.latest ?? null;
+  const current = s.data?.currentRevision ?? null;
+  const stale = !!latest && current !== null && latest.revision < current;
+  const diff = useDiff(buildId, linkageId, stale ? latest!.revision : null, stale ? current : null);
+  if (!stale) return null;
+  return (
+    <div className="space-y-1 rounded border border-caution/30 bg-caution/5 p-1.5 text-[11px]" data-testid="since-signoff">
+      <p className={heading}>Changed since the last sign-off</p>
+      <p>Revision {latest!.revision} was signed off by {latest!.reviewer.name}; the linkage is now at revision {current}. What changed:</p>
+      {diff.data ? <DiffView d={diff.data.diff} /> : <p className="text-ink-soft">Comparing the revisions…</p>}
+    </div>
+  );
+}
+
 function NotifySetting() {
   const q = useNotify();
   const { setNotify } = useReviewActions("", "");
@@ -206,6 +223,7 @@ export function ReviewPanel({ buildId, linkageId, me, unresolved, names }: { bui
   const openSubjects = Object.entries(unresolved).filter(([k]) => !k.startsWith("linkage:"));
   return (
     <div className="space-y-3 rounded border border-ink/10 bg-white p-2" data-testid="review-panel">
+      <SinceSignoff buildId={buildId} linkageId={linkageId} />
       <SignoffSection buildId={buildId} linkageId={linkageId} me={me} />
       {openSubjects.length > 0 && (
         <div className="text-[11px]" data-testid="open-threads">

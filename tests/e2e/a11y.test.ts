@@ -46,7 +46,8 @@ async function check(page: Page, url: string) {
     TAGS,
   )) as Violation[];
   const text = await page.evaluate(() => document.body.innerText);
-  const codes = forbidden.filter((c) => new RegExp(`(^|[^\\w-])${c}($|[^\\w-])`).test(text));
+  // A code standing alone; inside a file name a person chose ("witness-hole.jpg") it is their text, not ours.
+  const codes = forbidden.filter((c) => new RegExp(`(^|[^\\w.-])${c}($|[^\\w.-])`).test(text));
   if (UUID.test(text)) codes.push(`an id (${text.match(UUID)![0]})`);
   const widths = await page.evaluate(() => ({ scroll: document.documentElement.scrollWidth, view: window.innerWidth }));
   const skip = await page.evaluate(() => {

@@ -123,6 +123,12 @@ describe("review and sign-off in a real browser", () => {
     const stale = danaPage.locator('[data-testid=review-bar] [data-testid=signoff-status][data-state="stale"]');
     await stale.waitFor({ timeout: 15_000 });
     expect(await stale.innerText()).toMatch(/stale/i);
+    // With nothing selected the review panel opens on what changed since that sign-off.
+    await danaPage.keyboard.press("Escape"); // from the card's field back to the joint
+    await danaPage.keyboard.press("Escape"); // and the selection cleared
+    const since = danaPage.getByTestId("since-signoff");
+    await since.getByTestId("diff-view").waitFor({ timeout: 10_000 });
+    expect(await since.innerText()).toContain("hardware.torque");
     await shot(danaPage, "review-05-signoff-stale");
 
     await danaPage.goto(`${APP_URL}/builds/${buildId}`);
