@@ -5,7 +5,8 @@ import { flexRender, type Table } from "@tanstack/react-table";
 export function DataTable<T>({ table, testId, rowTestId }: { table: Table<T>; testId: string; rowTestId: string }) {
   return (
     <div className="table-box">
-      <table className="w-full text-left text-sm" data-testid={testId}>
+      {/* On a phone the table keeps readable columns and scrolls in its box (first column kept) instead of squeezing. */}
+      <table className="w-full min-w-[40rem] text-left text-sm md:min-w-0" data-testid={testId}>
         <thead className="text-xs uppercase tracking-wide text-ink-soft">
           {table.getHeaderGroups().map((hg) => (
             <tr key={hg.id}>

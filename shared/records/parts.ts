@@ -129,14 +129,18 @@ function parseNumber(raw: string, decimalComma: boolean): number | null {
  * inside. `row` in the report is the row's line in the file (the header is row 1). `existing` holds part
  * numbers already in the library (lower case) so duplicates against it are reported too.
  */
+/** A cell a spreadsheet would run as a formula, or one that already starts with the guard apostrophe before one. */
+const FORMULA_OR_GUARDED = /^'*[=+\-@\t\r]/;
+
 export function parsePartsCsv(text: string, existing: Iterable<string> = []): CsvImport {
   const clean = text.replace(/^\uFEFF/, "");
   const res = Papa.parse<string[]>(clean, {
     header: false,
     skipEmptyLines: false,
     delimitersToGuess: [",", ";", "\t", "|"],
-    // Our export guards cells that a spreadsheet would run as a formula with a leading apostrophe; take it off again.
-    transform: (v) => (/^'[=+\-@\t\r]/.test(v) ? v.slice(1) : v),
+    // Our export guards cells that a spreadsheet would run as a formula with one more leading apostrophe; take
+    // that one off again. Any other apostrophe a builder typed ("'Tis the spare") is kept as it is.
+    transform: (v) => (/^'+[=+\-@\t\r]/.test(v) ? v.slice(1) : v),
   });
   const delimiter = res.meta.delimiter || ",";
   const data = res.data as string[][];
@@ -223,8 +227,10 @@ export function partsToCsv(parts: PartInput[]): string {
       return v === undefined || v === null ? "" : typeof v === "boolean" ? (v ? "yes" : "no") : String(v);
     });
   });
-  // escapeFormulae: a description like "=HYPERLINK(…)" must not run when the file is opened in a spreadsheet.
-  return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows }, { newline: "\r\n", escapeFormulae: true }) + "\r\n";
+  // escapeFormulae: a description like "=HYPERLINK(…)" must not run when the file is opened in a spreadsheet, so a
+  // leading apostrophe is added; a cell a builder began with an apostrophe before such a character ("'=5 turns")
+  // gets one too, so the import (which takes one off) gives back exactly what was typed.
+  return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows }, { newline: "\r\n", escapeFormulae: FORMULA_OR_GUARDED }) + "\r\n";
 }
 
 /** One line a part, for tables and pickers. */

@@ -77,4 +77,20 @@ describe("parts CSV import", () => {
     expect(out.split("\r\n").some((line) => /(^|,)"?[=@]/.test(line))).toBe(false);
     expect(parsePartsCsv(out).parts.map((p) => p.description)).toEqual(a.map((p) => p.description));
   });
+
+  it("keeps a leading apostrophe a builder typed, through export and import, and still guards formulas", () => {
+    const typed = ["'Tis the spare from the kit", "'=5 turns of thread showing", "''@ both ends", "plain"];
+    const csv = [HEADER, ...typed.map((d, i) => `rodEnd,A-${i},"${d}",3/8-24,RH,0.375,8800`)].join("\n");
+    const a = parsePartsCsv(csv).parts;
+    // Read from a file a person wrote, an apostrophe before "=" is the spreadsheet guard and comes off once;
+    // any other stays.
+    expect(a.map((p) => p.description)).toEqual(["'Tis the spare from the kit", "=5 turns of thread showing", "'@ both ends", "plain"]);
+    const round = (descs: string[]) => {
+      const parts = a.map((p, i) => ({ ...p, description: descs[i] }));
+      const out = partsToCsv(parts);
+      expect(out.split("\r\n").some((line) => /(^|,)"?[=+@-]/.test(line))).toBe(false); // nothing runs as a formula
+      return parsePartsCsv(out).parts.map((p) => p.description);
+    };
+    expect(round(typed)).toEqual(typed); // what was typed comes back exactly, apostrophes and all
+  });
 });
