@@ -53,8 +53,11 @@ export const FindingItem = memo(function FindingItem({ f, compact, onPick }: { f
   );
 });
 
+/** One empty list for "no report yet", so a selector returns the same value until the report comes. */
+const NONE: Finding[] = [];
+
 export function FindingsList() {
-  const { findings, error, ready } = useEditorStore((s) => ({ findings: s.report?.findings ?? [], error: s.analysisError, ready: s.report !== null }));
+  const { findings, error, ready } = useEditorStore((s) => ({ findings: s.report?.findings ?? NONE, error: s.analysisError, ready: s.report !== null }));
   const focus = useFocusSubject();
   const [open, setOpen] = useState<Record<Severity, boolean>>({ hazard: true, caution: true, advisory: true });
   return (

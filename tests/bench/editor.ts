@@ -151,6 +151,7 @@ export async function run(): Promise<{ ok: boolean; result: EditorBenchResult }>
     let mounted500 = 0;
     for (let i = 0; i < 3; i++) {
       const p = await ctx.newPage();
+      p.on("pageerror", (e) => console.error("page error:", String(e)));
       const o = await openEditor(p, base, 500);
       renders.push(o.readyMs);
       mounted500 = o.mounted;
