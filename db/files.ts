@@ -30,11 +30,32 @@ export const toFile = (r: FileRow): StoredFile => ({
 export async function insertFile(
   f: { id: string; buildId: string; key: string; kind: FileKind; contentType: string; size: number; name: string; thumbKey: string | null; thumbSize?: number | null; width: number | null; height: number | null; uploadedBy: string },
   trx: Knex = db,
+  thumbnail?: Buffer | null,
 ) {
   const [row] = await trx<FileRow>("files")
     .insert({ id: f.id, build_id: f.buildId, key: f.key, kind: f.kind, content_type: f.contentType, size: f.size, name: f.name, thumb_key: f.thumbKey, thumb_size: f.thumbSize ?? null, width: f.width, height: f.height, uploaded_by: f.uploadedBy })
     .returning("*");
+  if (thumbnail) await trx("file_thumbnails").insert({ file_id: f.id, bytes: thumbnail });
   return toFile(row);
+}
+
+/**
+ * The database's copies of these files' thumbnails (JPEG bytes by file id; a file of another build or
+ * without a copy is missing from the map). One query for a page of a log PDF's photos.
+ */
+export async function thumbnailBytes(buildId: string, ids: string[]): Promise<Map<string, Buffer>> {
+  if (!ids.length) return new Map();
+  const rows: { file_id: string; bytes: Buffer }[] = await db("file_thumbnails as t")
+    .join("files as f", "f.id", "t.file_id")
+    .where("f.build_id", buildId)
+    .whereIn("t.file_id", ids)
+    .select("t.file_id", "t.bytes");
+  return new Map(rows.map((r) => [r.file_id, r.bytes]));
+}
+
+/** Keeps a copy of a thumbnail read from storage (a photo uploaded before the copies were kept). */
+export async function keepThumbnail(fileId: string, bytes: Buffer) {
+  await db("file_thumbnails").insert({ file_id: fileId, bytes }).onConflict("file_id").ignore();
 }
 
 /** The row with its storage keys (server only). */

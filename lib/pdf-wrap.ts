@@ -27,10 +27,23 @@ function charWidth(font: MeasuringFont, ch: string): number {
 }
 
 const glyphSets = new WeakMap<GlyphFont, Set<number>>();
+const PRINTABLE_ASCII = /^[\x20-\x7e\n]*$/;
+const asciiFonts = new WeakMap<GlyphFont, boolean>();
+function hasAscii(font: GlyphFont, glyphs: Set<number>) {
+  let ok = asciiFonts.get(font);
+  if (ok === undefined) {
+    ok = true;
+    for (let cp = 0x20; cp <= 0x7e; cp++) ok &&= glyphs.has(cp);
+    asciiFonts.set(font, ok);
+  }
+  return ok;
+}
 /** The text with tabs and carriage returns as spaces and every character the font cannot draw as "?". */
 export function printable(s: string, font: GlyphFont): string {
   let glyphs = glyphSets.get(font);
   if (!glyphs) glyphSets.set(font, (glyphs = new Set(font.getCharacterSet())));
+  // Plain printable ASCII, the most of any log, is returned as it is when the font draws all of it.
+  if (PRINTABLE_ASCII.test(s) && hasAscii(font, glyphs)) return s;
   const out: string[] = [];
   for (const ch of s) {
     const cp = ch.codePointAt(0)!;

@@ -2,8 +2,9 @@ import "server-only";
 import { readFile } from "node:fs/promises";
 import path from "node:path";
 import fontkit from "@pdf-lib/fontkit";
-import { PDFDocument, rgb, type PDFFont, type PDFPage, type PDFImage } from "pdf-lib";
-import { fileKeys, getRevisionPictureRow } from "@/db/files";
+import { deflateSync } from "node:zlib";
+import { PDFDocument, PDFName, rgb, type PDFFont, type PDFPage, type PDFImage, type RGB } from "pdf-lib";
+import { fileKeys, getRevisionPictureRow, keepThumbnail, thumbnailBytes } from "@/db/files";
 import { getRevision } from "@/db/linkages";
 import type { LogEntry, LogFilter } from "@/db/log";
 import type { Tick } from "@/db/checklist";
@@ -53,13 +54,80 @@ const plainFontkit: typeof fontkit = {
   },
 } as typeof fontkit;
 
+/** A number as a PDF operand: two decimals are a hundredth of a point, and never an exponent. */
+const num = (v: number) => String(Math.round(v * 100) / 100);
+const colour = (c: RGB, op: "rg" | "RG") => `${num(c.red)} ${num(c.green)} ${num(c.blue)} ${op}`;
+
+/**
+ * One page's drawing, written as the page's content stream text and compressed once when the document is
+ * saved. pdf-lib's own drawing keeps every operator of every page as objects until the save, which was most of
+ * a long log's time; this writes the same few operators (text, lines, boxes, images) as text straight away.
+ * Text goes through the font's encoder, which also records the glyphs the embedded subset must hold.
+ */
+class Ink {
+  private ops: string[] = [];
+  private images = new Set<string>();
+  constructor(private doc: Doc, readonly page: PDFPage) {
+    page.node.setFontDictionary(PDFName.of("F0"), doc.font.ref);
+    page.node.setFontDictionary(PDFName.of("F1"), doc.bold.ref);
+  }
+  drawText(text: string, o: { x: number; y: number; size: number; font: PDFFont; color: RGB }) {
+    const key = o.font === this.doc.bold ? "F1" : "F0";
+    this.ops.push(`BT ${colour(o.color, "rg")} /${key} ${num(o.size)} Tf 1 0 0 1 ${num(o.x)} ${num(o.y)} Tm <${this.doc.encode(o.font, text)}> Tj ET`);
+  }
+  drawLine(o: { start: { x: number; y: number }; end: { x: number; y: number }; thickness: number; color: RGB }) {
+    this.ops.push(`q ${colour(o.color, "RG")} ${num(o.thickness)} w ${num(o.start.x)} ${num(o.start.y)} m ${num(o.end.x)} ${num(o.end.y)} l S Q`);
+  }
+  drawRectangle(o: { x: number; y: number; width: number; height: number; borderColor: RGB; borderWidth: number }) {
+    this.ops.push(`q ${colour(o.borderColor, "RG")} ${num(o.borderWidth)} w ${num(o.x)} ${num(o.y)} ${num(o.width)} ${num(o.height)} re S Q`);
+  }
+  drawImage(img: PDFImage, o: { x: number; y: number; width: number; height: number }) {
+    const key = this.doc.imageKey(img);
+    if (!this.images.has(key)) {
+      this.images.add(key);
+      this.page.node.setXObject(PDFName.of(key), img.ref);
+    }
+    this.ops.push(`q ${num(o.width)} 0 0 ${num(o.height)} ${num(o.x)} ${num(o.y)} cm /${key} Do Q`);
+  }
+  /** Hands the page what was drawn since the last flush as a content stream of its own (Flate, by Node's zlib). */
+  flush() {
+    if (!this.ops.length) return;
+    const ctx = this.doc.pdf.context;
+    const stream = ctx.stream(deflateSync(Buffer.from(this.ops.join("\n"), "latin1")), { Filter: "FlateDecode" });
+    this.page.node.addContentStream(ctx.register(stream));
+    this.ops = [];
+  }
+}
+
 class Doc {
   pdf!: PDFDocument;
   font!: PDFFont;
   bold!: PDFFont;
-  page!: PDFPage;
+  page!: Ink;
   y = 0;
-  pages: PDFPage[] = [];
+  pages: Ink[] = [];
+  private imageKeys = new Map<PDFImage, string>();
+  private codes = new Map<PDFFont, Map<string, string>>();
+  /**
+   * The text as the hex glyph codes of the font's subset. Without shaping a character is one glyph, so each
+   * character is asked of the font once (which also puts its glyph in the subset) and remembered.
+   */
+  encode(font: PDFFont, text: string) {
+    let m = this.codes.get(font);
+    if (!m) this.codes.set(font, (m = new Map()));
+    let hex = "";
+    for (const ch of text) {
+      let c = m.get(ch);
+      if (c === undefined) m.set(ch, (c = font.encodeText(ch).toString().slice(1, -1)));
+      hex += c;
+    }
+    return hex;
+  }
+  imageKey(img: PDFImage) {
+    let k = this.imageKeys.get(img);
+    if (!k) this.imageKeys.set(img, (k = `I${this.imageKeys.size}`));
+    return k;
+  }
   constructor(private title: string) {}
   async init() {
     this.pdf = await PDFDocument.create();
@@ -74,7 +142,8 @@ class Doc {
     return this;
   }
   newPage() {
-    this.page = this.pdf.addPage([PAGE.w, PAGE.h]);
+    this.page?.flush();
+    this.page = new Ink(this, this.pdf.addPage([PAGE.w, PAGE.h]));
     this.pages.push(this.page);
     this.y = PAGE.h - M;
   }
@@ -136,14 +205,26 @@ class Doc {
   }
   async finish() {
     const n = this.pages.length;
+    this.page.flush();
     const lines = this.wrap(`Caution. ${CAUTION_TEXT}`, 7, this.font, PAGE.w - 2 * M);
+    const title = printable(this.title, this.font);
+    // The footer (the caution and "page i of n") goes in after the last page is known, as each page's second stream.
     this.pages.forEach((p, i) => {
       lines.forEach((l, k) => p.drawText(l, { x: M, y: M + 30 - k * 9, size: 7, font: this.font, color: CAUTION }));
-      p.drawText(`${printable(this.title, this.font)} · page ${i + 1} of ${n}`, { x: M, y: M - 14, size: 7, font: this.font, color: SOFT });
+      p.drawText(`${title} · page ${i + 1} of ${n}`, { x: M, y: M - 14, size: 7, font: this.font, color: SOFT });
+      p.flush();
     });
-    return this.pdf.save();
+    // Object streams would compress the many small objects once more, at a cost the size does not repay here.
+    return this.pdf.save({ useObjectStreams: false });
   }
 }
+
+const isJpeg = (b: Buffer) => b.length > 2 && b[0] === 0xff && b[1] === 0xd8;
+/**
+ * A copy of the bytes for pdf-lib, which reads the whole ArrayBuffer under a Uint8Array: a small Buffer
+ * from a pool or from the database driver is a slice of a larger one.
+ */
+const own = (b: Buffer) => new Uint8Array(b);
 
 /** A stored picture re-encoded small enough for a PDF page (pdf-lib embeds JPEG and PNG only). */
 async function reencoded(bytes: Buffer, maxPx: number) {
@@ -191,22 +272,27 @@ export async function logPdf(build: Build, pages: AsyncIterable<LogEntry[]>, cou
   doc.rule();
   if (!count) doc.text("No entries in this range.", { color: SOFT });
 
+  // Each photo is embedded once, from its thumbnail: the database's copy, read with its page of entries
+  // (one query, not a storage request per photo), else storage's (then copied to the database for next time).
   const photoCache = new Map<string, Promise<PDFImage | null>>();
-  const photo = (k: { key: string; thumbKey: string | null }) => {
-    const id = k.thumbKey ?? k.key;
-    let p = photoCache.get(id);
+  const photo = (fileId: string, k: { key: string; thumbKey: string | null }, inDb: Map<string, Buffer>) => {
+    let p = photoCache.get(fileId);
     if (!p) {
       p = (async () => {
+        const copy = inDb.get(fileId);
+        if (copy && isJpeg(copy)) return doc.pdf.embedJpg(own(copy));
         if (k.thumbKey) {
           const thumb = await getObject(k.thumbKey);
           // Stored thumbnails are JPEG (lib/uploads.ts), embedded as they are; anything else is re-encoded.
-          // A copy: pdf-lib reads the bytes' whole ArrayBuffer, and a small Buffer is a slice of a shared pool.
-          if (thumb && thumb[0] === 0xff && thumb[1] === 0xd8) return doc.pdf.embedJpg(new Uint8Array(thumb));
+          if (thumb && isJpeg(thumb)) {
+            await keepThumbnail(fileId, thumb).catch(() => {});
+            return doc.pdf.embedJpg(own(thumb));
+          }
           if (thumb) return doc.pdf.embedJpg(await reencoded(thumb, 320));
         }
         return embedStored(doc, k.key, 320);
       })();
-      photoCache.set(id, p);
+      photoCache.set(fileId, p);
     }
     return p;
   };
@@ -226,9 +312,10 @@ export async function logPdf(build: Build, pages: AsyncIterable<LogEntry[]>, cou
 
   let done = 0;
   for await (const entries of pages) {
-    const keys = await fileKeys(build.id, entries.flatMap((e) => e.files.map((x) => x.id)));
-    // Read this page's photos and revisions from storage a few at a time, ahead of laying them out.
-    await pool([...keys.values()].filter((k) => k.kind !== "pdf"), 8, photo);
+    const ids = entries.flatMap((e) => e.files.map((x) => x.id));
+    const [keys, inDb] = await Promise.all([fileKeys(build.id, ids), thumbnailBytes(build.id, ids)]);
+    // Read this page's photos and revisions ahead of laying them out (storage a few at a time).
+    await pool([...keys].filter(([, k]) => k.kind !== "pdf"), 8, ([id, k]) => photo(id, k, inDb));
     await pool(entries.filter((e) => e.linkageId && e.revision), 4, (e) => revisionOf(e.linkageId!, e.revision!));
     for (const e of entries) {
       doc.ensure(60);
@@ -256,7 +343,7 @@ export async function logPdf(build: Build, pages: AsyncIterable<LogEntry[]>, cou
         const k = keys.get(file.id);
         if (!k) continue;
         if (k.kind === "pdf") { pdfs.push(file.name); continue; }
-        const img = await photo(k);
+        const img = await photo(file.id, k, inDb);
         if (img) photos.push({ img, caption: file.name });
       }
       if (photos.length) doc.images(photos, photos.length === 1 ? 1 : Math.min(3, photos.length), photos.length === 1 ? 200 : 140);
@@ -397,7 +484,7 @@ export async function revisionRecordPdf(r: RevisionRecord) {
   const shots = await pool(r.photos, 6, async (p) => {
     const bytes = await getObject(p.thumbKey ?? p.key);
     if (!bytes) return null;
-    const img = await doc.pdf.embedJpg(bytes[0] === 0xff && bytes[1] === 0xd8 ? new Uint8Array(bytes) : await reencoded(bytes, 320));
+    const img = await doc.pdf.embedJpg(isJpeg(bytes) ? own(bytes) : await reencoded(bytes, 320));
     const j = joints.get(p.jointId);
     return { img, caption: `${j ? jointName(j, nodes) : "a joint no longer in the drawing"} — ${p.name}` };
   });

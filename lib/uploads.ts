@@ -126,7 +126,7 @@ export async function storeUpload(o: {
       written.push(thumbKey);
     }
     return await db.transaction(async (trx) => {
-      const file = await insertFile({ id, buildId: o.buildId, key, kind: o.kind ?? t.kind, contentType: t.mime, size: bytes.length, name, thumbKey, thumbSize: thumb?.length ?? null, width, height, uploadedBy: o.userId }, trx);
+      const file = await insertFile({ id, buildId: o.buildId, key, kind: o.kind ?? t.kind, contentType: t.mime, size: bytes.length, name, thumbKey, thumbSize: thumb?.length ?? null, width, height, uploadedBy: o.userId }, trx, thumb);
       if (o.attach) await o.attach(trx, file);
       return file;
     });

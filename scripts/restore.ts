@@ -161,5 +161,11 @@ main()
     process.exitCode = e instanceof Refused ? 2 : 1;
   })
   .finally(() => {
-    rmSync(work, { recursive: true, force: true });
+    // An extraction refused half-way may still be closing files in the folder: retry, and never let the
+    // clean-up change what the restore answered.
+    try {
+      rmSync(work, { recursive: true, force: true, maxRetries: 10, retryDelay: 100 });
+    } catch (e) {
+      console.error(`(could not remove the working folder ${work}: ${e instanceof Error ? e.message : e})`);
+    }
   });

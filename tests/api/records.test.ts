@@ -11,7 +11,7 @@ import { analyze } from "@/shared/analysis";
 import { CAUTION_TEXT } from "@/shared/caution";
 import { makeBuild, makeUser, snapshot, testDb } from "../support/db";
 import { signIn, type Client } from "../support/http";
-import { fetchBytes, s3Keys, testImage, upload, uploadRaw } from "../support/upload";
+import { deleteTestObjects, fetchBytes, s3Keys, testImage, upload, uploadRaw } from "../support/upload";
 import { APP_URL } from "../support/env";
 import { exportFile } from "../support/exports";
 
@@ -253,6 +253,27 @@ describe("build log", () => {
     expect(text).toContain("revision 1");
     expect(squash(text)).toContain(squash(CAUTION_TEXT));
     expect(pdfImages(res.bytes)).toBeGreaterThanOrEqual(2); // the photo and the revision picture
+  });
+
+  it("prints photos from the database's copy of their thumbnails, and copies one kept only in storage the first time", async () => {
+    const [a, b] = await Promise.all(["copy in the database.jpg", "storage only.jpg"].map(async (name, i) =>
+      (await upload(owner, `${B()}/files`, { bytes: await testImage("jpeg", 800 + i, 600), name })).body.file));
+    const rowA = await testDb("files").where({ id: a.id }).first();
+    const rowB = await testDb("files").where({ id: b.id }).first();
+    // The upload keeps the thumbnail in both places, byte for byte.
+    const copyA = await testDb("file_thumbnails").where({ file_id: a.id }).first();
+    expect(copyA.bytes.equals((await fetchBytes(owner, a.thumbUrl)).bytes)).toBe(true);
+    // A: storage's thumbnail is gone, so only the database's copy can print it. B: as a photo uploaded before copies were kept.
+    await deleteTestObjects([rowA.thumb_key, rowA.key]);
+    await testDb("file_thumbnails").where({ file_id: b.id }).del();
+    const e = await owner.request("POST", `${B()}/log`, { date: "2026-08-01", hours: 1, title: "Two photos", systems: ["pitch"], fileIds: [a.id, b.id] });
+    expect(e.status, JSON.stringify(e.body)).toBe(201);
+
+    const res = await exportFile(viewer, buildId, "log-pdf", { from: "2026-08-01", to: "2026-08-01" });
+    expect(pdfImages(res.bytes)).toBe(2);
+    expect(pdfText(res.bytes)).toContain("storage only.jpg");
+    const copyB = await testDb("file_thumbnails").where({ file_id: b.id }).first();
+    expect(copyB?.bytes.equals((await fetchBytes(owner, b.thumbUrl)).bytes)).toBe(true);
   });
 
   it("prints names and signs beyond Latin-1 as typed (embedded font), and an emoji as ?", async () => {

@@ -71,6 +71,7 @@ export async function seedLongBuild(db: Knex, s3: { client: S3Client; bucket: st
   await inBatches(entries, 500, (b) => db("log_entries").insert(b));
 
   const files: Record<string, unknown>[] = [];
+  const thumbs: Record<string, unknown>[] = [];
   const links: Record<string, unknown>[] = [];
   const objects: { key: string; body: Buffer; type: string }[] = [];
   entries.forEach((e, i) => {
@@ -81,6 +82,7 @@ export async function seedLongBuild(db: Knex, s3: { client: S3Client; bucket: st
       const thumbKey = `builds/${buildId}/thumbs/${id}.jpg`;
       objects.push({ key, body: p.original, type: "image/jpeg" }, { key: thumbKey, body: p.thumb, type: "image/jpeg" });
       files.push({ id, build_id: buildId, key, kind: "photo", content_type: "image/jpeg", size: p.original.length, name: `photo-${i + 1}-${k + 1}.jpg`, thumb_key: thumbKey, thumb_size: p.thumb.length, width: 640, height: 480, uploaded_by: ownerId, created_at: new Date((e.created_at as Date).getTime() + k) });
+      thumbs.push({ file_id: id, bytes: p.thumb });
       links.push({ entry_id: e.id, file_id: id, position: k });
     }
   });
@@ -89,6 +91,7 @@ export async function seedLongBuild(db: Knex, s3: { client: S3Client; bucket: st
     await pool(objects, 24, (x) => s3.client.send(new PutObjectCommand({ Bucket: s3.bucket, Key: x.key, Body: x.body, ContentType: x.type })));
   }
   await inBatches(files, 1000, (b) => db("files").insert(b));
+  await inBatches(thumbs, 1000, (b) => db("file_thumbnails").insert(b));
   await inBatches(links, 2000, (b) => db("log_entry_files").insert(b));
 
   log(`${size.comments} comments, ${size.signoffs} sign-offs, ${size.parts} parts`);
