@@ -82,7 +82,7 @@ export function JoinDialog({ nodeId, onClose, onJoined }: { nodeId: string; onCl
           if (e.key === "Escape") {
             e.stopPropagation();
             onClose();
-          }
+          } else if (e.key === "Tab") keepTabInside(e);
         }}
       >
         <h2 id={`${ids}-t`} className="text-base font-semibold">Join {partName(node)} to another part</h2>
@@ -120,4 +120,19 @@ export function JoinDialog({ nodeId, onClose, onJoined }: { nodeId: string; onCl
       </div>
     </div>
   );
+}
+
+/** Tab and Shift+Tab go round the dialog's own controls: the page behind it is out of reach while it is open. */
+function keepTabInside(e: React.KeyboardEvent<HTMLElement>) {
+  const all = [...e.currentTarget.querySelectorAll<HTMLElement>("button, input, select, textarea, [href], [tabindex]:not([tabindex='-1'])")]
+    .filter((el) => !(el as HTMLButtonElement).disabled);
+  if (!all.length) return;
+  const first = all[0], last = all[all.length - 1];
+  if (e.shiftKey && document.activeElement === first) {
+    e.preventDefault();
+    last.focus();
+  } else if (!e.shiftKey && document.activeElement === last) {
+    e.preventDefault();
+    first.focus();
+  }
 }

@@ -75,6 +75,11 @@ describe("the editor by keyboard only", () => {
     await page.keyboard.press("j");
     await page.getByTestId("join-dialog").waitFor();
     expect((await focused(page)).id).toBe("join-port");
+    // Tab stays inside the dialog: Shift+Tab from its first control goes round to its last, Tab back to the first.
+    await page.keyboard.press("Shift+Tab");
+    expect(await page.evaluate(() => document.activeElement?.getAttribute("data-testid"))).toBe("join-confirm");
+    await page.keyboard.press("Tab");
+    expect((await focused(page)).id).toBe("join-port");
     await page.keyboard.type("a"); // the port list: "attach — free"
     await page.keyboard.press("Tab");
     await page.keyboard.type("Pushrod 1 B");
