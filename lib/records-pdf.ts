@@ -311,9 +311,21 @@ export async function logPdf(build: Build, pages: AsyncIterable<LogEntry[]>, cou
   };
 
   let done = 0;
-  for await (const entries of pages) {
-    const ids = entries.flatMap((e) => e.files.map((x) => x.id));
+  // The next page of entries and its thumbnails are read while this one is laid out.
+  const it = pages[Symbol.asyncIterator]();
+  const fetchPage = async () => {
+    const r = await it.next();
+    if (r.done) return null;
+    const ids = r.value.flatMap((e) => e.files.map((x) => x.id));
     const [keys, inDb] = await Promise.all([fileKeys(build.id, ids), thumbnailBytes(build.id, ids)]);
+    return { entries: r.value, keys, inDb };
+  };
+  for (let ahead = fetchPage(); ; ) {
+    const got = await ahead;
+    if (!got) break;
+    ahead = fetchPage();
+    ahead.catch(() => {}); // awaited on the next turn; if the layout fails first, its failure is the one reported
+    const { entries, keys, inDb } = got;
     // Read this page's photos and revisions ahead of laying them out (storage a few at a time).
     await pool([...keys].filter(([, k]) => k.kind !== "pdf"), 8, ([id, k]) => photo(id, k, inDb));
     await pool(entries.filter((e) => e.linkageId && e.revision), 4, (e) => revisionOf(e.linkageId!, e.revision!));
