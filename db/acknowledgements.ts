@@ -49,24 +49,29 @@ export async function createAcknowledgement(a: {
   revision: number;
   fingerprint: string;
 }) {
-  const [row] = await db("finding_acknowledgements")
-    .insert({
-      linkage_id: a.linkageId,
-      code: a.code,
-      subject_type: a.subject.type,
-      subject_id: a.subject.id,
-      reason: a.reason,
-      user_id: a.userId,
-      revision: a.revision,
-      fingerprint: a.fingerprint,
-    })
-    .returning("id");
-  await audit({ buildId: a.buildId, userId: a.userId, action: "finding.acknowledge", detail: { linkageId: a.linkageId, code: a.code, subject: a.subject } });
+  const row = await db.transaction(async (trx) => {
+    const [r] = await trx("finding_acknowledgements")
+      .insert({
+        linkage_id: a.linkageId,
+        code: a.code,
+        subject_type: a.subject.type,
+        subject_id: a.subject.id,
+        reason: a.reason,
+        user_id: a.userId,
+        revision: a.revision,
+        fingerprint: a.fingerprint,
+      })
+      .returning("id");
+    await audit({ buildId: a.buildId, userId: a.userId, action: "finding.acknowledge", detail: { linkageId: a.linkageId, code: a.code, subject: a.subject } }, trx);
+    return r as { id: string };
+  });
   return (await listAcknowledgements(a.linkageId)).find((x) => x.id === row.id)!;
 }
 
 export async function deleteAcknowledgement(buildId: string, linkageId: string, ackId: string, userId: string) {
-  const n = await db("finding_acknowledgements").where({ id: ackId, linkage_id: linkageId }).del();
-  if (n) await audit({ buildId, userId, action: "finding.unacknowledge", detail: { linkageId, ackId } });
-  return n > 0;
+  return db.transaction(async (trx) => {
+    const n = await trx("finding_acknowledgements").where({ id: ackId, linkage_id: linkageId }).del();
+    if (n) await audit({ buildId, userId, action: "finding.unacknowledge", detail: { linkageId, ackId } }, trx);
+    return n > 0;
+  });
 }

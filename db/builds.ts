@@ -131,8 +131,10 @@ export async function listMembers(buildId: string) {
 }
 
 export async function addMember(buildId: string, userId: string, role: Role, byUserId: string) {
-  await db("memberships").insert({ build_id: buildId, user_id: userId, role }).onConflict(["build_id", "user_id"]).merge({ role });
-  await audit({ buildId, userId: byUserId, action: "member.add", detail: { userId, role } });
+  await db.transaction(async (trx) => {
+    await trx("memberships").insert({ build_id: buildId, user_id: userId, role }).onConflict(["build_id", "user_id"]).merge({ role });
+    await audit({ buildId, userId: byUserId, action: "member.add", detail: { userId, role } }, trx);
+  });
 }
 
 /**
@@ -175,17 +177,20 @@ const INVITE_DAYS = 14;
 
 export async function createInvitation(buildId: string, email: string, role: Role, byUserId: string) {
   const token = randomBytes(24).toString("base64url");
-  const [row] = await db("invitations")
-    .insert({
-      build_id: buildId,
-      email: email.trim(),
-      role,
-      token_hash: hashToken(token),
-      expires_at: db.raw(`now() + interval '${INVITE_DAYS} days'`),
-      invited_by: byUserId,
-    })
-    .returning(["id", "email", "role", "expires_at", "created_at"]);
-  await audit({ buildId, userId: byUserId, action: "invitation.create", detail: { email, role } });
+  const row = await db.transaction(async (trx) => {
+    const [r] = await trx("invitations")
+      .insert({
+        build_id: buildId,
+        email: email.trim(),
+        role,
+        token_hash: hashToken(token),
+        expires_at: trx.raw(`now() + interval '${INVITE_DAYS} days'`),
+        invited_by: byUserId,
+      })
+      .returning(["id", "email", "role", "expires_at", "created_at"]);
+    await audit({ buildId, userId: byUserId, action: "invitation.create", detail: { email, role } }, trx);
+    return r;
+  });
   return { token, invitation: toInvitation(row) };
 }
 

@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "./index";
+import { audit } from "./audit";
 
 import { personName } from "./people";
 import type { Tick } from "@/shared/schemas/checklist";
@@ -13,15 +14,19 @@ export async function listTicks(linkageId: string, revision: number): Promise<Ti
   }));
 }
 
-export async function setTick(linkageId: string, revision: number, jointId: string, code: string, ticked: boolean, note: string | undefined, userId: string) {
+/** Ticks or unticks one item (with its note) and records it in the audit log, in one transaction. */
+export async function setTick(buildId: string, linkageId: string, revision: number, jointId: string, code: string, ticked: boolean, note: string | undefined, userId: string) {
   const values = {
     ticked_by: ticked ? userId : null,
     ticked_at: ticked ? db.fn.now() : null,
     ...(note !== undefined ? { note } : {}),
     updated_at: db.fn.now(),
   };
-  await db("checklist_items")
-    .insert({ linkage_id: linkageId, revision, joint_id: jointId, item_code: code, note: note ?? "", ...values })
-    .onConflict(["linkage_id", "revision", "joint_id", "item_code"])
-    .merge(values);
+  await db.transaction(async (trx) => {
+    await trx("checklist_items")
+      .insert({ linkage_id: linkageId, revision, joint_id: jointId, item_code: code, note: note ?? "", ...values })
+      .onConflict(["linkage_id", "revision", "joint_id", "item_code"])
+      .merge(values);
+    await audit({ buildId, userId, action: "checklist.tick", detail: { linkageId, revision, jointId, code, ticked } }, trx);
+  });
 }

@@ -104,16 +104,20 @@ export async function createComment(c: {
 }
 
 export async function updateCommentBody(buildId: string, linkageId: string, commentId: string, userId: string, body: string) {
-  await db("comments").where({ id: commentId, linkage_id: linkageId }).update({ body, edited_at: db.fn.now() });
-  await audit({ buildId, userId, action: "comment.edit", detail: { linkageId, commentId } });
+  await db.transaction(async (trx) => {
+    await trx("comments").where({ id: commentId, linkage_id: linkageId }).update({ body, edited_at: trx.fn.now() });
+    await audit({ buildId, userId, action: "comment.edit", detail: { linkageId, commentId } }, trx);
+  });
   return getComment(linkageId, commentId);
 }
 
 export async function setThreadResolved(buildId: string, linkageId: string, rootId: string, userId: string, resolved: boolean) {
-  await db("comments")
-    .where({ id: rootId, linkage_id: linkageId })
-    .update(resolved ? { resolved_at: db.fn.now(), resolved_by: userId } : { resolved_at: null, resolved_by: null });
-  await audit({ buildId, userId, action: resolved ? "comment.resolve" : "comment.reopen", detail: { linkageId, commentId: rootId } });
+  await db.transaction(async (trx) => {
+    await trx("comments")
+      .where({ id: rootId, linkage_id: linkageId })
+      .update(resolved ? { resolved_at: trx.fn.now(), resolved_by: userId } : { resolved_at: null, resolved_by: null });
+    await audit({ buildId, userId, action: resolved ? "comment.resolve" : "comment.reopen", detail: { linkageId, commentId: rootId } }, trx);
+  });
   return getComment(linkageId, rootId);
 }
 

@@ -1,6 +1,7 @@
 import "server-only";
 import type { Knex } from "knex";
 import { db } from "./index";
+import { audit } from "./audit";
 import { countOf, keysetPage, type Key, type PageArgs } from "./paging";
 
 import type { FileKind, JointPhoto, StoredFile } from "@/shared/schemas/files";
@@ -95,9 +96,18 @@ export async function filesByIds(buildId: string, ids: string[]) {
 }
 
 /** Deletes the row (links cascade) and returns the storage keys to delete. */
-export async function deleteFileRow(buildId: string, fileId: string) {
-  const [row] = await db<FileRow>("files").where({ build_id: buildId, id: fileId }).del().returning(["key", "thumb_key"]);
+export async function deleteFileRow(buildId: string, fileId: string, trx: Knex = db) {
+  const [row] = await trx<FileRow>("files").where({ build_id: buildId, id: fileId }).del().returning(["key", "thumb_key"]);
   return row ? { key: row.key, thumbKey: row.thumb_key } : null;
+}
+
+/** A member deletes a file: the row (and every link to it) and its audit event in one transaction; the objects are the caller's to remove after. */
+export async function deleteFile(buildId: string, fileId: string, userId: string) {
+  return db.transaction(async (trx) => {
+    const keys = await deleteFileRow(buildId, fileId, trx);
+    if (keys) await audit({ buildId, userId, action: "file.delete", detail: { fileId } }, trx);
+    return keys;
+  });
 }
 
 // ---- joint photos ---------------------------------------------------------------------------

@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "./index";
+import { audit } from "./audit";
 import type { LinkageGraph } from "@/shared/linkage/schema";
 import { hardwareList, type HardwareState } from "@/shared/records/hardware";
 
@@ -26,9 +27,13 @@ export function listedHardware<L extends { usedIn: unknown[] }>(lines: L[], show
   return lines.map((l) => (l.usedIn.length > shown ? { ...l, usedIn: l.usedIn.slice(0, shown) } : l));
 }
 
+/** Sets one line's state and records it in the audit log, in one transaction. */
 export async function setHardwareState(buildId: string, key: string, state: HardwareState, userId: string) {
-  await db("hardware_states")
-    .insert({ build_id: buildId, part_key: key, state, updated_by: userId })
-    .onConflict(["build_id", "part_key"])
-    .merge({ state, updated_by: userId, updated_at: db.fn.now() });
+  await db.transaction(async (trx) => {
+    await trx("hardware_states")
+      .insert({ build_id: buildId, part_key: key, state, updated_by: userId })
+      .onConflict(["build_id", "part_key"])
+      .merge({ state, updated_by: userId, updated_at: trx.fn.now() });
+    await audit({ buildId, userId, action: "hardware.state", detail: { key, state } }, trx);
+  });
 }

@@ -72,19 +72,24 @@ export async function createLinkage(
   });
 }
 
+/** Renames or re-files a linkage; the change and its audit event are one transaction. */
 export async function updateLinkage(buildId: string, linkageId: string, userId: string, patch: { name?: string; system?: ControlSystem }) {
-  const [row] = await db<LinkageRow>("linkages")
-    .where({ id: linkageId, build_id: buildId })
-    .update({ ...patch, updated_at: db.fn.now() })
-    .returning("*");
-  if (row) await audit({ buildId, userId, action: "linkage.update", detail: { linkageId, ...patch } });
-  return row ? toLinkage(row) : null;
+  return db.transaction(async (trx) => {
+    const [row] = await trx<LinkageRow>("linkages")
+      .where({ id: linkageId, build_id: buildId })
+      .update({ ...patch, updated_at: trx.fn.now() })
+      .returning("*");
+    if (row) await audit({ buildId, userId, action: "linkage.update", detail: { linkageId, ...patch } }, trx);
+    return row ? toLinkage(row) : null;
+  });
 }
 
 export async function deleteLinkage(buildId: string, linkageId: string, userId: string) {
-  const n = await db("linkages").where({ id: linkageId, build_id: buildId }).del();
-  if (n) await audit({ buildId, userId, action: "linkage.delete", detail: { linkageId } });
-  return n > 0;
+  return db.transaction(async (trx) => {
+    const n = await trx("linkages").where({ id: linkageId, build_id: buildId }).del();
+    if (n) await audit({ buildId, userId, action: "linkage.delete", detail: { linkageId } }, trx);
+    return n > 0;
+  });
 }
 
 export async function getRevision(linkageId: string, revision?: number): Promise<Revision | null> {

@@ -204,9 +204,11 @@ export async function updateEntry(buildId: string, id: string, userId: string, v
 }
 
 export async function deleteEntry(buildId: string, id: string, userId: string) {
-  const n = await db("log_entries").where({ build_id: buildId, id }).del();
-  if (n) await audit({ buildId, userId, action: "log.delete", detail: { entryId: id } });
-  return n > 0;
+  return db.transaction(async (trx) => {
+    const n = await trx("log_entries").where({ build_id: buildId, id }).del();
+    if (n) await audit({ buildId, userId, action: "log.delete", detail: { entryId: id } }, trx);
+    return n > 0;
+  });
 }
 
 /** The latest few entries, for the build overview (no files). */

@@ -36,9 +36,9 @@ export async function createSignoff(s: { buildId: string; linkageId: string; rev
       signoff: { id: r.id, reviewerId: s.reviewerId, statement: s.statement, signedAt: new Date(r.created_at).toISOString() },
     });
     await trx("signoffs").where({ id: r.id }).update({ record_fingerprint: fp });
+    await audit({ buildId: s.buildId, userId: s.reviewerId, action: "linkage.signoff", detail: { linkageId: s.linkageId, revision: s.revision } }, trx);
     return r as { id: string };
   });
-  await audit({ buildId: s.buildId, userId: s.reviewerId, action: "linkage.signoff", detail: { linkageId: s.linkageId, revision: s.revision } });
   return (await listSignoffs(s.linkageId, s.revision)).find((x) => x.id === row.id)!;
 }
 

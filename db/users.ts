@@ -1,5 +1,6 @@
 import "server-only";
 import { db } from "./index";
+import { audit } from "./audit";
 import type { NotifyPref, PublicUser } from "@/shared/schemas/users";
 
 export type UserRow = {
@@ -96,14 +97,17 @@ export async function listUsersForAdmin() {
   }));
 }
 
-export async function setSiteAdmin(id: string, isSiteAdmin: boolean) {
+/** A site admin grants or takes away site admin; the change and its audit event are one transaction. */
+export async function setSiteAdmin(id: string, isSiteAdmin: boolean, byUserId: string) {
   return db.transaction(async (trx) => {
     if (!isSiteAdmin) {
       const [{ count }] = await trx("users").where({ is_site_admin: true }).whereNot({ id }).count<{ count: string }[]>("* as count");
       if (Number(count) === 0) return "last_admin" as const;
     }
     const n = await trx("users").where({ id }).update({ is_site_admin: isSiteAdmin });
-    return n ? ("ok" as const) : ("missing" as const);
+    if (!n) return "missing" as const;
+    await audit({ buildId: null, userId: byUserId, action: "admin.site-admin", detail: { target: id, isSiteAdmin } }, trx);
+    return "ok" as const;
   });
 }
 

@@ -26,10 +26,12 @@ export const ERROR_STATUS = {
   export_not_ready: 409,
   export_not_failed: 409,
   invitation_closed: 410,
+  request_timeout: 408,
   too_large: 413,
   unsupported_type: 415,
   unreadable_image: 415,
   csv_rows_invalid: 422,
+  headers_too_large: 431,
   server_error: 500,
   unavailable: 503,
 } as const;

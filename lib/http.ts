@@ -1,43 +1,26 @@
 import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
 import type { z } from "zod";
-import { ApiError, fieldError, invalid, notFound, serverError, unauthorized, forbidden, unavailable } from "./errors";
+import { ApiError, invalid, notFound, serverError, unauthorized, forbidden, unavailable } from "./errors";
 import { isDatabaseUnavailable } from "@/db/unavailable";
+import { MAX_BODY_BYTES, parseJsonText, readTextCapped } from "./body";
+import { checkQueryEncoding } from "./url-encoding";
 import { getSessionUser, type SessionUser } from "./auth";
 import { getMembership, type Build } from "@/db/builds";
 import { getLinkage, getRevision, type Linkage, type Revision } from "@/db/linkages";
 import { revisionQuery } from "@/shared/schemas/common";
 import { can, type Capability, type Role, CAPABILITIES } from "@/shared/roles";
 
-export const MAX_BODY_BYTES = 5 * 1024 * 1024;
+export { MAX_BODY_BYTES };
 /** A UUID as Postgres reads it: anything else names no row (and must not reach a uuid column). */
 export const UUID_RE = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
-/** The path of the first string (or key) holding U+0000, which Postgres text and jsonb cannot store. */
-function nulPath(v: unknown, path: string[] = []): string | null {
-  if (typeof v === "string") return v.includes("\u0000") ? path.join(".") || "_" : null;
-  if (!v || typeof v !== "object") return null;
-  for (const [k, x] of Object.entries(v)) {
-    if (k.includes("\u0000")) return [...path, "_"].join(".");
-    const p = nulPath(x, [...path, k]);
-    if (p) return p;
-  }
-  return null;
-}
-
-/** Read a JSON body and parse it with a zod schema: 400 with field errors when it does not fit. */
+/**
+ * Read a JSON body (at most 5 MB, counted as it streams in; UTF-8; at most 64 levels deep) and parse it
+ * with a zod schema: 400 with field errors when it does not fit.
+ */
 export async function parseBody<S extends z.ZodTypeAny>(req: Request, schema: S): Promise<z.infer<S>> {
-  const text = await req.text();
-  if (text.length > MAX_BODY_BYTES) throw new ApiError("too_large", "The request body is larger than 5 MB.");
-  let json: unknown;
-  try {
-    json = text.length ? JSON.parse(text) : undefined;
-  } catch {
-    throw new ApiError("invalid_json", "The request body is not valid JSON.");
-  }
-  // A NUL can only come in as the escape \u0000 (JSON has no raw control characters in strings).
-  const nul = text.includes("\\u0000") ? nulPath(json) : null;
-  if (nul) throw fieldError(nul, "must not contain NUL characters");
+  const json = parseJsonText(await readTextCapped(req, MAX_BODY_BYTES));
   const r = schema.safeParse(json);
   if (!r.success) throw invalid(r.error);
   return r.data;
@@ -69,6 +52,7 @@ export function withUser<P = Record<string, string>>(
 ) {
   return async (req: NextRequest, ctx: RouteCtx<P>) => {
     try {
+      checkQueryEncoding(req);
       const user = await getSessionUser();
       if (!user) throw unauthorized();
       return await handler({ req, user, params: (await ctx?.params) ?? ({} as P) });
@@ -90,6 +74,7 @@ export function withSiteAdmin<P = Record<string, string>>(handler: (a: { req: Ne
 export function withErrors<P = Record<string, string>>(handler: (a: { req: NextRequest; params: P }) => Promise<Response>) {
   return async (req: NextRequest, ctx: RouteCtx<P>) => {
     try {
+      checkQueryEncoding(req);
       return await handler({ req, params: (await ctx?.params) ?? ({} as P) });
     } catch (e) {
       return errorResponse(e);

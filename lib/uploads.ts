@@ -5,6 +5,7 @@ import type { NextRequest } from "next/server";
 import { db } from "@/db/index";
 import { insertFile, type FileKind, type StoredFile } from "@/db/files";
 import { ApiError } from "./errors";
+import { readBodyCapped } from "./body";
 import { deleteObject, putObject } from "./storage";
 
 /** Size caps by kind, bytes. */
@@ -16,18 +17,26 @@ const THUMB_SIZE = 320;
 
 export type Upload = { bytes: Buffer; name: string };
 
+/** Room a multipart form needs around its file (boundaries, part headers, small fields). */
+const FORM_OVERHEAD_BYTES = 64 * 1024;
+/**
+ * The most pixels a photo may declare in its header: a 48-megapixel phone photo fits; more is refused
+ * before it is decoded (a small compressed file can declare a huge, memory-filling picture).
+ */
+export const PHOTO_MAX_PIXELS = 50_000_000; // common practice, no source
+
 /**
  * Reads the one file of a request: multipart/form-data with a `file` field, or a raw image body
- * (the editor posts the PNG blob as is). Refuses bodies over the largest cap before reading them.
+ * (the editor posts the PNG blob as is). The cap is counted while the body streams in (a declared
+ * Content-Length over it is refused before reading), so no more than the cap is ever held.
  */
 export async function readUpload(req: NextRequest, maxBytes = PDF_MAX_BYTES): Promise<Upload & { fields: Record<string, string> }> {
-  const len = Number(req.headers.get("content-length") || 0);
-  if (len > maxBytes + 64 * 1024) throw tooLarge(maxBytes);
   const type = req.headers.get("content-type") || "";
   if (type.startsWith("multipart/form-data")) {
+    const body = await readBodyCapped(req, maxBytes + FORM_OVERHEAD_BYTES, () => tooLarge(maxBytes));
     let form: FormData;
     try {
-      form = await req.formData();
+      form = await new Response(new Uint8Array(body), { headers: { "content-type": type } }).formData();
     } catch {
       throw new ApiError("invalid_upload", "The upload could not be read as a form.", { file: "missing or unreadable" });
     }
@@ -38,8 +47,7 @@ export async function readUpload(req: NextRequest, maxBytes = PDF_MAX_BYTES): Pr
     for (const [k, v] of form.entries()) if (typeof v === "string") fields[k] = v;
     return { bytes: Buffer.from(await file.arrayBuffer()), name: file.name || "", fields };
   }
-  const bytes = Buffer.from(await req.arrayBuffer());
-  if (bytes.length > maxBytes) throw tooLarge(maxBytes);
+  const bytes = await readBodyCapped(req, maxBytes, () => tooLarge(maxBytes));
   if (!bytes.length) throw new ApiError("invalid_upload", "The upload is empty.", { file: "empty" });
   return { bytes, name: req.headers.get("x-file-name") || "", fields: {} };
 }
@@ -105,9 +113,19 @@ export async function storeUpload(o: {
   let height: number | null = null;
   if (t.kind === "photo") {
     const sharp = (await import("sharp")).default;
+    // The header alone first (no pixels decoded): how big the picture says it is.
+    let meta: Awaited<ReturnType<ReturnType<typeof sharp>["metadata"]>>;
     try {
-      const img = sharp(bytes, { failOn: "error" }).rotate();
-      const meta = await sharp(bytes).metadata();
+      meta = await sharp(bytes, { limitInputPixels: false }).metadata();
+    } catch {
+      throw new ApiError("unreadable_image", "The image is damaged or cannot be decoded.", { file: "cannot be decoded" });
+    }
+    if (!meta.width || !meta.height) throw new ApiError("unreadable_image", "The image is damaged or cannot be decoded.", { file: "cannot be decoded" });
+    if (meta.width * meta.height > PHOTO_MAX_PIXELS) {
+      throw new ApiError("too_large", `The image is ${meta.width} × ${meta.height} pixels; photos of up to ${PHOTO_MAX_PIXELS / 1e6} megapixels are accepted.`, { file: "too many pixels" });
+    }
+    try {
+      const img = sharp(bytes, { failOn: "error", limitInputPixels: PHOTO_MAX_PIXELS }).rotate();
       width = meta.autoOrient?.width ?? meta.width ?? null;
       height = meta.autoOrient?.height ?? meta.height ?? null;
       thumb = await img.resize(THUMB_SIZE, THUMB_SIZE, { fit: "inside", withoutEnlargement: true }).jpeg({ quality: 78 }).toBuffer();

@@ -2,7 +2,6 @@ import { withBuild, parseBody, json } from "@/lib/http";
 import { buildHardware, listedHardware, setHardwareState } from "@/db/hardware";
 import { hardwareQuery, hardwareStatePut, USED_IN_SHOWN } from "@/shared/schemas/hardware";
 import { fieldError, notFound } from "@/lib/errors";
-import { audit } from "@/db/audit";
 
 /**
  * Every part the joint cards of the current revisions call for, with quantities, state and where used (the
@@ -24,6 +23,5 @@ export const PUT = withBuild("edit", async ({ req, user, build }) => {
   const lines = await buildHardware(build.id);
   if (!lines.some((l) => l.key === key)) throw notFound("hardware line");
   await setHardwareState(build.id, key, state, user.id);
-  await audit({ buildId: build.id, userId: user.id, action: "hardware.state", detail: { key, state } });
   return json({ key, state });
 });

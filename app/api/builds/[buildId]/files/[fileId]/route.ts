@@ -1,10 +1,9 @@
 import { withBuild, parseParams, json } from "@/lib/http";
 import { notFound } from "@/lib/errors";
-import { deleteFileRow, getFileRow } from "@/db/files";
+import { deleteFile, getFileRow } from "@/db/files";
 import { uuidParam } from "@/shared/schemas/common";
 import { streamObject } from "@/lib/records-http";
 import { removeObjects } from "@/lib/uploads";
-import { audit } from "@/db/audit";
 
 type P = { buildId: string; fileId: string };
 
@@ -23,9 +22,9 @@ export const GET = withBuild<P>("read", async ({ req, build, params }) => {
 /** Deletes the file, its thumbnail and every link to it (joints, log entries, revision pictures). */
 export const DELETE = withBuild<P>("edit", async ({ user, build, params }) => {
   const id = parseParams(params.fileId, uuidParam);
-  const keys = await deleteFileRow(build.id, id);
+  const keys = await deleteFile(build.id, id, user.id);
   if (!keys) throw notFound("file");
+  // After the row is gone for good: a failed delete leaves the file whole.
   await removeObjects(keys);
-  await audit({ buildId: build.id, userId: user.id, action: "file.delete", detail: { fileId: id } });
   return json({ deleted: true });
 });

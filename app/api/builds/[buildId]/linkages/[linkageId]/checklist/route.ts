@@ -2,7 +2,6 @@ import { withLinkage, parseBody, json } from "@/lib/http";
 import { fieldError } from "@/lib/errors";
 import { getRevision } from "@/db/linkages";
 import { listTicks, setTick } from "@/db/checklist";
-import { audit } from "@/db/audit";
 import { checklistFor } from "@/shared/records/checklist";
 import { analyze } from "@/shared/analysis";
 import { checklistTick } from "@/shared/schemas/checklist";
@@ -26,8 +25,7 @@ export const PUT = withLinkage("comment", async ({ req, user, build, linkage }) 
   if (!checklistFor(rev.graph, analyze(rev.graph, build.analysisSettings)).some((i) => i.jointId === t.jointId && i.code === t.code)) {
     throw fieldError("code", "not on this checklist", "That item is not on this revision's checklist.");
   }
-  await setTick(linkage.id, t.revision, t.jointId, t.code, t.ticked, t.note, user.id);
-  await audit({ buildId: build.id, userId: user.id, action: "checklist.tick", detail: { linkageId: linkage.id, revision: t.revision, jointId: t.jointId, code: t.code, ticked: t.ticked } });
+  await setTick(build.id, linkage.id, t.revision, t.jointId, t.code, t.ticked, t.note, user.id);
   const tick = (await listTicks(linkage.id, t.revision)).find((x) => x.jointId === t.jointId && x.code === t.code);
   return json({ item: tick });
 });
