@@ -55,8 +55,22 @@ export const authOptions: NextAuthOptions = {
       if (user) token.sv = (user as { sv?: number }).sv ?? 0;
       return token;
     },
+    /**
+     * A cookie whose session has ended (signed out, password changed, account gone) is no session here either:
+     * next-auth's session endpoint would otherwise answer it with the account's name and e-mail and hand back a
+     * renewed cookie. Throwing makes next-auth answer `{}` and clear the cookie. If the database cannot be asked,
+     * this passes and getSessionUser (which reads the account on every request) answers 503.
+     */
     async session({ session, token }) {
-      if (session.user && token.sub) Object.assign(session.user, { id: token.sub, sv: typeof token.sv === "number" ? token.sv : 0 });
+      const sv = typeof token.sv === "number" ? token.sv : 0;
+      if (token.sub) {
+        const row = await findUserById(token.sub).catch((e: unknown) => {
+          if (isDatabaseUnavailable(e)) return "unknown" as const;
+          throw e;
+        });
+        if (row !== "unknown" && (!row || row.session_version !== sv)) throw new Error("This session has ended.");
+      }
+      if (session.user && token.sub) Object.assign(session.user, { id: token.sub, sv });
       return session;
     },
   },

@@ -22,11 +22,11 @@ export const ERROR_STATUS = {
   already_member: 409,
   last_owner: 409,
   last_admin: 409,
-  email_taken: 409,
   export_not_ready: 409,
   export_not_failed: 409,
   invitation_closed: 410,
   request_timeout: 408,
+  link_closed: 410,
   too_large: 413,
   unsupported_type: 415,
   unreadable_image: 415,
@@ -85,8 +85,9 @@ export const csvRowsInvalid = (message: string, report: unknown) => apiError("cs
 export const alreadyMember = (message: string, fields?: Fields) => apiError("already_member", message, { fields });
 export const lastOwner = (message: string) => apiError("last_owner", message);
 export const lastAdmin = (message: string) => apiError("last_admin", message);
-export const emailTaken = (message: string, fields?: Fields) => apiError("email_taken", message, { fields });
 export const invitationClosed = (message: string) => apiError("invitation_closed", message);
+/** A single-use link (sign-up confirmation) that was used or has expired. */
+export const linkClosed = (message: string) => apiError("link_closed", message);
 export const exportNotReady = (message: string) => apiError("export_not_ready", message);
 export const exportNotFailed = (message: string) => apiError("export_not_failed", message);
 

@@ -73,6 +73,37 @@ export async function sendInvitationMail(i: { to: string; buildName: string; rol
   return sendMail({ to: i.to, subject: `Invitation to "${i.buildName}" on Linkwright`, ...body });
 }
 
+// ---- accounts --------------------------------------------------------------------------------
+// Sent to whatever address was typed on the sign-up page, so they carry no text the requester typed.
+
+/** The link that makes the account (a new address). */
+export async function sendSignUpConfirmMail(i: { to: string; link: string; hours: number }) {
+  const body = render({
+    heading: "Finish creating your Linkwright account",
+    lines: [
+      "Someone, we hope you, asked to create a Linkwright account with this e-mail address.",
+      `To finish, open the link below within ${i.hours} hours. It works once; then sign in with the e-mail and password you chose.`,
+    ],
+    action: { label: "Finish creating my account", url: i.link },
+    footer: "Sent by Linkwright because this address was entered on its sign-up page. If that was not you, ignore this message: no account is made without the link.",
+  });
+  return sendMail({ to: i.to, subject: "Finish creating your Linkwright account", ...body });
+}
+
+/** The address already has an account: how to get in instead. */
+export async function sendAlreadyRegisteredMail(i: { to: string; signInLink: string }) {
+  const body = render({
+    heading: "You already have a Linkwright account",
+    lines: [
+      "Someone, we hope you, asked to create a Linkwright account with this e-mail address, which already has one. No second account was made and nothing was changed.",
+      "Sign in with this address and your password instead. Once signed in, you can change your password under Your account (your name at the top of every page).",
+    ],
+    action: { label: "Sign in", url: i.signInLink },
+    footer: "Sent by Linkwright because this address was entered on its sign-up page. If that was not you, you can ignore this message.",
+  });
+  return sendMail({ to: i.to, subject: "You already have a Linkwright account", ...body });
+}
+
 // ---- comments --------------------------------------------------------------------------------
 
 /** Does the text @mention this person (by first name, full name or the part of the address before @)? */

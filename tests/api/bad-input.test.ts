@@ -15,6 +15,7 @@ const nodeWithoutArms = { id: "s1", kind: "stick", label: "", position: { x: 0, 
 const CASES: BadInput = {
   ...BAD_INPUT,
   "POST /api/sign-up": { path: () => "/api/sign-up", bodies: [[{ name: "", email: "not-an-email", password: "short" }, "email"], [{ name: 7 }, "name"]] },
+  "POST /api/sign-up/confirm": { path: () => "/api/sign-up/confirm", bodies: [[{ token: "short" }, "token"], [{}, "token"], [{ token: "A".repeat(43), extra: 1 }, "_"]] },
   "PATCH /api/me": { path: () => "/api/me", bodies: [[{ unitSystem: "imperial" }, "unitSystem"]] },
   "POST /api/me/password": { path: () => "/api/me/password", bodies: [[{ currentPassword: "", newPassword: "a long enough new password" }, "currentPassword"], [{ currentPassword: "whatever it is", newPassword: "short" }, "newPassword"], [{ newPassword: "a long enough new password" }, "currentPassword"]] },
   "POST /api/analyze": { path: () => "/api/analyze", bodies: [[{ graph: { formatVersion: 2, nodes: [], joints: [] } }, "graph.formatVersion"], [{ graph: { formatVersion: 1, nodes: [nodeWithoutArms], joints: [] } }, "graph.nodes.0.props.gripArm"]] },

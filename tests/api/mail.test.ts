@@ -6,7 +6,7 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
-import { anonymous, signIn, type Client } from "../support/http";
+import { anonymous, signIn, signUp, type Client } from "../support/http";
 import { APP_URL } from "../support/env";
 import { mailTo, sinkMessages } from "../support/review";
 import { demoPitchLinkage, DEMO_WRONG_JOINT } from "@/shared/demo";
@@ -61,7 +61,7 @@ describe("invitation e-mail", () => {
     const token = link!.split("/invite/")[1];
     const page = await anonymous().request("GET", `/invite/${token}`);
     expect(page.status).toBe(200);
-    expect(await anonymous().request("POST", "/api/sign-up", { name: "Invited Person", email, password: TEST_PASSWORD })).toMatchObject({ status: 201 });
+    await signUp({ name: "Invited Person", email, password: TEST_PASSWORD, next: `/invite/${token}` });
     const invitee = await signIn(email);
     expect((await invitee.request("GET", `/api/builds/${buildId}`)).status).toBe(404);
     const accept = await invitee.request("POST", `/api/invitations/${token}`);

@@ -128,7 +128,7 @@ describe("axe-core and phone width on every page", () => {
     for (const width of WIDTHS) {
       const ctx = await browser.newContext({ viewport: { width, height: 844 } });
       const page = await ctx.newPage();
-      for (const url of ["/sign-in", "/sign-up", "/verify", "/sign-in?password=changed"]) {
+      for (const url of ["/sign-in", "/sign-up", "/verify", "/sign-in?password=changed", "/sign-in?confirmed=1", `/sign-up/confirm/${"A".repeat(43)}`]) {
         const r = await check(page, url);
         for (const v of r.violations) problems.push(`${url}@${width}: ${v.id} ${v.help} — ${v.nodes.map((n) => n.target.join(" ")).join(", ")}`);
         if (r.widths.scroll > r.widths.view) problems.push(`${url}@${width}: ${r.widths.scroll} px wide`);

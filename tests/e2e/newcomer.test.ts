@@ -10,6 +10,7 @@ import type { Browser, Page } from "playwright-core";
 import { APP_URL, launchBrowser, shot } from "../support/browser";
 import { connect, dropPart, openJoint, waitSaved } from "../support/editor-page";
 import { testDb } from "../support/db";
+import { confirmToken } from "../support/http";
 import { starterPitchRun } from "@/shared/starter";
 
 let browser: Browser;
@@ -36,6 +37,15 @@ describe("a newcomer's first run", () => {
     await page.getByLabel("E-mail").fill(email);
     await page.getByLabel("Password").fill("a long enough password");
     await page.getByRole("button", { name: "Create account" }).click();
+    await page.getByTestId("sign-up-sent").getByText("Check your e-mail to finish creating your account.").waitFor();
+    await shot(page, "newcomer-00-check-your-email");
+    // The link from the e-mail (the local sink) makes the account; sign-in says so, then the builds list.
+    await page.goto(`${APP_URL}/sign-up/confirm/${await confirmToken(email)}`);
+    await page.waitForURL(/\/sign-in\?confirmed=1/);
+    await page.getByTestId("account-confirmed").waitFor();
+    await page.getByLabel("E-mail").fill(email);
+    await page.getByLabel("Password").fill("a long enough password");
+    await page.getByRole("button", { name: "Sign in" }).click();
     await page.waitForURL(/\/builds$/);
     await page.getByRole("link", { name: "Start your first build" }).click();
     await page.getByLabel("Build name").fill("My first two-seater");

@@ -1,5 +1,6 @@
 import { APP_URL } from "./env";
 import { TEST_PASSWORD } from "./db";
+import { mailTo } from "./review";
 
 export type Client = {
   cookie: string;
@@ -41,3 +42,26 @@ export function client(cookie = "", base = APP_URL): Client {
 }
 
 export const anonymous = () => client("");
+
+/** The token of the newest sign-up confirmation link mailed to the address (after `seen` such mails). */
+export async function confirmToken(email: string, seen = 0): Promise<string> {
+  const links = (await mailTo(email, { min: seen + 1, ms: 10_000 }))
+    .map((m) => m.text?.match(/\/sign-up\/confirm\/([A-Za-z0-9_-]+)/)?.[1])
+    .filter((t): t is string => !!t);
+  if (links.length <= seen) throw new Error(`no sign-up confirmation mail to ${email}`);
+  return links[links.length - 1];
+}
+
+/**
+ * Signs up as the sign-up page does, then follows the link mailed to the address as its page does
+ * (the confirmation route with the link's token): the account exists afterwards.
+ */
+export async function signUp(u: { name: string; email: string; password?: string; next?: string }, base = APP_URL) {
+  const before = (await mailTo(u.email, { min: 0, ms: 0 })).filter((m) => m.text?.includes("/sign-up/confirm/")).length;
+  const r = await client("", base).request("POST", "/api/sign-up", { name: u.name, email: u.email, password: u.password ?? TEST_PASSWORD, ...(u.next ? { next: u.next } : {}) });
+  if (r.status !== 202) throw new Error(`sign-up of ${u.email} answered ${r.status}: ${JSON.stringify(r.body)}`);
+  const token = await confirmToken(u.email, before);
+  const c = await client("", base).request("POST", "/api/sign-up/confirm", { token });
+  if (c.status !== 200) throw new Error(`confirming ${u.email} answered ${c.status}: ${JSON.stringify(c.body)}`);
+  return c.body as { email: string; next: string };
+}

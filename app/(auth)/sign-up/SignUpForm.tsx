@@ -1,28 +1,43 @@
 "use client";
 import { zodResolver } from "@hookform/resolvers/zod";
-import { signIn } from "next-auth/react";
 import Link from "next/link";
+import { useState } from "react";
 import { useForm } from "react-hook-form";
 import type { z } from "zod";
 import { Button, Field, Input } from "@/components/ui";
 import { api, ApiFailure } from "@/components/api-client";
-import { signUpInput } from "@/shared/schemas/users";
+import { signUpInput, type signUpResponse } from "@/shared/schemas/users";
 
 type Values = z.infer<typeof signUpInput>;
 
 export function SignUpForm({ next }: { next: string }) {
   const { register, handleSubmit, setError, formState } = useForm<Values>({ resolver: zodResolver(signUpInput) });
   const { errors, isSubmitting } = formState;
+  const [sent, setSent] = useState<{ email: string; message: string } | null>(null);
   async function onSubmit(v: Values) {
     try {
-      await api("/api/sign-up", { body: v });
-      const res = await signIn("credentials", { email: v.email, password: v.password, redirect: false });
-      if (res?.ok) window.location.assign(next);
-      else setError("root", { message: "Account created; sign in to continue." });
+      // The same answer whether or not the address has an account: the e-mail says which.
+      const r = await api<z.infer<typeof signUpResponse>>("/api/sign-up", { body: { ...v, next } });
+      setSent({ email: v.email, message: r.message });
     } catch (e) {
       if (e instanceof ApiFailure && e.fields) for (const [k, m] of Object.entries(e.fields)) setError(k as keyof Values, { message: m });
       setError("root", { message: e instanceof Error ? e.message : "Could not create the account." });
     }
+  }
+  if (sent) {
+    return (
+      <div className="space-y-3" data-testid="sign-up-sent">
+        <h1 className="text-lg font-semibold">Create an account</h1>
+        <p role="status" className="rounded bg-ok/10 px-3 py-2 text-sm text-ok">{sent.message}</p>
+        <p className="text-sm text-ink-soft">
+          We sent a message to <strong className="break-all">{sent.email}</strong>. Open the link in it to finish; it works once, for a day.
+          Nothing there after a few minutes? Look in the spam folder, or check the address and try again.
+        </p>
+        <p className="text-center text-xs text-ink-soft">
+          <Link className="text-advisory underline" href={`/sign-in?next=${encodeURIComponent(next)}`}>Sign in</Link>
+        </p>
+      </div>
+    );
   }
   return (
     <form onSubmit={handleSubmit(onSubmit)} className="space-y-4" noValidate>

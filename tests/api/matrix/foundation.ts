@@ -1,5 +1,6 @@
 import { randomUUID } from "node:crypto";
 import { emptyGraph } from "@/shared/linkage/schema";
+import { anonymous, confirmToken } from "../../support/http";
 import { anyone, edit, manage, read, signedIn, type Ctx, type Row } from "./types";
 
 /** Site-admin routes: no member of a build is a site admin, so every signed-in caller here gets 403 (admins: tests/api/admin.test.ts). */
@@ -13,7 +14,13 @@ const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
 export const rows: Record<string, Row> = {
   "GET /api/auth/[...nextauth]":                        { expect: anyone(200), path: () => "/api/auth/csrf" },
   "POST /api/auth/[...nextauth]":                       { expect: anyone(200), path: () => "/api/auth/_log", body: () => ({}) },
-  "POST /api/sign-up":                                  { expect: anyone(201), path: () => "/api/sign-up", body: () => ({ name: "New Person", email: unique(), password: "long enough password" }) },
+  "POST /api/sign-up":                                  { expect: anyone(202), path: () => "/api/sign-up", body: () => ({ name: "New Person", email: unique(), password: "long enough password" }) },
+  // Whoever opens the link mailed to a new address makes that account (the link is the proof of the address).
+  "POST /api/sign-up/confirm":                          { expect: anyone(200), path: () => "/api/sign-up/confirm", send: async (client) => {
+    const email = unique();
+    await anonymous().request("POST", "/api/sign-up", { name: "New Person", email, password: "long enough password" });
+    return client.request("POST", "/api/sign-up/confirm", { token: await confirmToken(email) });
+  } },
   "GET /api/me":                                        { expect: signedIn(200), path: () => "/api/me" },
   "PATCH /api/me":                                      { expect: signedIn(200), path: () => "/api/me", body: () => ({ unitSystem: "US" }) },
   // A wrong current password (a right one would end the shared test users' sessions): signed in 400, else 401.
