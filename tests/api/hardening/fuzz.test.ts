@@ -308,7 +308,9 @@ describe("fuzzed bodies on every JSON route", () => {
 
   it("takes each route's valid body (so the fuzzed bodies were wrong in the one field)", async () => {
     const refused: string[] = [];
-    for (const [route, r] of Object.entries(ROUTES)) {
+    // The save last: it moves the empty run to revision 2, and the sign-off signs revision 1.
+    const last = "PUT /api/builds/[buildId]/linkages/[linkageId]/graph";
+    for (const [route, r] of Object.entries(ROUTES).sort(([x], [y]) => Number(x === last) - Number(y === last))) {
       if (r.control === false) continue;
       const body = toJson(r.body());
       const a = await send({ route, kind: "valid", make: () => body, note: "" });
