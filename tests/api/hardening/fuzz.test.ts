@@ -146,7 +146,7 @@ function oneFieldWrong(base: Record<string, unknown>) {
     ["NUL", at(strings, (p) => fc.nat().map((i) => [insertAt(p.value as string, i, "\u0000"), "a NUL inside"]))],
     ["lone surrogate", at(strings, (p) => fc.tuple(fc.nat(), lone).map(([i, s]) => [insertAt(p.value as string, i, s), `a lone surrogate U+${s.charCodeAt(0).toString(16)}`]))],
     // Every text cap is at most 20,000 characters but the parts file's, 2 MB.
-    ["over-long", at(strings, (p) => fc.constantFrom(...(p.path.includes("csv") ? [2_000_001] : [25_000, 250_000])).map((len) => [RAW(() => JSON.stringify((p.value as string) + "x".repeat(len))), `${len} more characters`]))],
+    ["over-long", at(strings, (p) => fc.constantFrom(...(p.path.includes("csv") ? [2_000_001] : [25_000, 100_000])).map((len) => [RAW(() => JSON.stringify((p.value as string) + "x".repeat(len))), `${len} more characters`]))],
   );
   if (numbers.length) kinds.push(["huge number", at(numbers, () => fc.constantFrom("1e400", "-1e400", "1" + "0".repeat(400), "9".repeat(309) + ".5e9").map((t) => [RAW(t), t.length > 12 ? `${t.slice(0, 8)}… (${t.length} digits)` : t]))]);
   return fc.oneof(...kinds.map(([kind, arb]) => arb.map((c) => ({ ...c, kind }))));
@@ -166,7 +166,8 @@ function wholeBodyJunk(base: Record<string, unknown>) {
       fc.string({ unit: "binary", maxLength: 40 }).map((s) => [`{${s}`, "{ then junk"]),
       fc.constant(["", "empty"]),
     ).map(([raw, note]) => ({ kind: "not JSON", make: () => raw, note })),
-    fc.tuple(fc.integer({ min: 1_000, max: 400_000 }), fc.constantFrom("array", "object", "under a field"), fc.constantFrom("1", "\"\\u0000\"", "\"\\udc00\"")).map(([d, how, inner]) => ({
+    // 100,000 deep: far past any recursion limit (about 10,000 frames).
+    fc.tuple(fc.integer({ min: 1_000, max: 100_000 }), fc.constantFrom("array", "object", "under a field"), fc.constantFrom("1", "\"\\u0000\"", "\"\\udc00\"")).map(([d, how, inner]) => ({
       kind: "deep nesting",
       make: () => (how === "array" ? nest(d, "[", inner, "]") : how === "object" ? nest(d, "{\"a\":", inner, "}") : `{"${key}":${nest(d, "[", inner, "]")}}`),
       note: `${d} deep, ${how}, ${inner} at the bottom`,
@@ -264,6 +265,7 @@ describe("fuzzed bodies on every JSON route", () => {
     const byKind: Record<string, { n: number; ms: number }> = {};
     const fail = (i: number, c: Case, why: string) => failures.push(`#${i} ${c.route} [${c.kind}: ${c.note}] → ${why}\n    body ${shown(c)}`);
     let tSnap = 0;
+    let replays = 0;
     let before = await fingerprint();
     for (let start = 0; start < order.length; start += BATCH) {
       const batch = order.slice(start, start + BATCH);
@@ -285,7 +287,10 @@ describe("fuzzed bodies on every JSON route", () => {
       const after = await fingerprint();
       tSnap += performance.now() - s0;
       const tables = changed(before, after);
-      if (tables.length) {
+      if (tables.length && ++replays > 3) {
+        failures.push(`batch from #${start}: ${tables.join(", ")} changed (not replayed: three batches were)`);
+        before = after;
+      } else if (tables.length) {
         // Name the request: the batch again, one at a time, the database fingerprinted after each.
         let prev = after;
         let named = false;
@@ -299,7 +304,6 @@ describe("fuzzed bodies on every JSON route", () => {
         if (!named) failures.push(`batch from #${start}: ${tables.join(", ")} changed, and no request of it changes them when sent again`);
         before = prev;
       }
-      if (failures.length > 25) break;
     }
     const secs = (performance.now() - t0) / 1000;
     console.log(`fuzz: ${order.length} cases on ${routes.length} routes in ${secs.toFixed(1)} s (${(order.length / secs).toFixed(0)} requests/s; generating ${(tGen / 1000).toFixed(1)} s, fingerprints ${(tSnap / 1000).toFixed(1)} s); seed ${SEED}\n  ${Object.entries(byKind).map(([k, v]) => `${k} ${v.n} (${(v.ms / v.n).toFixed(0)} ms each)`).join(", ")}`);
