@@ -25,7 +25,7 @@ import { fixtureFile } from "../../support/upload";
 
 const SEED = Number(process.env.LW_FUZZ_SEED || 20261204);
 const CASES = Number(process.env.LW_FUZZ_CASES || 10_000);
-const CONCURRENCY = 4; // two cores: the server's, and the test's with the database beside it
+const CONCURRENCY = Number(process.env.LW_FUZZ_CONCURRENCY || 4); // two cores: the server's, and the test's with the database beside it
 const BATCH = 200;
 const REPRO = `LW_FUZZ_SEED=${SEED} LW_FUZZ_CASES=${CASES} npx vitest run tests/api/hardening/fuzz.test.ts`;
 
@@ -287,8 +287,8 @@ describe("fuzzed bodies on every JSON route", () => {
       const after = await fingerprint();
       tSnap += performance.now() - s0;
       const tables = changed(before, after);
-      if (tables.length && ++replays > 3) {
-        failures.push(`batch from #${start}: ${tables.join(", ")} changed (not replayed: three batches were)`);
+      if (tables.length && ++replays > 1) {
+        failures.push(`batch from #${start}: ${tables.join(", ")} changed (not replayed: one batch was)`);
         before = after;
       } else if (tables.length) {
         // Name the request: the batch again, one at a time, the database fingerprinted after each.
