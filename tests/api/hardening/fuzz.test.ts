@@ -263,7 +263,12 @@ describe("fuzzed bodies on every JSON route", () => {
 
     const failures: string[] = [];
     const byKind: Record<string, { n: number; ms: number }> = {};
-    const fail = (i: number, c: Case, why: string) => failures.push(`#${i} ${c.route} [${c.kind}: ${c.note}] → ${why}\n    body ${shown(c)}`);
+    const classes: Record<string, number> = {};
+    const fail = (i: number, c: Case, why: string) => {
+      const k = `${c.kind} → ${why.split(":")[0]}`;
+      classes[k] = (classes[k] ?? 0) + 1;
+      failures.push(`#${i} ${c.route} [${c.kind}: ${c.note}] → ${why}\n    body ${shown(c)}`);
+    };
     let tSnap = 0;
     let replays = 0;
     let before = await fingerprint();
@@ -307,7 +312,8 @@ describe("fuzzed bodies on every JSON route", () => {
     }
     const secs = (performance.now() - t0) / 1000;
     console.log(`fuzz: ${order.length} cases on ${routes.length} routes in ${secs.toFixed(1)} s (${(order.length / secs).toFixed(0)} requests/s; generating ${(tGen / 1000).toFixed(1)} s, fingerprints ${(tSnap / 1000).toFixed(1)} s); seed ${SEED}\n  ${Object.entries(byKind).map(([k, v]) => `${k} ${v.n} (${(v.ms / v.n).toFixed(0)} ms each)`).join(", ")}`);
-    expect(failures, `${failures.length} fuzzed requests were answered wrongly; reproduce with ${REPRO}\n${failures.slice(0, 25).join("\n")}`).toEqual([]);
+    const summary = Object.entries(classes).sort((x, y) => y[1] - x[1]).map(([k, v]) => `${v} × ${k}`).join("; ");
+    expect(failures, `${failures.length} fuzzed requests were answered wrongly (${summary}); reproduce with ${REPRO}\n${failures.slice(0, 25).join("\n")}`).toEqual([]);
   }, 600_000);
 
   it("takes each route's valid body (so the fuzzed bodies were wrong in the one field)", async () => {
