@@ -1,5 +1,5 @@
 import "server-only";
-import { S3Client, PutObjectCommand, GetObjectCommand, DeleteObjectCommand } from "@aws-sdk/client-s3";
+import { S3Client, PutObjectCommand, GetObjectCommand, DeleteObjectCommand, HeadObjectCommand, ListObjectsV2Command } from "@aws-sdk/client-s3";
 
 /**
  * File storage through the S3 API. S3_ENDPOINT, S3_BUCKET, S3_REGION, S3_ACCESS_KEY_ID and
@@ -57,4 +57,27 @@ export async function getObjectStream(key: string): Promise<{ body: ReadableStre
     if ((e as { name?: string }).name === "NoSuchKey") return null;
     throw e;
   }
+}
+
+/** When the object was last written, or null when there is none. */
+export async function objectWrittenAt(key: string): Promise<Date | null> {
+  try {
+    const r = await client().send(new HeadObjectCommand({ Bucket: bucket(), Key: key }));
+    return r.LastModified ?? null;
+  } catch (e) {
+    const name = (e as { name?: string }).name;
+    if (name === "NotFound" || name === "NoSuchKey") return null;
+    throw e;
+  }
+}
+
+/** The objects under a prefix, a listing page (at most 1,000) at a time, each with when it was written. */
+export async function* eachObjectPage(prefix: string): AsyncGenerator<{ key: string; writtenAt: Date }[]> {
+  let token: string | undefined;
+  do {
+    const r = await client().send(new ListObjectsV2Command({ Bucket: bucket(), Prefix: prefix, ContinuationToken: token }));
+    const page = (r.Contents ?? []).filter((o) => o.Key && o.LastModified).map((o) => ({ key: o.Key!, writtenAt: o.LastModified! }));
+    if (page.length) yield page;
+    token = r.IsTruncated ? r.NextContinuationToken : undefined;
+  } while (token);
 }

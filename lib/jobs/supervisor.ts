@@ -21,7 +21,7 @@ export function superviseWorker() {
   const start = () => {
     child = spawn(process.execPath, ["--conditions=react-server", "--import", "tsx", path.join(root, "scripts/worker.ts")], {
       cwd: root,
-      env: { ...process.env, NODE_ENV: "production" },
+      env: { ...process.env, NODE_ENV: "production", LW_WORKER_PARENT_PID: String(process.pid) },
       stdio: ["ignore", "inherit", "inherit", "ipc"],
     });
     try { if (child.pid) os.setPriority(child.pid, Number(process.env.LW_WORKER_NICE ?? 10)); } catch {}

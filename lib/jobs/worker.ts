@@ -8,6 +8,7 @@ import { deleteObject, putObject, putObjectFile } from "@/lib/storage";
 import { sendMail } from "@/lib/mail";
 import { appUrl } from "@/lib/urls";
 import { exportParams, LARGE_EXPORT_BYTES } from "@/shared/schemas/exports";
+import { sweepOrphans } from "@/lib/orphan-sweep";
 import { ExportFailure, KINDS } from "./kinds";
 import { QUEUE, enqueue, ensureQueue, newBoss, newQueueJobId } from "./queue";
 
@@ -101,18 +102,33 @@ async function recoverOrphans(boss: PgBoss) {
   }
 }
 
+/** Objects left without a row by a process killed mid-upload or mid-export (lib/orphan-sweep.ts): at start, then daily. */
+async function sweep() {
+  try {
+    const r = await sweepOrphans();
+    console.log(`[storage] orphan sweep: ${r.listed} objects listed, ${r.removed.length} without a row removed, ${r.young} younger than an hour left alone`);
+  } catch (e) {
+    console.error("[storage] orphan sweep stopped", e);
+  }
+}
+const SWEEP_EVERY_MS = 24 * 60 * 60 * 1000; // common practice, no source
+
 export async function startWorker() {
+  void sweep();
+  const daily = setInterval(() => void sweep(), SWEEP_EVERY_MS);
+  daily.unref();
   const boss = newBoss({ worker: true });
   await boss.start();
   await ensureQueue(boss);
   await recoverOrphans(boss);
-  const sweep = setInterval(() => void recoverOrphans(boss).catch((e) => console.error("[jobs] recovery", e)), 5_000);
+  const recovery = setInterval(() => void recoverOrphans(boss).catch((e) => console.error("[jobs] recovery", e)), 5_000);
   await boss.work<{ exportId: string }>(QUEUE, { pollingIntervalSeconds: 1, batchSize: 1 }, async ([job]) => {
     await runExport(job.data.exportId, job.id);
   });
   console.log(`[jobs] export worker ${ME} is taking jobs`);
   return async () => {
-    clearInterval(sweep);
+    clearInterval(recovery);
+    clearInterval(daily);
     await boss.stop({ graceful: true, timeout: 10_000, wait: true });
     await db.destroy();
   };
