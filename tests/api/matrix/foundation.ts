@@ -13,6 +13,7 @@ const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
 export const rows: Record<string, Row> = {
   "GET /api/auth/[...nextauth]":                        { expect: anyone(200), path: () => "/api/auth/csrf" },
   "POST /api/auth/[...nextauth]":                       { expect: anyone(200), path: () => "/api/auth/_log", body: () => ({}) },
+  "GET /api/health":                                    { expect: anyone(200), path: () => "/api/health" },
   "POST /api/sign-up":                                  { expect: anyone(201), path: () => "/api/sign-up", body: () => ({ name: "New Person", email: unique(), password: "long enough password" }) },
   "GET /api/me":                                        { expect: signedIn(200), path: () => "/api/me" },
   "PATCH /api/me":                                      { expect: signedIn(200), path: () => "/api/me", body: () => ({ unitSystem: "US" }) },
