@@ -1,9 +1,12 @@
 import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
-import { getServerSession } from "next-auth";
+import { getToken } from "next-auth/jwt";
+import { cookies } from "next/headers";
+import { cache } from "react";
 import { z } from "zod";
-import { beginAttempt, clearFailures, endSessions, findUserByEmail, findUserById, toPublicUser } from "@/db/users";
+import { beginAttempt, clearFailures, endSessions, findUserByEmail, toPublicUser } from "@/db/users";
+import { getAccess } from "@/db/access";
 import { checkPassword, checkAgainstNothing } from "./passwords";
 import { clientIp, trustedProxyHops } from "./client-ip";
 import { isDatabaseUnavailable } from "@/db/unavailable";
@@ -68,14 +71,37 @@ export const authOptions: NextAuthOptions = {
   },
 };
 
-/** The signed-in user, read fresh from the database (a deleted user is signed out). */
-export async function getSessionUser() {
-  const session = await getServerSession(authOptions);
-  const u = session?.user as { id?: string; sv?: number } | undefined;
-  if (!u?.id) return null;
-  const row = await findUserById(u.id);
-  // A deleted user, or a cookie from before the user signed out (a copy of it), is signed out.
-  if (!row || (u.sv ?? 0) !== row.session_version) return null;
-  return toPublicUser(row);
-}
+/**
+ * The session cookie's claims: the user's id and the session version the cookie was issued with. Decoded once
+ * per request (React's `cache`: a page's layout and body share it) with next-auth's own `getToken`, which
+ * decrypts the cookie and checks its expiry. next-auth's `getServerSession` would run its whole session action
+ * on each call instead — a CSRF token, the jwt and session callbacks and a newly encrypted cookie that a route
+ * or server component never sends. Only the cookie counts: the header is not passed, so a token sent as
+ * `Authorization: Bearer` signs nobody in.
+ */
+const sessionClaims = cache(async (): Promise<{ id: string; sv: number } | null> => {
+  const token = await getToken({
+    req: { cookies: await cookies(), headers: {} } as unknown as Parameters<typeof getToken>[0]["req"],
+    secret: authOptions.secret ?? process.env.AUTH_SECRET,
+  });
+  if (typeof token?.sub !== "string") return null;
+  return { id: token.sub, sv: typeof token.sv === "number" ? token.sv : 0 };
+});
+
+/**
+ * The signed-in user, read fresh from the database on every request, with the build and linkage the request
+ * names (db/access.ts: one query for all three). Null when signed out, for a deleted user, and for a cookie
+ * from before the user signed out or changed the password (a copy of it): its session version is older.
+ * Nothing is kept between requests, so a session ended on one instance is refused by every instance at once.
+ */
+export const getSessionAccess = cache(async (buildId?: string, linkageId?: string) => {
+  const claims = await sessionClaims();
+  if (!claims) return null;
+  const access = await getAccess(claims.id, buildId, linkageId);
+  if (!access || access.user.session_version !== claims.sv) return null;
+  return { ...access, user: toPublicUser(access.user) };
+});
+
+/** The signed-in user (see getSessionAccess), or null. */
+export const getSessionUser = cache(async () => (await getSessionAccess())?.user ?? null);
 export type SessionUser = NonNullable<Awaited<ReturnType<typeof getSessionUser>>>;

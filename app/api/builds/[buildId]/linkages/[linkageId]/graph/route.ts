@@ -1,12 +1,12 @@
-import { withLinkage, parseBody, json } from "@/lib/http";
+import { withLinkage, parseBody, json, jsonText } from "@/lib/http";
 import { notFound, staleRevision } from "@/lib/errors";
 import { graphPut } from "@/shared/schemas/graph";
-import { getRevision, saveRevision } from "@/db/linkages";
+import { getRevision, revisionJson, saveRevision } from "@/db/linkages";
 import { analyze } from "@/shared/analysis";
 import { afterRevisionSaved } from "@/lib/review";
 
-/** The current revision of the graph (or `?revision=N`), with the analysis stored beside it. */
-export const GET = withLinkage("read", { revision: "requested" }, async ({ revision }) => json(revision));
+/** The current revision of the graph (or `?revision=N`), with the analysis stored beside it (sent on as stored). */
+export const GET = withLinkage("read", { revision: "requested" }, async ({ revision }) => jsonText(revisionJson(revision)));
 
 /** Save the next revision, only if `baseRevision` is still the current one (409 otherwise). */
 export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => {
