@@ -141,7 +141,8 @@ export async function saveRevision(
   linkageId: string,
   baseRevision: number,
   graph: LinkageGraph,
-  analysis: Report,
+  /** The engine's report as JSON text (the route sends the same text back: serialised once). */
+  analysisJson: string,
   userId: string,
 ): Promise<{ revision: number; createdAt: string } | "stale" | "missing"> {
   const { rows } = await db.raw(
@@ -157,7 +158,7 @@ export async function saveRevision(
        update builds set updated_at = now() where id = :buildId and exists (select 1 from moved)
      )
      select revision, created_at from saved`,
-    { linkageId, buildId, baseRevision, graph: JSON.stringify(graph), analysis: JSON.stringify(analysis), userId },
+    { linkageId, buildId, baseRevision, graph: JSON.stringify(graph), analysis: analysisJson, userId },
   );
   const rev = rows[0] as { revision: number; created_at: Date } | undefined;
   if (rev) return { revision: rev.revision, createdAt: rev.created_at.toISOString() };

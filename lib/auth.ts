@@ -1,6 +1,8 @@
 import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
+import { hkdfSync } from "node:crypto";
+import { jwtDecrypt } from "jose";
 import { getToken } from "next-auth/jwt";
 import { cookies } from "next/headers";
 import { cache } from "react";
@@ -72,9 +74,28 @@ export const authOptions: NextAuthOptions = {
 };
 
 /**
+ * The key next-auth seals its session cookie with: HKDF-SHA-256 of the secret, no salt, with next-auth's own
+ * label (next-auth/jwt `getDerivedEncryptionKey`). next-auth's `decode` derives it again on every call, which
+ * cost more than the decryption itself; it depends on the secret alone (the same in every instance), so it is
+ * derived once per secret here.
+ */
+let derived: { secret: string; key: Uint8Array } | undefined;
+function sessionKey(secret: string) {
+  if (derived?.secret !== secret) derived = { secret, key: new Uint8Array(hkdfSync("sha256", secret, "", "NextAuth.js Generated Encryption Key", 32)) };
+  return derived.key;
+}
+
+/** next-auth's `decode` with the key derived once: decrypts the cookie and checks its expiry (15 s of clock tolerance, as next-auth does). */
+async function decodeSession({ token, secret }: { token?: string; secret: string | Buffer }) {
+  if (!token) return null;
+  const { payload } = await jwtDecrypt(token, sessionKey(String(secret)), { clockTolerance: 15 });
+  return payload;
+}
+
+/**
  * The session cookie's claims: the user's id and the session version the cookie was issued with. Decoded once
- * per request (React's `cache`: a page's layout and body share it) with next-auth's own `getToken`, which
- * decrypts the cookie and checks its expiry. next-auth's `getServerSession` would run its whole session action
+ * per request (React's `cache`: a page's layout and body share it) with next-auth's own `getToken` (the cookie's
+ * name and chunks) and decodeSession (decryption and expiry). next-auth's `getServerSession` would run its whole session action
  * on each call instead — a CSRF token, the jwt and session callbacks and a newly encrypted cookie that a route
  * or server component never sends. Only the cookie counts: the header is not passed, so a token sent as
  * `Authorization: Bearer` signs nobody in.
@@ -83,6 +104,7 @@ const sessionClaims = cache(async (): Promise<{ id: string; sv: number } | null>
   const token = await getToken({
     req: { cookies: await cookies(), headers: {} } as unknown as Parameters<typeof getToken>[0]["req"],
     secret: authOptions.secret ?? process.env.AUTH_SECRET,
+    decode: decodeSession,
   });
   if (typeof token?.sub !== "string") return null;
   return { id: token.sub, sv: typeof token.sv === "number" ? token.sv : 0 };

@@ -2,7 +2,8 @@ import { randomUUID } from "node:crypto";
 import { afterAll, describe, expect, it } from "vitest";
 import { makeBuild, makeUser, testDb } from "../support/db";
 import { anonymous, client, signIn } from "../support/http";
-import { APP_URL } from "../support/env";
+import { encode } from "next-auth/jwt";
+import { APP_URL, TEST_SECRET } from "../support/env";
 
 afterAll(() => testDb.destroy());
 
@@ -116,6 +117,14 @@ describe("accounts and sign-in", () => {
     const token = me.cookie.slice(me.cookie.indexOf("=") + 1);
     const res = await fetch(`${APP_URL}/api/me`, { headers: { authorization: `Bearer ${token}` } });
     expect(res.status).toBe(401);
+  });
+
+  it("a session cookie that has expired, or was sealed with another secret, signs nobody in", async () => {
+    const u = await makeUser("sealed");
+    const cookieOf = async (secret: string, maxAge: number) => `next-auth.session-token=${await encode({ token: { sub: u.id, sv: 0 }, secret, maxAge })}`;
+    expect((await client(await cookieOf(TEST_SECRET, 3600)).request("GET", "/api/me")).status).toBe(200); // sealed as the server seals it
+    expect((await client(await cookieOf(TEST_SECRET, -60)).request("GET", "/api/me")).status).toBe(401); // a minute past its expiry
+    expect((await client(await cookieOf("some other secret", 3600)).request("GET", "/api/me")).status).toBe(401);
   });
 
   it("guesses sent at the same moment cannot run past the limit: at most five passwords are checked", async () => {

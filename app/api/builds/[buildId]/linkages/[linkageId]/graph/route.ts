@@ -1,4 +1,4 @@
-import { withLinkage, parseBody, json, jsonText } from "@/lib/http";
+import { withLinkage, parseBody, jsonText } from "@/lib/http";
 import { notFound, staleRevision } from "@/lib/errors";
 import { graphPut } from "@/shared/schemas/graph";
 import { getRevision, revisionJson, saveRevision } from "@/db/linkages";
@@ -12,13 +12,14 @@ export const GET = withLinkage("read", { revision: "requested" }, async ({ revis
 export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => {
   const { id } = linkage;
   const { baseRevision, graph } = await parseBody(req, graphPut);
-  const analysis = analyze(graph, build.analysisSettings);
-  const saved = await saveRevision(build.id, id, baseRevision, graph, analysis, user.id);
+  // The report is serialised once: stored with the revision and sent back as the same text.
+  const analysisJson = JSON.stringify(analyze(graph, build.analysisSettings));
+  const saved = await saveRevision(build.id, id, baseRevision, graph, analysisJson, user.id);
   if (saved === "missing") throw notFound("linkage"); // deleted while this request ran
   if (saved === "stale") {
     const current = await getRevision(id);
     throw staleRevision(`Someone saved revision ${current?.revision} while you were editing revision ${baseRevision}.`, current);
   }
   await afterRevisionSaved(build, user, linkage, saved.revision); // earlier sign-offs are now stale
-  return json({ ...saved, analysis });
+  return jsonText(`{"revision":${saved.revision},"createdAt":${JSON.stringify(saved.createdAt)},"analysis":${analysisJson}}`);
 });
