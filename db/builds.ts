@@ -33,16 +33,6 @@ export const toBuild = (b: BuildRow): Build => ({
 });
 export type { Build };
 
-export async function getMembership(buildId: string, userId: string) {
-  const row = await db("memberships as m")
-    .join("builds as b", "b.id", "m.build_id")
-    .where({ "m.build_id": buildId, "m.user_id": userId })
-    .first<(BuildRow & { role: Role }) | undefined>("b.*", "m.role");
-  if (!row) return null;
-  const { role, ...build } = row;
-  return { role, build: toBuild(build as BuildRow) };
-}
-
 export async function listBuildsForUser(userId: string) {
   const rows = await db("memberships as m")
     .join("builds as b", "b.id", "m.build_id")

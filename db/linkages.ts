@@ -9,7 +9,7 @@ import type { Report } from "@/shared/analysis/types";
 import type { Linkage, RevisionRow } from "@/shared/schemas/linkages";
 import type { Revision } from "@/shared/schemas/graph";
 
-type LinkageRow = {
+export type LinkageRow = {
   id: string;
   build_id: string;
   name: string;
@@ -19,7 +19,7 @@ type LinkageRow = {
   updated_at: Date;
 };
 
-const toLinkage = (r: LinkageRow & { author_name?: string | null; summary?: Report["summary"] | null }): Linkage => ({
+export const toLinkage = (r: LinkageRow & { author_name?: string | null; summary?: Report["summary"] | null }): Linkage => ({
   id: r.id,
   buildId: r.build_id,
   name: r.name,
@@ -99,50 +99,76 @@ export async function getRevision(linkageId: string, revision?: number): Promise
     .where("r.linkage_id", linkageId);
   if (revision === undefined) q.whereRaw("r.revision = l.current_revision");
   else q.where("r.revision", revision);
-  const row = await q.first("r.revision", "r.graph", "r.analysis", "r.author_id", "u.name as author_name", "r.created_at");
+  const row = await q.first("r.revision", db.raw("r.graph::text as graph"), db.raw("r.analysis::text as analysis"), "r.author_id", "u.name as author_name", "r.created_at");
   if (!row) return null;
-  return {
-    revision: row.revision,
-    graph: row.graph,
-    analysis: row.analysis,
-    author: person(row.author_id, row.author_name),
-    createdAt: row.created_at.toISOString(),
-  };
+  return storedRevision(row);
+}
+
+/** The JSON text a revision was read with (see storedRevision). */
+const STORED_JSON = Symbol("stored JSON");
+type StoredJson = { graph: string; analysis: string | null };
+
+/**
+ * A revision whose graph and analysis stay the JSON text Postgres sent until first read: a route that reads
+ * only the graph (comments: subject names) never parses the analysis, and one that answers with the revision
+ * as stored (GET graph) sends that text on (revisionJson) instead of parsing and serialising 30 KB again.
+ */
+function storedRevision(row: { revision: number; graph: string; analysis: string | null; author_id: string | null; author_name: string | null; created_at: Date }): Revision {
+  let graph: LinkageGraph | undefined;
+  let analysis: Report | null | undefined;
+  const rev = { revision: row.revision } as Revision;
+  Object.defineProperties(rev, {
+    graph: { enumerable: true, get: () => (graph ??= JSON.parse(row.graph)) },
+    analysis: { enumerable: true, get: () => (analysis === undefined ? (analysis = row.analysis === null ? null : JSON.parse(row.analysis)) : analysis) },
+    [STORED_JSON]: { value: { graph: row.graph, analysis: row.analysis } satisfies StoredJson },
+  });
+  rev.author = person(row.author_id, row.author_name);
+  rev.createdAt = row.created_at.toISOString();
+  return rev;
+}
+
+/** The revision as JSON, with its graph and analysis as stored when it was read by getRevision: the same answer as JSON.stringify(rev). */
+export function revisionJson(rev: Revision): string {
+  const stored = (rev as Revision & { [STORED_JSON]?: StoredJson })[STORED_JSON];
+  if (!stored) return JSON.stringify(rev);
+  return `{"revision":${JSON.stringify(rev.revision)},"graph":${stored.graph},"analysis":${stored.analysis ?? "null"},"author":${JSON.stringify(rev.author)},"createdAt":${JSON.stringify(rev.createdAt)}}`;
 }
 
 /**
  * Optimistic concurrency: the next revision is written only if `baseRevision` is still current.
  * Returns the new revision, "stale" (someone saved first) or "missing".
+ * One statement (atomic as a transaction is, in one round trip instead of five): the linkage's revision moves
+ * on only where it is still `baseRevision` (a concurrent save waits on the row and then finds it moved), the
+ * revision row is written from that update's result, and the build is touched only if it happened.
  */
 export async function saveRevision(
   buildId: string,
   linkageId: string,
   baseRevision: number,
   graph: LinkageGraph,
-  analysis: Report,
+  /** The engine's report as JSON text (the route sends the same text back: serialised once). */
+  analysisJson: string,
   userId: string,
 ): Promise<{ revision: number; createdAt: string } | "stale" | "missing"> {
-  return db.transaction(async (trx) => {
-    const [row] = await trx("linkages")
-      .where({ id: linkageId, build_id: buildId, current_revision: baseRevision })
-      .update({ current_revision: baseRevision + 1, updated_at: trx.fn.now() })
-      .returning(["current_revision"]);
-    if (!row) {
-      const exists = await trx("linkages").where({ id: linkageId, build_id: buildId }).first("id");
-      return exists ? "stale" : "missing";
-    }
-    const [rev] = await trx("linkage_revisions")
-      .insert({
-        linkage_id: linkageId,
-        revision: row.current_revision,
-        graph: JSON.stringify(graph),
-        analysis: JSON.stringify(analysis),
-        author_id: userId,
-      })
-      .returning(["revision", "created_at"]);
-    await trx("builds").where({ id: buildId }).update({ updated_at: trx.fn.now() });
-    return { revision: rev.revision as number, createdAt: (rev.created_at as Date).toISOString() };
-  });
+  const { rows } = await db.raw(
+    `with moved as (
+       update linkages set current_revision = current_revision + 1, updated_at = now()
+       where id = :linkageId and build_id = :buildId and current_revision = :baseRevision
+       returning id, current_revision
+     ), saved as (
+       insert into linkage_revisions (linkage_id, revision, graph, analysis, author_id)
+       select id, current_revision, cast(:graph as jsonb), cast(:analysis as jsonb), :userId from moved
+       returning revision, created_at
+     ), touched as (
+       update builds set updated_at = now() where id = :buildId and exists (select 1 from moved)
+     )
+     select revision, created_at from saved`,
+    { linkageId, buildId, baseRevision, graph: JSON.stringify(graph), analysis: analysisJson, userId },
+  );
+  const rev = rows[0] as { revision: number; created_at: Date } | undefined;
+  if (rev) return { revision: rev.revision, createdAt: rev.created_at.toISOString() };
+  const exists = await db("linkages").where({ id: linkageId, build_id: buildId }).first("id");
+  return exists ? "stale" : "missing";
 }
 
 /** Revisions newest first: the number is the key. */

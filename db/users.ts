@@ -16,7 +16,7 @@ export type UserRow = {
 };
 export type { PublicUser };
 
-export const toPublicUser = (u: UserRow): PublicUser => ({
+export const toPublicUser = (u: Pick<UserRow, "id" | "email" | "name" | "is_site_admin" | "unit_system">): PublicUser => ({
   id: u.id,
   email: u.email,
   name: u.name,

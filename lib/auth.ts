@@ -1,9 +1,14 @@
 import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
-import { getServerSession } from "next-auth";
+import { hkdfSync } from "node:crypto";
+import { jwtDecrypt } from "jose";
+import { getToken } from "next-auth/jwt";
+import { cookies } from "next/headers";
+import { cache } from "react";
 import { z } from "zod";
 import { beginAttempt, clearFailures, endSessions, findUserByEmail, findUserById, toPublicUser } from "@/db/users";
+import { getAccess } from "@/db/access";
 import { checkPassword, checkAgainstNothing } from "./passwords";
 import { clientIp, trustedProxyHops } from "./client-ip";
 import { isDatabaseUnavailable } from "@/db/unavailable";
@@ -82,14 +87,57 @@ export const authOptions: NextAuthOptions = {
   },
 };
 
-/** The signed-in user, read fresh from the database (a deleted user is signed out). */
-export async function getSessionUser() {
-  const session = await getServerSession(authOptions);
-  const u = session?.user as { id?: string; sv?: number } | undefined;
-  if (!u?.id) return null;
-  const row = await findUserById(u.id);
-  // A deleted user, or a cookie from before the user signed out (a copy of it), is signed out.
-  if (!row || (u.sv ?? 0) !== row.session_version) return null;
-  return toPublicUser(row);
+/**
+ * The key next-auth seals its session cookie with: HKDF-SHA-256 of the secret, no salt, with next-auth's own
+ * label (next-auth/jwt `getDerivedEncryptionKey`). next-auth's `decode` derives it again on every call, which
+ * cost more than the decryption itself; it depends on the secret alone (the same in every instance), so it is
+ * derived once per secret here.
+ */
+let derived: { secret: string; key: Uint8Array } | undefined;
+function sessionKey(secret: string) {
+  if (derived?.secret !== secret) derived = { secret, key: new Uint8Array(hkdfSync("sha256", secret, "", "NextAuth.js Generated Encryption Key", 32)) };
+  return derived.key;
 }
+
+/** next-auth's `decode` with the key derived once: decrypts the cookie and checks its expiry (15 s of clock tolerance, as next-auth does). */
+async function decodeSession({ token, secret }: { token?: string; secret: string | Buffer }) {
+  if (!token) return null;
+  const { payload } = await jwtDecrypt(token, sessionKey(String(secret)), { clockTolerance: 15 });
+  return payload;
+}
+
+/**
+ * The session cookie's claims: the user's id and the session version the cookie was issued with. Decoded once
+ * per request (React's `cache`: a page's layout and body share it) with next-auth's own `getToken` (the cookie's
+ * name and chunks) and decodeSession (decryption and expiry). next-auth's `getServerSession` would run its whole session action
+ * on each call instead — a CSRF token, the jwt and session callbacks and a newly encrypted cookie that a route
+ * or server component never sends. Only the cookie counts: the header is not passed, so a token sent as
+ * `Authorization: Bearer` signs nobody in.
+ */
+const sessionClaims = cache(async (): Promise<{ id: string; sv: number } | null> => {
+  const token = await getToken({
+    req: { cookies: await cookies(), headers: {} } as unknown as Parameters<typeof getToken>[0]["req"],
+    secret: authOptions.secret ?? process.env.AUTH_SECRET,
+    decode: decodeSession,
+  });
+  if (typeof token?.sub !== "string") return null;
+  return { id: token.sub, sv: typeof token.sv === "number" ? token.sv : 0 };
+});
+
+/**
+ * The signed-in user, read fresh from the database on every request, with the build and linkage the request
+ * names (db/access.ts: one query for all three). Null when signed out, for a deleted user, and for a cookie
+ * from before the user signed out or changed the password (a copy of it): its session version is older.
+ * Nothing is kept between requests, so a session ended on one instance is refused by every instance at once.
+ */
+export const getSessionAccess = cache(async (buildId?: string, linkageId?: string) => {
+  const claims = await sessionClaims();
+  if (!claims) return null;
+  const access = await getAccess(claims.id, buildId, linkageId);
+  if (!access || access.user.session_version !== claims.sv) return null;
+  return { ...access, user: toPublicUser(access.user) };
+});
+
+/** The signed-in user (see getSessionAccess), or null. */
+export const getSessionUser = cache(async () => (await getSessionAccess())?.user ?? null);
 export type SessionUser = NonNullable<Awaited<ReturnType<typeof getSessionUser>>>;

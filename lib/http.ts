@@ -5,9 +5,9 @@ import { ApiError, invalid, notFound, serverError, unauthorized, forbidden, unav
 import { isDatabaseUnavailable } from "@/db/unavailable";
 import { MAX_BODY_BYTES, parseJsonText, readTextCapped } from "./body";
 import { checkQueryEncoding } from "./url-encoding";
-import { getSessionUser, type SessionUser } from "./auth";
-import { getMembership, type Build } from "@/db/builds";
-import { getLinkage, getRevision, type Linkage, type Revision } from "@/db/linkages";
+import { getSessionAccess, getSessionUser, type SessionUser } from "./auth";
+import type { Build } from "@/db/builds";
+import { getRevision, type Linkage, type Revision } from "@/db/linkages";
 import { revisionQuery } from "@/shared/schemas/common";
 import { can, type Capability, type Role, CAPABILITIES } from "@/shared/roles";
 
@@ -91,13 +91,22 @@ const WHY: Record<Capability, string> = {
   manage: "Only the build's owner can do this.",
 };
 
-export async function requireBuild(user: SessionUser, buildId: string, capability: Capability) {
-  if (!UUID_RE.test(buildId)) throw notFound();
-  const m = await getMembership(buildId, user.id);
-  if (!m) throw notFound(); // non-members never learn the build exists
-  if (!can(m.role, capability)) throw forbidden(WHY[capability]);
-  return m;
+/**
+ * The session, the membership and (for a linkage route) the linkage, from one query (getSessionAccess), checked
+ * in this order: 401 signed out, 404 a malformed id or a build the user is not a member of (non-members never
+ * learn the build exists), 403 a role without the capability, then 404 a linkage not in this build.
+ */
+async function authorise(capability: Capability, buildId: string, linkageId?: string) {
+  const buildOk = UUID_RE.test(buildId);
+  const linkageOk = linkageId !== undefined && UUID_RE.test(linkageId);
+  const access = await getSessionAccess(buildOk ? buildId : undefined, buildOk && linkageOk ? linkageId : undefined);
+  if (!access) throw unauthorized();
+  if (!access.member) throw notFound();
+  if (!can(access.member.role, capability)) throw forbidden(WHY[capability]);
+  return { user: access.user, build: access.member.build, role: access.member.role, linkage: access.linkage };
 }
+
+type BuildArgs<P> = { req: NextRequest; user: SessionUser; build: Build; role: Role; params: P };
 
 /**
  * Every build route goes through this: session (401), membership (404), role (403), then the body.
@@ -105,23 +114,23 @@ export async function requireBuild(user: SessionUser, buildId: string, capabilit
  */
 export function withBuild<P extends { buildId: string } = { buildId: string }>(
   capability: Capability,
-  handler: (a: { req: NextRequest; user: SessionUser; build: Build; role: Role; params: P }) => Promise<Response>,
+  handler: (a: BuildArgs<P>) => Promise<Response>,
 ) {
-  return withUser<P>(async ({ req, user, params }) => {
-    const { build, role } = await requireBuild(user, params.buildId, capability);
-    return handler({ req, user, build, role, params });
-  });
+  return async (req: NextRequest, ctx: RouteCtx<P>) => {
+    try {
+      const params = (await ctx?.params) ?? ({} as P);
+      const { user, build, role } = await authorise(capability, params.buildId);
+      return await handler({ req, user, build, role, params });
+    } catch (e) {
+      return errorResponse(e);
+    }
+  };
 }
 
 export const json = (data: unknown, status = 200) => NextResponse.json(data, { status });
+/** An answer whose body is JSON text already (e.g. revisionJson: a stored revision sent on without parsing it). */
+export const jsonText = (text: string) => new NextResponse(text, { status: 200, headers: { "content-type": "application/json" } });
 export { CAPABILITIES };
-
-/** The linkage `rawId` names in this build; 404 for a malformed id or a linkage of another build. */
-export async function getLinkageOrThrow(buildId: string, rawId: string): Promise<Linkage> {
-  const linkage = UUID_RE.test(rawId) ? await getLinkage(buildId, rawId) : null;
-  if (!linkage) throw notFound("linkage");
-  return linkage;
-}
 
 /** A revision of the linkage (the current one when `revision` is undefined); 404 when there is none. */
 export async function getRevisionOrThrow(linkageId: string, revision?: number): Promise<Revision> {
@@ -156,11 +165,18 @@ export function withLinkage<P extends { buildId: string; linkageId: string }>(
   a: RevisionChoice | ((a: LinkageArgs<P>) => Promise<Response>),
   b?: (a: LinkageArgs<P> & { revision: Revision }) => Promise<Response>,
 ) {
-  return withBuild<P>(capability, async (args) => {
-    const linkage = await getLinkageOrThrow(args.build.id, args.params.linkageId);
-    if (typeof a === "function") return a({ ...args, linkage });
-    const q = a.revision === "requested" ? args.req.nextUrl.searchParams.get("revision") : null;
-    const revision = await getRevisionOrThrow(linkage.id, q === null ? undefined : parseParams(q, revisionQuery));
-    return b!({ ...args, linkage, revision });
-  });
+  return async (req: NextRequest, ctx: RouteCtx<P>) => {
+    try {
+      const params = (await ctx?.params) ?? ({} as P);
+      const { user, build, role, linkage } = await authorise(capability, params.buildId, params.linkageId);
+      if (!linkage) throw notFound("linkage");
+      const args = { req, user, build, role, linkage, params };
+      if (typeof a === "function") return await a(args);
+      const q = a.revision === "requested" ? req.nextUrl.searchParams.get("revision") : null;
+      const revision = await getRevisionOrThrow(linkage.id, q === null ? undefined : parseParams(q, revisionQuery));
+      return await b!({ ...args, revision });
+    } catch (e) {
+      return errorResponse(e);
+    }
+  };
 }

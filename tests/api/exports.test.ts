@@ -29,7 +29,7 @@ beforeAll(async () => {
   ownerEmail = o.email;
   ownerId = o.id;
   ({ buildId } = await makeBuild({ owner: o, viewer: v }));
-  keys = (await seedLongBuild(testDb, { client: s3Client, bucket: S3.bucket }, { buildId, ownerId, size: { entries: 200, years: 2, photosPerEntry: 2, linkages: 1, revisions: 3, comments: 0, signoffs: 0, parts: 0 } })).objectKeys;
+  keys = (await seedLongBuild(testDb, { client: s3Client, bucket: S3.bucket }, { buildId, ownerId, size: { entries: 600, years: 2, photosPerEntry: 2, linkages: 1, revisions: 3, comments: 0, signoffs: 0, parts: 0 } })).objectKeys;
   [owner, viewer] = await Promise.all([signIn(o.email), signIn(v.email)]);
   boss = new PgBoss({ connectionString: TEST_DB_URL, schema: "pgboss", supervise: false, schedule: false, max: 1 });
   await boss.start();
@@ -57,7 +57,7 @@ async function dbWait(id: string, until: (r: { status: string; worker: string | 
 describe("exports as background jobs", () => {
   it("makes the full log PDF off the request, with progress, and serves it for download", async () => {
     const est = (await viewer.request("GET", `${B()}/log/estimate`)).body.estimate;
-    expect(est).toMatchObject({ entries: 200, photos: 400 });
+    expect(est).toMatchObject({ entries: 600, photos: 1200 });
     const started = Date.now();
     const start = await viewer.request("POST", `${B()}/exports`, { kind: "log-pdf", params: {} });
     expect(start.status).toBe(202);
@@ -143,7 +143,7 @@ describe("exports as background jobs", () => {
       const top = names[0].split("/")[0];
       const inFiles = names.filter((n) => n.startsWith(`${top}/files/`) && !n.endsWith("/"));
       const stored = Number((await testDb("files").where({ build_id: buildId }).count<{ n: string }[]>("* as n"))[0].n);
-      expect(stored).toBeGreaterThan(300); // the fixture's 400 photos
+      expect(stored).toBeGreaterThan(900); // the fixture's 1,200 photos
       expect(inFiles).toHaveLength(stored);
       const linkages = await testDb("linkages").where({ build_id: buildId }).select("name");
       for (const n of [`${top}/build-log.pdf`, `${top}/hardware-list.csv`, `${top}/README.txt`]) expect(names).toContain(n);

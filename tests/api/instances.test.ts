@@ -73,6 +73,24 @@ describe("two app instances on one database", () => {
     }
   });
 
+  it("signing out through one instance ends the session on the other at its next request (build and linkage routes too)", async () => {
+    const u = await makeUser("two-signout");
+    const { buildId, linkageId } = await makeBuild({ owner: u });
+    const graph = `/api/builds/${buildId}/linkages/${linkageId}/graph`;
+    const onA = await signIn(u.email, TEST_PASSWORD, A);
+    const sameOnB = client(onA.cookie, B); // the same cookie, answered by the other instance
+    for (let i = 0; i < 3; i++) expect((await sameOnB.request("GET", graph)).status).toBe(200); // B has served it, more than once
+    const csrf = await fetch(`${A}/api/auth/csrf`, { headers: { cookie: onA.cookie } });
+    const csrfCookie = (csrf.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).join("; ");
+    const out = await fetch(`${A}/api/auth/signout`, {
+      method: "POST", redirect: "manual",
+      headers: { "content-type": "application/x-www-form-urlencoded", cookie: `${onA.cookie}; ${csrfCookie}` },
+      body: new URLSearchParams({ csrfToken: (await csrf.json()).csrfToken, json: "true" }),
+    });
+    expect(out.status).toBeLessThan(400);
+    for (const path of [graph, `/api/builds/${buildId}`, "/api/me"]) expect([path, (await sameOnB.request("GET", path)).status]).toEqual([path, 401]);
+  });
+
   it("failed sign-ins spread over both instances lock the e-mail on both", async () => {
     const victim = await makeUser("two-victim");
     const bystander = await makeUser("two-bystander");

@@ -1,8 +1,9 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, describe, expect, it } from "vitest";
 import { makeBuild, makeUser, testDb } from "../support/db";
-import { client, signIn, signUp } from "../support/http";
-import { APP_URL } from "../support/env";
+import { anonymous, client, signIn, signUp } from "../support/http";
+import { encode } from "next-auth/jwt";
+import { APP_URL, TEST_SECRET } from "../support/env";
 
 afterAll(() => testDb.destroy());
 
@@ -76,6 +77,50 @@ describe("accounts and sign-in", () => {
     expect([after.status, after.body.error.code]).toEqual([401, "unauthorized"]);
     expect((await phone.request("GET", "/api/me")).status).toBe(401); // every session of that account ends
     expect((await (await signIn(u.email)).request("GET", "/api/me")).status).toBe(200); // signing in again works
+  });
+
+  it("a cookie from before sign-out is refused (401) on build, linkage and page requests too, and a deleted account's as well", async () => {
+    const u = await makeUser("signs-out-build");
+    const { buildId, linkageId } = await makeBuild({ owner: u });
+    const me = await signIn(u.email);
+    const stolen = client(me.cookie);
+    const graph = `/api/builds/${buildId}/linkages/${linkageId}/graph`;
+    const page = () => fetch(`${APP_URL}/builds/${buildId}`, { redirect: "manual", headers: { cookie: me.cookie } });
+    expect((await stolen.request("GET", `/api/builds/${buildId}`)).status).toBe(200);
+    expect((await stolen.request("GET", graph)).status).toBe(200);
+    expect((await page()).status).toBe(200);
+    await testDb("users").where({ id: u.id }).increment("session_version", 1); // what signing out (on any instance) does
+    for (const [method, path] of [["GET", `/api/builds/${buildId}`], ["GET", graph], ["GET", `/api/builds/${buildId}/linkages/${linkageId}/comments`]]) {
+      const r = await stolen.request(method, path);
+      expect([method, path, r.status, r.body.error?.code]).toEqual([method, path, 401, "unauthorized"]);
+    }
+    const put = await stolen.request("PUT", graph, { baseRevision: 1, graph: { nodes: [], joints: [] } });
+    expect(put.status).toBe(401);
+    expect((await testDb("linkages").where({ id: linkageId }).first()).current_revision).toBe(1);
+    const p = await page();
+    expect([p.status, p.headers.get("location")]).toEqual([307, expect.stringContaining("/sign-in")]);
+
+    const gone = await makeUser("deleted-account");
+    const theirs = await signIn(gone.email);
+    expect((await theirs.request("GET", "/api/me")).status).toBe(200);
+    await testDb("users").where({ id: gone.id }).del();
+    expect((await theirs.request("GET", "/api/me")).status).toBe(401);
+  });
+
+  it("the session token counts only as the session cookie: sent as a bearer token it signs nobody in", async () => {
+    const u = await makeUser("bearer");
+    const me = await signIn(u.email);
+    const token = me.cookie.slice(me.cookie.indexOf("=") + 1);
+    const res = await fetch(`${APP_URL}/api/me`, { headers: { authorization: `Bearer ${token}` } });
+    expect(res.status).toBe(401);
+  });
+
+  it("a session cookie that has expired, or was sealed with another secret, signs nobody in", async () => {
+    const u = await makeUser("sealed");
+    const cookieOf = async (secret: string, maxAge: number) => `next-auth.session-token=${await encode({ token: { sub: u.id, sv: 0 }, secret, maxAge })}`;
+    expect((await client(await cookieOf(TEST_SECRET, 3600)).request("GET", "/api/me")).status).toBe(200); // sealed as the server seals it
+    expect((await client(await cookieOf(TEST_SECRET, -60)).request("GET", "/api/me")).status).toBe(401); // a minute past its expiry
+    expect((await client(await cookieOf("some other secret", 3600)).request("GET", "/api/me")).status).toBe(401);
   });
 
   it("guesses sent at the same moment cannot run past the limit: at most five passwords are checked", async () => {

@@ -14,6 +14,7 @@ const L = (c: Ctx) => `${B(c)}/linkages/${c.linkageId}`;
 export const rows: Record<string, Row> = {
   "GET /api/auth/[...nextauth]":                        { expect: anyone(200), path: () => "/api/auth/csrf" },
   "POST /api/auth/[...nextauth]":                       { expect: anyone(200), path: () => "/api/auth/_log", body: () => ({}) },
+  "GET /api/health":                                    { expect: anyone(200), path: () => "/api/health" },
   "POST /api/sign-up":                                  { expect: anyone(202), path: () => "/api/sign-up", body: () => ({ name: "New Person", email: unique(), password: "long enough password" }) },
   // Whoever opens the link mailed to a new address makes that account (the link is the proof of the address).
   "POST /api/sign-up/confirm":                          { expect: anyone(200), path: () => "/api/sign-up/confirm", send: async (client) => {

@@ -1,24 +1,25 @@
-import { withLinkage, parseBody, json } from "@/lib/http";
+import { withLinkage, parseBody, jsonText } from "@/lib/http";
 import { notFound, staleRevision } from "@/lib/errors";
 import { graphPut } from "@/shared/schemas/graph";
-import { getRevision, saveRevision } from "@/db/linkages";
+import { getRevision, revisionJson, saveRevision } from "@/db/linkages";
 import { analyze } from "@/shared/analysis";
 import { afterRevisionSaved } from "@/lib/review";
 
-/** The current revision of the graph (or `?revision=N`), with the analysis stored beside it. */
-export const GET = withLinkage("read", { revision: "requested" }, async ({ revision }) => json(revision));
+/** The current revision of the graph (or `?revision=N`), with the analysis stored beside it (sent on as stored). */
+export const GET = withLinkage("read", { revision: "requested" }, async ({ revision }) => jsonText(revisionJson(revision)));
 
 /** Save the next revision, only if `baseRevision` is still the current one (409 otherwise). */
 export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => {
   const { id } = linkage;
   const { baseRevision, graph } = await parseBody(req, graphPut);
-  const analysis = analyze(graph, build.analysisSettings);
-  const saved = await saveRevision(build.id, id, baseRevision, graph, analysis, user.id);
+  // The report is serialised once: stored with the revision and sent back as the same text.
+  const analysisJson = JSON.stringify(analyze(graph, build.analysisSettings));
+  const saved = await saveRevision(build.id, id, baseRevision, graph, analysisJson, user.id);
   if (saved === "missing") throw notFound("linkage"); // deleted while this request ran
   if (saved === "stale") {
     const current = await getRevision(id);
     throw staleRevision(`Someone saved revision ${current?.revision} while you were editing revision ${baseRevision}.`, current);
   }
   await afterRevisionSaved(build, user, linkage, saved.revision); // earlier sign-offs are now stale
-  return json({ ...saved, analysis });
+  return jsonText(`{"revision":${saved.revision},"createdAt":${JSON.stringify(saved.createdAt)},"analysis":${analysisJson}}`);
 });
