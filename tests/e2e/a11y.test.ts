@@ -140,16 +140,20 @@ describe("axe-core and phone width on every page", () => {
 
   it("the check itself works: a planted image without a text alternative and a too-wide box are both caught", async () => {
     const { ctx, page } = await signedIn(DEMO_USERS[0].email, DEMO_USERS[0].password, 390);
-    await page.goto(`${APP_URL}/builds`);
+    await page.goto(`${APP_URL}/builds`, { waitUntil: "networkidle" });
+    // Planted after the page has settled, in a box of its own (a re-render of the page's main must not take it away).
     await page.evaluate(() => {
+      const box = document.createElement("div");
       const img = document.createElement("img");
       img.src = "/icon.svg";
-      document.getElementById("main")!.append(img);
+      box.append(img);
       const wide = document.createElement("div");
       wide.style.width = "600px";
       wide.style.height = "1px";
-      document.getElementById("main")!.append(wide);
+      box.append(wide);
+      document.body.append(box);
     });
+    await page.locator("img[src='/icon.svg']:not([alt])").first().waitFor({ state: "attached" });
     await page.evaluate(AXE);
     const ids = (await page.evaluate(() =>
       // @ts-expect-error axe is the script evaluated above

@@ -89,6 +89,7 @@ const ROUTES: Record<string, Route> = {
   "PUT /api/parts/[partId]":                                          { as: "owner", path: () => `/api/parts/${ids.ownPart}`, body: rodEnd },
   "POST /api/parts/import":                                           { as: "owner", path: () => "/api/parts/import", body: () => ({ csv: csv(), dryRun: false }) },
   "POST /api/sign-up":                                                { as: "anon", path: () => "/api/sign-up", body: () => ({ name: "Fuzz Person", email: unique("signup"), password: "a long enough password" }) },
+  "POST /api/sign-up/confirm":                                        { as: "anon", path: () => "/api/sign-up/confirm", body: () => ({ token: `fuzz${randomUUID().replace(/-/g, "")}` }), control: false }, // a well-formed token no link holds: its control is sign-up.test.ts
   "POST /api/verify":                                                 { as: "anon", path: () => "/api/verify", body: () => ({ fingerprint: "0".repeat(64) }) },
 };
 
