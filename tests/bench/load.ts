@@ -28,6 +28,7 @@ import knex from "knex";
 import { DEMO_BUILD, DEMO_USERS } from "../../db/demo-accounts";
 import { demoPitchLinkage } from "../../shared/demo";
 import { localDbUrl } from "../../db/local-cluster.cjs";
+import { signInAt } from "./common";
 
 const ROOT = path.resolve(__dirname, "../..");
 const DB = "linkwright_bench_load";
@@ -51,15 +52,7 @@ function sh(args: string[], env: Record<string, string> = {}) {
 const wait = (ms: number) => new Promise((r) => setTimeout(r, ms));
 const pct = (xs: number[], p: number) => { const s = [...xs].sort((a, b) => a - b); return s[Math.min(s.length - 1, Math.floor(s.length * p))] ?? NaN; };
 
-async function signIn(email: string, password: string) {
-  const csrf = await fetch(`${APP}/api/auth/csrf`);
-  const cookie = (csrf.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).join("; ");
-  const { csrfToken } = await csrf.json();
-  const res = await fetch(`${APP}/api/auth/callback/credentials`, { method: "POST", redirect: "manual", headers: { "content-type": "application/x-www-form-urlencoded", cookie }, body: new URLSearchParams({ csrfToken, email, password, json: "true" }) });
-  const session = (res.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).find((c) => c.startsWith("next-auth.session-token="));
-  if (!session) throw new Error(`sign-in failed: ${res.status}`);
-  return session;
-}
+const signIn = (email: string, password: string) => signInAt(APP, email, password);
 
 type Route = { name: string; method: "GET" | "PUT"; requests: autocannon.Request[] };
 type Result = { name: string; requests: number; rps: number; cpuMsPerRequest: number; p50: number; p95: number; p99: number; non2xx: number; errors: number; timeouts: number; statuses: Record<string, number> };

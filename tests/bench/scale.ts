@@ -18,6 +18,7 @@ import { S3Client } from "@aws-sdk/client-s3";
 import { BENCH_SIZE, seedLongBuild } from "../support/long-build";
 import { DEMO_BUILD, DEMO_USERS } from "../../db/demo-accounts";
 import { localDbUrl, TEST_PG_PORT } from "../../db/local-cluster.cjs";
+import { signInAt } from "./common";
 
 const ROOT = path.resolve(__dirname, "../..");
 const DB = "linkwright_bench_scale";
@@ -43,15 +44,7 @@ const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[xs.length >> 1];
 const pct = (xs: number[], p: number) => [...xs].sort((a, b) => a - b)[Math.min(xs.length - 1, Math.floor(xs.length * p))];
 const wait = (ms: number) => new Promise((r) => setTimeout(r, ms));
 
-async function signIn(email: string, password: string) {
-  const csrf = await fetch(`${APP}/api/auth/csrf`);
-  const cookie = (csrf.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).join("; ");
-  const { csrfToken } = await csrf.json();
-  const res = await fetch(`${APP}/api/auth/callback/credentials`, { method: "POST", redirect: "manual", headers: { "content-type": "application/x-www-form-urlencoded", cookie }, body: new URLSearchParams({ csrfToken, email, password, json: "true" }) });
-  const session = (res.headers.getSetCookie() ?? []).map((c) => c.split(";")[0]).find((c) => c.startsWith("next-auth.session-token="));
-  if (!session) throw new Error(`sign-in failed: ${res.status}`);
-  return session;
-}
+const signIn = (email: string, password: string) => signInAt(APP, email, password);
 
 async function timed(cookie: string, url: string, init: RequestInit = {}) {
   const t0 = performance.now();
