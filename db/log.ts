@@ -35,6 +35,9 @@ const toEntry = (r: EntryRow, files: StoredFile[] = []): LogEntry => ({
 });
 
 
+/** No filter: the whole log (its counts and totals come from `log_month_hours`). */
+const unfiltered = (f: LogFilter) => !f.system && !f.from && !f.to && !(f.q && f.q.trim());
+
 function filtered(buildId: string, f: LogFilter) {
   const q = db("log_entries as e").where("e.build_id", buildId);
   if (f.system) q.whereRaw("? = any(e.systems)", [f.system]);
@@ -71,9 +74,15 @@ const withJoins = (q: ReturnType<typeof filtered>) => q
 /** The log's order, newest first: by date, then by when it was written (the id breaks ties). */
 export const LOG_KEYS: Key[] = [{ expr: "e.date", type: "date" }, { expr: "e.created_at", type: "timestamptz" }, { expr: "e.id", type: "uuid" }];
 
+/** How many entries the build's log holds (from the monthly rows the trigger keeps). */
+async function entryCount(buildId: string) {
+  const [r] = await db("log_month_hours").where({ build_id: buildId, system: "*" }).sum<{ n: string | null }[]>("entries as n");
+  return Number(r?.n ?? 0);
+}
+
 /** One page of the filtered entries (newest first) and how many match in all. */
 export async function pageEntries(buildId: string, f: LogFilter, page: PageArgs) {
-  const [p, total] = await Promise.all([keysetPage<EntryRow>(withJoins(filtered(buildId, f)), LOG_KEYS, page), countOf(filtered(buildId, f))]);
+  const [p, total] = await Promise.all([keysetPage<EntryRow>(withJoins(filtered(buildId, f)), LOG_KEYS, page), unfiltered(f) ? entryCount(buildId) : countOf(filtered(buildId, f))]);
   return { items: await attachFiles(buildId, p.items), next: p.next, total };
 }
 
@@ -106,28 +115,40 @@ export async function logSize(buildId: string, f: LogFilter) {
   return { entries: Number(r.entries), photos: Number(r.photos), photoBytes: Number(b.bytes), revisions: Number(r.revisions) };
 }
 
-/**
- * Hours by system and by month over every filtered entry, summed in the database. An entry with
- * several systems counts toward each (so the per-system rows may add up to more than the total).
- */
-export async function hourTotals(buildId: string, f: LogFilter = {}): Promise<LogTotals> {
-  const [sum, rows] = await Promise.all([
-    filtered(buildId, f).sum<{ total: string | null }[]>("e.hours as total"),
-    filtered(buildId, f)
-      .joinRaw("cross join lateral unnest(case when cardinality(e.systems) = 0 then array['unassigned']::text[] else e.systems end) as s(system)")
-      .select(db.raw("to_char(e.date, 'YYYY-MM') as month"), "s.system", db.raw("sum(e.hours) as hours"))
-      .groupByRaw("1, 2")
-      .orderByRaw("1, 2"),
-  ]);
+/** Rows of (month, system, hours); system '*' is every entry once (the month's real total). */
+type MonthRow = { month: string; system: string; hours: string };
+
+function toTotals(rows: MonthRow[]): LogTotals {
   const bySystem: Record<string, number> = {};
   const byMonth: Record<string, Record<string, number>> = {};
-  for (const r of rows as { month: string; system: string; hours: string }[]) {
+  let total = 0;
+  for (const r of rows) {
     const h = Number(r.hours);
+    const m = (byMonth[r.month] ??= {});
+    if (r.system === "*") { m.total = h; total += h; continue; }
     bySystem[r.system] = (bySystem[r.system] ?? 0) + h;
-    (byMonth[r.month] ??= {})[r.system] = h;
+    m[r.system] = h;
   }
-  const months = Object.keys(byMonth).sort().map((m) => ({ month: m, ...byMonth[m], total: Object.values(byMonth[m]).reduce((a, b) => a + b, 0) }));
-  return { total: Math.round(Number(sum[0]?.total ?? 0) * 100) / 100, bySystem, byMonth: months };
+  const months = Object.keys(byMonth).sort().map((month) => ({ month, ...byMonth[month], total: byMonth[month].total ?? 0 }));
+  return { total: Math.round(total * 100) / 100, bySystem, byMonth: months };
+}
+
+/**
+ * Hours by system and by month over every filtered entry, summed in the database. An entry with
+ * several systems counts toward each (so the per-system rows may add up to more than the total); a
+ * month's total counts it once. Without a filter they come from `log_month_hours`, which a trigger
+ * keeps up to date (a few rows a month instead of every entry of the build).
+ */
+export async function hourTotals(buildId: string, f: LogFilter = {}): Promise<LogTotals> {
+  if (unfiltered(f)) {
+    const rows = await db("log_month_hours").where({ build_id: buildId }).where("entries", ">", 0).select("month", "system", "hours");
+    return toTotals(rows as MonthRow[]);
+  }
+  const rows = await filtered(buildId, f)
+    .joinRaw("cross join lateral unnest(array['*']::text[] || case when cardinality(e.systems) = 0 then array['unassigned']::text[] else e.systems end) as s(system)")
+    .select(db.raw("to_char(e.date, 'YYYY-MM') as month"), "s.system", db.raw("sum(e.hours) as hours"))
+    .groupByRaw("1, 2");
+  return toTotals(rows as MonthRow[]);
 }
 
 export async function getEntry(buildId: string, id: string) {

@@ -227,7 +227,8 @@ describe("build log", () => {
     expect([all.total, all.nextCursor]).toEqual([3, null]);
     expect(all.totals.total).toBe(6.75);
     expect(all.totals.bySystem).toEqual({ pitch: 4.75, yaw: 2, roll: 1.25 });
-    expect(all.totals.byMonth).toEqual([{ month: "2026-10", pitch: 3.5, yaw: 2, total: 5.5 }, { month: "2026-11", pitch: 1.25, roll: 1.25, total: 2.5 }]);
+    expect(all.totals.byMonth).toEqual([{ month: "2026-10", pitch: 3.5, yaw: 2, total: 5.5 }, { month: "2026-11", pitch: 1.25, roll: 1.25, total: 1.25 }]);
+    // (an entry with two systems counts toward each system, once toward its month's total)
 
     const pitch = (await viewer.request("GET", `${B()}/log?system=pitch&from=2026-10-01&to=2026-10-31`)).body;
     expect(pitch.entries.map((x: { title: string }) => x.title)).toEqual(["Made the aft pushrod"]);
