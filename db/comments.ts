@@ -103,22 +103,26 @@ export async function createComment(c: {
   return (await getComment(c.linkageId, id))!;
 }
 
-export async function updateCommentBody(buildId: string, linkageId: string, commentId: string, userId: string, body: string) {
+/**
+ * A comment's new body and/or its thread resolved or reopened, with their audit events, in one
+ * transaction: either every part of the change is kept or none is.
+ */
+export async function patchComment(p: { buildId: string; linkageId: string; commentId: string; rootId: string; userId: string; body?: string; resolved?: boolean }) {
+  const { buildId, linkageId, userId } = p;
   await db.transaction(async (trx) => {
-    await trx("comments").where({ id: commentId, linkage_id: linkageId }).update({ body, edited_at: trx.fn.now() });
-    await audit({ buildId, userId, action: "comment.edit", detail: { linkageId, commentId } }, trx);
+    if (p.body !== undefined) {
+      await trx("comments").where({ id: p.commentId, linkage_id: linkageId }).update({ body: p.body, edited_at: trx.fn.now() });
+      await audit({ buildId, userId, action: "comment.edit", detail: { linkageId, commentId: p.commentId } }, trx);
+    }
+    if (p.resolved !== undefined) {
+      await trx("comments")
+        .where({ id: p.rootId, linkage_id: linkageId })
+        .update(p.resolved ? { resolved_at: trx.fn.now(), resolved_by: userId } : { resolved_at: null, resolved_by: null });
+      await audit({ buildId, userId, action: p.resolved ? "comment.resolve" : "comment.reopen", detail: { linkageId, commentId: p.rootId } }, trx);
+    }
   });
-  return getComment(linkageId, commentId);
-}
-
-export async function setThreadResolved(buildId: string, linkageId: string, rootId: string, userId: string, resolved: boolean) {
-  await db.transaction(async (trx) => {
-    await trx("comments")
-      .where({ id: rootId, linkage_id: linkageId })
-      .update(resolved ? { resolved_at: trx.fn.now(), resolved_by: userId } : { resolved_at: null, resolved_by: null });
-    await audit({ buildId, userId, action: resolved ? "comment.resolve" : "comment.reopen", detail: { linkageId, commentId: rootId } }, trx);
-  });
-  return getComment(linkageId, rootId);
+  const [comment, root] = await Promise.all([getComment(linkageId, p.commentId), p.rootId === p.commentId ? null : getComment(linkageId, p.rootId)]);
+  return { comment: comment!, root: root ?? comment! };
 }
 
 /** Open threads per subject ("joint:j1" → 2). */

@@ -7,6 +7,11 @@ import type { Key, PageArgs } from "@/db/paging";
 /** Page size: `?limit=` (1–200, default 50). */
 export const PAGE_DEFAULT = 50;
 export const PAGE_MAX = 200;
+/**
+ * The build log page's first screen: log entries carry their text and photos, so the page is drawn with
+ * fewer of them and the rest (pages of PAGE_DEFAULT) load as the reader scrolls or asks.
+ */
+export const LOG_FIRST_SCREEN = 20;
 
 const KEY_PART: Record<Key["type"], RegExp> = {
   date: /^\d{4}-\d{2}-\d{2}$/,

@@ -29,10 +29,10 @@ beforeAll(async () => {
   await testDb("linkage_revisions").where({ linkage_id: linkageId, revision: 1 }).update({ graph: JSON.stringify(demoPitchLinkage()) });
   owner = await signIn(u.email);
   await testDb.raw(`
-    create table test_refused_actors (user_id uuid primary key);
+    create table test_refused_actors (user_id uuid not null, action text);
     create function test_refuse_audit() returns trigger language plpgsql as $$
     begin
-      if exists (select 1 from test_refused_actors where user_id = new.user_id) then
+      if exists (select 1 from test_refused_actors where user_id = new.user_id and (action is null or action = new.action)) then
         raise exception 'audit event refused by the test';
       end if;
       return new;
@@ -52,9 +52,9 @@ afterAll(async () => {
 const B = () => `/api/builds/${buildId}`;
 const L = () => `${B()}/linkages/${linkageId}`;
 
-/** Runs one write with the audit insert refused: a 500, and not one row changed anywhere. */
-async function allOrNothing(method: string, path: string, body?: unknown) {
-  await testDb("test_refused_actors").insert({ user_id: ownerId });
+/** Runs one write with the audit insert refused (every event, or only `action`): a 500, and not one row changed anywhere. */
+async function allOrNothing(method: string, path: string, body?: unknown, action?: string) {
+  await testDb("test_refused_actors").insert({ user_id: ownerId, action: action ?? null });
   try {
     const before = await snapshot();
     const res = await owner.request(method, path, body);
@@ -80,6 +80,8 @@ describe("a write whose audit event fails changes nothing", () => {
       .returning("id");
     await allOrNothing("PATCH", `${L()}/comments/${c.id}`, { body: "Edited" });
     await allOrNothing("PATCH", `${L()}/comments/${c.id}`, { resolved: true });
+    // Both at once: the edit's event goes in, the resolution's is refused, and the edit is undone with it.
+    await allOrNothing("PATCH", `${L()}/comments/${c.id}`, { body: "Edited and resolved", resolved: true }, "comment.resolve");
     expect(await testDb("comments").where({ id: c.id }).first()).toMatchObject({ body: "Check the horn bolt", resolved_at: null, edited_at: null });
   });
 

@@ -2,7 +2,7 @@ import { Main } from "@/components/ui";
 import type { Metadata } from "next";
 import { requirePageBuild } from "@/lib/page-access";
 import { hourTotals, pageEntries } from "@/db/log";
-import { encodeCursor, PAGE_DEFAULT } from "@/lib/paging";
+import { encodeCursor, LOG_FIRST_SCREEN } from "@/lib/paging";
 import { listLinkages } from "@/db/linkages";
 import { BuildNav } from "@/components/BuildNav";
 import { can } from "@/shared/roles";
@@ -13,7 +13,7 @@ export const metadata: Metadata = { title: "Build log" };
 export default async function LogPage({ params }: { params: Promise<{ buildId: string }> }) {
   const { buildId } = await params;
   const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}/log`);
-  const [first, totals, linkages] = await Promise.all([pageEntries(build.id, {}, { limit: PAGE_DEFAULT, after: null }), hourTotals(build.id), listLinkages(build.id)]);
+  const [first, totals, linkages] = await Promise.all([pageEntries(build.id, {}, { limit: LOG_FIRST_SCREEN, after: null }), hourTotals(build.id), listLinkages(build.id)]);
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/log" />
