@@ -72,17 +72,17 @@ export function demoRudderLinkage(): LinkageGraph {
   const nodes: LinkageNode[] = [
     { id: "rd-pedal-left", kind: "cablePedal", label: "Left rudder pedal", position: at(0, 0), props: { pedalArm: 9, cableArm: 3, travel: 20 } },
     { id: "rd-pedal-right", kind: "cablePedal", label: "Right rudder pedal", position: at(0, 320), props: { pedalArm: 9, cableArm: 3, travel: 20 } },
-    { id: "rd-floor", kind: "structureMount", label: "Floor cross-tube", position: at(0, 160), props: { note: "pedal pivots, pulley bracket and fairlead block" } },
+    { id: "rd-floor", kind: "structureMount", label: "Floor cross-tube", position: at(-200, 160), props: { note: "pedal pivots, pulley bracket and fairlead block" } },
     cable("rd-cable-left", "Left rudder cable", 0, true),
     cable("rd-cable-right", "Right rudder cable", 320, false),
-    { id: "rd-pulley", kind: "pulley", label: "Pulley at the seat frame", position: at(420, -140), props: { diameter: 3, grooveFor: "1/8", wrapAngle: 30, bearing: "ball", guards: "fitted", guardGap: 0.05, ratedLoad: 1200 } },
-    { id: "rd-fairlead", kind: "fairlead", label: "Fairlead at the rear bulkhead", position: at(420, 460), props: { turnAngle: 2 } },
+    { id: "rd-pulley", kind: "pulley", label: "Pulley at the seat frame", position: at(-200, -150), props: { diameter: 3, grooveFor: "1/8", wrapAngle: 30, bearing: "ball", guards: "fitted", guardGap: 0.05, ratedLoad: 1200 } },
+    { id: "rd-fairlead", kind: "fairlead", label: "Fairlead at the rear bulkhead", position: at(200, 180), props: { turnAngle: 2 } },
     turnbuckle("rd-tb-left", "Left turnbuckle", 0, 2),
     turnbuckle(DEMO_RUDDER_FAULT_PART, "Right turnbuckle", 320, 5),
     { id: "rd-horn", kind: "controlHorn", label: "Rudder horn", position: at(960, 160), props: { hornArm: 3, linkAngle: 90, boltCount: 2, boltSpacing: 1.5 } },
     { id: "rd-rudder", kind: "controlSurface", label: "Rudder", position: at(1200, 160), props: { travelUp: 25, travelDown: 25 } },
     { id: "rd-fin", kind: "structureMount", label: "Fin spar", position: at(1200, 360), props: { note: "rudder hinges" } },
-    { id: "rd-stop", kind: "travelStop", label: "Right pedal stop", position: at(0, 480), props: { stopAt: 20, arm: 6 } },
+    { id: "rd-stop", kind: "travelStop", label: "Right pedal stop", position: at(220, 470), props: { stopAt: 20, arm: 6 } },
   ];
   const joints: Joint[] = [
     j("rd-j-pivot-left", ["rd-pedal-left", "pivot"], ["rd-floor", "mount"], pivot()),

@@ -24,6 +24,25 @@ function Count({ badge }: { badge: Badge | undefined }) {
   );
 }
 
+/** One row of the list: a part, or a joint indented under the part before it. */
+function RunRow(p: { itemKey: string; selected: boolean; badge: Badge | undefined; joint?: boolean; onClick: () => void; children: React.ReactNode }) {
+  return (
+    <li>
+      <button
+        type="button"
+        data-run-item={p.itemKey}
+        aria-current={p.selected ? "true" : undefined}
+        onClick={p.onClick}
+        className={`flex min-h-11 w-full items-center gap-2 py-1.5 text-left hover:bg-paper ${p.joint ? "pl-7 pr-3" : "px-3"} ${p.selected ? "bg-advisory/10" : ""}`}
+      >
+        {p.joint ? <span aria-hidden="true" className="text-ink-soft">↳</span> : null}
+        <span className="min-w-0 flex-1">{p.children}</span>
+        <Count badge={p.badge} />
+      </button>
+    </li>
+  );
+}
+
 export function RunList({ onOpen }: { onOpen: (s: SubjectRef) => void }) {
   const { nodes, joints } = useEditorStore((s) => ({ nodes: s.nodes, joints: s.joints }));
   const badges = useEditorValue((s) => s.badgeBySubject);
@@ -56,42 +75,19 @@ export function RunList({ onOpen }: { onOpen: (s: SubjectRef) => void }) {
             const n = nodeById.get(it.id);
             if (!n) return null;
             return (
-              <li key={key}>
-                <button
-                  type="button"
-                  data-run-item={key}
-                  aria-current={isSel ? "true" : undefined}
-                  onClick={() => onOpen({ type: "node", id: it.id })}
-                  className={`flex min-h-11 w-full items-center gap-2 px-3 py-1.5 text-left hover:bg-paper ${isSel ? "bg-advisory/10" : ""}`}
-                >
-                  <span className="min-w-0 flex-1">
-                    <span className="block truncate text-[13px] font-semibold">{partName(n)}</span>
-                    <span className="block text-[11px] text-ink-soft">{KIND_NAMES[n.kind]}</span>
-                  </span>
-                  <Count badge={badge} />
-                </button>
-              </li>
+              <RunRow key={key} itemKey={key} selected={isSel} badge={badge} onClick={() => onOpen({ type: "node", id: it.id })}>
+                <span className="block truncate text-[13px] font-semibold">{partName(n)}</span>
+                <span className="block text-[11px] text-ink-soft">{KIND_NAMES[n.kind]}</span>
+              </RunRow>
             );
           }
           const j = jointById.get(it.id);
           if (!j) return null;
           return (
-            <li key={key}>
-              <button
-                type="button"
-                data-run-item={key}
-                aria-current={isSel ? "true" : undefined}
-                onClick={() => onOpen({ type: "joint", id: it.id })}
-                className={`flex min-h-11 w-full items-center gap-2 py-1.5 pl-7 pr-3 text-left hover:bg-paper ${isSel ? "bg-advisory/10" : ""}`}
-              >
-                <span aria-hidden="true" className="text-ink-soft">↳</span>
-                <span className="min-w-0 flex-1">
-                  <span className="block text-[12px]">Joint {jointName(j, nodeById)}</span>
-                  <span className="block text-[11px] text-ink-soft">{j.hardware.rodEnd ? "rod end" : j.hardware.bolt ? "bolt" : "no hardware recorded yet"}</span>
-                </span>
-                <Count badge={badge} />
-              </button>
-            </li>
+            <RunRow key={key} itemKey={key} selected={isSel} badge={badge} joint onClick={() => onOpen({ type: "joint", id: it.id })}>
+              <span className="block text-[12px]">Joint {jointName(j, nodeById)}</span>
+              <span className="block text-[11px] text-ink-soft">{j.hardware.rodEnd ? "rod end" : j.hardware.bolt ? "bolt" : "no hardware recorded yet"}</span>
+            </RunRow>
           );
         })}
       </ol>
