@@ -1,5 +1,8 @@
 /** Field builders every part kind and the joint hardware share: lengths in inches, angles in degrees, forces in lbf. */
 import { z } from "zod";
+import { SYSTEMS, TUBE_MATERIALS } from "./format";
+
+export { SYSTEMS, TUBE_MATERIALS, type ControlSystem } from "./format";
 
 export const inches = (what: string) =>
   z.number({ error: `${what} must be a number (in)` }).positive(`${what} must be greater than 0 in`).max(1000, `${what} over 1000 in is not a control part`);
@@ -8,11 +11,7 @@ export const degrees = (what: string) =>
 export const force = (what: string) =>
   z.number({ error: `${what} must be a number (lbf)` }).positive(`${what} must be greater than 0 lbf`).max(1_000_000, `${what} is out of range`);
 
-export const SYSTEMS = ["pitch", "roll", "yaw", "flap", "trim", "other"] as const;
 export const systemSchema = z.enum(SYSTEMS);
-export type ControlSystem = z.infer<typeof systemSchema>;
-
-export const TUBE_MATERIALS = ["4130N", "6061-T6", "2024-T3"] as const;
 export const tubeMaterialSchema = z.enum(TUBE_MATERIALS);
 /** A temperature in °F (cable rigging tension is measured at one). */
 export const fahrenheit = (what: string) =>

@@ -1,6 +1,8 @@
 /** Import and export of a linkage file (the same JSON document stored with every revision). */
 import { graphSchema, type LinkageGraph } from "./schema";
 
+export { serializeLinkage } from "./format";
+
 export type LinkageFileError = { path: string; message: string };
 export type ParseResult = { ok: true; graph: LinkageGraph } | { ok: false; errors: LinkageFileError[] };
 
@@ -21,10 +23,4 @@ export function parseLinkageFile(text: string): ParseResult {
   const r = graphSchema.safeParse(raw);
   if (r.success) return { ok: true, graph: r.data };
   return { ok: false, errors: r.error.issues.map((i) => ({ path: formatPath(i.path), message: i.message })) };
-}
-
-/** The file text of a linkage: fixed top-level key order, two-space indent, trailing newline. */
-export function serializeLinkage(graph: LinkageGraph): string {
-  const { formatVersion, name, system, nodes, joints, geometry } = graph;
-  return JSON.stringify(geometry ? { formatVersion, name, system, nodes, joints, geometry } : { formatVersion, name, system, nodes, joints }, null, 2) + "\n";
 }

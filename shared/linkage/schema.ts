@@ -5,19 +5,14 @@
  * See README.md beside this file for the fields and an example.
  */
 import { z } from "zod";
-import { inches, force, systemSchema, type ControlSystem } from "./fields";
-import { KIND_LIST, PORTS, roleOf, type KindDef } from "./kinds";
+import { inches, force, systemSchema } from "./fields";
+import { NODE_KINDS, PORTS, roleOf, type NodeKind } from "./kinds";
+import { KIND_SCHEMAS, type KindSchemas } from "./kinds/schemas";
 import { geometrySchema } from "./geometry";
 import { jointExtraFields, nutExtraFields, rodEndExtraFields } from "./joint-extras";
+import { FORMAT_VERSION, GRAPH_LIMITS } from "./format";
 
-export const FORMAT_VERSION = 1 as const;
-
-/**
- * What one linkage may hold. The check walks the run once from every stick, pedal and wheel, so its work is
- * (inputs + 1) × (parts + joints): capping the inputs keeps it linear in the graph's size. A real run has
- * one to four inputs (dual controls, two pedal sets); a whole aircraft's controls are several linkages.
- */
-export const GRAPH_LIMITS = { parts: 10_000, joints: 20_000, inputs: 64 } as const;
+export { FORMAT_VERSION, GRAPH_LIMITS, defaultHardware, emptyGraph, serializeLinkage } from "./format";
 
 const id = z.string().min(1, "id is empty").max(64, "id is longer than 64 characters");
 
@@ -28,15 +23,14 @@ export { NODE_KINDS, PORTS, KINDS, type NodeKind, type PropsOf } from "./kinds";
 const position = z.object({ x: z.number().finite(), y: z.number().finite() });
 const label = z.string().max(80, "label is longer than 80 characters").default("");
 
-/** The node schema of one kind: the common fields and that kind's props (shared/linkage/kinds/). */
+/** The node schema of one kind: the common fields and that kind's props (shared/linkage/kinds/<kind>/schema.ts). */
 const node = <K extends string, P extends z.ZodObject>(kind: K, props: P) =>
   z.object({ id, kind: z.literal(kind), label, position, props });
-type NodeSchemaOf<D> = D extends KindDef<infer K, infer P> ? ReturnType<typeof node<K, P>> : never;
-type AnyNodeSchema = NodeSchemaOf<(typeof KIND_LIST)[number]>;
+type AnyNodeSchema = { [K in NodeKind]: ReturnType<typeof node<K, KindSchemas[K]>> }[NodeKind];
 
 export const nodeSchema = z.discriminatedUnion(
   "kind",
-  KIND_LIST.map((d) => node(d.kind, d.props as z.ZodObject)) as unknown as [AnyNodeSchema, ...AnyNodeSchema[]],
+  NODE_KINDS.map((k) => node(k, KIND_SCHEMAS[k] as z.ZodObject)) as unknown as [AnyNodeSchema, ...AnyNodeSchema[]],
 );
 export type LinkageNode = z.infer<typeof nodeSchema>;
 
@@ -162,7 +156,3 @@ export const graphSchema = z
 export type LinkageGraph = z.infer<typeof graphSchema>;
 /** The shape before defaults are applied (what a file on disk may omit). */
 export type LinkageGraphInput = z.input<typeof graphSchema>;
-
-export function emptyGraph(name = "", system: ControlSystem = "other"): LinkageGraph {
-  return { formatVersion: FORMAT_VERSION, name, system, nodes: [], joints: [] };
-}

@@ -1,16 +1,20 @@
 /**
- * The part-kind registry is complete: every kind registered in shared/linkage/kinds has a props schema, ports
- * (with sides and names, including the ports its engine role uses), a display name, a hint and defaults that
- * pass its schema; and its editor half (editor/nodes/kinds) has a glyph, card lines and a form whose fields are
- * exactly its props. The card of each kind renders with its name and lines. (The browser test
- * tests/e2e/editor.test.ts drops each kind on the canvas.)
+ * The part-kind registry is complete: every kind registered in shared/linkage/kinds has ports (with sides and
+ * names, including the ports its engine role uses), a display name, a hint and defaults (`<kind>/index.ts`,
+ * without the schema library), and a props schema (`<kind>/schema.ts`) that gives those defaults back exactly;
+ * and its editor half (editor/nodes/kinds) has a glyph, card lines and a form whose fields are exactly its
+ * props. The card of each kind renders with its name and lines. (The browser test
+ * tests/e2e/editor-kinds.test.ts drops each kind on the canvas.)
  */
+import { readdirSync, readFileSync } from "node:fs";
+import path from "node:path";
 import { createElement } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
 import { ReactFlowProvider } from "@xyflow/react";
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
-import { defaultProps, KIND_LIST, KINDS, NODE_KINDS, PORT_SIDES, PORTS, ROLE_PORTS } from "@/shared/linkage/kinds";
+import { defaultProps, KIND_LIST, NODE_KINDS, PORT_SIDES, PORTS, ROLE_PORTS } from "@/shared/linkage/kinds";
+import { KIND_SCHEMAS } from "@/shared/linkage/kinds/schemas";
 import { graphSchema, nodeSchema } from "@/shared/linkage/schema";
 import { EDITOR_KIND_LIST, EDITOR_KINDS } from "@/editor/nodes/kinds";
 import { KindGlyph } from "@/editor/nodes/glyphs";
@@ -26,14 +30,30 @@ describe("the part-kind registry", () => {
     expect(new Set(NODE_KINDS).size).toBe(NODE_KINDS.length);
     expect(EDITOR_KIND_LIST.map((d) => d.kind)).toEqual(NODE_KINDS);
     expect(Object.keys(nodeTypes).sort()).toEqual([...NODE_KINDS].sort());
-    // The node schema accepts exactly the registered kinds.
+    // The node schema accepts exactly the registered kinds, and each has a schema half.
     expect(nodeSchema.options.map((o) => o.shape.kind.value).sort()).toEqual([...NODE_KINDS].sort());
+    expect(Object.keys(KIND_SCHEMAS).sort()).toEqual([...NODE_KINDS].sort());
+  });
+
+  it("keeps each kind in a folder of its own, its first half free of the schema library", () => {
+    const dir = path.resolve(__dirname, "../../shared/linkage/kinds");
+    const folders = readdirSync(dir, { withFileTypes: true }).filter((d) => d.isDirectory()).map((d) => d.name);
+    expect(folders.sort()).toEqual([...NODE_KINDS].sort());
+    // What the editor draws with (the registry, its types, each kind's index.ts and the format's constants)
+    // must not load zod at run time, or the schema library is back in the editor's first load.
+    const free = ["index.ts", "types.ts", ...NODE_KINDS.map((k) => `${k}/index.ts`), "../format.ts"];
+    for (const f of free) {
+      const text = readFileSync(path.join(dir, f), "utf8");
+      const runtime = text.split("\n").filter((l) => /^import (?!type )/.test(l));
+      expect(runtime.filter((l) => /"zod"|schema"|\/fields"/.test(l)), f).toEqual([]);
+    }
   });
 
   for (const def of KIND_LIST) {
     describe(def.kind, () => {
-      it("has a props schema, ports with sides and names, a name, a hint and defaults that pass the schema", () => {
-        expect(def.props).toBeInstanceOf(z.ZodObject);
+      it("has a props schema, ports with sides and names, a name, a hint and defaults the schema gives back as they are", () => {
+        const props = KIND_SCHEMAS[def.kind] as z.ZodObject;
+        expect(props).toBeInstanceOf(z.ZodObject);
         expect(def.name.trim().length).toBeGreaterThan(2);
         expect(def.hint.trim().length).toBeGreaterThan(5);
         const ports = Object.entries(def.ports);
@@ -47,7 +67,11 @@ describe("the part-kind registry", () => {
         // The engine reads fixed port names for each role.
         for (const port of ROLE_PORTS[def.engine.role]) expect(PORTS[def.kind]).toContain(port);
         for (const system of ["pitch", "roll", "yaw", "flap", "trim", "other"] as const) {
-          expect(def.props.safeParse(def.defaults(system)).success).toBe(true);
+          const d = (def.defaults as (s: typeof system) => object)(system);
+          const r = props.safeParse(d);
+          expect(r.success).toBe(true);
+          // Complete and in the schema's order: a new part is placed without the schema (editor/store/graph.ts).
+          expect(JSON.stringify(r.data)).toBe(JSON.stringify(d));
         }
         const part = { id: "p", kind: def.kind, label: "", position: { x: 0, y: 0 }, props: defaultProps(def.kind) };
         expect(graphSchema.safeParse({ formatVersion: 1, nodes: [part], joints: [] }).success).toBe(true);
@@ -65,7 +89,7 @@ describe("the part-kind registry", () => {
         expect(nodeLines(node, "SI").length).toBe(us.length); // the card's height does not depend on units
         const fieldPaths = nodeSections(def.kind).flatMap((s) => s.fields.map((f) => f.path));
         expect(fieldPaths).toContain("label");
-        const props = Object.keys(KINDS[def.kind].props.shape).map((k) => `props.${k}`);
+        const props = Object.keys((KIND_SCHEMAS[def.kind] as z.ZodObject).shape).map((k) => `props.${k}`);
         expect(fieldPaths.filter((p) => p.startsWith("props.")).sort()).toEqual(props.sort());
       });
 

@@ -1,11 +1,13 @@
 /**
- * The registry of part kinds: one list, one file per kind beside this one. The node schema, NodeKind, PORTS,
- * port sides and names, display names, hints, default props and the engine's roles all come from here.
- * To add a kind: write `<kind>.ts` with `defineKind`, add it to KIND_LIST, then its editor file
- * (editor/nodes/kinds/) — see DEVELOPERS.md "Add a part kind".
+ * The registry of part kinds: one list, one folder per kind beside this one. NodeKind, PORTS, port sides and
+ * names, display names, hints, default props and the engine's roles all come from here; the props schemas
+ * (and with them the node schema) from schemas.ts. This half loads no schema library: the editor draws a
+ * linkage from it and loads the schemas on first use.
+ * To add a kind: write `<kind>/index.ts` with `defineKind` and `<kind>/schema.ts` with its props, add it to
+ * KIND_LIST here and to KIND_SCHEMAS in schemas.ts, then its editor file (editor/nodes/kinds/) — see
+ * DEVELOPERS.md "Add a part kind".
  */
-import type { z } from "zod";
-import type { ControlSystem } from "../fields";
+import type { ControlSystem } from "../format";
 import type { EngineInfo, KindDef, PortDef, Role, Side } from "./types";
 import { stick } from "./stick";
 import { pedal } from "./pedal";
@@ -37,8 +39,8 @@ export const KIND_LIST = [
 type Def = (typeof KIND_LIST)[number];
 export type NodeKind = Def["kind"];
 export type KindOf<K extends NodeKind> = Extract<Def, { kind: K }>;
-/** The props of a part of kind K, after defaults. */
-export type PropsOf<K extends NodeKind> = z.output<KindOf<K>["props"]>;
+/** The props of a part of kind K, after defaults (the output type of its schema). */
+export type PropsOf<K extends NodeKind> = ReturnType<KindOf<K>["defaults"]>;
 
 export const NODE_KINDS: NodeKind[] = KIND_LIST.map((d) => d.kind);
 export const KINDS = Object.fromEntries(KIND_LIST.map((d) => [d.kind, d])) as { [K in NodeKind]: KindOf<K> };
@@ -62,12 +64,12 @@ export function roleOf(kind: string): Role | undefined {
 
 /** A port of a kind, or undefined when the kind has no such port. */
 export function portDef(kind: string, port: string): PortDef | undefined {
-  const d = (KINDS as Record<string, KindDef | undefined>)[kind];
+  const d = (KINDS as unknown as Record<string, KindDef | undefined>)[kind];
   return d && Object.prototype.hasOwnProperty.call(d.ports, port) ? d.ports[port] : undefined;
 }
 
-/** Props a freshly placed part of `kind` starts with, defaults applied. */
+/** Props a freshly placed part of `kind` starts with, defaults applied (a new object each time). */
 export function defaultProps<K extends NodeKind>(kind: K, system: ControlSystem = "other"): PropsOf<K> {
   const d = KINDS[kind] as unknown as KindDef;
-  return d.props.parse(d.defaults(system)) as PropsOf<K>;
+  return d.defaults(system) as PropsOf<K>;
 }

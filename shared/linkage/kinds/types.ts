@@ -1,11 +1,12 @@
 /**
- * What one part kind is: its props schema, its ports (with the side of the card each sits on and the name a
- * person reads), its display name and one-line hint, the props a freshly placed part starts with, and what
- * the load-path engine needs to know of it (its role in the run). One file per kind in this folder, collected
- * in index.ts; everything else (the node schema, NodeKind, PORTS, names, hints) is derived from that list.
+ * What one part kind is: its ports (with the side of the card each sits on and the name a person reads), its
+ * display name and one-line hint, the props a freshly placed part starts with, and what the load-path engine
+ * needs to know of it (its role in the run) — `<kind>/index.ts`; and its props schema — `<kind>/schema.ts`.
+ * One folder per kind in this folder, collected in index.ts (the first halves) and schemas.ts (the schemas);
+ * everything else (the node schema, NodeKind, PORTS, names, hints) is derived from those two lists. The first
+ * half does not load the schema library, so the editor can draw a linkage before it needs a schema.
  */
-import type { z } from "zod";
-import type { ControlSystem } from "../fields";
+import type { ControlSystem } from "../format";
 
 export type Side = "left" | "right" | "top" | "bottom";
 
@@ -62,21 +63,28 @@ export const ROLE_PORTS: Record<Role, readonly string[]> = {
   guide: ["cable"],
 };
 
-export type KindDef<K extends string = string, P extends z.ZodObject = z.ZodObject> = {
+/** A part kind's first half; P is the props type its schema (`<kind>/schema.ts`) gives after defaults. */
+export type KindDef<K extends string = string, P = Record<string, unknown>> = {
   kind: K;
   /** Display name: "Control stick". */
   name: string;
   /** One line for the parts tray: what the part is for. */
   hint: string;
-  props: P;
   /** In the order the ports are listed (and spread along a shared side). */
   ports: Record<string, PortDef>;
-  /** Props a freshly placed part starts with: plausible light-aircraft numbers the builder then corrects. */
-  defaults: (system: ControlSystem) => z.input<P>;
-  engine: EngineInfo<z.output<P>>;
+  /**
+   * Props a freshly placed part starts with: plausible light-aircraft numbers the builder then corrects.
+   * Complete, in the schema's key order: every field the schema would default is given, so a new part needs
+   * no schema (tests/editor/kinds.test.ts checks that the schema gives back exactly these).
+   */
+  defaults: (system: ControlSystem) => P;
+  engine: EngineInfo<P>;
 };
 
-/** Declare a part kind (keeps the literal kind and the props type for the derived union). */
-export function defineKind<const K extends string, P extends z.ZodObject>(def: KindDef<K, P>): KindDef<K, P> {
-  return def;
+/**
+ * Declare a part kind's first half, with the props type of its schema: `defineKind<Props>()({ kind, … })`
+ * (keeps the literal kind and the props type for the derived union).
+ */
+export function defineKind<P>() {
+  return <const K extends string>(def: KindDef<K, P>): KindDef<K, P> => def;
 }

@@ -1,19 +1,12 @@
-import { z } from "zod";
-import { degrees, force, inches } from "../fields";
-import { defineKind } from "./types";
+import { defineKind } from "../types";
+import type { Props } from "./schema";
 
-export const pedal = defineKind({
+export const pedal = defineKind<Props>()({
   kind: "pedal",
   name: "Rudder pedal",
   hint: "pilot input, yaw",
-  props: z.object({
-    pedalArm: inches("pedal arm"),
-    attachArm: inches("attach arm"),
-    designForce: force("design force").optional(),
-    travel: degrees("travel").default(20),
-  }),
   ports: { attach: { side: "right", name: "attach" }, pivot: { side: "bottom", name: "pivot" } },
-  defaults: () => ({ pedalArm: 8, attachArm: 3 }),
+  defaults: () => ({ pedalArm: 8, attachArm: 3, travel: 20 }),
   engine: {
     role: "input",
     arms: (p) => [p.pedalArm, p.attachArm],

@@ -1,21 +1,13 @@
-import { z } from "zod";
-import { degrees, force, inches } from "../fields";
-import { defineKind } from "./types";
+import { defineKind } from "../types";
+import type { Props } from "./schema";
 
 /** A rudder pedal whose arm pulls a cable: the pedal force at the pedal arm, the cable on the cable arm. */
-export const cablePedal = defineKind({
+export const cablePedal = defineKind<Props>()({
   kind: "cablePedal",
   name: "Pedal, cable arm",
   hint: "pilot input, yaw, pulls a cable",
-  props: z.object({
-    pedalArm: inches("pedal arm"),
-    /** Pivot to the cable's attach hole. */
-    cableArm: inches("cable arm"),
-    designForce: force("design force").optional(),
-    travel: degrees("travel").default(20),
-  }),
   ports: { attach: { side: "right", name: "cable" }, pivot: { side: "bottom", name: "pivot" } },
-  defaults: () => ({ pedalArm: 9, cableArm: 3 }),
+  defaults: () => ({ pedalArm: 9, cableArm: 3, travel: 20 }),
   engine: {
     role: "input",
     arms: (p) => [p.pedalArm, p.cableArm],

@@ -1,6 +1,5 @@
-import { z } from "zod";
-import { degrees, inches } from "../fields";
-import { defineKind } from "./types";
+import { defineKind } from "../types";
+import type { Props } from "./schema";
 
 /** Resultant on a bellcrank pivot of two arm loads, arms at alpha degrees: |R|² = Fi² + Fo² − 2·Fi·Fo·cos α [from memory; statics]. */
 export function bellcrankPivotLoad(fi: number, fo: number, alphaDeg: number): number {
@@ -8,18 +7,12 @@ export function bellcrankPivotLoad(fi: number, fo: number, alphaDeg: number): nu
   return Math.sqrt(Math.max(0, fi * fi + fo * fo - 2 * fi * fo * c));
 }
 
-export const bellcrank = defineKind({
+export const bellcrank = defineKind<Props>()({
   kind: "bellcrank",
   name: "Bellcrank",
   hint: "changes direction and ratio",
-  props: z.object({
-    inputArm: inches("input arm"),
-    outputArm: inches("output arm"),
-    /** Angle between the two arms at the pivot. */
-    armAngle: degrees("arm angle").default(90),
-  }),
   ports: { in: { side: "left", name: "in" }, out: { side: "right", name: "out" }, pivot: { side: "bottom", name: "pivot" } },
-  defaults: () => ({ inputArm: 3, outputArm: 3 }),
+  defaults: () => ({ inputArm: 3, outputArm: 3, armAngle: 90 }),
   engine: {
     role: "crank",
     arms: (p) => [p.inputArm, p.outputArm],

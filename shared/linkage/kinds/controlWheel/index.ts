@@ -1,6 +1,5 @@
-import { z } from "zod";
-import { force, inches } from "../fields";
-import { defineKind } from "./types";
+import { defineKind } from "../types";
+import type { Props } from "./schema";
 
 /**
  * A control wheel on its column (yoke). Pitch: the pilot pushes or pulls the wheel; the column turns on its
@@ -8,23 +7,10 @@ import { defineKind } from "./types";
  * wheel with a couple of rollWheel × D in·lbf (D the wheel diameter; 14 CFR 23.397(b): 50·D, minimum 40·D),
  * the run leaving the shaft's drum, sprocket or crank of radius `attachArm`: F = couple / attachArm.
  */
-export const controlWheel = defineKind({
+export const controlWheel = defineKind<Props>()({
   kind: "controlWheel",
   name: "Control wheel",
   hint: "pilot input, wheel and column",
-  props: z.object({
-    axis: z.enum(["pitch", "roll"]).default("roll"),
-    /** Wheel diameter, in (the roll couple is proportional to it). */
-    diameter: inches("wheel diameter"),
-    /** Pitch: column pivot to the wheel's centre. */
-    columnArm: inches("column arm"),
-    /** Pitch: pivot to the link's hole; roll: radius of the drum, sprocket or crank on the wheel's shaft. */
-    attachArm: inches("attach arm"),
-    /** Override of the pitch force at the wheel, lbf. */
-    designForce: force("design force").optional(),
-    /** Override of the roll couple, in·lbf. */
-    designCouple: z.number({ error: "design couple must be a number (in·lbf)" }).positive("design couple must be greater than 0 in·lbf").max(1_000_000, "design couple is out of range").optional(),
-  }),
   ports: { attach: { side: "right", name: "attach" }, pivot: { side: "bottom", name: "pivot" } },
   defaults: (system) => ({ axis: system === "pitch" ? ("pitch" as const) : ("roll" as const), diameter: 12, columnArm: 20, attachArm: 2 }),
   engine: {

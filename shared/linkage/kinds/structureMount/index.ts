@@ -1,11 +1,10 @@
-import { z } from "zod";
-import { defineKind } from "./types";
+import { defineKind } from "../types";
+import type { Props } from "./schema";
 
-export const structureMount = defineKind({
+export const structureMount = defineKind<Props>()({
   kind: "structureMount",
   name: "Structure mount",
   hint: "pivot or bracket on the airframe",
-  props: z.object({ note: z.string().max(200).default("") }),
   ports: { mount: { side: "top", name: "mount" } },
   defaults: () => ({ note: "" }),
   engine: { role: "mount" },

@@ -1,15 +1,10 @@
-import { z } from "zod";
-import { inches } from "../fields";
-import { defineKind } from "./types";
+import { defineKind } from "../types";
+import type { Props } from "./schema";
 
-export const torqueTube = defineKind({
-  kind: "torqueTube",
-  name: "Torque tube",
-  hint: "turns one arm into another",
-  props: z.object({
-    inputArm: inches("input arm"),
-    outputArm: inches("output arm"),
-  }),
+export const idlerArm = defineKind<Props>()({
+  kind: "idlerArm",
+  name: "Idler arm",
+  hint: "supports and guides a run",
   ports: { in: { side: "left", name: "in" }, out: { side: "right", name: "out" }, pivot: { side: "bottom", name: "pivot" } },
   defaults: () => ({ inputArm: 3, outputArm: 3 }),
   engine: {

@@ -1,15 +1,10 @@
-import { z } from "zod";
-import { inches } from "../fields";
-import { defineKind } from "./types";
+import { defineKind } from "../types";
+import type { Props } from "./schema";
 
-export const idlerArm = defineKind({
-  kind: "idlerArm",
-  name: "Idler arm",
-  hint: "supports and guides a run",
-  props: z.object({
-    inputArm: inches("input arm"),
-    outputArm: inches("output arm"),
-  }),
+export const torqueTube = defineKind<Props>()({
+  kind: "torqueTube",
+  name: "Torque tube",
+  hint: "turns one arm into another",
   ports: { in: { side: "left", name: "in" }, out: { side: "right", name: "out" }, pivot: { side: "bottom", name: "pivot" } },
   defaults: () => ({ inputArm: 3, outputArm: 3 }),
   engine: {
