@@ -1,7 +1,7 @@
 "use client";
 /** The linkage file: export the current graph as a .json file, and import one (refused with its errors, or it replaces the graph, undoably). */
 import { useCallback, useRef, useState } from "react";
-import { parseLinkageFile, serializeLinkage } from "@/shared/linkage/io";
+import { serializeLinkage } from "@/shared/linkage/format";
 import { toGraph, type EditorStore } from "./store";
 import { downloadBlob, fileSafe } from "./download";
 
@@ -16,7 +16,9 @@ export function useLinkageFile(store: EditorStore, linkageName: string, afterImp
 
   const importFile = useCallback(
     async (file: File) => {
-      const r = parseLinkageFile(await file.text());
+      // The file's check needs the graph schema, loaded on the first import.
+      const [{ parseLinkageFile }, text] = await Promise.all([import("@/shared/linkage/io"), file.text()]);
+      const r = parseLinkageFile(text);
       if (!r.ok) {
         const shown = r.errors.slice(0, 20).map((i) => (i.path ? `${i.path}: ${i.message}` : i.message));
         if (r.errors.length > 20) shown.push(`…and ${r.errors.length - 20} more`);

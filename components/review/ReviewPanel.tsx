@@ -4,7 +4,7 @@ import { findingTitle } from "@/shared/analysis/finding-title";
 import { useState } from "react";
 import { LoadMore } from "@/components/paged";
 import { ApiFailure } from "@/components/api-client";
-import { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "@/shared/schemas/users";
+import { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "@/shared/notify";
 import { showValue, type ChangedItem, type GraphDiff } from "@/shared/review/diff";
 import { useAcknowledgements, useDiff, useNotify, useReviewActions, useRevisions, useSignoffs } from "./api";
 import type { ReviewMe } from "./ReviewThread";

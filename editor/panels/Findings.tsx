@@ -1,7 +1,8 @@
 "use client";
 /** The live findings list (grouped by severity), the summary strip and the caution. */
 import { memo, useState } from "react";
-import { SEVERITIES, type AnalysisSettings, type Finding, type Severity } from "@/shared/analysis/types";
+import type { AnalysisSettings, Finding } from "@/shared/analysis/types";
+import { SEVERITIES, type Severity } from "@/shared/analysis/severity";
 import type { ControlSystem } from "@/shared/linkage/schema";
 import { useEditorConfig, useEditorStore } from "../context";
 import { useFocusSubject } from "../canvas/viewport";

@@ -5,13 +5,18 @@ import { useEditorConfig, useEditorStore } from "../context";
 import { LinkageFindings } from "./Findings";
 import type { RecordsTarget } from "./JointExtras";
 import { CARD_TITLE_ID } from "./card-title";
+import { loadSchema } from "../store/schema";
 
 export { CARD_TITLE_ID };
 
 const loadingCard = () => <p className="p-1 text-[12px] text-ink-soft" data-testid="card-loading">Opening the card…</p>;
-/** The cards load when a part or joint is first opened (the form library and photo panel are not in the first load). */
-const NodeInspector = dynamic(() => import("./Cards").then((m) => m.NodeInspector), { ssr: false, loading: loadingCard });
-const JointInspector = dynamic(() => import("./Cards").then((m) => m.JointInspector), { ssr: false, loading: loadingCard });
+/**
+ * The cards load when a part or joint is first opened (the form library, the photo panel and the graph schema
+ * are not in the first load); a card shows once the schema its edits are checked with has loaded too.
+ */
+const cards = () => Promise.all([import("./Cards"), loadSchema()]).then(([m]) => m);
+const NodeInspector = dynamic(() => cards().then((m) => m.NodeInspector), { ssr: false, loading: loadingCard });
+const JointInspector = dynamic(() => cards().then((m) => m.JointInspector), { ssr: false, loading: loadingCard });
 
 export type ReviewSlot = (sel: { type: "node" | "joint" | "linkage"; id: string }) => React.ReactNode;
 

@@ -1,6 +1,8 @@
 /** Edits of the graph itself: place, move, change, join and delete parts and joints; and the graph document. */
-import { FORMAT_VERSION, PORTS, hardwareSchema, nodeSchema, type Joint, type JointHardware, type LinkageGraph } from "@/shared/linkage/schema";
-import { defaultProps, KIND_NAMES } from "@/shared/linkage/kinds";
+import type { Joint, JointHardware, LinkageGraph, LinkageNode } from "@/shared/linkage/schema";
+import { defaultHardware, FORMAT_VERSION } from "@/shared/linkage/format";
+import { defaultProps, KIND_NAMES, PORTS } from "@/shared/linkage/kinds";
+import { SCHEMA_LOADING, schemaNow } from "./schema";
 import type { EditActions, EditorState, Endpoint, Snapshot } from "./types";
 import type { Commit } from "./history";
 import { pruneSelection } from "./selection";
@@ -32,18 +34,34 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
       if (get().readOnly) return "";
       const id = h.newId(kind);
       const count = get().nodes.filter((n) => n.kind === kind).length + 1;
-      const parsed = nodeSchema.safeParse({
+      const node = {
         id,
         kind,
         label: init?.label ?? `${KIND_NAMES[kind]} ${count}`,
         position: { x: Math.round(position.x), y: Math.round(position.y) },
         props: { ...defaultProps(kind, get().meta.system), ...(init?.props ?? {}) },
-      });
-      if (!parsed.success) {
-        get().setNotice(`Could not add the part: ${issuesText(parsed.error)}`);
+      } as LinkageNode;
+      if (!Number.isFinite(node.position.x) || !Number.isFinite(node.position.y)) {
+        get().setNotice("Could not add the part: it was dropped outside the drawing.");
         return "";
       }
-      commit({ nodes: [...get().nodes, parsed.data], selection: { nodes: [id], joints: [] } });
+      // A kind's defaults pass its schema as they are (tests/editor/kinds.test.ts), and a label of its name and
+      // a count is short enough: only a part given a label or props of its own needs the schema.
+      if (init?.label !== undefined || init?.props) {
+        const schema = schemaNow();
+        if (!schema) {
+          get().setNotice(`Could not add the part: ${SCHEMA_LOADING}`);
+          return "";
+        }
+        const parsed = schema.nodeSchema.safeParse(node);
+        if (!parsed.success) {
+          get().setNotice(`Could not add the part: ${issuesText(parsed.error)}`);
+          return "";
+        }
+        commit({ nodes: [...get().nodes, parsed.data], selection: { nodes: [id], joints: [] } });
+        return id;
+      }
+      commit({ nodes: [...get().nodes, node], selection: { nodes: [id], joints: [] } });
       return id;
     },
 
@@ -68,7 +86,9 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
       if (s.readOnly) return { ok: false, reason: READ_ONLY };
       const cur = s.nodes.find((n) => n.id === id);
       if (!cur) return { ok: false, reason: `No part ${id}.` };
-      const parsed = nodeSchema.safeParse({ ...cur, label: patch.label ?? cur.label, props: patch.props ?? cur.props });
+      const schema = schemaNow();
+      if (!schema) return { ok: false, reason: SCHEMA_LOADING };
+      const parsed = schema.nodeSchema.safeParse({ ...cur, label: patch.label ?? cur.label, props: patch.props ?? cur.props });
       if (!parsed.success) return { ok: false, reason: issuesText(parsed.error) };
       if (JSON.stringify(parsed.data) === JSON.stringify(cur)) return { ok: true, value: undefined };
       commit({ nodes: s.nodes.map((n) => (n.id === id ? parsed.data : n)) }, { coalesce: o?.coalesce });
@@ -80,7 +100,9 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
       if (s.readOnly) return { ok: false, reason: READ_ONLY };
       const cur = s.joints.find((j) => j.id === id);
       if (!cur) return { ok: false, reason: `No joint ${id}.` };
-      const parsed = hardwareSchema.safeParse(hardware);
+      const schema = schemaNow();
+      if (!schema) return { ok: false, reason: SCHEMA_LOADING };
+      const parsed = schema.hardwareSchema.safeParse(hardware);
       if (!parsed.success) return { ok: false, reason: issuesText(parsed.error) };
       if (JSON.stringify(parsed.data) === JSON.stringify(cur.hardware)) return { ok: true, value: undefined };
       commit({ joints: s.joints.map((j) => (j.id === id ? { ...j, hardware: parsed.data as JointHardware } : j)) }, { coalesce: o?.coalesce, external: o?.external });
@@ -111,7 +133,7 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
         return check;
       }
       const id = h.newId("joint");
-      const joint: Joint = { id, from: { ...from }, to: { ...to }, hardware: hardwareSchema.parse({}) as JointHardware };
+      const joint: Joint = { id, from: { ...from }, to: { ...to }, hardware: defaultHardware() };
       commit({ joints: [...get().joints, joint], selection: { nodes: [], joints: [id] } });
       return { ok: true, value: id };
     },

@@ -2,8 +2,9 @@
 import { z } from "zod";
 import type { MotionReport } from "./motion/types";
 
-export const SEVERITIES = ["hazard", "caution", "advisory"] as const;
-export type Severity = (typeof SEVERITIES)[number];
+import type { Severity } from "./severity";
+
+export { SEVERITIES, type Severity } from "./severity";
 
 /** Where a source tag points: a published text, a rule of the trade, or a value recalled from memory. */
 export type SourceTag = { kind: "published" | "commonPractice" | "fromMemory"; text: string };

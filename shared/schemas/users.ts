@@ -1,6 +1,9 @@
 /** Accounts: sign-up, the signed-in user's settings (units, review e-mail), and site admins. */
 import { z } from "zod";
+import { NOTIFY_PREFS } from "../notify";
 import { text } from "./common";
+
+export { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "../notify";
 
 export const signUpInput = z.object({
   name: text("Name", 120),
@@ -36,12 +39,5 @@ export type PublicUser = z.infer<typeof publicUser>;
 
 export const adminUserPatch = z.object({ isSiteAdmin: z.boolean({ error: "isSiteAdmin must be true or false" }) });
 
-export const NOTIFY_PREFS = ["all", "mentions_signoffs", "none"] as const;
-export type NotifyPref = (typeof NOTIFY_PREFS)[number];
 export const notificationsPatch = z.object({ notify: z.enum(NOTIFY_PREFS, { error: "notify must be all, mentions_signoffs or none" }) });
 export const notifyResponse = notificationsPatch;
-export const NOTIFY_LABEL: Record<NotifyPref, string> = {
-  all: "Every comment and reply on linkages I follow, and sign-offs",
-  mentions_signoffs: "Only when someone @mentions me, and sign-offs",
-  none: "No review e-mail",
-};

@@ -1,9 +1,13 @@
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { applySuggestion } from "@/editor/panels/JointExtras";
 import { createEditorStore } from "@/editor/store";
 import { demoPitchLinkage } from "@/shared/demo";
 import { hardwareSchema } from "@/shared/linkage/schema";
 import type { Suggestion } from "@/shared/records/suggest";
+import { loadSchema } from "@/editor/store/schema";
+
+// The cards load the graph schema before they show (editor/panels/Inspector.tsx); so do these tests.
+beforeAll(() => loadSchema());
 
 const graph = demoPitchLinkage();
 const joint = graph.joints.find((j) => j.id === "j-stick-fwd")!;

@@ -1,10 +1,14 @@
 // Drawing a circuit: one cable drawn, its return offered and made in one undoable step, and the check sees one closed circuit.
-import { describe, expect, it } from "vitest";
+import { beforeAll, describe, expect, it } from "vitest";
 import { createEditorStore, toGraph } from "@/editor/store";
 import { returnCableEnds, returnableCable } from "@/editor/store/cable";
 import { COMMANDS, handleKey, type CommandCtx } from "@/editor/commands";
-import { emptyGraph } from "@/shared/linkage/schema";
+import { emptyGraph, nodeSchema } from "@/shared/linkage/schema";
 import { analyze } from "@/shared/analysis";
+import { loadSchema } from "@/editor/store/schema";
+
+// The cards load the graph schema before they show (editor/panels/Inspector.tsx); so do these tests.
+beforeAll(() => loadSchema());
 
 function sectorToHorn() {
   let i = 0;
@@ -37,6 +41,9 @@ describe("the return cable", () => {
     const ret = s().nodes.find((n) => n.id === id)!;
     expect(ret).toMatchObject({ kind: "cable", label: "Up cable (return)", props: { size: "1/8", tensionMin: 25, tensionMax: 35 } });
     expect((ret.props as { riggingTension?: number }).riggingTension).toBeUndefined();
+    // Made without the schema, it is what the schema makes of it.
+    expect(JSON.stringify(nodeSchema.parse(ret))).toBe(JSON.stringify(ret));
+    expect(nodeSchema.parse(ret)).toEqual(ret);
     const ends = s().joints.filter((j) => j.from.node === id).map((j) => [j.from.port, j.to.node, j.to.port]);
     expect(ends).toEqual([["a", sector, "out"], ["b", horn, "attach"]]);
     expect(returnCableEnds(s(), cable)).toBeNull(); // offered once

@@ -1,10 +1,14 @@
-import { describe, expect, it, vi } from "vitest";
+import { beforeAll, describe, expect, it, vi } from "vitest";
 import { createEditorStore, toGraph } from "@/editor/store";
 import { diffGraphs } from "@/shared/review/diff";
 import { emptyGraph, graphSchema, type LinkageGraph } from "@/shared/linkage/schema";
 import { analyze } from "@/shared/analysis";
 import type { Report } from "@/shared/analysis/types";
 import { DEMO_WRONG_JOINT, demoPitchLinkage } from "@/shared/demo";
+import { loadSchema } from "@/editor/store/schema";
+
+// The cards load the graph schema before they show (editor/panels/Inspector.tsx); so do these tests.
+beforeAll(() => loadSchema());
 
 function counterIds() {
   let i = 0;

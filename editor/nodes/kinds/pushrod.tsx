@@ -1,4 +1,4 @@
-import { TUBE_MATERIALS } from "@/shared/linkage/fields";
+import { TUBE_MATERIALS } from "@/shared/linkage/format";
 import { len, lu, opts, STROKE } from "./format";
 import { defineEditorKind } from "./types";
 
