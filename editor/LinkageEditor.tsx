@@ -19,14 +19,14 @@ import Canvas, { useFitAll, useFocusSubject } from "./Canvas";
 import PartsTray from "./panels/PartsTray";
 import Inspector, { CARD_TITLE_ID, type ReviewSlot } from "./panels/Inspector";
 import { RunList } from "./panels/RunList";
-import { JoinDialog } from "./panels/JoinDialog";
 import { FindingsAnnouncer } from "./panels/FindingsAnnouncer";
 import type { SubjectRef } from "./store";
 import { CAUTION, FindingsList, SummaryStrip } from "./panels/Findings";
 import { useAutosave } from "./useAutosave";
-import { ConflictDialog } from "./panels/ConflictDialog";
-// The shortcuts sheet loads when it is first opened.
+// The shortcuts sheet, the join dialog and the conflict dialog load when they are first opened.
 const ShortcutsSheet = dynamic(() => import("./panels/ShortcutsSheet").then((m) => m.ShortcutsSheet), { ssr: false });
+const JoinDialog = dynamic(() => import("./panels/JoinDialog").then((m) => m.JoinDialog), { ssr: false });
+const ConflictDialog = dynamic(() => import("./panels/ConflictDialog").then((m) => m.ConflictDialog), { ssr: false });
 import { readDeepLink } from "./view";
 import { handleKey, type CommandCtx } from "./commands";
 import { Toolbar } from "./toolbar/Toolbar";
@@ -234,8 +234,8 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
           }}
         />
       )}
-      {autosave.conflict && autosave.difference && (
-        <ConflictDialog current={autosave.conflict} difference={autosave.difference} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} />
+      {autosave.conflict && (
+        <ConflictDialog current={autosave.conflict} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} />
       )}
     </div>
   );

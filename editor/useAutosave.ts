@@ -4,14 +4,13 @@
  * the last change (or at once on Ctrl/Cmd+S). Tracks saved / saving / unsaved / offline / conflict,
  * and on a 409 keeps the newer revision so the user can load it or keep theirs as a new revision.
  */
-import { useCallback, useEffect, useMemo, useRef, useState } from "react";
+import { useCallback, useEffect, useRef, useState } from "react";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useStore } from "zustand";
 import type { LinkageGraph } from "@/shared/linkage/schema";
 import { api, ApiFailure } from "@/components/api-client";
 import { linkageKeys } from "@/components/query-keys";
 import type { GraphSaved, Revision } from "@/shared/schemas/graph";
-import { diffGraphs } from "@/shared/review/diff";
 import { toGraph, type EditorStore, type Snapshot } from "./store";
 import type { SaveStatus } from "./presentation";
 
@@ -193,13 +192,6 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
     void save();
   }, [store, save]);
 
-  const difference = useMemo(() => {
-    if (!conflict) return null;
-    const s = store.getState();
-    // Mine → theirs: "added" is only in theirs, "removed" only in mine (shared/review/diff.ts, as in the review history).
-    return diffGraphs({ nodes: s.nodes, joints: s.joints }, { nodes: conflict.graph.nodes, joints: conflict.graph.joints });
-  }, [conflict, store]);
-
   const status: SaveStatus = !enabled
     ? "readonly"
     : conflict
@@ -214,5 +206,5 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
               ? "unsaved"
               : "saved";
 
-  return { status, error, conflict, difference, lastSavedAt, saveNow, saveAndWait, loadTheirs, keepMine };
+  return { status, error, conflict, lastSavedAt, saveNow, saveAndWait, loadTheirs, keepMine };
 }

@@ -1,7 +1,11 @@
 "use client";
-/** Shown when a save finds that someone else saved a newer revision first, with what differs (shared/review/diff.ts). */
-import { useEffect, useRef } from "react";
-import type { GraphDiff, ItemRef } from "@/shared/review/diff";
+/**
+ * Shown when a save finds that someone else saved a newer revision first, with what differs (shared/review/diff.ts).
+ * Loaded when a conflict first happens (LinkageEditor.tsx), with the difference it shows.
+ */
+import { useEffect, useMemo, useRef } from "react";
+import { diffGraphs, type ItemRef } from "@/shared/review/diff";
+import { useEditorStoreApi } from "../context";
 import type { RemoteRevision } from "../useAutosave";
 
 function Line({ label, items }: { label: string; items: ItemRef[] }) {
@@ -15,11 +19,16 @@ function Line({ label, items }: { label: string; items: ItemRef[] }) {
   );
 }
 
-/** `difference` is from your work to their revision: added = only in theirs, removed = only in yours. */
-export function ConflictDialog({ current, difference, onLoadTheirs, onKeepMine }: { current: RemoteRevision; difference: GraphDiff; onLoadTheirs: () => void; onKeepMine: () => void }) {
+/** The difference is from your work (as the conflict found it) to their revision: added = only in theirs, removed = only in yours. */
+export function ConflictDialog({ current, onLoadTheirs, onKeepMine }: { current: RemoteRevision; onLoadTheirs: () => void; onKeepMine: () => void }) {
   const ref = useRef<HTMLDivElement>(null);
   useEffect(() => ref.current?.querySelector<HTMLButtonElement>("button")?.focus(), []);
-  const d = difference;
+  const store = useEditorStoreApi();
+  const d = useMemo(() => {
+    const s = store.getState();
+    // Mine → theirs: "added" is only in theirs, "removed" only in mine (shared/review/diff.ts, as in the review history).
+    return diffGraphs({ nodes: s.nodes, joints: s.joints }, { nodes: current.graph.nodes, joints: current.graph.joints });
+  }, [current, store]);
   const when = new Date(current.createdAt);
   return (
     <div className="fixed inset-0 z-50 flex items-center justify-center bg-ink/40 p-4" role="presentation">
