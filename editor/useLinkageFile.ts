@@ -2,6 +2,7 @@
 /** The linkage file: export the current graph as a .json file, and import one (refused with its errors, or it replaces the graph, undoably). */
 import { useCallback, useRef, useState } from "react";
 import { serializeLinkage } from "@/shared/linkage/format";
+import type { ParseResult } from "@/shared/linkage/io";
 import { toGraph, type EditorStore } from "./store";
 import { downloadBlob, fileSafe } from "./download";
 
@@ -17,8 +18,14 @@ export function useLinkageFile(store: EditorStore, linkageName: string, afterImp
   const importFile = useCallback(
     async (file: File) => {
       // The file's check needs the graph schema, loaded on the first import.
-      const [{ parseLinkageFile }, text] = await Promise.all([import("@/shared/linkage/io"), file.text()]);
-      const r = parseLinkageFile(text);
+      let r: ParseResult;
+      try {
+        const [{ parseLinkageFile }, text] = await Promise.all([import("@/shared/linkage/io"), file.text()]);
+        r = parseLinkageFile(text);
+      } catch {
+        setImportErrors([`${file.name}:`, "the file could not be checked (the page's script did not load; are you offline?)"]);
+        return;
+      }
       if (!r.ok) {
         const shown = r.errors.slice(0, 20).map((i) => (i.path ? `${i.path}: ${i.message}` : i.message));
         if (r.errors.length > 20) shown.push(`…and ${r.errors.length - 20} more`);
