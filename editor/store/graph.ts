@@ -47,6 +47,7 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
       }
       // A kind's defaults pass its schema as they are (tests/editor/kinds.test.ts), and a label of its name and
       // a count is short enough: only a part given a label or props of its own needs the schema.
+      let added = node;
       if (init?.label !== undefined || init?.props) {
         const schema = schemaNow();
         if (!schema) {
@@ -58,10 +59,9 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
           get().setNotice(`Could not add the part: ${issuesText(parsed.error)}`);
           return "";
         }
-        commit({ nodes: [...get().nodes, parsed.data], selection: { nodes: [id], joints: [] } });
-        return id;
+        added = parsed.data;
       }
-      commit({ nodes: [...get().nodes, node], selection: { nodes: [id], joints: [] } });
+      commit({ nodes: [...get().nodes, added], selection: { nodes: [id], joints: [] } });
       return id;
     },
 
