@@ -92,16 +92,18 @@ export async function deleteLinkage(buildId: string, linkageId: string, userId: 
   });
 }
 
+/** The revision read by getRevision (and by db/access.ts with a request's access): fixed texts, named prepared statements. */
+const REVISION_COLS = "r.revision, r.graph::text as graph, r.analysis::text as analysis, r.author_id, u.name as author_name, r.created_at";
+const REVISION_SQL = {
+  current: `select ${REVISION_COLS} from linkage_revisions r join linkages l on l.id = r.linkage_id and r.revision = l.current_revision left join users u on u.id = r.author_id where r.linkage_id = ? limit 1`,
+  numbered: `select ${REVISION_COLS} from linkage_revisions r left join users u on u.id = r.author_id where r.linkage_id = ? and r.revision = ? limit 1`,
+};
+
 export async function getRevision(linkageId: string, revision?: number): Promise<Revision | null> {
-  const q = db("linkage_revisions as r")
-    .join("linkages as l", "l.id", "r.linkage_id")
-    .leftJoin("users as u", "u.id", "r.author_id")
-    .where("r.linkage_id", linkageId);
-  if (revision === undefined) q.whereRaw("r.revision = l.current_revision");
-  else q.where("r.revision", revision);
-  const row = await q.first("r.revision", db.raw("r.graph::text as graph"), db.raw("r.analysis::text as analysis"), "r.author_id", "u.name as author_name", "r.created_at");
-  if (!row) return null;
-  return storedRevision(row);
+  const { rows } = revision === undefined
+    ? await db.raw(REVISION_SQL.current, [linkageId]).options({ name: "lw_revision_current" })
+    : await db.raw(REVISION_SQL.numbered, [linkageId, revision]).options({ name: "lw_revision_numbered" });
+  return rows[0] ? storedRevision(rows[0]) : null;
 }
 
 /** The JSON text a revision was read with (see storedRevision). */
@@ -113,7 +115,8 @@ type StoredJson = { graph: string; analysis: string | null };
  * only the graph (comments: subject names) never parses the analysis, and one that answers with the revision
  * as stored (GET graph) sends that text on (revisionJson) instead of parsing and serialising 30 KB again.
  */
-function storedRevision(row: { revision: number; graph: string; analysis: string | null; author_id: string | null; author_name: string | null; created_at: Date }): Revision {
+export type StoredRevisionRow = { revision: number; graph: string; analysis: string | null; author_id: string | null; author_name: string | null; created_at: Date };
+export function storedRevision(row: StoredRevisionRow): Revision {
   let graph: LinkageGraph | undefined;
   let analysis: Report | null | undefined;
   const rev = { revision: row.revision } as Revision;
@@ -134,13 +137,38 @@ export function revisionJson(rev: Revision): string {
   return `{"revision":${JSON.stringify(rev.revision)},"graph":${stored.graph},"analysis":${stored.analysis ?? "null"},"author":${JSON.stringify(rev.author)},"createdAt":${JSON.stringify(rev.createdAt)}}`;
 }
 
+/** A sign-off of an earlier revision that a save made stale, whose owners are told once (lib/review.ts). */
+export type StaleSignoff = { id: string; revision: number; reviewerName: string };
+
 /**
  * Optimistic concurrency: the next revision is written only if `baseRevision` is still current.
- * Returns the new revision, "stale" (someone saved first) or "missing".
- * One statement (atomic as a transaction is, in one round trip instead of five): the linkage's revision moves
+ * Returns the new revision with the sign-offs it made stale, "stale" (someone saved first) or "missing".
+ * One statement (atomic as a transaction is, in one round trip instead of six): the linkage's revision moves
  * on only where it is still `baseRevision` (a concurrent save waits on the row and then finds it moved), the
- * revision row is written from that update's result, and the build is touched only if it happened.
+ * revision row is written from that update's result, the build is touched and the sign-offs of earlier
+ * revisions not yet told about are marked told, each only if it happened. A fixed text, prepared once per
+ * connection.
  */
+const SAVE_SQL = `with moved as (
+    update linkages set current_revision = current_revision + 1, updated_at = now()
+    where id = :linkageId and build_id = :buildId and current_revision = :baseRevision
+    returning id, current_revision
+  ), saved as (
+    insert into linkage_revisions (linkage_id, revision, graph, analysis, author_id)
+    select id, current_revision, cast(:graph as jsonb), cast(:analysis as jsonb), :userId from moved
+    returning revision, created_at
+  ), touched as (
+    update builds set updated_at = now() where id = :buildId and exists (select 1 from moved)
+  ), stale as (
+    update signoffs s set stale_notified_at = now() from moved
+    where s.linkage_id = moved.id and s.revision < moved.current_revision and s.stale_notified_at is null
+    returning s.id, s.revision, s.reviewer_id
+  )
+  select saved.revision, saved.created_at,
+    (select coalesce(json_agg(json_build_object('id', st.id, 'revision', st.revision, 'reviewerName', coalesce(nullif(ru.name, ''), 'a reviewer')) order by st.revision), '[]')
+     from stale st left join users ru on ru.id = st.reviewer_id)::text as stale
+  from saved`;
+
 export async function saveRevision(
   buildId: string,
   linkageId: string,
@@ -149,24 +177,10 @@ export async function saveRevision(
   /** The engine's report as JSON text (the route sends the same text back: serialised once). */
   analysisJson: string,
   userId: string,
-): Promise<{ revision: number; createdAt: string } | "stale" | "missing"> {
-  const { rows } = await db.raw(
-    `with moved as (
-       update linkages set current_revision = current_revision + 1, updated_at = now()
-       where id = :linkageId and build_id = :buildId and current_revision = :baseRevision
-       returning id, current_revision
-     ), saved as (
-       insert into linkage_revisions (linkage_id, revision, graph, analysis, author_id)
-       select id, current_revision, cast(:graph as jsonb), cast(:analysis as jsonb), :userId from moved
-       returning revision, created_at
-     ), touched as (
-       update builds set updated_at = now() where id = :buildId and exists (select 1 from moved)
-     )
-     select revision, created_at from saved`,
-    { linkageId, buildId, baseRevision, graph: JSON.stringify(graph), analysis: analysisJson, userId },
-  );
-  const rev = rows[0] as { revision: number; created_at: Date } | undefined;
-  if (rev) return { revision: rev.revision, createdAt: rev.created_at.toISOString() };
+): Promise<{ revision: number; createdAt: string; staleSignoffs: StaleSignoff[] } | "stale" | "missing"> {
+  const { rows } = await db.raw(SAVE_SQL, { linkageId, buildId, baseRevision, graph: JSON.stringify(graph), analysis: analysisJson, userId }).options({ name: "lw_save_revision" });
+  const rev = rows[0] as { revision: number; created_at: Date; stale: string } | undefined;
+  if (rev) return { revision: rev.revision, createdAt: rev.created_at.toISOString(), staleSignoffs: JSON.parse(rev.stale) };
   const exists = await db("linkages").where({ id: linkageId, build_id: buildId }).first("id");
   return exists ? "stale" : "missing";
 }

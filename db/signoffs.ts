@@ -42,20 +42,6 @@ export async function createSignoff(s: { buildId: string; linkageId: string; rev
   return (await listSignoffs(s.linkageId, s.revision)).find((x) => x.id === row.id)!;
 }
 
-/** Sign-offs made stale by `currentRevision` whose owner was not told yet; marks them told (once). */
-export async function claimNewlyStaleSignoffs(linkageId: string, currentRevision: number) {
-  const rows = await db("signoffs as s")
-    .where("s.linkage_id", linkageId)
-    .where("s.revision", "<", currentRevision)
-    .whereNull("s.stale_notified_at")
-    .update({ stale_notified_at: db.fn.now() })
-    .returning(["s.id", "s.revision", "s.reviewer_id"]);
-  if (rows.length === 0) return [];
-  const names = await db("users").whereIn("id", rows.map((r: { reviewer_id: string | null }) => r.reviewer_id).filter(Boolean) as string[]).select("id", "name");
-  const byId = new Map(names.map((n: { id: string; name: string }) => [n.id, n.name]));
-  return rows.map((r: { id: string; revision: number; reviewer_id: string | null }) => ({ id: r.id, revision: r.revision, reviewerName: (r.reviewer_id && byId.get(r.reviewer_id)) || "a reviewer" }));
-}
-
 /** Per linkage: open threads and the newest sign-off (with whether a later revision made it stale). */
 export async function reviewSummaryForBuild(buildId: string) {
   const open = await db("comments as c")

@@ -125,15 +125,15 @@ const sessionClaims = cache(async (): Promise<{ id: string; sv: number } | null>
 });
 
 /**
- * The signed-in user, read fresh from the database on every request, with the build and linkage the request
- * names (db/access.ts: one query for all three). Null when signed out, for a deleted user, and for a cookie
+ * The signed-in user, read fresh from the database on every request, with the build, linkage and revision the
+ * request names (db/access.ts: one query for all of them). Null when signed out, for a deleted user, and for a cookie
  * from before the user signed out or changed the password (a copy of it): its session version is older.
  * Nothing is kept between requests, so a session ended on one instance is refused by every instance at once.
  */
-export const getSessionAccess = cache(async (buildId?: string, linkageId?: string) => {
+export const getSessionAccess = cache(async (buildId?: string, linkageId?: string, revision?: number | "current") => {
   const claims = await sessionClaims();
   if (!claims) return null;
-  const access = await getAccess(claims.id, buildId, linkageId);
+  const access = await getAccess(claims.id, buildId, linkageId, revision);
   if (!access || access.user.session_version !== claims.sv) return null;
   return { ...access, user: toPublicUser(access.user) };
 });

@@ -96,14 +96,14 @@ const WHY: Record<Capability, string> = {
  * in this order: 401 signed out, 404 a malformed id or a build the user is not a member of (non-members never
  * learn the build exists), 403 a role without the capability, then 404 a linkage not in this build.
  */
-async function authorise(capability: Capability, buildId: string, linkageId?: string) {
+async function authorise(capability: Capability, buildId: string, linkageId?: string, revision?: number | "current") {
   const buildOk = UUID_RE.test(buildId);
   const linkageOk = linkageId !== undefined && UUID_RE.test(linkageId);
-  const access = await getSessionAccess(buildOk ? buildId : undefined, buildOk && linkageOk ? linkageId : undefined);
+  const access = await getSessionAccess(buildOk ? buildId : undefined, buildOk && linkageOk ? linkageId : undefined, buildOk && linkageOk ? revision : undefined);
   if (!access) throw unauthorized();
   if (!access.member) throw notFound();
   if (!can(access.member.role, capability)) throw forbidden(WHY[capability]);
-  return { user: access.user, build: access.member.build, role: access.member.role, linkage: access.linkage };
+  return { user: access.user, build: access.member.build, role: access.member.role, linkage: access.linkage, revision: access.revision };
 }
 
 type BuildArgs<P> = { req: NextRequest; user: SessionUser; build: Build; role: Role; params: P };
@@ -168,12 +168,17 @@ export function withLinkage<P extends { buildId: string; linkageId: string }>(
   return async (req: NextRequest, ctx: RouteCtx<P>) => {
     try {
       const params = (await ctx?.params) ?? ({} as P);
-      const { user, build, role, linkage } = await authorise(capability, params.buildId, params.linkageId);
+      // The revision is read with the access (one round trip); a malformed `?revision=` is a 404, but only after
+      // the checks above have passed, as for any other id.
+      const q = typeof a !== "function" && a.revision === "requested" ? req.nextUrl.searchParams.get("revision") : null;
+      const asked = q === null ? undefined : revisionQuery.safeParse(q);
+      const wanted = typeof a === "function" ? undefined : asked === undefined ? "current" : asked.success ? asked.data : undefined;
+      const { user, build, role, linkage, revision } = await authorise(capability, params.buildId, params.linkageId, wanted);
       if (!linkage) throw notFound("linkage");
       const args = { req, user, build, role, linkage, params };
       if (typeof a === "function") return await a(args);
-      const q = a.revision === "requested" ? req.nextUrl.searchParams.get("revision") : null;
-      const revision = await getRevisionOrThrow(linkage.id, q === null ? undefined : parseParams(q, revisionQuery));
+      if (asked && !asked.success) throw notFound("item");
+      if (!revision) throw notFound("revision");
       return await b!({ ...args, revision });
     } catch (e) {
       return errorResponse(e);

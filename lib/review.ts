@@ -1,7 +1,6 @@
 import "server-only";
 /** What the review routes share: the report of a revision, names of subjects, hooks after a save. */
-import type { Linkage, Revision } from "@/db/linkages";
-import { claimNewlyStaleSignoffs } from "@/db/signoffs";
+import type { Linkage, Revision, StaleSignoff } from "@/db/linkages";
 import { buildOwners } from "@/db/builds";
 import type { Build } from "@/db/builds";
 import type { SessionUser } from "./auth";
@@ -21,11 +20,13 @@ export function subjectExists(graph: LinkageGraph, s: Subject, linkageId: string
   return s.id === linkageId;
 }
 
-/** After a new revision is saved: sign-offs of earlier revisions are stale; tell the owners once. */
-export async function afterRevisionSaved(build: Build, user: SessionUser, linkage: Linkage, revision: number) {
+/**
+ * After a new revision is saved: sign-offs of earlier revisions are stale; tell the owners once. `stale` is what
+ * the save marked told (saveRevision does it in the same statement).
+ */
+export async function afterRevisionSaved(build: Build, user: SessionUser, linkage: Linkage, revision: number, stale: StaleSignoff[]) {
+  if (stale.length === 0) return;
   try {
-    const stale = await claimNewlyStaleSignoffs(linkage.id, revision);
-    if (stale.length === 0) return;
     await notifyStale({
       owners: await buildOwners(build.id),
       editorId: user.id,

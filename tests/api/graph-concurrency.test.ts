@@ -1,15 +1,20 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { makeBuild, makeUser, testDb } from "../support/db";
-import { signIn, type Client } from "../support/http";
+import { anonymous, signIn, type Client } from "../support/http";
 import { emptyGraph } from "@/shared/linkage/schema";
 
 let owner: Client;
+let outsider: Client;
 let ids: { buildId: string; linkageId: string };
+let theirs: { buildId: string; linkageId: string };
 
 beforeAll(async () => {
   const u = await makeUser("racer");
+  const x = await makeUser("outsider");
   owner = await signIn(u.email);
+  outsider = await signIn(x.email);
   ids = await makeBuild({ owner: u });
+  theirs = await makeBuild({ owner: x });
 });
 afterAll(() => testDb.destroy());
 
@@ -45,5 +50,40 @@ describe("optimistic concurrency on linkage revisions", () => {
     expect(r.status).toBe(200);
     expect(r.body.revision).toBe(cur.body.revision + 1);
     expect(r.body.analysis).toBeTypeOf("object");
+  });
+});
+
+describe("a revision read with the request's access (one query)", () => {
+  const url = (q = "", o = ids) => `/api/builds/${o.buildId}/linkages/${o.linkageId}/graph${q}`;
+
+  it("the current revision, or the one asked for, with its author and stored report", async () => {
+    const cur = await owner.request("GET", url());
+    expect(cur.status).toBe(200);
+    expect(cur.body.revision).toBeGreaterThanOrEqual(3); // the saves above
+    expect(cur.body.graph.name).toBe("next");
+    expect(cur.body.analysis).toBeTypeOf("object");
+    expect(cur.body.author.name).toBeTypeOf("string");
+    const first = await owner.request("GET", url("?revision=1"));
+    expect(first.status).toBe(200);
+    expect(first.body).toMatchObject({ revision: 1, graph: { name: "Pitch run" }, analysis: null });
+    const two = await owner.request("GET", url("?revision=2"));
+    expect(two.body.revision).toBe(2);
+    expect(two.body.graph.name).toMatch(/^attempt \d+$/);
+  });
+
+  it("refusals keep their order: signed out 401, non-member 404 whatever the revision, then a bad or unknown revision 404", async () => {
+    expect((await anonymous().request("GET", url("?revision=abc"))).status).toBe(401);
+    for (const q of ["", "?revision=1", "?revision=abc"]) {
+      const r = await outsider.request("GET", url(q));
+      expect(r.status, q).toBe(404);
+      expect(r.body.error.message).not.toMatch(/revision/);
+    }
+    // Another build's linkage under this build's id: the linkage is not found, its revisions are not read.
+    expect((await owner.request("GET", url("?revision=1", { buildId: ids.buildId, linkageId: theirs.linkageId }))).body.error.message).toMatch(/linkage/);
+    for (const q of ["?revision=abc", "?revision=0", "?revision=999"]) {
+      const r = await owner.request("GET", url(q));
+      expect(r.status, q).toBe(404);
+      expect(r.body.error.code).toBe("not_found");
+    }
   });
 });

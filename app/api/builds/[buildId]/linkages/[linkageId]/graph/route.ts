@@ -20,6 +20,6 @@ export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => 
     const current = await getRevision(id);
     throw staleRevision(`Someone saved revision ${current?.revision} while you were editing revision ${baseRevision}.`, current);
   }
-  await afterRevisionSaved(build, user, linkage, saved.revision); // earlier sign-offs are now stale
+  await afterRevisionSaved(build, user, linkage, saved.revision, saved.staleSignoffs); // earlier sign-offs are now stale
   return jsonText(`{"revision":${saved.revision},"createdAt":${JSON.stringify(saved.createdAt)},"analysis":${analysisJson}}`);
 });
