@@ -1,5 +1,5 @@
 // `npm test`: the same set-up as `npm start` on a cluster of its own (LW_TEST_PG_PORT, fsync off) with a fresh test database, then every test.
-import { spawnSync } from "node:child_process";
+import { spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { ROOT, TEST_PG_PORT, authSecret, dbUrl, ensureDebianPackage, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
@@ -23,18 +23,26 @@ ensureDebianPackage("/usr/bin/chromium", "chromium");
 ensureDebianPackage("/usr/bin/pdftoppm", "poppler-utils");
 startPostgres("test");
 
-step(`Recreating the test database ${TEST_DB} (test cluster, port ${TEST_PG_PORT})`);
-run(process.execPath, ["--import", "tsx", "scripts/reset-db.ts", TEST_DB]);
-migrate(dbUrl(TEST_DB, "test"), { label: TEST_DB });
-
 const env = {
   NODE_ENV: "production",
   NEXT_DIST_DIR: process.env.NEXT_DIST_DIR || ".next-test",
   DATABASE_URL: dbUrl(TEST_DB, "test"),
   NEXTAUTH_SECRET: authSecret(),
 };
-step("Building the app for the browser and route tests (.next-test)");
-run(process.execPath, ["node_modules/next/dist/bin/next", "build"], { env });
+// The build does not touch the database: it runs while the test database is made, migrated and seeded.
+step("Building the app for the browser and route tests (.next-test), meanwhile the test database");
+const build = spawn(process.execPath, ["node_modules/next/dist/bin/next", "build"], { cwd: ROOT, stdio: "inherit", env: { ...process.env, NEXT_TELEMETRY_DISABLED: "1", ...env } });
+const built = new Promise((resolve) => build.once("exit", (code, signal) => resolve(code ?? signal)));
+process.on("exit", () => { if (build.exitCode === null && build.signalCode === null) build.kill(); }); // a failed migration stops the build too
+
+step(`Recreating the test database ${TEST_DB} (test cluster, port ${TEST_PG_PORT})`);
+run(process.execPath, ["--import", "tsx", "scripts/reset-db.ts", TEST_DB]);
+migrate(dbUrl(TEST_DB, "test"), { label: TEST_DB });
+const buildExit = await built;
+if (buildExit !== 0) {
+  console.error(`\n✗ next build failed (exit ${buildExit})`);
+  process.exit(typeof buildExit === "number" ? buildExit : 1);
+}
 
 step("Running the tests (vitest)");
 mkdirSync(path.join(ROOT, "tests/artifacts"), { recursive: true });

@@ -34,19 +34,40 @@ export async function makeBuild(members: Partial<Record<Role, { id: string }>> &
   return { buildId: build.id as string, linkageId: linkage.id as string, invitationId: inv.id as string };
 }
 
+/**
+ * Each table's content digest, remembered under the versions of its rows that it was made from: a row's
+ * version (ctid, xmin) is new on every insert and update, and the same versions are the same rows, so a
+ * table whose versions have not moved has the digest it had, and only a table that was written is read
+ * whole again.
+ */
+const digests = new Map<string, { versions: string; digest: string }>();
+
 /** A fingerprint of every application table: equal fingerprints mean no row changed. */
 export async function snapshot() {
-  const tables = (await testDb.raw("select tablename from pg_tables where schemaname = 'public' and tablename not like 'knex_%' and tablename not in ('sign_in_attempts', 'audit_events') order by 1")).rows as { tablename: string }[];
-  const out: Record<string, string> = {};
-  for (const { tablename } of tables) {
-    // Of export_jobs only what a request writes: the export worker moves other tests' jobs on (status, progress,
-    // heartbeat, result) at any moment.
-    // Of file_thumbnails the bytes' digest: the same change found without sorting kilobytes of hex per row.
-    const rows = tablename === "export_jobs" ? "(select id, build_id, user_id, kind, params, label, created_at from export_jobs)"
-      : tablename === "file_thumbnails" ? "(select file_id, md5(bytes) as bytes from file_thumbnails)" : `"${tablename}"`;
-    // Each row's digest, sorted: a whole-row text sort costs as much as the rows are long (stored graphs are).
-    const r = await testDb.raw(`select count(*)::int as n, coalesce(md5(string_agg(md5(t::text), '|' order by md5(t::text))), '') as h from ${rows} t`);
-    out[tablename] = `${r.rows[0].n}:${r.rows[0].h}`;
-  }
-  return out;
+  // One snapshot of the database for every table (a repeatable-read transaction), so a digest and the versions
+  // it is remembered under describe the same rows.
+  return testDb.transaction(async (trx) => {
+    const tables = (await trx.raw("select tablename from pg_tables where schemaname = 'public' and tablename not like 'knex_%' and tablename not in ('sign_in_attempts', 'audit_events') order by 1")).rows as { tablename: string }[];
+    // Every table's row versions in one query.
+    const versions = new Map(((await trx.raw(tables.map(({ tablename }) => `select '${tablename}' as t, count(*)::int || ':' || coalesce(md5(string_agg(ctid::text || '/' || xmin::text, ',' order by ctid)), '') as v from "${tablename}"`).join(" union all "))).rows as { t: string; v: string }[]).map((r) => [r.t, r.v]));
+    const out: Record<string, string> = {};
+    for (const { tablename } of tables) {
+      const v = versions.get(tablename)!;
+      const known = digests.get(tablename);
+      if (known?.versions === v) {
+        out[tablename] = known.digest;
+        continue;
+      }
+      // Of export_jobs only what a request writes: the export worker moves other tests' jobs on (status, progress,
+      // heartbeat, result) at any moment.
+      // Of file_thumbnails the bytes' digest: the same change found without sorting kilobytes of hex per row.
+      const rows = tablename === "export_jobs" ? "(select id, build_id, user_id, kind, params, label, created_at from export_jobs)"
+        : tablename === "file_thumbnails" ? "(select file_id, md5(bytes) as bytes from file_thumbnails)" : `"${tablename}"`;
+      // Each row's digest, sorted: a whole-row text sort costs as much as the rows are long (stored graphs are).
+      const r = await trx.raw(`select count(*)::int as n, coalesce(md5(string_agg(md5(t::text), '|' order by md5(t::text))), '') as h from ${rows} t`);
+      out[tablename] = `${r.rows[0].n}:${r.rows[0].h}`;
+      digests.set(tablename, { versions: v, digest: out[tablename] });
+    }
+    return out;
+  }, { isolationLevel: "repeatable read", readOnly: true });
 }
