@@ -50,7 +50,7 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
           <ul className="space-y-0.5">
             {l.usedIn.map((u) => (
               <li key={`${u.linkageId}-${u.jointId}`}>
-                <Link className="text-advisory hover:underline" href={`/builds/${buildId}/linkages/${u.linkageId}?select=${encodeURIComponent(u.jointId)}`} title={`Open ${u.linkageName} with ${u.where} selected`}>
+                <Link className="inline-flex min-h-6 items-center text-advisory hover:underline" href={`/builds/${buildId}/linkages/${u.linkageId}?select=${encodeURIComponent(u.jointId)}`} title={`Open ${u.linkageName} with ${u.where} selected`}>
                   {u.linkageName}: {u.where}
                 </Link>
               </li>
