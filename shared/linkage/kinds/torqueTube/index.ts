@@ -1,16 +1,12 @@
 import { defineKind } from "../types";
 import type { Props } from "./schema";
+import { TWO_ARM_PORTS, twoArmCrank } from "../two-arm";
 
 export const torqueTube = defineKind<Props>()({
   kind: "torqueTube",
   name: "Torque tube",
   hint: "turns one arm into another",
-  ports: { in: { side: "left", name: "in" }, out: { side: "right", name: "out" }, pivot: { side: "bottom", name: "pivot" } },
+  ports: TWO_ARM_PORTS,
   defaults: () => ({ inputArm: 3, outputArm: 3 }),
-  engine: {
-    role: "crank",
-    arms: (p) => [p.inputArm, p.outputArm],
-    // No arm angle in the format: the arms are taken as opposite, the largest resultant (loads.ts).
-    pivotLoad: (fIn, fOut) => fIn + fOut,
-  },
+  engine: twoArmCrank,
 });
