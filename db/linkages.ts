@@ -39,7 +39,7 @@ export async function listLinkages(buildId: string) {
     })
     .leftJoin("users as u", "u.id", "r.author_id")
     .where("l.build_id", buildId)
-    .select("l.*", "u.name as author_name", db.raw("r.analysis -> 'summary' as summary"))
+    .select("l.*", "u.name as author_name", "r.summary")
     .orderByRaw("array_position(array['pitch','roll','yaw','flap','trim','other']::text[], l.system::text), l.name");
   return rows.map(toLinkage);
 }
@@ -155,7 +155,7 @@ const SAVE_SQL = `with moved as (
     returning id, current_revision
   ), saved as (
     insert into linkage_revisions (linkage_id, revision, graph, analysis, author_id)
-    select id, current_revision, cast(:graph as jsonb), cast(:analysis as jsonb), :userId from moved
+    select id, current_revision, cast(:graph as json), cast(:analysis as json), :userId from moved
     returning revision, created_at
   ), touched as (
     update builds set updated_at = now() where id = :buildId and exists (select 1 from moved)
@@ -193,7 +193,7 @@ export async function pageRevisions(linkageId: string, page: PageArgs) {
   type Row = { revision: number; author_id: string | null; author_name: string | null; created_at: Date; summary: Report["summary"] | null };
   const [p, total] = await Promise.all([
     keysetPage<Row>(db("linkage_revisions as r").leftJoin("users as u", "u.id", "r.author_id").where("r.linkage_id", linkageId)
-      .select("r.revision", "r.author_id", "u.name as author_name", "r.created_at", db.raw("r.analysis -> 'summary' as summary")), REVISION_KEYS, page),
+      .select("r.revision", "r.author_id", "u.name as author_name", "r.created_at", "r.summary"), REVISION_KEYS, page),
     countOf(db("linkage_revisions as r").where("r.linkage_id", linkageId)),
   ]);
   const items = p.items.map((r): RevisionRow => ({

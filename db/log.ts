@@ -69,7 +69,7 @@ const withJoins = (q: ReturnType<typeof filtered>) => q
   .leftJoin("linkage_revisions as lr", function () {
     this.on("lr.linkage_id", "e.linkage_id").andOn("lr.revision", "e.revision");
   })
-  .select("e.*", "u.name as author_name", "l.name as linkage_name", db.raw("lr.analysis -> 'summary' as revision_summary"));
+  .select("e.*", "u.name as author_name", "l.name as linkage_name", "lr.summary as revision_summary");
 
 /** The log's order, newest first: by date, then by when it was written (the id breaks ties). */
 export const LOG_KEYS: Key[] = [{ expr: "e.date", type: "date" }, { expr: "e.created_at", type: "timestamptz" }, { expr: "e.id", type: "uuid" }];
@@ -159,7 +159,7 @@ export async function getEntry(buildId: string, id: string) {
       this.on("lr.linkage_id", "e.linkage_id").andOn("lr.revision", "e.revision");
     })
     .where({ "e.build_id": buildId, "e.id": id })
-    .first("e.*", "u.name as author_name", "l.name as linkage_name", db.raw("lr.analysis -> 'summary' as revision_summary"));
+    .first("e.*", "u.name as author_name", "l.name as linkage_name", "lr.summary as revision_summary");
   return row ? (await attachFiles(buildId, [row]))[0] : null;
 }
 

@@ -17,7 +17,7 @@
  * go to tests/artifacts/bench-load.json (the server's own output to tests/artifacts/bench-load-server.log). A miss sets exit code 1. The load generator runs on the same 2
  * cores as the server, so absolute figures are this machine's; the ratios are what to compare, and beside them
  * the server process's CPU time per request (from /proc), which work of other processes moves least.
- * `LW_SKIP_BUILD=1` reuses the build in LW_BENCH_DIST (default .next-bench). `LW_BENCH_PROFILE=dir` starts the
+ * `LW_BENCH_ONLY=text` measures only the routes whose names contain it. `LW_SKIP_BUILD=1` reuses the build in LW_BENCH_DIST (default .next-bench). `LW_BENCH_PROFILE=dir` starts the
  * server with `--cpu-prof --cpu-prof-dir=dir` (one .cpuprofile per process, written when it stops).
  */
 import { spawn, spawnSync } from "node:child_process";
@@ -174,7 +174,10 @@ export async function run() {
 
     // The bare route runs before and after each other route: each ratio is to the mean of the two bare runs
     // around it, so other work on the machine that comes and goes during the bench moves both alike.
-    const [bareRoute, ...measured] = routes;
+    const [bareRoute, ...others] = routes;
+    // LW_BENCH_ONLY="GET graph": only the routes whose names contain it (with the bare route around each), e.g. to profile one.
+    const only = process.env.LW_BENCH_ONLY;
+    const measured = only ? others.filter((r) => r.name.includes(only)) : others;
     const run1 = async (route: Route, warm: boolean) => {
       if (warm) await load(route, WARM_S, cookie, server.pid!); // the server's first compile and the JIT of this route are not measured
       if (route.method === "PUT") await refreshTargets();
