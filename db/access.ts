@@ -3,6 +3,7 @@ import { db } from "./index";
 import { toBuild, type Build, type BuildRow } from "./builds";
 import { storedRevision, toLinkage, type Linkage, type LinkageRow, type Revision, type StoredRevisionRow } from "./linkages";
 import type { UserRow } from "./users";
+import { revisionContent } from "./revision-content";
 import type { Role } from "@/shared/roles";
 
 /** The columns of the user a request acts as (never the password hash). */
@@ -38,9 +39,9 @@ const SQL: Record<Depth, string> = Object.fromEntries(DEPTHS.map((depth, i) => {
     joins.push("left join linkages l on l.id = ?::uuid and l.build_id = b.id");
   }
   if (i >= 3) {
-    // The requested revision, or the linkage's current one when none is asked for: the graph and report as the
-    // JSON text Postgres stores (db/linkages.ts storedRevision sends them on unparsed).
-    cols.push("r.revision as r_revision", "r.graph::text as r_graph", "r.analysis::text as r_analysis", "r.author_id as r_author_id", "ra.name as r_author_name", "r.created_at as r_created_at");
+    // The requested revision, or the linkage's current one when none is asked for: its content id, not its text
+    // (graph and report come from db/revision-content.ts, cached under that id, and are sent on unparsed).
+    cols.push("r.id as r_id", "r.content_id as r_content_id", "r.revision as r_revision", "r.author_id as r_author_id", "ra.name as r_author_name", "r.created_at as r_created_at");
     joins.push("left join linkage_revisions r on r.linkage_id = l.id and r.revision = coalesce(?::int, l.current_revision)", "left join users ra on ra.id = r.author_id");
   }
   return [depth, `select ${cols.join(", ")} from users u ${joins.join(" ")} where u.id = ? limit 1`];
@@ -63,12 +64,13 @@ export async function getAccess(userId: string, buildId?: string, linkageId?: st
   const row = rows[0] as Record<string, unknown> | undefined;
   if (!row) return null;
   const pick = (prefix: string, cols: readonly string[]) => Object.fromEntries(cols.map((c) => [c, row[`${prefix}${c}`]]));
+  const content = row.l_id && row.r_revision != null ? await revisionContent(row.r_id as string, row.r_content_id as string) : null;
   return {
     user: { id: row.id, email: row.email, name: row.name, session_version: row.session_version, is_site_admin: row.is_site_admin, unit_system: row.unit_system } as AccessUser,
     member: row.b_id ? { role: row.role as Role, build: toBuild(pick("b_", BUILD_COLS) as BuildRow) } : null,
     linkage: row.l_id ? toLinkage(pick("l_", LINKAGE_COLS) as LinkageRow) : null,
-    revision: row.l_id && row.r_revision != null
-      ? storedRevision({ revision: row.r_revision, graph: row.r_graph, analysis: row.r_analysis, author_id: row.r_author_id, author_name: row.r_author_name, created_at: row.r_created_at } as StoredRevisionRow)
+    revision: content
+      ? storedRevision({ revision: row.r_revision, ...content, author_id: row.r_author_id, author_name: row.r_author_name, created_at: row.r_created_at } as StoredRevisionRow)
       : null,
   };
 }

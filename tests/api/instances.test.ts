@@ -9,6 +9,7 @@ import { mkdirSync, openSync } from "node:fs";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { emptyGraph } from "@/shared/linkage/schema";
+import { demoPitchLinkage } from "@/shared/demo";
 import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
 import { APP_URL, DIST_DIR, TEST_DB_URL, TEST_PORT, TEST_S3_ENDPOINT, TEST_SECRET, TEST_SMTP_URL } from "../support/env";
 import { client, signIn, type Client } from "../support/http";
@@ -112,6 +113,24 @@ describe("two app instances on one database", () => {
     expect(stale.status).toBe(409);
     expect(stale.body.error).toMatchObject({ code: "stale_revision", current: { revision: base + 1 } });
     for (const c of [a, b]) expect((await c.request("GET", url)).body.graph.name).toBe("saved on B");
+  });
+
+  it("a report computed again through one instance is what both send, though both had read the earlier one", async () => {
+    // Each instance keeps revisions' text under a content id that changes with the row (db/revision-content.ts).
+    const u = await makeUser("two-settings");
+    const { buildId, linkageId } = await makeBuild({ owner: u });
+    const url = `/api/builds/${buildId}/linkages/${linkageId}/graph`;
+    const [a, b] = [await signIn(u.email, TEST_PASSWORD, A), await signIn(u.email, TEST_PASSWORD, B)];
+    const saved = await a.request("PUT", url, { baseRevision: (await a.request("GET", url)).body.revision, graph: demoPitchLinkage() });
+    expect(saved.status).toBe(200);
+    for (const c of [a, b]) expect((await c.request("GET", url)).body.analysis.settings.pilotForce.pitchStick).toBe(167); // 14 CFR 23.397(b) default
+    const patched = await a.request("PATCH", `/api/builds/${buildId}`, { analysisSettings: { pilotForce: { pitchStick: 300, rollStick: 67, yawPedal: 200, other: 100 } } });
+    expect(patched.status).toBe(200);
+    for (const c of [a, b]) {
+      const got = (await c.request("GET", url)).body;
+      expect(got.revision).toBe(saved.body.revision); // the same revision, its report computed again
+      expect(got.analysis.settings.pilotForce.pitchStick).toBe(300);
+    }
   });
 
   it("comments notify the same followers and sign-offs count the same, whichever instance answers", async () => {
