@@ -39,13 +39,13 @@ async function send<T>(url: string, init: RequestInit, offline: string): Promise
 }
 
 /** A JSON request: POST when there is a body, GET otherwise, unless `method` says. */
-export function api<T = unknown>(url: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
+export function api<T = unknown>(url: string, init: { method?: string; body?: unknown; headers?: Record<string, string> } = {}): Promise<T> {
   const hasBody = init.body !== undefined;
   return send<T>(
     url,
     {
       method: init.method ?? (hasBody ? "POST" : "GET"),
-      headers: hasBody ? { "content-type": "application/json" } : undefined,
+      headers: hasBody || init.headers ? { ...(hasBody ? { "content-type": "application/json" } : {}), ...init.headers } : undefined,
       body: hasBody ? JSON.stringify(init.body) : undefined,
     },
     "Cannot reach the server. Check the connection; nothing was lost on this page.",

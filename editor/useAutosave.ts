@@ -11,6 +11,7 @@ import type { LinkageGraph } from "@/shared/linkage/schema";
 import { api, ApiFailure } from "@/components/api-client";
 import { linkageKeys } from "@/components/query-keys";
 import type { GraphSaved, Revision } from "@/shared/schemas/graph";
+import { PREFER_MINIMAL } from "@/shared/prefer";
 import { toGraph, type EditorStore, type Snapshot } from "./store";
 import type { SaveStatus } from "./presentation";
 
@@ -40,7 +41,8 @@ export function useAutosave(opts: { store: EditorStore; buildId: string; linkage
 
   const qc = useQueryClient();
   const mutation = useMutation({
-    mutationFn: (body: { baseRevision: number; graph: LinkageGraph }) => api<GraphSaved>(url, { method: "PUT", body }),
+    // The editor has the report already (it runs the same engine): the save answers the summary alone.
+    mutationFn: (body: { baseRevision: number; graph: LinkageGraph }) => api<GraphSaved>(url, { method: "PUT", body, headers: { prefer: PREFER_MINIMAL } }),
     // A new revision changes the findings, stales sign-offs and adds a history row: the review panels refetch.
     onSuccess: () => qc.invalidateQueries({ queryKey: linkageKeys.review(opts.linkageId) }),
   });

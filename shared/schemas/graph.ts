@@ -16,6 +16,15 @@ export const revision = z.object({
   createdAt: isoTime,
 });
 export type Revision = z.infer<typeof revision>;
-/** The answer to a save: the new revision number and the report of what was saved. */
-export const graphSaved = z.object({ revision: z.number().int(), createdAt: isoTime, analysis: z.custom<Report>() });
+/**
+ * The answer to a save: the new revision number and the report of what was saved. A client that asks with
+ * `Prefer: return=minimal` (RFC 7240; the editor, which runs the same engine itself) gets the report's
+ * summary instead of the whole report (25 KB for the demo pitch run, on every autosave).
+ */
+export const graphSaved = z.object({
+  revision: z.number().int(),
+  createdAt: isoTime,
+  analysis: z.custom<Report>().optional(),
+  summary: z.custom<Report["summary"]>().optional(),
+});
 export type GraphSaved = z.infer<typeof graphSaved>;

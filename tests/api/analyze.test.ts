@@ -53,6 +53,33 @@ describe("analysis over the API", () => {
     expect(got.body.analysis.summary.hazard).toBeGreaterThan(0);
   });
 
+  it("a save asked with Prefer: return=minimal (RFC 7240) answers the summary alone and stores the whole report", async () => {
+    const graph = demoPitchLinkage();
+    const url = `/api/builds/${ids.buildId}/linkages/${ids.linkageId}/graph`;
+    const base = (await owner.request("GET", url)).body.revision;
+    const res = await fetch(`${APP_URL}${url}`, {
+      method: "PUT",
+      headers: { cookie: owner.cookie, "content-type": "application/json", prefer: "respond-async, Return = minimal" },
+      body: JSON.stringify({ baseRevision: base, graph }),
+    });
+    expect(res.status).toBe(200);
+    expect(res.headers.get("preference-applied")).toBe("return=minimal");
+    const body = await res.json();
+    expect(Object.keys(body).sort()).toEqual(["createdAt", "revision", "summary"]);
+    const stored = await testDb("linkage_revisions").where({ linkage_id: ids.linkageId, revision: body.revision }).first();
+    expect(body.summary).toEqual(stored.analysis.summary);
+    expect(body.summary.hazard).toBeGreaterThan(0);
+    expect(codes(stored.analysis)).toEqual(codes(analyze(graph)));
+    // Any other preference is the full answer.
+    const full = await fetch(`${APP_URL}${url}`, {
+      method: "PUT",
+      headers: { cookie: owner.cookie, "content-type": "application/json", prefer: "return=representation" },
+      body: JSON.stringify({ baseRevision: body.revision, graph }),
+    });
+    expect(full.headers.get("preference-applied")).toBeNull();
+    expect(codes((await full.json()).analysis)).toEqual(codes(analyze(graph)));
+  });
+
   it("uses the build's own factors when it saves", async () => {
     await testDb("builds").where({ id: ids.buildId }).update({ analysis_settings: JSON.stringify({ ultimateFactor: 3 }) });
     const url = `/api/builds/${ids.buildId}/linkages/${ids.linkageId}/graph`;

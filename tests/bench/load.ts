@@ -29,6 +29,7 @@ import { DEMO_BUILD, DEMO_USERS } from "../../db/demo-accounts";
 import { demoPitchLinkage } from "../../shared/demo";
 import { localDbUrl } from "../../db/local-cluster.cjs";
 import { signInAt } from "./common";
+import { PREFER_MINIMAL } from "../../shared/prefer";
 
 const ROOT = path.resolve(__dirname, "../..");
 const DB = "linkwright_bench_load";
@@ -147,28 +148,32 @@ export async function run() {
     };
     await refreshTargets();
     type SaveCtx = { target?: { id: string; revision: number } };
+    const putRoute = (name: string, headers: Record<string, string>): Route => ({
+      name,
+      method: "PUT",
+      requests: [{
+        method: "PUT",
+        setupRequest: (req, context) => {
+          const target = free.pop();
+          if (!target) throw new Error("no save target free: more requests in flight than targets");
+          (context as SaveCtx).target = target;
+          return { ...req, method: "PUT", headers: { ...req.headers, ...headers }, path: `${L(target.id)}/graph`, body: `{"baseRevision":${target.revision},"graph":${graphJson}}` };
+        },
+        onResponse: (status, body, context) => {
+          const target = (context as SaveCtx).target;
+          if (!target) return;
+          if (status === 200) target.revision = JSON.parse(body).revision;
+          free.push(target);
+        },
+      }],
+    });
     const routes: Route[] = [
       { name: "GET /api/health (bare)", method: "GET", requests: [{ method: "GET", path: "/api/health" }] },
       { name: "GET graph", method: "GET", requests: [{ method: "GET", path: `${L(pitch.id)}/graph` }] },
-      {
-        name: "PUT graph (with analysis)",
-        method: "PUT",
-        requests: [{
-          method: "PUT",
-          setupRequest: (req, context) => {
-            const target = free.pop();
-            if (!target) throw new Error("no save target free: more requests in flight than targets");
-            (context as SaveCtx).target = target;
-            return { ...req, method: "PUT", path: `${L(target.id)}/graph`, body: `{"baseRevision":${target.revision},"graph":${graphJson}}` };
-          },
-          onResponse: (status, body, context) => {
-            const target = (context as SaveCtx).target;
-            if (!target) return;
-            if (status === 200) target.revision = JSON.parse(body).revision;
-            free.push(target);
-          },
-        }],
-      },
+      // As the editor saves (Prefer: return=minimal: the report computed and stored, its summary answered), and as
+      // an API client that wants the whole report back.
+      putRoute("PUT graph (with analysis)", { prefer: PREFER_MINIMAL }),
+      putRoute("PUT graph (with analysis, whole report answered)", {}),
       { name: "GET comments", method: "GET", requests: [{ method: "GET", path: `${L(pitch.id)}/comments` }] },
     ];
 

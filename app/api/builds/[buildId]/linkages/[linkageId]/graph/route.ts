@@ -1,6 +1,7 @@
 import { withLinkage, parseBody, jsonText } from "@/lib/http";
 import { notFound, staleRevision } from "@/lib/errors";
 import { graphPut } from "@/shared/schemas/graph";
+import { PREFER_MINIMAL, prefersMinimal } from "@/shared/prefer";
 import { getRevision, revisionJson, saveRevision } from "@/db/linkages";
 import { analyze } from "@/shared/analysis";
 import { afterRevisionSaved } from "@/lib/review";
@@ -13,7 +14,8 @@ export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => 
   const { id } = linkage;
   const { baseRevision, graph } = await parseBody(req, graphPut);
   // The report is serialised once: stored with the revision and sent back as the same text.
-  const analysisJson = JSON.stringify(analyze(graph, build.analysisSettings));
+  const report = analyze(graph, build.analysisSettings);
+  const analysisJson = JSON.stringify(report);
   const saved = await saveRevision(build.id, id, baseRevision, graph, analysisJson, user.id);
   if (saved === "missing") throw notFound("linkage"); // deleted while this request ran
   if (saved === "stale") {
@@ -21,5 +23,12 @@ export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => 
     throw staleRevision(`Someone saved revision ${current?.revision} while you were editing revision ${baseRevision}.`, current);
   }
   await afterRevisionSaved(build, user, linkage, saved.revision, saved.staleSignoffs); // earlier sign-offs are now stale
-  return jsonText(`{"revision":${saved.revision},"createdAt":${JSON.stringify(saved.createdAt)},"analysis":${analysisJson}}`);
+  const head = `{"revision":${saved.revision},"createdAt":${JSON.stringify(saved.createdAt)}`;
+  if (prefersMinimal(req.headers.get("prefer"))) {
+    const res = jsonText(`${head},"summary":${JSON.stringify(report.summary)}}`);
+    res.headers.set("Preference-Applied", PREFER_MINIMAL);
+    return res;
+  }
+  return jsonText(`${head},"analysis":${analysisJson}}`);
 });
+
