@@ -59,6 +59,8 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
   const byId = new Map(results.map((r) => [r.nodeId, r]));
   for (let n = 0; n < ctx.nodes.length; n++) {
     const node = ctx.nodes[n];
+    // Only cable-system parts and wheels have findings here; the others cost no subject or name.
+    if (ctx.nodeRole[n] !== "tension" && node.kind !== "controlWheel" && node.kind !== "cable") continue;
     const subj = nodeSubject(node.id);
     const name = nodeLabel(node);
     if (ctx.nodeRole[n] === "tension") {

@@ -79,13 +79,13 @@ export function otherPort(ctx: Ctx, j: number, n: number): string {
   return ctx.jFrom[j] === n ? jt.to.port : jt.from.port;
 }
 
-/** The link end (node index and port) on joint j, if one end is a link (a pushrod). */
-export function pushrodEndOf(ctx: Ctx, j: number): [number, string] | null {
+/** The node index of the link (a pushrod) on joint j, the from end first; -1 when neither end is one. No allocation. */
+export function pushrodNodeOf(ctx: Ctx, j: number): number {
   const f = ctx.jFrom[j];
   const t = ctx.jTo[j];
-  if (f >= 0 && ctx.nodeRole[f] === "link") return [f, ctx.joints[j].from.port];
-  if (t >= 0 && ctx.nodeRole[t] === "link") return [t, ctx.joints[j].to.port];
-  return null;
+  if (f >= 0 && ctx.nodeRole[f] === "link") return f;
+  if (t >= 0 && ctx.nodeRole[t] === "link") return t;
+  return -1;
 }
 
 function jointRole(a: Role | undefined, pa: string, b: Role | undefined, pb: string): JointRole {

@@ -9,6 +9,7 @@ import { buildContext } from "./context";
 import { propagate } from "./loads";
 import { marginOfSafety, pushrodResult, strengthFindings } from "./allowables";
 import { jointResult } from "./joints/result";
+import type { FactorOptions } from "./joints/factors";
 import { jointFindings } from "./joints/findings";
 import { pathLoads } from "./joints/path";
 import { hingeMomentCase, maxLoads, settingsCautions } from "./design-case";
@@ -106,7 +107,7 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   if (designCase.scale !== 1) for (const p of pushrods) rescale(p, designCase.scale);
   const path = pathLoads(ctx, loads, findings);
   const joints: JointResult[] = new Array(ctx.joints.length);
-  for (let j = 0; j < ctx.joints.length; j++) joints[j] = jointResult(ctx, j, loads, s, path.loadTodo[j], { cable: cc.cableJoint[j] === 1 });
+  for (let j = 0; j < ctx.joints.length; j++) joints[j] = jointResult(ctx, j, loads, s, path.loadTodo[j], cc.cableJoint[j] === 1 ? CABLE_JOINT : OTHER_JOINT);
   const cables = cableResults(ctx, cc, loads, s);
   const cautions = settingsCautions(s, findings);
 
@@ -134,6 +135,9 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
     settingsCautions: cautions,
   };
 }
+
+// The two factor options a joint can have, made once rather than once per joint.
+const CABLE_JOINT: FactorOptions = { cable: true }, OTHER_JOINT: FactorOptions = {};
 
 /** Scale a pushrod's loads (the hinge-moment case) and recompute its margins. */
 function rescale(p: PushrodResult, k: number) {

@@ -9,7 +9,7 @@ import type { Joint } from "../linkage/schema";
 import type { Finding, JointRole } from "./types";
 import { turnsOnBolt } from "./joints/factors";
 import { MIN_PREVAILING_TORQUE, PREVAILING_SRC } from "../hardware/plates";
-import { type Ctx, jointLabel, jointsAt, nodeLabel, pushrodEndOf } from "./context";
+import { type Ctx, jointLabel, jointsAt, nodeLabel, pushrodNodeOf } from "./context";
 import { boltDiameter } from "./allowables";
 import { finding, fmt, jointSubject, nodeSubject, num } from "./format";
 
@@ -57,16 +57,14 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       const th = THREADS[re.thread];
       if (th) {
         let family: "steel" | "aluminium" | null = null;
-        let why = "";
-        if (re.shank === "female") { family = "steel"; why = "the rod end's own (steel) internal thread"; }
+        // The pushrod the rod end screws into; the words for its thread are made only for a finding (internalThread).
+        let pn: Ctx["nodes"][number] | null = null;
+        if (re.shank === "female") family = "steel";
         else {
-          const pe = pushrodEndOf(ctx, j);
-          const pn = pe ? nodes[pe[0]] : null;
-          if (pn && pn.kind === "pushrod") {
-            family = TUBES[pn.props.material]?.family ?? null;
-            why = `the ${pn.props.material} pushrod's internal thread`;
-          }
-          if (!family) { family = "aluminium"; why = "an internal thread of unknown material (taken as aluminium, the longer rule)"; }
+          const p = pushrodNodeOf(ctx, j);
+          pn = p >= 0 ? nodes[p] : null;
+          if (pn && pn.kind === "pushrod") family = TUBES[pn.props.material]?.family ?? null;
+          if (!family) family = "aluminium";
         }
         const k = engagementMultiple(family);
         const required = k * th.majorDiameter;
@@ -76,13 +74,13 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         if (!verified) {
           if (len !== undefined && len < required) {
             out.push(finding("thread-engagement-short", "hazard", jointSubject(jt.id),
-              `The rod end at joint ${jointLabel(ctx, j)} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${why}). Screw it in further and re-adjust the other end.`,
+              `The rod end at joint ${jointLabel(ctx, j)} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${internalThread(re.shank, pn)}). Screw it in further and re-adjust the other end.`,
               SRC.engagement, [num("engaged length", len, "in"), num("required", required, "in")]));
           } else if (len === undefined) {
             out.push(finding("thread-engagement-unverified", "caution", jointSubject(jt.id),
               re.hasWitnessHole !== false
                 ? `The thread engagement at joint ${jointLabel(ctx, j)} is not verified: check that a wire will not pass through the witness hole, or record the engaged length (at least ${fmt(required, 3)} in, ${k}×D).`
-                : `The rod end at joint ${jointLabel(ctx, j)} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${why}).`,
+                : `The rod end at joint ${jointLabel(ctx, j)} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${internalThread(re.shank, pn)}).`,
               SRC.engagement, [num("required", required, "in")]));
           }
         }
@@ -266,6 +264,13 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         SRC.handedEnds));
     }
   }
+}
+
+/** The internal thread a rod end screws into, in words: its own (female), the pushrod's, or unknown (taken as aluminium). */
+function internalThread(shank: string, pn: Ctx["nodes"][number] | null): string {
+  if (shank === "female") return "the rod end's own (steel) internal thread";
+  if (pn && pn.kind === "pushrod" && TUBES[pn.props.material]?.family) return `the ${pn.props.material} pushrod's internal thread`;
+  return "an internal thread of unknown material (taken as aluminium, the longer rule)";
 }
 
 function handAt(ctx: Ctx, n: number, port: string): "RH" | "LH" | null {

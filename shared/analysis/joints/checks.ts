@@ -9,14 +9,15 @@
 import { ALUMINIUM_BOLT_FSU, STEEL_BOLT_FSU, STEEL_BOLT_FTU, boltShearStrength } from "../../hardware/bolts";
 import {
   ALUMINIUM_BOLT_FTU, BEARING_SRC, BENDING_SRC, BUSHING_TABLE, MIN_EDGE_RATIO, PLATE_TABLE, ROD_END_BODY_FTU,
-  ROD_END_BODY_SRC, ROUND_SHAPE_FACTOR, TEAR_OUT_SRC, bearingUltimate, tearOutStrength,
+  ROD_END_BODY_SRC, ROUND_SHAPE_FACTOR, TEAR_OUT_SRC, bearingUltimate, tearOutStrength, type PlateRow,
 } from "../../hardware/plates";
 import { SRC } from "../../hardware/sources";
-import { THREADS_BY_NAME } from "../../hardware/threads";
-import { TUBE_MATERIALS_BY_NAME } from "../../hardware/materials";
+import { THREADS_BY_NAME, type ThreadName } from "../../hardware/threads";
+import { TUBE_MATERIALS_BY_NAME, type TubeMaterial } from "../../hardware/materials";
 import type { JointHardware, Member } from "../../linkage/schema";
 import type { AnalysisSettings, CheckId, JointCheck, JointRole, SourceTag, SpecialFactor } from "../types";
 import { type Ctx, nodeLabel } from "../context";
+import { partName } from "../../linkage/names";
 import { marginOfSafety } from "../allowables";
 
 // Module-level aliases: read imports once, not through re-export getters on every joint.
@@ -49,20 +50,23 @@ export function fastenerDiameter(hw: JointHardware, boltDia: (b: NonNullable<Joi
   return hw.bolt ? boltDia(hw.bolt) : null;
 }
 
+// The four possible answers of holeSides, shared: a fresh array per joint was garbage on every call.
+const BOTH_SIDES: readonly Side[] = ["from", "to"], FROM_SIDE: readonly Side[] = ["from"], TO_SIDE: readonly Side[] = ["to"], NO_SIDE: readonly Side[] = [];
+
 /** Which sides of the joint are members with a bolt hole (not the rod end's eye, not a ball bearing's housing). */
-function holeSides(c: CheckInput, hw: JointHardware): Side[] {
-  const { ctx, j, role } = c;
-  if (role === "stop" || !(hw.bolt || hw.clevisPin)) return [];
-  const out: Side[] = [];
-  for (const side of ["from", "to"] as const) {
-    const n = side === "from" ? ctx.jFrom[j] : ctx.jTo[j];
-    if (n < 0) continue;
-    const port = ctx.joints[j][side].port;
-    if (hw.rodEnd && ctx.nodeRole[n] === "link") continue; // the rod end's eye: its rating covers it
-    if (hw.bearing === "ballBearing" && (port === "pivot" || port === "hinge")) continue; // the bearing's housing: its rating
-    out.push(side);
-  }
-  return out;
+function holeSides(c: CheckInput, hw: JointHardware): readonly Side[] {
+  if (c.role === "stop" || !(hw.bolt || hw.clevisPin)) return NO_SIDE;
+  const from = hasHole(c, hw, "from"), to = hasHole(c, hw, "to");
+  return from ? (to ? BOTH_SIDES : FROM_SIDE) : to ? TO_SIDE : NO_SIDE;
+}
+
+function hasHole({ ctx, j }: CheckInput, hw: JointHardware, side: Side): boolean {
+  const n = side === "from" ? ctx.jFrom[j] : ctx.jTo[j];
+  if (n < 0) return false;
+  const port = ctx.joints[j][side].port;
+  if (hw.rodEnd && ctx.nodeRole[n] === "link") return false; // the rod end's eye: its rating covers it
+  if (hw.bearing === "ballBearing" && (port === "pivot" || port === "hinge")) return false; // the bearing's housing: its rating
+  return true;
 }
 
 function missing(m: Member | undefined, needs: ("material" | "thickness" | "edgeDistance")[]): string[] {
@@ -75,26 +79,99 @@ const HOLE_NEEDS: ("material" | "thickness" | "edgeDistance")[] = ["material", "
 const TEAR_BASIS = Object.fromEntries(Object.values(PLATE_TABLE).map((p) => [p.name, `2 · t · (e − D/2) · Fsu ${p.fsu / 1000} ksi (${p.name})`])) as Record<string, string>;
 const LABEL = { rodEndRating: "rod-end rating", bearingRating: "ball or roller bearing rating" } as const;
 
-type Acc = { checks: JointCheck[]; base: number | null; loadTodo: string | null };
+/**
+ * Texts that repeat from joint to joint, made once per analysis: the hole labels of a part's name, a
+ * material's bearing basis at one e/D, a thread check's label and basis. Every check keeps its label and
+ * basis in the report; built afresh they were several new strings a joint, all kept, and a 10,000-part
+ * report no longer fit V8's young generation (README, "Measured"). Each text depends only on its keys, so
+ * a shared one is the same text. Kept per analysis (keyed by its Ctx, dropped with it): a server that
+ * checks many linkages keeps none of them.
+ */
+type Texts = {
+  /** By part name (parts without a label share their kind's name): [bearing label, tear-out label]. */
+  holeLabels: Map<string, readonly [string, string]>;
+  bearingBasis: Map<PlateRow, Map<number, string>>;
+  threadLabel: Map<string, string>;
+  /** thread → what the thread is cut in (a rod end's body material, or the pushrod's tube material) → basis. */
+  threadBasis: Map<ThreadName, Map<string | TubeMaterial | null, string>>;
+};
+const textsByCtx = new WeakMap<Ctx, Texts>();
+
+function textsOf(ctx: Ctx): Texts {
+  let t = textsByCtx.get(ctx);
+  if (!t) {
+    t = { holeLabels: new Map(), bearingBasis: new Map(), threadLabel: new Map(), threadBasis: new Map() };
+    textsByCtx.set(ctx, t);
+  }
+  return t;
+}
+
+/** Bearing and tear-out labels of the hole in part n (or in the `side` member when the part is missing). */
+function holeLabels(ctx: Ctx, t: Texts, n: number, side: Side): readonly [string, string] {
+  if (n < 0) return [`bearing at the hole in ${side}`, `tear-out at the hole in ${side}`];
+  const node = ctx.nodes[n];
+  const key = partName(node); // nodeLabel quotes the part's name: the same name, the same labels
+  let labels = t.holeLabels.get(key);
+  if (!labels) {
+    const name = labelOf(node);
+    t.holeLabels.set(key, (labels = [`bearing at the hole in ${name}`, `tear-out at the hole in ${name}`]));
+  }
+  return labels;
+}
+
+function bearingBasis(t: Texts, plate: PlateRow, ed: number): string {
+  let byRatio = t.bearingBasis.get(plate);
+  if (!byRatio) t.bearingBasis.set(plate, (byRatio = new Map()));
+  let text = byRatio.get(ed);
+  if (text === undefined) byRatio.set(ed, (text = `${plate.name} Fbru ${Math.round(FBRU(plate, ed) / 1000)} ksi at e/D ${Math.round(ed * 100) / 100} × D × t`));
+  return text;
+}
+
+function threadLabel(t: Texts, thread: string): string {
+  let text = t.threadLabel.get(thread);
+  if (text === undefined) t.threadLabel.set(thread, (text = `${thread} thread in tension`));
+  return text;
+}
+
+/** `body`: the rod end's body material (male shank), the pushrod's tube material (female), or null when unknown. */
+function threadBasis(t: Texts, thread: ThreadName, body: string | TubeMaterial | null): string {
+  let byBody = t.threadBasis.get(thread);
+  if (!byBody) t.threadBasis.set(thread, (byBody = new Map()));
+  let text = byBody.get(body);
+  if (text === undefined) {
+    const th = THREADS[thread];
+    const ftu = body === null ? null : typeof body === "string" ? BODY_FTU[body as keyof typeof BODY_FTU] : body.ftu;
+    const what = body === null ? "" : typeof body === "string" ? `rod-end body (${body})` : `pushrod end (${body.name})`;
+    text = `A_t ${th ? th.tensileStressArea : "?"} in² × Ftu ${ftu === null ? "?" : Math.round(ftu / 1000)} ksi of the ${what || "threaded part"}`;
+    byBody.set(body, text);
+  }
+  return text;
+}
+
+const scratch: JointCheck[] = [];
+
+type Acc = { checks: JointCheck[]; count: number; base: number | null; loadTodo: string | null };
 
 function addCheck(a: Acc, id: CheckId, label: string, factor: number, allowable: number | null, todo: string | null, basis: string, source: SourceTag, unit: "lbf" | "in·lbf" = "lbf", arm: number | null = 1) {
   const required = a.base === null || arm === null ? null : a.base * factor * arm;
   const computed = required !== null && allowable !== null && !todo && !a.loadTodo;
   const t = computed ? null : a.loadTodo && todo ? `${a.loadTodo}; ${todo}` : a.loadTodo || todo;
-  a.checks.push({
+  a.checks[a.count++] = {
     id, label, status: computed ? "computed" : "notChecked", required, allowable, unit,
     margin: computed ? margin(allowable!, required!) : null, factor, todo: t, basis, source,
-  });
+  };
 }
 
 export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardware["bolt"]>) => number | null): JointCheck[] {
   const { ctx, j, settings, special } = c;
   const hw = ctx.joints[j].hardware;
   if (!hw) return [];
-  const checks: JointCheck[] = [];
+  // Gathered in one list reused for every joint (acc.count of it filled), then copied out at its exact
+  // length: a list grown by push keeps room for 17 checks (a joint has at most ten) in every joint of the report.
+  const checks = scratch;
   const ff = settings.fittingFactor; // 14 CFR 23.625
   const base = c.limit === null ? null : c.limit * settings.ultimateFactor; // 14 CFR 23.303
-  const acc: Acc = { checks, base, loadTodo: c.loadTodo };
+  const acc: Acc = { checks, count: 0, base, loadTodo: c.loadTodo };
   // Rod-end rating (rated ultimate radial static load).
   const re = hw.rodEnd;
   if (re) {
@@ -120,12 +197,11 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
 
   const sides = holeSides(c, hw);
   const mFrom = hw.holes?.from, mTo = hw.holes?.to;
-  const members: (Member | undefined)[] = [];
-  for (const sd of sides) members.push(sd === "from" ? mFrom : mTo);
 
   // Bolt bending: single shear, or double shear with spacers (gaps) in the stack.
   const gaps = hw.spacers;
   if ((hw.bolt || pin) && (hw.shear === "single" || (gaps !== undefined && gaps > 0))) {
+    const members = sides.map((sd) => (sd === "from" ? mFrom : mTo));
     const ftu = pin ? (pin.shearStrength !== undefined ? pin.shearStrength / 0.6 : null) // Fsu ≈ 0.6 Ftu, from memory
       : hw.bolt!.material === "aluminium" ? FTU_ALU : FTU_STEEL;
     const need: string[] = [];
@@ -161,12 +237,12 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
   }
 
   // Bearing and tear-out at the hole in each member.
+  const texts = textsOf(ctx);
   for (let i = 0; i < sides.length; i++) {
-    const s = sides[i], m = members[i];
+    const s = sides[i], m = s === "from" ? mFrom : mTo;
     const n = s === "from" ? ctx.jFrom[j] : ctx.jTo[j];
-    const name = n >= 0 ? labelOf(ctx.nodes[n]) : s;
     const need = m && m.material !== undefined && m.thickness !== undefined && m.edgeDistance !== undefined ? NONE : missing(m, HOLE_NEEDS);
-    const todo = need.length ? `enter the ${need.join(", ")} of ${name}'s member at the hole` : d === null ? "enter the bolt's shank diameter" : null;
+    const todo = need.length ? `enter the ${need.join(", ")} of ${n >= 0 ? labelOf(ctx.nodes[n]) : s}'s member at the hole` : d === null ? "enter the bolt's shank diameter" : null;
     let bearAllow: number | null = null, tearAllow: number | null = null, basis = "", short: string | null = null;
     if (!todo && m && d !== null) {
       const plate = PLATES[m.material!];
@@ -174,7 +250,7 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
       if (ed < MIN_ED - 1e-9) short = `edge distance ${fmt3(m.edgeDistance!)} in is ${ed.toFixed(2)} × D, under the ${MIN_ED} × D the bearing allowables start at: move the hole or use a wider member`;
       const plateAllow = FBRU(plate, ed) * d * m.thickness!;
       bearAllow = plateAllow;
-      basis = `${plate.name} Fbru ${Math.round(FBRU(plate, ed) / 1000)} ksi at e/D ${Math.round(ed * 100) / 100} × D × t`;
+      basis = bearingBasis(texts, plate, ed);
       if (m.bushing) {
         const b = BUSHINGS[m.bushing];
         const bushAllow = b.fbru20 * d * m.thickness!;
@@ -182,8 +258,9 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
       }
       tearAllow = TEAR(m.thickness!, m.edgeDistance!, d, plate.fsu);
     }
-    addCheck(acc, s === "from" ? "bearingFrom" : "bearingTo", `bearing at the hole in ${name}`, Math.max(ff, special.value), bearAllow, todo ?? short, basis || "Fbru · D · t", BEARING_SRC);
-    addCheck(acc, s === "from" ? "tearOutFrom" : "tearOutTo", `tear-out at the hole in ${name}`, ff, tearAllow, todo, m?.material ? TEAR_BASIS[m.material] : "2 · t · (e − D/2) · Fsu", TEAR_OUT_SRC);
+    const labels = holeLabels(ctx, texts, n, s); // [bearing, tear-out]; indexed, as destructuring allocates an iterator
+    addCheck(acc, s === "from" ? "bearingFrom" : "bearingTo", labels[0], Math.max(ff, special.value), bearAllow, todo ?? short, basis || "Fbru · D · t", BEARING_SRC);
+    addCheck(acc, s === "from" ? "tearOutFrom" : "tearOutTo", labels[1], ff, tearAllow, todo, m?.material ? TEAR_BASIS[m.material] : "2 · t · (e − D/2) · Fsu", TEAR_OUT_SRC);
   }
 
   // Ball or roller bearing: its rating may not be exceeded.
@@ -194,22 +271,22 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
   // Rod-end shank (or the pushrod's threaded end, for a female rod end) in tension at its stress area.
   if (re && c.role === "link") {
     const th = THREADS[re.thread];
-    let ftu: number | null = null, what = "", todo: string | null = null, source = ROD_END_BODY_SRC;
+    // `body`: what the thread is cut in, which with the thread sets the basis text (threadBasis).
+    let ftu: number | null = null, body: string | TubeMaterial | null = null, todo: string | null = null, source = ROD_END_BODY_SRC;
     if (re.shank === "male") {
-      if (re.bodyMaterial) { ftu = BODY_FTU[re.bodyMaterial]; what = `rod-end body (${re.bodyMaterial})`; }
+      if (re.bodyMaterial) { ftu = BODY_FTU[re.bodyMaterial]; body = re.bodyMaterial; }
       else todo = "enter the rod end's body material";
     } else {
       const n = ctx.jFrom[j] >= 0 && ctx.nodeRole[ctx.jFrom[j]] === "link" ? ctx.jFrom[j] : ctx.jTo[j];
       const pn = n >= 0 ? ctx.nodes[n] : null;
       const mat = pn && pn.kind === "pushrod" ? TUBES[pn.props.material] : undefined;
-      if (mat) { ftu = mat.ftu; what = `pushrod end (${mat.name})`; source = mat.source; }
+      if (mat) { ftu = mat.ftu; body = mat; source = mat.source; }
       else todo = "enter the pushrod's material";
     }
     const allow = th && ftu !== null ? th.tensileStressArea * ftu : null;
-    addCheck(acc, "threadTension", `${re.thread} thread in tension`, ff, allow, todo,
-      `A_t ${th ? th.tensileStressArea : "?"} in² × Ftu ${ftu === null ? "?" : Math.round(ftu / 1000)} ksi of the ${what || "threaded part"}`, todo ? THREAD_SRC : source);
+    addCheck(acc, "threadTension", threadLabel(texts, re.thread), ff, allow, todo, threadBasis(texts, re.thread, body), todo ? THREAD_SRC : source);
   }
-  return checks;
+  return checks.slice(0, acc.count);
 }
 
 function maxThickness(ms: (Member | undefined)[]): number | null {

@@ -39,6 +39,9 @@ const REMEDY: Record<CheckId, string> = {
   threadTension: "Use a larger thread or a stronger body material.",
 };
 
+const NO_CHECKS: readonly JointCheck[] = [];
+const SIDES = ["from", "to"] as const;
+
 function factorWords(c: JointCheck, r: JointResult, s: AnalysisSettings): string {
   const which = c.factor === r.factor.value && c.factor !== s.fittingFactor ? r.factor.name : "fitting factor";
   return `limit × ${fmt(s.ultimateFactor, 2)} ultimate × ${fmt(c.factor, 2)} ${which}`;
@@ -55,17 +58,18 @@ export function jointFindings(ctx: Ctx, results: JointResult[], s: AnalysisSetti
     const hw = ctx.joints[j].hardware;
     if (!hw) continue;
     const subj = jointSubject(r.jointId);
-    const open: JointCheck[] = [];
+    // Lists made only for a joint that has a check not made (most have none).
+    let open: JointCheck[] | null = null;
     for (const c of r.checks) {
       if (c.status === "computed" && c.margin !== null && c.margin < 0) {
         const u = c.unit;
         out.push(finding(WEAK[c.id], "hazard", subj,
           `Joint ${jl(ctx, j)}, ${c.label}: it must carry ${fmt(c.required!)} ${u} ultimate (${factorWords(c, r, s)}) but holds ${fmt(c.allowable!)} ${u} (${c.basis}) — margin ${fmtMargin(c.margin)}. ${REMEDY[c.id]}`,
           c.source, [num("required ultimate", c.required!, u), num("allowable", c.allowable!, u), num("margin", c.margin, "")]));
-      } else if (c.status === "notChecked") open.push(c);
+      } else if (c.status === "notChecked") (open ??= []).push(c);
     }
     const rest: JointCheck[] = [];
-    for (const c of open) {
+    for (const c of open ?? NO_CHECKS) {
       const own = c.todo && !c.todo.includes(";") && c.required !== null;
       if (own && c.id === "rodEndRating")
         out.push(finding("rod-end-rating-missing", "caution", subj,
@@ -88,7 +92,7 @@ export function jointFindings(ctx: Ctx, results: JointResult[], s: AnalysisSetti
     // A hole nearer its edge than the bearing tables go.
     const d = fastenerDia(hw, boltDia);
     if (d !== null) {
-      for (const side of ["from", "to"] as const) {
+      for (const side of SIDES) {
         const m = hw.holes?.[side];
         if (m?.edgeDistance !== undefined && m.edgeDistance / d < MIN_ED - 1e-9)
           out.push(finding("hole-edge-short", "hazard", subj,
