@@ -1,6 +1,7 @@
 // `npm start`: everything a fresh clone needs, then the app on http://127.0.0.1:3000.
 import { spawn } from "node:child_process";
 import { PG_PORT, ROOT, authSecret, dbUrl, ensurePackages, migrate, run, startPostgres, step } from "./setup.mjs";
+import { nextStartArgs } from "./next-start.mjs";
 
 const PORT = Number(process.env.PORT || 3000);
 const URL = `http://127.0.0.1:${PORT}`;
@@ -35,7 +36,7 @@ if (process.env.LW_SKIP_BUILD !== "1") {
 }
 
 step(`Serving on ${URL}`);
-const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { cwd: ROOT, env, stdio: ["ignore", "pipe", "inherit"] });
+const server = spawn(process.execPath, nextStartArgs("127.0.0.1", PORT), { cwd: ROOT, env, stdio: ["ignore", "pipe", "inherit"] });
 let printed = false;
 server.stdout.on("data", async (chunk) => {
   process.stdout.write(chunk);

@@ -14,6 +14,7 @@ import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
 import { APP_URL, DIST_DIR, TEST_DB_URL, TEST_PORT, TEST_S3_ENDPOINT, TEST_SECRET, TEST_SMTP_URL } from "../support/env";
 import { client, signIn, type Client } from "../support/http";
 import { mailTo } from "../support/review";
+import { nextStartArgs } from "../../scripts/next-start.mjs";
 
 const ROOT = path.resolve(__dirname, "../..");
 const A = APP_URL;
@@ -34,7 +35,7 @@ async function waitFor(url: string, ms: number) {
 beforeAll(async () => {
   mkdirSync(path.join(ROOT, "tests/artifacts"), { recursive: true });
   const log = openSync(path.join(ROOT, "tests/artifacts/next-server-2.log"), "w");
-  second = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(TEST_PORT + 1)], {
+  second = spawn(process.execPath, nextStartArgs("127.0.0.1", TEST_PORT + 1), {
     cwd: ROOT,
     stdio: ["ignore", log, log],
     env: {

@@ -2,6 +2,8 @@
  * Engine benchmark: analyze() on generated linkages of 60, 1,000 and 10,000 parts. Reports the median time
  * per analysis and its ratio to JSON.parse of the same graph's JSON (what loading the file costs anyway).
  * Targets (issue 3): 60 parts < 1 ms; 10,000 parts < 2 × JSON.parse; growth linear.
+ * `npm run bench` runs it under the server's Node flags (scripts/next-start.mjs: a 32 MB semi-space), as the
+ * engine runs in the server; the figures with Node's defaults are in the README beside them.
  */
 import { analyze, analyzeMotion, DEFAULT_SETTINGS, sweepGraph } from "../../shared/analysis";
 import { buildContext } from "../../shared/analysis/context";

@@ -30,6 +30,7 @@ import { demoPitchLinkage } from "../../shared/demo";
 import { localDbUrl } from "../../db/local-cluster.cjs";
 import { signInAt } from "./common";
 import { PREFER_MINIMAL } from "../../shared/prefer";
+import { nextStartArgs } from "../../scripts/next-start.mjs";
 
 const ROOT = path.resolve(__dirname, "../..");
 const DB = "linkwright_bench_load";
@@ -115,7 +116,7 @@ export async function run() {
   const serverLog = openSync(path.join(ROOT, "tests/artifacts/bench-load-server.log"), "w");
   const profile = process.env.LW_BENCH_PROFILE;
   const nodeArgs = profile ? ["--cpu-prof", `--cpu-prof-dir=${path.resolve(profile)}`] : [];
-  const server = spawn(process.execPath, [...nodeArgs, "node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { cwd: ROOT, env: { ...env, NODE_ENV: "production" }, stdio: ["ignore", serverLog, serverLog] });
+  const server = spawn(process.execPath, nextStartArgs("127.0.0.1", PORT, nodeArgs), { cwd: ROOT, env: { ...env, NODE_ENV: "production" }, stdio: ["ignore", serverLog, serverLog] });
   const db = knex({ client: "pg", connection: DB_URL, pool: { min: 0, max: 2 } });
   try {
     for (let i = 0; ; i++) { try { if ((await fetch(`${APP}/api/health`)).ok) break; } catch {} if (i > 240) throw new Error("the app did not start"); await wait(250); }

@@ -14,6 +14,7 @@ import { chromium, type BrowserContext } from "playwright-core";
 import { DEMO_BUILD, DEMO_USERS } from "../../db/demo-accounts";
 import { demoPitchLinkage } from "../../shared/demo";
 import { localDbUrl } from "../../db/local-cluster.cjs";
+import { nextStartArgs } from "../../scripts/next-start.mjs";
 
 const ROOT = path.resolve(__dirname, "../..");
 const DB = "linkwright_bench_open";
@@ -65,7 +66,7 @@ export async function run() {
   const services = await startLocalServices(env);
   // LW_SKIP_BUILD=1 reuses the build, when there is one.
   if (process.env.LW_SKIP_BUILD !== "1" || !existsSync(path.join(ROOT, DIST, "BUILD_ID"))) sh(["node_modules/next/dist/bin/next", "build"], { ...env, NODE_ENV: "production" });
-  const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { cwd: ROOT, env: { ...env, NODE_ENV: "production" }, stdio: "ignore" });
+  const server = spawn(process.execPath, nextStartArgs("127.0.0.1", PORT), { cwd: ROOT, env: { ...env, NODE_ENV: "production" }, stdio: "ignore" });
   const db = knex({ client: "pg", connection: DB_URL, pool: { min: 0, max: 2 } });
   const browser = await chromium.launch({ executablePath: process.env.CHROMIUM_PATH || "/usr/bin/chromium", args: ["--headless", "--no-sandbox", "--disable-gpu", "--no-first-run", "--disable-background-networking"] });
   try {

@@ -19,6 +19,7 @@ import { BENCH_SIZE, seedLongBuild } from "../support/long-build";
 import { DEMO_BUILD, DEMO_USERS } from "../../db/demo-accounts";
 import { localDbUrl, TEST_PG_PORT } from "../../db/local-cluster.cjs";
 import { signInAt } from "./common";
+import { nextStartArgs } from "../../scripts/next-start.mjs";
 
 const ROOT = path.resolve(__dirname, "../..");
 const DB = "linkwright_bench_scale";
@@ -116,7 +117,7 @@ export async function run() {
   }
 
   if (process.env.LW_SKIP_BUILD !== "1") sh(["node_modules/next/dist/bin/next", "build"], { ...env, NODE_ENV: "production" });
-  const server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(PORT)], { cwd: ROOT, env: { ...env, NODE_ENV: "production" }, stdio: ["ignore", "pipe", "inherit"] });
+  const server = spawn(process.execPath, nextStartArgs("127.0.0.1", PORT), { cwd: ROOT, env: { ...env, NODE_ENV: "production" }, stdio: ["ignore", "pipe", "inherit"] });
   // The export worker's start-up sweep lists every stored object from the S3 fake, which runs in this process:
   // pages are measured once it is done, as they are served the rest of the day.
   let swept = false;

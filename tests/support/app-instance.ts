@@ -7,6 +7,7 @@ import { spawn, type ChildProcess } from "node:child_process";
 import { mkdirSync, openSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { DIST_DIR, TEST_DB_URL, TEST_S3_ENDPOINT, TEST_SECRET, TEST_SMTP_URL } from "./env";
+import { nextStartArgs } from "../../scripts/next-start.mjs";
 
 const ROOT = path.resolve(__dirname, "../..");
 
@@ -18,7 +19,7 @@ export async function startApp(port: number, name: string, o: { again?: boolean;
   const log = path.join(ROOT, "tests/artifacts", `${name}.log`);
   const out = openSync(log, o.again ? "a" : "w");
   const url = `http://127.0.0.1:${port}`;
-  const proc = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(port)], {
+  const proc = spawn(process.execPath, nextStartArgs("127.0.0.1", port), {
     cwd: ROOT,
     stdio: ["ignore", out, out],
     env: {

@@ -7,6 +7,7 @@ import { spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { existsSync, mkdirSync, openSync } from "node:fs";
 import path from "node:path";
 import { APP_URL, DIST_DIR, TEST_DB, TEST_DB_URL, TEST_PORT, TEST_SECRET } from "./env";
+import { nextStartArgs } from "../../scripts/next-start.mjs";
 
 const ROOT = path.resolve(__dirname, "../..");
 let server: ChildProcess | null = null;
@@ -41,7 +42,7 @@ export async function prepareTestDatabase() {
   const services = await startLocalServices({ ...process.env, ...env, LW_SERVICES_MODE: "test" });
   mkdirSync(path.join(ROOT, "tests/artifacts"), { recursive: true });
   const log = openSync(path.join(ROOT, "tests/artifacts/next-server.log"), "w");
-  server = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(TEST_PORT)], {
+  server = spawn(process.execPath, nextStartArgs("127.0.0.1", TEST_PORT), {
     cwd: ROOT,
     env: { ...process.env, ...services.env, ...env, NODE_ENV: "production", NEXTAUTH_URL: APP_URL, NEXT_TELEMETRY_DISABLED: "1" },
     stdio: ["ignore", log, log],

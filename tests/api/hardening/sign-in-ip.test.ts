@@ -11,6 +11,7 @@ import path from "node:path";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { testDb } from "../../support/db";
 import { APP_URL, DIST_DIR, TEST_DB_URL, TEST_PORT, TEST_SECRET } from "../../support/env";
+import { nextStartArgs } from "../../../scripts/next-start.mjs";
 
 /** db/users.ts MAX_FAILS_PER_IP (db/ cannot be imported into a test: it opens the app's own pool). */
 const MAX_FAILS_PER_IP = 30;
@@ -53,7 +54,7 @@ async function waitFor(url: string, ms: number) {
 beforeAll(async () => {
   mkdirSync(path.join(ROOT, "tests/artifacts"), { recursive: true });
   const log = openSync(path.join(ROOT, "tests/artifacts/next-server-proxied.log"), "w");
-  second = spawn(process.execPath, ["node_modules/next/dist/bin/next", "start", "-H", "127.0.0.1", "-p", String(TEST_PORT + 1)], {
+  second = spawn(process.execPath, nextStartArgs("127.0.0.1", TEST_PORT + 1), {
     cwd: ROOT,
     stdio: ["ignore", log, log],
     env: {
