@@ -64,7 +64,7 @@ export async function getAccess(userId: string, buildId?: string, linkageId?: st
   const row = rows[0] as Record<string, unknown> | undefined;
   if (!row) return null;
   const pick = (prefix: string, cols: readonly string[]) => Object.fromEntries(cols.map((c) => [c, row[`${prefix}${c}`]]));
-  const content = row.l_id && row.r_revision != null ? await revisionContent(row.r_id as string, row.r_content_id as string) : null;
+  const content = row.l_id && row.r_revision != null ? await revisionContent({ id: row.r_id as string, linkageId: row.l_id as string, revision: row.r_revision as number, contentId: row.r_content_id as string }) : null;
   return {
     user: { id: row.id, email: row.email, name: row.name, session_version: row.session_version, is_site_admin: row.is_site_admin, unit_system: row.unit_system } as AccessUser,
     member: row.b_id ? { role: row.role as Role, build: toBuild(pick("b_", BUILD_COLS) as BuildRow) } : null,

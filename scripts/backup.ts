@@ -46,7 +46,7 @@ async function main() {
       for (const n of names) tables[n] = Number((await conn.query(`select count(*) as n from public."${n.replace(/"/g, '""')}"`)).rows[0].n);
       if (names.includes("files")) referenced = (await conn.query("select key from files union select thumb_key from files where thumb_key is not null")).rows.map((r) => r.key);
       if (names.includes("knex_migrations")) migrations = (await conn.query("select name from knex_migrations order by id")).rows.map((r) => r.name);
-      const dump = await pgTool("pg_dump", ["--format=custom", `--snapshot=${snapshot}`, "--no-owner", "--no-privileges", `--file=${path.join(staging, DUMP)}`], t.dbUrl);
+      const dump = await pgTool("pg_dump", ["--format=custom", `--snapshot=${snapshot}`, "--no-owner", "--no-privileges", "--no-toast-compression", `--file=${path.join(staging, DUMP)}`], t.dbUrl);
       if (dump.code !== 0) throw new Error(`pg_dump failed: ${dump.stderr.trim()}`);
       await conn.query("commit");
     } finally {

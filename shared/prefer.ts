@@ -4,7 +4,16 @@
  */
 export const PREFER_MINIMAL = "return=minimal";
 
-/** Whether a Prefer header (comma-separated preferences, each maybe with parameters after `;`) asks for return=minimal. */
+/**
+ * Whether a Prefer header asks for return=minimal (RFC 7240 §2: comma-separated preferences, each a token with
+ * an optional value, maybe quoted, then parameters after `;`; where a preference is given twice, the first counts).
+ */
 export function prefersMinimal(prefer: string | null): boolean {
-  return !!prefer && prefer.split(",").some((p) => p.split(";")[0].replace(/\s+/g, "").toLowerCase() === PREFER_MINIMAL);
+  if (!prefer) return false;
+  for (const p of prefer.split(",")) {
+    const [name, ...value] = p.split(";")[0].split("=");
+    if (name.trim().toLowerCase() !== "return") continue;
+    return value.join("=").trim().replace(/^"(.*)"$/, "$1").toLowerCase() === "minimal";
+  }
+  return false;
 }

@@ -19,7 +19,7 @@ export function superviseWorker() {
   let stopping = false;
   let restarts = 0;
   const start = () => {
-    child = spawn(process.execPath, ["--conditions=react-server", "--import", "tsx", path.join(root, "scripts/worker.ts")], {
+    child = spawn(process.execPath, ["--max-semi-space-size=32", "--conditions=react-server", "--import", "tsx", path.join(root, "scripts/worker.ts")], { // the server's Node flags (scripts/next-start.mjs): it may run the engine
       cwd: root,
       env: { ...process.env, NODE_ENV: "production", LW_WORKER_PARENT_PID: String(process.pid) },
       stdio: ["ignore", "inherit", "inherit", "ipc"],

@@ -173,7 +173,7 @@ export async function run() {
       { name: "GET graph", method: "GET", requests: [{ method: "GET", path: `${L(pitch.id)}/graph` }] },
       // As the editor saves (Prefer: return=minimal: the report computed and stored, its summary answered), and as
       // an API client that wants the whole report back.
-      putRoute("PUT graph (with analysis)", { prefer: PREFER_MINIMAL }),
+      putRoute("PUT graph (with analysis, as the editor saves)", { prefer: PREFER_MINIMAL }),
       putRoute("PUT graph (with analysis, whole report answered)", {}),
       { name: "GET comments", method: "GET", requests: [{ method: "GET", path: `${L(pitch.id)}/comments` }] },
     ];
@@ -199,7 +199,7 @@ export async function run() {
       bares.push(await run1(bareRoute, false));
       results.push({ ...r, bareRps: (bares.at(-2)!.rps + bares.at(-1)!.rps) / 2 });
     }
-    const target: Record<string, number | undefined> = { "GET graph": T.graphGet, "PUT graph (with analysis)": T.graphPut };
+    const target: Record<string, number | undefined> = { "GET graph": T.graphGet, "PUT graph (with analysis, as the editor saves)": T.graphPut };
     let ok = bares.every((b) => b.non2xx === 0 && b.errors === 0 && b.timeouts === 0);
     const rows = [{
       route: bareRoute.name,
