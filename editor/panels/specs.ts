@@ -100,7 +100,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     title: "Fit, torque & marks",
     fields: [
       { type: "enum", path: "fit", label: "Bolt fit", options: [["clamped", "clamped on the race"], ["freeToRotate", "free to rotate"]], required: true, default: "clamped" },
-      { type: "enum", path: "shear", label: "Shear", options: [["single", "single"], ["double", "double"]], required: true, default: "double" },
+      { type: "enum", path: "shear", label: "Shear", options: [["single", "single"], ["double", "double"]], hint: "unset, the fastener's shear is not checked" },
       { type: "enum", path: "bearing", label: "Turns on", options: [["rodEnd", "rod end"], ["ballBearing", "ball bearing"], ["plainBushing", "plain bushing"], ["clevisPin", "clevis pin"], ["none", "nothing (fixed)"]] },
       { type: "number", path: "torque", label: "Applied torque", q: "torque", hint: "including the nut's drag" },
       { type: "bool", path: "torqueStripe", label: "Torque stripe applied" },

@@ -94,7 +94,8 @@ export const hardwareSchema = z.object({
   washerUnderNut: washer.optional(),
   /** Bolt clamped tight on the inner race, or set loose so it can turn. */
   fit: z.enum(["clamped", "freeToRotate"]).default("clamped"),
-  shear: z.enum(["single", "double"]).default("double"),
+  /** One shear plane or two: no default — unentered, the fastener's shear reads "not checked". */
+  shear: z.enum(["single", "double"]).optional(),
   /** For pivots: what the part turns on. */
   bearing: z.enum(["rodEnd", "ballBearing", "plainBushing", "clevisPin", "none"]).optional(),
   /** Applied torque, in·lbf, including the nut's drag torque. */

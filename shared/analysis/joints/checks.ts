@@ -180,19 +180,21 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
   }
 
   // Fastener shear: the clevis pin, else the bolt.
-  const planes = hw.shear === "single" ? 1 : 2;
+  // Unentered, the shear planes are not assumed (two would double the allowable): the check reads "not checked".
+  const planes = hw.shear === "single" ? 1 : hw.shear === "double" ? 2 : null;
+  const SHEAR_TODO = "choose single or double shear on the joint's card";
   const pin = hw.clevisPin;
   const isPin = !!pin || (hw.bearing === "clevisPin" && !hw.bolt);
   const d = fastenerDiameter(hw, boltDia);
   if (isPin) {
-    const todo = !pin ? "enter the clevis pin's diameter and shear strength" : pin.shearStrength === undefined ? "enter the clevis pin's shear strength (Fsu) from its maker" : null;
-    const allow = pin?.shearStrength !== undefined ? SHEAR(pin.diameter, pin.shearStrength, planes) : null;
-    addCheck(acc, "pinShear", hw.shear === "single" ? "clevis pin shear, single shear" : "clevis pin shear, double shear", ff, allow, todo, pin ? `Fsu ${Math.round((pin.shearStrength ?? 0) / 1000)} ksi × πD²/4 × ${planes}` : "no pin recorded", PIN_SRC);
+    const todo = !pin ? "enter the clevis pin's diameter and shear strength" : pin.shearStrength === undefined ? "enter the clevis pin's shear strength (Fsu) from its maker" : planes === null ? SHEAR_TODO : null;
+    const allow = pin?.shearStrength !== undefined && planes !== null ? SHEAR(pin.diameter, pin.shearStrength, planes) : null;
+    addCheck(acc, "pinShear", shearLabel("clevis pin shear", planes), ff, allow, todo, pin ? `Fsu ${Math.round((pin.shearStrength ?? 0) / 1000)} ksi × πD²/4 × ${planes ?? "?"}` : "no pin recorded", PIN_SRC);
   } else if (hw.bolt) {
     const alu = hw.bolt.material === "aluminium";
-    const allow = d === null ? null : SHEAR(d, alu ? FSU_ALU : FSU_STEEL, planes);
-    addCheck(acc, "boltShear", hw.shear === "single" ? "bolt shear, single shear" : "bolt shear, double shear", ff, allow, d === null ? "enter the bolt's shank diameter" : null,
-      alu ? (planes === 1 ? "aluminium 37 ksi × πD²/4 × 1" : "aluminium 37 ksi × πD²/4 × 2") : planes === 1 ? "steel 75 ksi × πD²/4 × 1" : "steel 75 ksi × πD²/4 × 2", alu ? SRC.aluminiumBolts : SRC.anBolts);
+    const allow = d === null || planes === null ? null : SHEAR(d, alu ? FSU_ALU : FSU_STEEL, planes);
+    addCheck(acc, "boltShear", shearLabel("bolt shear", planes), ff, allow, d === null ? "enter the bolt's shank diameter" : planes === null ? SHEAR_TODO : null,
+      `${alu ? "aluminium 37" : "steel 75"} ksi × πD²/4 × ${planes ?? "?"}`, alu ? SRC.aluminiumBolts : SRC.anBolts);
   }
 
   const sides = holeSides(c, hw);
@@ -301,4 +303,9 @@ function maxThickness(ms: (Member | undefined)[]): number | null {
 
 function fmt3(v: number): string {
   return String(Number(v.toFixed(3)));
+}
+
+/** "bolt shear, single shear", "…, double shear", or "…, shear planes not entered". */
+function shearLabel(what: string, planes: 1 | 2 | null) {
+  return `${what}, ${planes === 1 ? "single shear" : planes === 2 ? "double shear" : "shear planes not entered"}`;
 }

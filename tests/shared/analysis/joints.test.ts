@@ -194,3 +194,23 @@ describe("nuts, bolts and torque", () => {
     expect(codes(single("head"), "rodA")).toContain("retaining-washer-small");
   });
 });
+
+describe("a bolt's shear planes left unentered are not assumed", () => {
+  // Two planes would double the allowable (75,000 psi × πD²/4 × 2, AN steel from memory): unentered, the check
+  // says what to enter and shows no margin.
+  const g = withHardware(withLink(2400 / 1.725), "rodA", (h) => { const { shear: _omit, ...rest } = h; return rest as JointHardware; });
+  const r = joint(g, "rodA");
+  it("reads not checked, with what to enter, and no allowable or margin", () => {
+    const c = check(r, "boltShear");
+    expect(c.status).not.toBe("computed");
+    expect(c.allowable).toBeNull();
+    expect(c.margin).toBeNull();
+    expect(c.todo).toMatch(/single or double shear/);
+    expect(c.label).toBe("bolt shear, shear planes not entered");
+  });
+  it("is checked once double shear is entered: 75 ksi × πD²/4 × 2 (AN steel bolt, from memory)", () => {
+    const c = check(joint(withHardware(g, "rodA", (h) => ({ ...h, shear: "double" })), "rodA"), "boltShear");
+    expect(c.status).toBe("computed");
+    rel(c.allowable!, 2 * 3681.55, 1e-3);
+  });
+});
