@@ -23,9 +23,19 @@ export { NODE_KINDS, PORTS, KINDS, type NodeKind, type PropsOf } from "./kinds";
 const position = z.object({ x: z.number().finite(), y: z.number().finite() });
 const label = z.string().max(80, "label is longer than 80 characters").default("");
 
-/** The node schema of one kind: the common fields and that kind's props (shared/linkage/kinds/<kind>/schema.ts). */
-const node = <K extends string, P extends z.ZodObject>(kind: K, props: P) =>
-  z.object({ id, kind: z.literal(kind), label, position, props });
+/**
+ * The node schema of one kind: the common fields and that kind's props (shared/linkage/kinds/<kind>/schema.ts).
+ * `unentered`: the props still at the starting values the editor placed the part with — the builder has not
+ * entered them. The check takes nothing from them: a margin that would depend on one reads "not checked" and
+ * names it. Absent (as in files and revisions made before it existed), every value counts as entered.
+ */
+const node = <K extends string, P extends z.ZodObject>(kind: K, props: P) => {
+  const keys = Object.keys(props.shape) as [string, ...string[]];
+  return z.object({
+    id, kind: z.literal(kind), label, position, props,
+    unentered: z.array(z.enum(keys, { error: `unentered names a value a ${kind} does not have` })).max(keys.length, "unentered repeats a value").optional(),
+  });
+};
 type AnyNodeSchema = { [K in NodeKind]: ReturnType<typeof node<K, KindSchemas[K]>> }[NodeKind];
 
 export const nodeSchema = z.discriminatedUnion(
