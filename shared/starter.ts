@@ -2,7 +2,8 @@
  * A newcomer's starting run: the usual pitch run of a light aircraft — control stick → forward pushrod →
  * bellcrank → aft pushrod → elevator horn → elevator, with structure mounts at the stick's pivot, the
  * bellcrank's pivot and the hinge, and a travel stop at the stick — every part at a placeholder size (to be
- * replaced with the plans' dimensions) and every joint's hardware blank, so the check says what to enter.
+ * replaced with the plans' dimensions, and marked unentered until it is) and every joint's hardware blank, so
+ * the check says what to enter.
  */
 import { hardwareSchema, nodeSchema, FORMAT_VERSION, type Joint, type JointHardware, type LinkageGraph, type LinkageNode, type NodeKind } from "./linkage/schema";
 import { defaultProps } from "./linkage/kinds";
@@ -10,8 +11,13 @@ import { defaultProps } from "./linkage/kinds";
 export const STARTER_NAME = "Pitch — stick to elevator";
 
 export function starterPitchRun(name = STARTER_NAME): LinkageGraph {
-  const part = (id: string, kind: NodeKind, label: string, x: number, y: number, props: Record<string, unknown> = {}): LinkageNode =>
-    nodeSchema.parse({ id, kind, label, position: { x, y }, props: { ...defaultProps(kind, "pitch"), ...props } });
+  // Every value is a placeholder, so every one is marked unentered: the check computes no margin from them
+  // and says, part by part, what to enter (shared/analysis/unentered.ts).
+  const part = (id: string, kind: NodeKind, label: string, x: number, y: number, props: Record<string, unknown> = {}): LinkageNode => {
+    const all = { ...defaultProps(kind, "pitch"), ...props };
+    const unentered = Object.keys(all).filter((k) => k !== "note");
+    return nodeSchema.parse({ id, kind, label, position: { x, y }, props: all, ...(unentered.length ? { unentered } : {}) });
+  };
   // Placeholder tubes a run of this size usually needs (not the kind's bare default, which would buckle here): replace with the plans' own.
   const tube = { material: "4130N", outsideDiameter: 0.75, wall: 0.049, length: 30 };
   const blank = () => hardwareSchema.parse({}) as JointHardware;

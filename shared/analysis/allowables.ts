@@ -10,6 +10,7 @@ import type { AnalysisSettings, Finding, JointResult, PushrodResult } from "./ty
 import { type Ctx, nodeLabel } from "./context";
 import { selectSpecialFactor } from "./joints/factors";
 import { finding, fmt, fmtMargin, nodeSubject, num } from "./format";
+import { enterTodo, TUBE_KEYS, unenteredOf } from "./unentered";
 
 /** Margins are capped so a report stays finite and JSON-safe (an unloaded part has "infinite" margin). */
 export const MARGIN_CAP = 999;
@@ -59,8 +60,14 @@ export function columnAllowable({ area, inertia, length, e, fty, k = 1 }: Column
   return { load: johnsonLoad(area, fty, e, slenderness), mode: "johnson", slenderness, transition };
 }
 
-export function pushrodResult(node: Extract<LinkageNode, { kind: "pushrod" }>, limitAxial: number, driven: boolean, settings: AnalysisSettings): PushrodResult {
+/**
+ * `loadTodo`: what to enter before the load is the builder's (a part upstream still at starting values), or null.
+ * The tube's own starting values come first: the allowables are not shown from a tube nobody entered.
+ */
+export function pushrodResult(node: Extract<LinkageNode, { kind: "pushrod" }>, limitAxial: number, driven: boolean, settings: AnalysisSettings, loadTodo: string | null = null): PushrodResult {
   const p = node.props;
+  const tube = unenteredOf(node, TUBE_KEYS);
+  const todo = tube.length ? enterTodo(node, tube) : loadTodo;
   const mat = TUBE_MATERIALS_BY_NAME[p.material] ?? TUBE_MATERIALS_BY_NAME["4130N"];
   const sec = tubeSection(p.outsideDiameter, p.wall);
   const col = columnAllowable({ area: sec.area, inertia: sec.inertia, length: p.length, e: mat.e, fty: mat.fty, k: 1 });
@@ -73,11 +80,12 @@ export function pushrodResult(node: Extract<LinkageNode, { kind: "pushrod" }>, l
     columnAllowable: col.load,
     columnMode: col.mode,
     tensionAllowable: tension,
-    marginCompression: marginOfSafety(col.load, ultimate),
-    marginTension: marginOfSafety(tension, ultimate),
+    marginCompression: todo ? null : marginOfSafety(col.load, ultimate),
+    marginTension: todo ? null : marginOfSafety(tension, ultimate),
     area: sec.area,
     slenderness: col.slenderness,
     driven,
+    todo,
   };
 }
 
@@ -98,17 +106,17 @@ export function strengthFindings(ctx: Ctx, pushrodNodes: number[], pushrods: Pus
     const pr = pushrods[i];
     const n = ctx.nodes[pushrodNodes[i]];
     const name = nodeLabel(n);
-    if (n.kind === "pushrod" && !(2 * n.props.wall < n.props.outsideDiameter)) {
+    if (n.kind === "pushrod" && !(2 * n.props.wall < n.props.outsideDiameter) && !unenteredOf(n, ["wall", "outsideDiameter"]).length) {
       out.push(finding("pushrod-wall-too-thick", "caution", nodeSubject(pr.nodeId),
         `Pushrod ${name}: a wall of ${fmt(n.props.wall, 3)} in on a ${fmt(n.props.outsideDiameter, 3)} in tube leaves no bore. The check treats it as a solid rod; check the entered size.`,
         SRC.engineering, [num("outside diameter", n.props.outsideDiameter, "in"), num("wall", n.props.wall, "in")]));
     }
-    if (pr.marginCompression < 0) {
+    if (pr.marginCompression !== null && pr.marginCompression < 0) {
       out.push(finding("pushrod-buckles", "hazard", nodeSubject(pr.nodeId),
         `Pushrod ${name} can buckle: pushed at the design force it must carry ${fmt(pr.ultimateAxial)} lbf ultimate (${fmt(pr.limitAxial)} lbf limit × ${fmt(settings.ultimateFactor, 2)}), but as a pinned-end column (${pr.columnMode === "euler" ? "Euler" : "Johnson"}, KL/r ${fmt(pr.slenderness, 0)}) the tube holds only ${fmt(pr.columnAllowable)} lbf — margin ${fmtMargin(pr.marginCompression)}. Use a larger-diameter tube or a shorter run (add an idler).`,
         SRC.column, [num("required ultimate", pr.ultimateAxial, "lbf"), num("column allowable", pr.columnAllowable, "lbf"), num("margin", pr.marginCompression, "")]));
     }
-    if (pr.marginTension < 0) {
+    if (pr.marginTension !== null && pr.marginTension < 0) {
       out.push(finding("pushrod-tension-weak", "hazard", nodeSubject(pr.nodeId),
         `Pushrod ${name} is too weak in tension: it must carry ${fmt(pr.ultimateAxial)} lbf ultimate but the tube section (${fmt(pr.area, 4)} in² × Ftu) holds ${fmt(pr.tensionAllowable)} lbf — margin ${fmtMargin(pr.marginTension)}.`,
         SRC.tubes, [num("required ultimate", pr.ultimateAxial, "lbf"), num("tension allowable", pr.tensionAllowable, "lbf"), num("margin", pr.marginTension, "")]));

@@ -13,6 +13,7 @@ import type { CableCtx } from "./cable-circuits";
 import { marginOfSafety } from "./allowables";
 import { finding, fmt, fmtMargin, nodeSubject, num } from "./format";
 import { cablePartFindings } from "./cable-parts";
+import { TENSION_KEYS, unenteredOf } from "./unentered";
 
 /** Systems whose cables are primary controls (14 CFR 23.689(a)(1): aileron, elevator, rudder). */
 export const PRIMARY_SYSTEMS = new Set(["pitch", "roll", "yaw"]);
@@ -36,7 +37,8 @@ export function cableResults(ctx: Ctx, cc: CableCtx, loads: Loads, s: AnalysisSe
       inCircuit: !!ch && ch.circuit >= 0, breakingStrength: null, terminalEfficiency: null, allowable: null, margin: null,
       driven: loads.driven[n] === 1,
     };
-    if (node.kind === "cable") {
+    // Starting values of its own, or of a part its tension comes through: not checked (shared/analysis/unentered.ts).
+    if (node.kind === "cable" && unenteredOf(node, TENSION_KEYS).length === 0) {
       const mbs = breakingStrength(node.props.size, node.props.construction, node.props.material);
       const eff = Math.min(TERMINAL_EFFICIENCY[node.props.terminalA], TERMINAL_EFFICIENCY[node.props.terminalB]);
       r.terminalEfficiency = eff;
@@ -45,7 +47,7 @@ export function cableResults(ctx: Ctx, cc: CableCtx, loads: Loads, s: AnalysisSe
         r.allowable = mbs.lbf * eff;
         const m = marginOfSafety(r.allowable, req);
         // A circuit without its rigging tension: only a failure at the force alone is certain.
-        r.margin = r.inCircuit && r.pretension === null && m >= 0 ? null : m;
+        r.margin = loads.nodeFrom[n] || (r.inCircuit && r.pretension === null && m >= 0) ? null : m;
       }
     }
     out.push(r);
@@ -72,6 +74,7 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
     if (node.kind === "controlWheel") {
       const p = node.props;
       if (ctx.graph.system === "flap" || ctx.graph.system === "trim") continue;
+      if (unenteredOf(node, p.axis === "roll" ? ["axis", "diameter"] : ["axis"]).length) continue; // the unentered finding says what to enter
       if (p.axis === "roll") {
         const c = wheelCouple(p, s.pilotForce);
         const min = WHEEL_ROLL_MIN_PER_IN * p.diameter;
@@ -90,6 +93,8 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
     if (node.kind !== "cable") continue;
     const p = node.props;
     const d = CABLE_DIAMETER[p.size];
+    // Starting values are not the builder's cable: values-unentered says so, and nothing here is judged on them.
+    if (unenteredOf(node, TENSION_KEYS).length) continue;
     if (primary && d < MIN_PRIMARY_CABLE)
       out.push(finding("cable-too-small", "hazard", subj,
         `${name} is ${p.size} in: no cable under 1/8 in may be used in the aileron, elevator or rudder controls. Use 1/8 in cable or larger.`,
@@ -104,7 +109,7 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
         `${name} is too weak: it must carry ${fmt(r.ultimateRequired)} lbf ultimate (${fmt(r.limitTension)} lbf limit tension, ${factors}) but its breaking strength of ${fmt(r.breakingStrength)} lbf × ${fmt(r.terminalEfficiency! * 100, 0)} % for the ${TERMINAL_NAMES[worstTerminal(p)]} is ${fmt(r.allowable!)} lbf — margin ${fmtMargin(r.margin)}. Use a larger cable, better terminals or a longer arm at the input.`,
         breakingStrength(p.size, p.construction, p.material)!.source,
         [num("required ultimate", r.ultimateRequired, "lbf"), num("allowable", r.allowable!, "lbf"), num("margin", r.margin, "")]));
-    else if (r.inCircuit && r.pretension === null && r.limitTension > 0)
+    else if (r.inCircuit && r.pretension === null && r.limitTension > 0 && !loads.nodeFrom[n])
       out.push(finding("cable-strength-unchecked", "caution", subj,
         `${name}: not checked — the circuit has no rigging tension recorded, and the pulling cable carries the larger of the force (${fmt(r.limitTension)} lbf) and the rigging tension plus half the force. Enter the rigging tension measured on the circuit.`,
         CABLE_SRC.preloadedCircuit, [num("force alone", r.limitTension, "lbf")]));

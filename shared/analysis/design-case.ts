@@ -21,6 +21,9 @@ export function maxLoads(into: Loads, other: Loads) {
   m(into.pushrodAxial, other.pushrodAxial);
   m(into.jointRadial, other.jointRadial);
   m(into.surfaceMoment, other.surfaceMoment);
+  const t = (a: Int32Array, b: Int32Array) => { for (let i = 0; i < a.length; i++) if (b[i] && !a[i]) a[i] = b[i]; };
+  t(into.jointFrom, other.jointFrom);
+  t(into.nodeFrom, other.nodeFrom);
 }
 
 const TABLE_KEY = { pitch: "pitchStick", roll: "rollStick", yaw: "yawPedal" } as const;

@@ -21,6 +21,7 @@ import { finding, linkageSubject } from "./format";
 import { analyzeMotion, type MotionReport } from "./motion";
 import { cableContext } from "./cable-circuits";
 import { cableFindings, cableResults } from "./cables";
+import { enterTodo, unenteredFindings, unenteredLoadKeys } from "./unentered";
 
 export * from "./types";
 export { solveFourBar, sweepFourBar, fourBarFindings, transmissionAngle, TRANSMISSION_MIN, TRANSMISSION_MAX } from "./kinematics";
@@ -31,7 +32,7 @@ export { analyzeMotion, sweepGraph, MOTION_NOT_CHECKED, atInput, type MotionRepo
 export { selectSpecialFactor, turnsOnBolt, HINGE_BEARING_FACTOR, CABLE_JOINT_FACTOR, type FactorOptions } from "./joints/factors";
 export { HINGE_MOMENT_FACTOR } from "./design-case";
 
-export const ENGINE_VERSION = "2.0.0";
+export const ENGINE_VERSION = "2.1.0"; // 2.1: starting values (unentered) are not used for margins; pushrod margins may be null
 
 export const NOTICE =
   "Linkwright's numbers are an aid to the builder's own engineering and the designer's data, not a substitute. " +
@@ -97,7 +98,8 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   for (let n = 0; n < ctx.nodes.length; n++) {
     const node = ctx.nodes[n];
     if (node.kind === "pushrod") {
-      pushrods.push(pushrodResult(node, loads.pushrodAxial[n], loads.driven[n] === 1, s));
+      const from = loads.nodeFrom[n];
+      pushrods.push(pushrodResult(node, loads.pushrodAxial[n], loads.driven[n] === 1, s, from ? enterTodo(ctx.nodes[from - 1], unenteredLoadKeys(ctx.nodes[from - 1])) : null));
       pushrodNodes.push(n);
     } else if (ctx.nodeRole[n] === "surface") {
       surfaces.push({ nodeId: node.id, hingeMomentLimit: loads.surfaceMoment[n], driven: loads.driven[n] === 1, designHingeMoment: null, loadCase: null });
@@ -107,7 +109,12 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   if (designCase.scale !== 1) for (const p of pushrods) rescale(p, designCase.scale);
   const path = pathLoads(ctx, loads, findings);
   const joints: JointResult[] = new Array(ctx.joints.length);
-  for (let j = 0; j < ctx.joints.length; j++) joints[j] = jointResult(ctx, j, loads, s, path.loadTodo[j], cc.cableJoint[j] === 1 ? CABLE_JOINT : OTHER_JOINT);
+  for (let j = 0; j < ctx.joints.length; j++) {
+    // A load carried through a part's starting values is not the builder's: the joint's checks say what to enter.
+    const from = loads.jointFrom[j];
+    const todo = path.loadTodo[j] ?? (from ? enterTodo(ctx.nodes[from - 1], unenteredLoadKeys(ctx.nodes[from - 1])) : null);
+    joints[j] = jointResult(ctx, j, loads, s, todo, cc.cableJoint[j] === 1 ? CABLE_JOINT : OTHER_JOINT);
+  }
   const cables = cableResults(ctx, cc, loads, s);
   const cautions = settingsCautions(s, findings);
 
@@ -115,6 +122,7 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   strengthFindings(ctx, pushrodNodes, pushrods, s, findings);
   jointFindings(ctx, joints, s, findings);
   retentionFindings(ctx, findings);
+  unenteredFindings(ctx, findings);
   cableFindings(ctx, cc, loads, cables, s, findings);
   secondaryInputFindings(ctx, s, findings);
 
@@ -143,6 +151,7 @@ const CABLE_JOINT: FactorOptions = { cable: true }, OTHER_JOINT: FactorOptions =
 function rescale(p: PushrodResult, k: number) {
   p.limitAxial *= k;
   p.ultimateAxial *= k;
+  if (p.todo) return; // not checked: no margins to recompute
   p.marginCompression = marginOfSafety(p.columnAllowable, p.ultimateAxial);
   p.marginTension = marginOfSafety(p.tensionAllowable, p.ultimateAxial);
 }

@@ -26,6 +26,7 @@ import { bellcrankPivotLoad } from "../linkage/kinds/bellcrank";
 import { guideLoad, pullingTension } from "../hardware/cables";
 import type { AnalysisSettings } from "./types";
 import { type Ctx, jointsAt, otherNode, otherPort } from "./context";
+import { unenteredLoadKeys } from "./unentered";
 
 export type InputLoad = { node: number; gripForce: number; linkForce: number; reachesSurface: boolean };
 
@@ -38,6 +39,12 @@ export type Loads = {
   surfaceMoment: Float64Array;
   /** 1 where some input's force reaches the node. */
   driven: Uint8Array;
+  /**
+   * Per joint, and per node for its axial load and hinge moment: 1 + the index of a part whose starting
+   * values (shared/analysis/unentered.ts) the force was carried through, 0 when the load is the builder's own.
+   */
+  jointFrom: Int32Array;
+  nodeFrom: Int32Array;
   inputs: InputLoad[];
 };
 
@@ -80,33 +87,47 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
   const surfaceMoment = new Float64Array(N);
   const jointRadial = new Float64Array(J);
   const driven = new Uint8Array(N);
+  const jointFrom = new Int32Array(J);
+  const nodeFrom = new Int32Array(N);
   const inputs: InputLoad[] = [];
   const sum = settings.dualControls;
+  // 1 + n for a part whose load values are starting values (most graphs have none: one pass, no allocation).
+  const own = new Int32Array(N);
+  for (let n = 0; n < N; n++) if (unenteredLoadKeys(nodes[n]).length > 0) own[n] = n + 1;
 
   // Per-walk values, combined into the totals after each input (max or sum), through touched lists.
   const wJ = new Float64Array(J);
   const wA = new Float64Array(N);
   const wM = new Float64Array(N);
+  // The walk's taint beside each value (see jointFrom): any tainted contribution taints the total.
+  const wJT = new Int32Array(J);
+  const wNT = new Int32Array(N);
   const touchedJ: number[] = [];
   const touchedN: number[] = [];
   const visited = new Int32Array(J);
   // Explicit stack (no recursion: a 10,000-part chain must not overflow): joint, node it leaves, force, moment.
-  let sJ = new Int32Array(64), sN = new Int32Array(64), sF = new Float64Array(64), sM = new Float64Array(64);
+  let sJ = new Int32Array(64), sN = new Int32Array(64), sF = new Float64Array(64), sM = new Float64Array(64), sT = new Int32Array(64);
   let sp = 0;
-  const push = (j: number, from: number, f: number, m: number) => {
+  const push = (j: number, from: number, f: number, m: number, t: number) => {
     if (sp === sJ.length) {
       const grow = <T extends Int32Array | Float64Array>(a: T): T => {
         const b = new (a.constructor as new (n: number) => T)(a.length * 2);
         b.set(a);
         return b;
       };
-      sJ = grow(sJ); sN = grow(sN); sF = grow(sF); sM = grow(sM);
+      sJ = grow(sJ); sN = grow(sN); sF = grow(sF); sM = grow(sM); sT = grow(sT);
     }
-    sJ[sp] = j; sN[sp] = from; sF[sp] = f; sM[sp] = m; sp++;
+    sJ[sp] = j; sN[sp] = from; sF[sp] = f; sM[sp] = m; sT[sp] = t; sp++;
   };
-  const recJ = (j: number, f: number) => {
+  const recJ = (j: number, f: number, t: number) => {
     if (wJ[j] === 0 && f > 0) touchedJ.push(j);
     if (f > wJ[j]) wJ[j] = f;
+    if (t && f > 0 && !wJT[j]) wJT[j] = t;
+  };
+  const recN = (n: number, f: number, t: number) => {
+    if (wA[n] === 0 && f > 0) touchedN.push(n);
+    if (f > wA[n]) wA[n] = f;
+    if (t && f > 0 && !wNT[n]) wNT[n] = t;
   };
   // Each port's joint list is handled once per walk, so a walk is linear in parts + joints however many
   // joints share a port: lists whose joints all carry a load (pivots, hinges, a cable's ends, a guide's
@@ -114,18 +135,20 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
   // through are pushed the first time the walk reaches them (in a tree that is the only time; around a
   // loop, which structure.ts reports, the first path reached wins).
   const listMax = new Map<number[], number>();
+  const listTaint = new Map<number[], number>();
   const forwarded = new Set<number[]>();
-  const recList = (list: number[], r: number) => {
+  const recList = (list: number[], r: number, t: number) => {
     if (list.length === 0) return;
     const m = listMax.get(list);
     if (m === undefined || r > m) listMax.set(list, r);
+    if (t && r > 0 && !listTaint.get(list)) listTaint.set(list, t);
   };
-  const pushList = (list: number[], from: number, f: number, m: number, skip = -1) => {
+  const pushList = (list: number[], from: number, f: number, m: number, t: number, skip = -1) => {
     if (list.length === 0 || forwarded.has(list)) return;
     forwarded.add(list);
-    for (const k of list) if (k !== skip) push(k, from, f, m);
+    for (const k of list) if (k !== skip) push(k, from, f, m, t);
   };
-  const recPivot = (n: number, r: number) => recList(jointsAt(ctx, n, "pivot"), r);
+  const recPivot = (n: number, r: number, t: number) => recList(jointsAt(ctx, n, "pivot"), r, t);
 
   let stamp = 0;
   for (let i = 0; i < N; i++) {
@@ -137,15 +160,15 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
     const fp = fg * ratio(grip, attach);
     let reaches = false;
     driven[i] = 1;
-    recPivot(i, fg + fp);
-    pushList(jointsAt(ctx, i, "attach"), i, fp, 0);
+    recPivot(i, fg + fp, own[i]);
+    pushList(jointsAt(ctx, i, "attach"), i, fp, 0, own[i]);
 
     while (sp > 0) {
       sp--;
-      const j = sJ[sp], from = sN[sp], f = sF[sp], moment = sM[sp];
+      const j = sJ[sp], from = sN[sp], f = sF[sp], moment = sM[sp], t = sT[sp];
       if (visited[j] === stamp) continue;
       visited[j] = stamp;
-      recJ(j, f);
+      recJ(j, f, t);
       const n = otherNode(ctx, j, from);
       if (n < 0) continue;
       const port = otherPort(ctx, j, from);
@@ -153,11 +176,10 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
       if (!driven[n]) driven[n] = 1;
       switch (ctx.nodeRole[n]) {
         case "link": {
-          if (wA[n] === 0 && f > 0) touchedN.push(n);
-          if (f > wA[n]) wA[n] = f;
-          forwardSamePort(j, n, port, f);
+          recN(n, f, t);
+          forwardSamePort(j, n, port, f, t);
           const exit = port === "a" ? "b" : port === "b" ? "a" : null;
-          if (exit) pushList(jointsAt(ctx, n, exit), n, f, 0);
+          if (exit) pushList(jointsAt(ctx, n, exit), n, f, 0, t);
           break;
         }
         case "tension": {
@@ -165,58 +187,61 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
           // T = max(F, P + F/2) (shared/hardware/cables.ts); its joints carry T, the force passed on is F.
           if (port !== "a" && port !== "b") break;
           const p = pretension ? pretension[n] : Number.NaN;
-          const t = Number.isNaN(p) ? f : pullingTension(f, p);
-          recJ(j, t);
-          if (wA[n] === 0 && t > 0) touchedN.push(n);
-          if (t > wA[n]) wA[n] = t;
-          forwardSamePort(j, n, port, f);
+          const tt = Number.isNaN(p) ? f : pullingTension(f, p);
+          recJ(j, tt, t);
+          recN(n, tt, t);
+          forwardSamePort(j, n, port, f, t);
           const ends = jointsAt(ctx, n, port === "a" ? "b" : "a");
-          recList(ends, t);
-          pushList(ends, n, f, 0);
+          recList(ends, tt, t);
+          pushList(ends, n, f, 0, t);
           // Pulleys and fairleads on the run carry the two legs' resultant, and so does their mounting.
           for (const k of jointsAt(ctx, n, "run")) {
             const g = otherNode(ctx, k, n);
             if (g < 0 || ctx.nodeRole[g] !== "guide") continue;
             const guide = ENGINE[nodes[g].kind] as Extract<EngineInfo<unknown>, { role: "guide" }>;
-            const r = guideLoad(t, guide.turn(nodes[g].props) ?? 0);
-            recJ(k, r);
+            const r = guideLoad(tt, guide.turn(nodes[g].props) ?? 0);
+            const gt = t || own[g];
+            recJ(k, r, gt);
             if (!driven[g]) driven[g] = 1;
             const gp = ctx.ports[g];
-            if (gp) for (const q in gp) if (q !== "cable") recList(gp[q], r);
+            if (gp) for (const q in gp) if (q !== "cable") recList(gp[q], r, gt);
           }
           break;
         }
         case "crank": {
           if (port !== "in" && port !== "out") break; // a link on the pivot port: reacted there
-          forwardSamePort(j, n, port, f);
+          forwardSamePort(j, n, port, f, t);
           const [inArm, outArm] = arms(node);
           const fo = port === "in" ? f * ratio(inArm, outArm) : f * ratio(outArm, inArm);
           const crank = ENGINE[node.kind] as Extract<EngineInfo<unknown>, { role: "crank" }>;
-          recPivot(n, crank.pivotLoad(f, fo, node.props));
-          pushList(jointsAt(ctx, n, port === "in" ? "out" : "in"), n, fo, 0);
+          const ct = t || own[n];
+          recPivot(n, crank.pivotLoad(f, fo, node.props), ct);
+          pushList(jointsAt(ctx, n, port === "in" ? "out" : "in"), n, fo, 0, ct);
           break;
         }
         case "input": {
           if (port !== "attach") break;
           // Held by its pilot: the grip reacts F·attach/grip; the pivot carries both.
           const [g, a] = arms(node);
-          recPivot(n, f + f * ratio(a, g));
-          forwardSamePort(j, n, port, f);
+          recPivot(n, f + f * ratio(a, g), t || own[n]);
+          forwardSamePort(j, n, port, f, t);
           break;
         }
         case "horn": {
           if (port !== "attach") break;
-          forwardSamePort(j, n, port, f);
+          forwardSamePort(j, n, port, f, t);
           const horn = ENGINE[node.kind] as Extract<EngineInfo<unknown>, { role: "horn" }>;
           const m = f * horn.effectiveArm(node.props);
-          pushList(jointsAt(ctx, n, "surface"), n, f, m);
+          // The link force goes on unchanged to the horn's bolts; the moment carries the horn's own arm.
+          pushList(jointsAt(ctx, n, "surface"), n, f, m, t || own[n]);
           break;
         }
         case "surface": {
           reaches = true;
           if (wM[n] === 0 && moment > 0) touchedN.push(n);
           if (moment > wM[n]) wM[n] = moment;
-          recList(jointsAt(ctx, n, "hinge"), f);
+          if (t && moment > 0 && !wNT[n]) wNT[n] = t;
+          recList(jointsAt(ctx, n, "hinge"), f, t);
           break;
         }
         default:
@@ -224,28 +249,33 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
       }
     }
     inputs.push({ node: i, gripForce: fg, linkForce: fp, reachesSurface: reaches });
-    for (const [list, r] of listMax) for (const k of list) recJ(k, r);
+    for (const [list, r] of listMax) { const t = listTaint.get(list) ?? 0; for (const k of list) recJ(k, r, t); }
     listMax.clear();
+    listTaint.clear();
     forwarded.clear();
 
     // Combine this input's loads into the totals and clear the walk arrays.
     for (const j of touchedJ) {
       jointRadial[j] = sum ? jointRadial[j] + wJ[j] : Math.max(jointRadial[j], wJ[j]);
+      if (wJT[j] && !jointFrom[j]) jointFrom[j] = wJT[j];
       wJ[j] = 0;
+      wJT[j] = 0;
     }
     for (const n of touchedN) {
       if (wA[n] > 0) pushrodAxial[n] = sum ? pushrodAxial[n] + wA[n] : Math.max(pushrodAxial[n], wA[n]);
       if (wM[n] > 0) surfaceMoment[n] = sum ? surfaceMoment[n] + wM[n] : Math.max(surfaceMoment[n], wM[n]);
+      if (wNT[n] && !nodeFrom[n]) nodeFrom[n] = wNT[n];
       wA[n] = 0;
       wM[n] = 0;
+      wNT[n] = 0;
     }
     touchedJ.length = 0;
     touchedN.length = 0;
   }
-  return { pushrodAxial, jointRadial, surfaceMoment, driven, inputs };
+  return { pushrodAxial, jointRadial, surfaceMoment, driven, inputs, jointFrom, nodeFrom };
 
-  function forwardSamePort(via: number, n: number, port: string, f: number) {
+  function forwardSamePort(via: number, n: number, port: string, f: number, t: number) {
     const list = jointsAt(ctx, n, port);
-    if (list.length > 1) pushList(list, n, f, 0, via);
+    if (list.length > 1) pushList(list, n, f, 0, t, via);
   }
 }

@@ -12,6 +12,7 @@ import { MIN_PREVAILING_TORQUE, PREVAILING_SRC } from "../hardware/plates";
 import { type Ctx, jointLabel, jointsAt, nodeLabel, pushrodNodeOf } from "./context";
 import { boltDiameter } from "./allowables";
 import { finding, fmt, jointSubject, nodeSubject, num } from "./format";
+import { unenteredOf } from "./unentered";
 
 // Module-level aliases: read the tables once, not through re-export getters on every joint.
 const BOLTS = AN_BOLTS_BY_SIZE, THREADS = THREADS_BY_NAME, TORQUE = TORQUE_BY_THREAD, TUBES = TUBE_MATERIALS_BY_NAME, SRC = SRC_;
@@ -63,7 +64,8 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         else {
           const p = pushrodNodeOf(ctx, j);
           pn = p >= 0 ? nodes[p] : null;
-          if (pn && pn.kind === "pushrod") family = TUBES[pn.props.material]?.family ?? null;
+          // A starting-value material is no material: the longer (aluminium) rule applies until it is entered.
+          if (pn && pn.kind === "pushrod" && !unenteredOf(pn, ["material"]).length) family = TUBES[pn.props.material]?.family ?? null;
           if (!family) family = "aluminium";
         }
         const k = engagementMultiple(family);
@@ -269,7 +271,7 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
 /** The internal thread a rod end screws into, in words: its own (female), the pushrod's, or unknown (taken as aluminium). */
 function internalThread(shank: string, pn: Ctx["nodes"][number] | null): string {
   if (shank === "female") return "the rod end's own (steel) internal thread";
-  if (pn && pn.kind === "pushrod" && TUBES[pn.props.material]?.family) return `the ${pn.props.material} pushrod's internal thread`;
+  if (pn && pn.kind === "pushrod" && !unenteredOf(pn, ["material"]).length && TUBES[pn.props.material]?.family) return `the ${pn.props.material} pushrod's internal thread`;
   return "an internal thread of unknown material (taken as aluminium, the longer rule)";
 }
 

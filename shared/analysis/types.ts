@@ -31,13 +31,16 @@ export type PushrodResult = {
   columnAllowable: number; // lbf, Euler or Johnson
   columnMode: "euler" | "johnson";
   tensionAllowable: number; // lbf
-  marginCompression: number;
-  marginTension: number;
+  /** Null when not checked: see `todo`. */
+  marginCompression: number | null;
+  marginTension: number | null;
   /** Added fields (engine v1): the section and slenderness the allowables were computed from. */
   area: number; // in²
   slenderness: number; // KL/r, K = 1
   /** True when no input drives this pushrod (its loads are 0, not computed). */
   driven: boolean;
+  /** What to enter before its margins are computed (its tube, or a part its load passes through, still at starting values); null when checked. Engine v2.1. */
+  todo: string | null;
 };
 
 export type JointResult = {

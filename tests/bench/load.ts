@@ -16,12 +16,14 @@
  * (signed-in GET graph ≥ 60 % of bare, PUT with analysis ≥ 40 %), with its p50 and p95 latency; the figures
  * go to tests/artifacts/bench-load.json (the server's own output to tests/artifacts/bench-load-server.log). A miss sets exit code 1. The load generator runs on the same 2
  * cores as the server, so absolute figures are this machine's; the ratios are what to compare, and beside them
- * the server process's CPU time per request (from /proc), which work of other processes moves least.
+ * the server process's CPU time per request (from /proc), which work of other processes moves least, with its
+ * kernel share, the CPU all PostgreSQL processes spent per request and the load generator's own (the whole
+ * machine's budget for one request).
  * `LW_BENCH_ONLY=text` measures only the routes whose names contain it. `LW_SKIP_BUILD=1` reuses the build in LW_BENCH_DIST (default .next-bench). `LW_BENCH_PROFILE=dir` starts the
  * server with `--cpu-prof --cpu-prof-dir=dir` (one .cpuprofile per process, written when it stops).
  */
 import { spawn, spawnSync } from "node:child_process";
-import { existsSync, mkdirSync, openSync, readFileSync, writeFileSync } from "node:fs";
+import { existsSync, mkdirSync, openSync, readFileSync, readdirSync, writeFileSync } from "node:fs";
 import path from "node:path";
 import autocannon from "autocannon";
 import knex from "knex";
@@ -57,7 +59,7 @@ const pct = (xs: number[], p: number) => { const s = [...xs].sort((a, b) => a - 
 const signIn = (email: string, password: string) => signInAt(APP, email, password);
 
 type Route = { name: string; method: "GET" | "PUT"; requests: autocannon.Request[] };
-type Result = { name: string; requests: number; rps: number; cpuMsPerRequest: number; p50: number; p95: number; p99: number; non2xx: number; errors: number; timeouts: number; statuses: Record<string, number> };
+type Result = { name: string; requests: number; rps: number; cpuMsPerRequest: number; sysMsPerRequest: number; pgMsPerRequest: number; loadGenMsPerRequest: number; p50: number; p95: number; p99: number; non2xx: number; errors: number; timeouts: number; statuses: Record<string, number> };
 
 /**
  * CPU time the server process has used (user + system, ms) from /proc: divided by the requests of a run it is
@@ -67,11 +69,30 @@ function cpuMs(pid: number) {
   const f = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1].split(" ");
   return ((Number(f[11]) + Number(f[12])) * 1000) / CLK_TCK;
 }
+/** The kernel's share of cpuMs (socket writes and reads). */
+function sysMs(pid: number) {
+  const f = readFileSync(`/proc/${pid}/stat`, "utf8").split(") ")[1].split(" ");
+  return (Number(f[12]) * 1000) / CLK_TCK;
+}
+/** CPU of every PostgreSQL process on the machine (ms): the database's share of each request (nothing else runs PostgreSQL during a bench). */
+function pgCpuMs() {
+  let t = 0;
+  for (const d of readdirSync("/proc")) {
+    if (!/^\d+$/.test(d)) continue;
+    try {
+      const st = readFileSync(`/proc/${d}/stat`, "utf8");
+      if (!st.includes("(postgres)")) continue;
+      const f = st.split(") ")[1].split(" ");
+      t += ((Number(f[11]) + Number(f[12])) * 1000) / CLK_TCK;
+    } catch { /* gone */ }
+  }
+  return t;
+}
 const CLK_TCK = Number(spawnSync("getconf", ["CLK_TCK"], { encoding: "utf8" }).stdout.trim()) || 100;
 
 /** One autocannon run of `seconds` on a route; latencies of every answer are kept (bounded by the duration). */
 async function load(route: Route, seconds: number, cookie: string, serverPid: number): Promise<Result> {
-  const cpu0 = cpuMs(serverPid);
+  const cpu0 = cpuMs(serverPid); const sys0 = sysMs(serverPid); const pg0 = pgCpuMs(); const me0 = process.cpuUsage();
   const latencies: number[] = [];
   const statuses: Record<string, number> = {};
   let instance!: autocannon.Instance;
@@ -88,11 +109,16 @@ async function load(route: Route, seconds: number, cookie: string, serverPid: nu
   instance.on("response", (_client, status, _bytes, ms) => { latencies.push(ms); statuses[status] = (statuses[status] ?? 0) + 1; });
   const r = await done;
   const cpu = cpuMs(serverPid) - cpu0;
+  const n = Math.max(1, r.requests.total);
+  const me = process.cpuUsage(me0);
   return {
     name: route.name,
     requests: r.requests.total,
     rps: r.requests.total / seconds,
-    cpuMsPerRequest: cpu / Math.max(1, r.requests.total),
+    cpuMsPerRequest: cpu / n,
+    sysMsPerRequest: (sysMs(serverPid) - sys0) / n,
+    pgMsPerRequest: (pgCpuMs() - pg0) / n,
+    loadGenMsPerRequest: (me.user + me.system) / 1000 / n,
     p50: pct(latencies, 0.5),
     p95: pct(latencies, 0.95),
     p99: pct(latencies, 0.99),
@@ -189,7 +215,7 @@ export async function run() {
       if (route.method === "PUT") await refreshTargets();
       const r = await load(route, SECONDS, cookie, server.pid!);
       if (route.method === "PUT") await refreshTargets();
-      console.log(`  ${r.name}: ${r.rps.toFixed(0)} requests/s, server CPU ${r.cpuMsPerRequest.toFixed(2)} ms a request, p95 ${r.p95.toFixed(0)} ms, answers ${JSON.stringify(r.statuses)}${r.errors ? `, ${r.errors} errors` : ""}`);
+      console.log(`  ${r.name}: ${r.rps.toFixed(0)} requests/s, server CPU ${r.cpuMsPerRequest.toFixed(2)} ms a request (kernel ${r.sysMsPerRequest.toFixed(2)}), PostgreSQL ${r.pgMsPerRequest.toFixed(2)} ms, load generator ${r.loadGenMsPerRequest.toFixed(2)} ms, p95 ${r.p95.toFixed(0)} ms, answers ${JSON.stringify(r.statuses)}${r.errors ? `, ${r.errors} errors` : ""}`);
       return r;
     };
     const bares: Result[] = [await run1(bareRoute, true)];
@@ -207,6 +233,7 @@ export async function run() {
       "÷ bare": "100 %",
       target: "reported",
       "server CPU ms/request": bares.map((b) => b.cpuMsPerRequest.toFixed(2)).join(" / "),
+      "PostgreSQL CPU ms": bares.map((b) => b.pgMsPerRequest.toFixed(2)).join(" / "),
       "p50 ms": bares.map((b) => b.p50.toFixed(1)).join(" / "),
       "p95 ms": bares.map((b) => b.p95.toFixed(1)).join(" / "),
       holds: ok ? "" : "NO (non-2xx or errors)",
@@ -222,6 +249,7 @@ export async function run() {
         "÷ bare": `${(ratio * 100).toFixed(0)} %`,
         target: t === undefined ? "reported" : `≥ ${(t * 100).toFixed(0)} %`,
         "server CPU ms/request": r.cpuMsPerRequest.toFixed(2),
+        "PostgreSQL CPU ms": r.pgMsPerRequest.toFixed(2),
         "p50 ms": r.p50.toFixed(1),
         "p95 ms": r.p95.toFixed(1),
         holds: !clean ? "NO (non-2xx or errors)" : t === undefined ? "" : holds ? "yes" : "NO",

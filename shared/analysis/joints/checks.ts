@@ -14,6 +14,7 @@ import {
 import { SRC } from "../../hardware/sources";
 import { THREADS_BY_NAME, type ThreadName } from "../../hardware/threads";
 import { TUBE_MATERIALS_BY_NAME, type TubeMaterial } from "../../hardware/materials";
+import { enterTodo, unenteredOf } from "../unentered";
 import type { JointHardware, Member } from "../../linkage/schema";
 import type { AnalysisSettings, CheckId, JointCheck, JointRole, SourceTag, SpecialFactor } from "../types";
 import { type Ctx, nodeLabel } from "../context";
@@ -281,9 +282,10 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
     } else {
       const n = ctx.jFrom[j] >= 0 && ctx.nodeRole[ctx.jFrom[j]] === "link" ? ctx.jFrom[j] : ctx.jTo[j];
       const pn = n >= 0 ? ctx.nodes[n] : null;
-      const mat = pn && pn.kind === "pushrod" ? TUBES[pn.props.material] : undefined;
+      const starting = pn ? unenteredOf(pn, ["material"]).length > 0 : false;
+      const mat = pn && pn.kind === "pushrod" && !starting ? TUBES[pn.props.material] : undefined;
       if (mat) { ftu = mat.ftu; body = mat; source = mat.source; }
-      else todo = "enter the pushrod's material";
+      else todo = starting ? enterTodo(pn!, ["material"]) : "enter the pushrod's material";
     }
     const allow = th && ftu !== null ? th.tensileStressArea * ftu : null;
     addCheck(acc, "threadTension", threadLabel(texts, re.thread), ff, allow, todo, threadBasis(texts, re.thread, body), todo ? THREAD_SRC : source);

@@ -13,6 +13,7 @@ import type { Finding } from "../types";
 import { type Ctx, jointsAt, nodeLabel } from "../context";
 import type { Loads } from "../loads";
 import { finding, fmt, jointSubject, linkageSubject, nodeSubject, num } from "../format";
+import { unenteredLoadKeys, unenteredOf } from "../unentered";
 
 const STOP_SRC = { kind: "published", text: "14 CFR 23.675: stops positively limit travel and take the system loads" } as const;
 const HORN_SRC = { kind: "published", text: "bolt-group statics: share F/n plus the couple 6M/(s·n·(n+1)) on the outer bolt" } as const;
@@ -21,6 +22,17 @@ export type PathInfo = {
   /** Per joint: what to enter before its load is known (null when known). */
   loadTodo: (string | null)[];
 };
+
+/**
+ * 1 + the part whose starting values a load computed from node n's arms and the loads at its ports would rest
+ * on (loads.ts `jointFrom`): n itself, or a part upstream of one of its joints; 0 when none.
+ */
+function taintAt(ctx: Ctx, loads: Loads, n: number): number {
+  if (unenteredLoadKeys(ctx.nodes[n]).length) return n + 1;
+  const m = ctx.ports[n];
+  if (m) for (const port in m) for (const k of m[port]) if (ctx.roles[k] !== "stop" && loads.jointFrom[k]) return loads.jointFrom[k];
+  return 0;
+}
 
 /** Largest radial load on the joints at a port of node n, stops left out. */
 function portForce(ctx: Ctx, loads: Loads, n: number, port: string): number {
@@ -89,7 +101,9 @@ function stopLoad(ctx: Ctx, loads: Loads, j: number, loadTodo: (string | null)[]
     return;
   }
   loads.jointRadial[j] = m / arm;
-  if (part.kind === "controlSurface") {
+  loads.jointFrom[j] = taintAt(ctx, loads, x);
+  // Where the stop or the surface's travel is a starting value, the comparison is left to the motion and unentered notes.
+  if (part.kind === "controlSurface" && !unenteredOf(stop, ["stopAt"]).length && !unenteredOf(part, ["travelUp", "travelDown"]).length) {
     const travel = Math.max(part.props.travelUp, part.props.travelDown);
     if (Math.abs(stop.props.stopAt) > travel)
       out.push(finding("stop-beyond-travel", "caution", nodeSubject(stop.id),
@@ -122,4 +136,5 @@ function hornBolts(ctx: Ctx, loads: Loads, j: number, loadTodo: (string | null)[
   }
   const couple = (6 * m) / (s! * n * (n + 1));
   loads.jointRadial[j] = force / n + couple;
+  loads.jointFrom[j] = taintAt(ctx, loads, h);
 }

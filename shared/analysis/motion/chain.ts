@@ -8,6 +8,7 @@
 import { ENGINE } from "../../linkage/kinds";
 import type { LinkageGeometry, PartGeometry } from "../../linkage/geometry";
 import { type Ctx, jointsAt, nodeLabel, otherNode, otherPort } from "../context";
+import { enterTodo, LOAD_KEYS, unenteredOf } from "../unentered";
 
 const RAD = Math.PI / 180;
 
@@ -176,10 +177,30 @@ export function buildChains(ctx: Ctx, geo: LinkageGeometry): ChainsResult {
       }
       exitArm = outArm;
     }
+    const starting = broken ? [] : startingValues(ctx, chain);
     if (broken) notChecked.push(`Motion of the run from ${name}: ${broken}.`);
-    else if (missing.length) notChecked.push(`Motion of the run from ${name}: enter ${missing.join("; ")}.`);
+    else if (missing.length || starting.length) notChecked.push(`Motion of the run from ${name}: ${[...missing.map((m) => `enter ${m}`), ...starting].join("; ")}.`);
     else if (travelBack + travelForward <= 0) notChecked.push(`Motion of the run from ${name}: enter its travel.`);
     else chains.push(chain);
   }
   return { chains, notChecked };
+}
+
+/** Values the sweep of a chain would take from starting values (shared/analysis/unentered.ts): what to enter, one line per part. */
+const INPUT_TRAVEL = ["travelFwd", "travelAft", "travel"] as const;
+function startingValues(ctx: Ctx, chain: Chain): string[] {
+  const out: string[] = [];
+  const add = (n: number, keys: readonly string[]) => {
+    const u = unenteredOf(ctx.nodes[n], keys);
+    if (u.length) out.push(enterTodo(ctx.nodes[n], u));
+  };
+  chain.parts.forEach((n, i) => add(n, i === 0 ? [...(LOAD_KEYS[ctx.nodes[n].kind] ?? []), ...INPUT_TRAVEL] : (LOAD_KEYS[ctx.nodes[n].kind] ?? [])));
+  if (chain.surface >= 0) add(chain.surface, ["travelUp", "travelDown"]);
+  // A travel stop on a part of the chain sets where its travel ends.
+  const onChain = new Set([...chain.parts, chain.surface]);
+  for (let n = 0; n < ctx.nodes.length; n++) {
+    if (ctx.nodeRole[n] !== "stop") continue;
+    if (jointsAt(ctx, n, "contact").some((j) => onChain.has(otherNode(ctx, j, n)))) add(n, ["stopAt"]);
+  }
+  return out;
 }
