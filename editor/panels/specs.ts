@@ -72,7 +72,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     optional: "nut",
     fields: [
       { type: "enum", path: "nut.type", label: "Type and locking", options: opts(NUT_TYPES, NUT_NAMES), required: true },
-      { type: "enum", path: "nut.pattern", label: "Pattern", options: [["tension", "tension (full)"], ["shear", "shear (thin)"]], required: true, default: "tension" },
+      { type: "enum", path: "nut.pattern", label: "Pattern", options: [["tension", "tension (full)"], ["shear", "shear (thin)"]], hint: "unset, the torque is not judged against a range" },
       { type: "bool", path: "nut.cotterPinNew", label: "New cotter pin" },
       ...NUT_EXTRA_FIELDS,
     ],
@@ -99,7 +99,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
   {
     title: "Fit, torque & marks",
     fields: [
-      { type: "enum", path: "fit", label: "Bolt fit", options: [["clamped", "clamped on the race"], ["freeToRotate", "free to rotate"]], required: true, default: "clamped" },
+      { type: "enum", path: "fit", label: "Bolt fit", options: [["clamped", "clamped on the race"], ["freeToRotate", "free to rotate"]], hint: "unset at a rod end, whether the bolt turns in the ball is not checked" },
       { type: "enum", path: "shear", label: "Shear", options: [["single", "single"], ["double", "double"]], hint: "unset, the fastener's shear is not checked" },
       { type: "enum", path: "bearing", label: "Turns on", options: [["rodEnd", "rod end"], ["ballBearing", "ball bearing"], ["plainBushing", "plain bushing"], ["clevisPin", "clevis pin"], ["none", "nothing (fixed)"]] },
       { type: "number", path: "torque", label: "Applied torque", q: "torque", hint: "including the nut's drag" },

@@ -93,6 +93,10 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         out.push(finding("bolt-turns-in-ball", "hazard", jointSubject(jt.id),
           `The bolt at joint ${jointLabel(ctx, j)} is set loose so it turns in the rod-end ball. Clamp the ball's inner race tight between the fitting and washers so the bearing does the moving; a bolt turning in the ball wears the bore and can loosen the nut.`,
           SRC.boltClamped));
+      } else if (hw.fit === undefined && hw.bolt) {
+        out.push(finding("bolt-fit-unrecorded", "caution", jointSubject(jt.id),
+          `Not checked whether the bolt at joint ${jointLabel(ctx, j)} turns in the rod-end ball: its fit is not recorded. Record "clamped on the race" once the ball's inner race is clamped tight between the fitting and washers, so the bearing does the moving; a bolt turning in the ball wears the bore and can loosen the nut.`,
+          SRC.boltClamped));
       }
 
       // Rule 4: retaining washer on a single-shear rod end.
@@ -216,16 +220,31 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       } else if (row) {
         const trow = TORQUE[row.thread];
         if (trow) {
-          const range = nut.pattern === "shear" ? trow.shear : trow.tension;
+          // Pattern unrecorded: the two ranges differ (a thin nut takes about 60 %), so only a torque over both
+          // ceilings is judged; anything else asks for the pattern.
+          const pattern = nut.pattern;
+          const range = pattern === "shear" ? trow.shear : trow.tension;
           const source = trow.source;
           const tq = hw.torque;
           const selfLocking = nut.type === "selfLockingMetal" || nut.type === "selfLockingInsert";
           const drag = selfLocking ? nut.dragTorque : 0;
-          const ceiling = nut.pattern === "shear" ? trow.ceiling.shear : trow.ceiling.tension;
-          const pat = nut.pattern ?? "tension";
+          const ceiling = pattern === "shear" ? trow.ceiling.shear : trow.ceiling.tension;
+          const pat = pattern ?? "tension";
           const lo = range.min + (drag ?? 0), hi = range.max + (drag ?? 0);
           const plusDrag = selfLocking ? (drag === undefined ? " plus the nut's drag torque" : ` plus the measured ${fmt(drag, 1)} in·lbf drag`) : "";
-          if (tq === undefined) {
+          if (pattern === undefined) {
+            const both = `${fmt(trow.tension.min, 0)}–${fmt(trow.tension.max, 0)} in·lbf for a ${row.thread} tension nut, ${fmt(trow.shear.min, 0)}–${fmt(trow.shear.max, 0)} in·lbf for a shear (thin) nut${plusDrag}`;
+            if (tq !== undefined && tq > Math.max(trow.ceiling.tension, trow.ceiling.shear))
+              out.push(finding("torque-over-maximum", "hazard", jointSubject(jt.id),
+                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(Math.max(trow.ceiling.tension, trow.ceiling.shear), 0)} in·lbf maximum allowable for a ${row.thread} nut of either pattern. The bolt may have yielded: replace the bolt and the nut, and torque the new ones within the table (${both}).`,
+                SRC.torqueCeiling, [num("applied torque", tq, "in·lbf"), num("maximum allowable", Math.max(trow.ceiling.tension, trow.ceiling.shear), "in·lbf")]));
+            else
+              out.push(finding("nut-pattern-unrecorded", tq === undefined ? "advisory" : "caution", jointSubject(jt.id),
+                tq === undefined
+                  ? `Record the torque applied at joint ${jointLabel(ctx, j)} and whether its nut is a tension or a shear (thin) nut: ${both}.`
+                  : `Not checked: the nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, but whether it is a tension or a shear (thin) nut is not recorded, and the ranges differ: ${both}. Record the nut's pattern on the joint's card.`,
+                source, tq === undefined ? [] : [num("applied torque", tq, "in·lbf")]));
+          } else if (tq === undefined) {
             out.push(finding("torque-unrecorded", "advisory", jointSubject(jt.id),
               `Record the torque applied at joint ${jointLabel(ctx, j)}: ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${pat} nut${plusDrag}.`, source));
           } else if (tq > ceiling) {

@@ -24,7 +24,7 @@ export const TUBE_MATERIALS = ["4130N", "6061-T6", "2024-T3"] as const;
  * tests/shared/linkage/format.test.ts checks the two agree). A new object each time.
  */
 export function defaultHardware(): JointHardware {
-  return { fit: "clamped", torqueStripe: false, photos: [], note: "" };
+  return { torqueStripe: false, photos: [], note: "" };
 }
 
 export function emptyGraph(name = "", system: ControlSystem = "other"): LinkageGraph {

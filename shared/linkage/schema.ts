@@ -83,8 +83,8 @@ export const boltSchema = z.object({
 export const NUT_TYPES = ["selfLockingMetal", "selfLockingInsert", "castellatedCotter", "plainSafetyWire", "plain", "none"] as const;
 export const nutSchema = z.object({
   type: z.enum(NUT_TYPES),
-  /** Tension or shear (thin) nut, for the torque table. */
-  pattern: z.enum(["tension", "shear"]).default("tension"),
+  /** Tension or shear (thin) nut, for the torque table: no default — unentered, the torque is not judged against a range. */
+  pattern: z.enum(["tension", "shear"]).optional(),
   cotterPinNew: z.boolean().optional(),
   ...nutExtraFields,
 });
@@ -102,8 +102,8 @@ export const hardwareSchema = z.object({
   nut: nutSchema.optional(),
   washerUnderHead: washer.optional(),
   washerUnderNut: washer.optional(),
-  /** Bolt clamped tight on the inner race, or set loose so it can turn. */
-  fit: z.enum(["clamped", "freeToRotate"]).default("clamped"),
+  /** Bolt clamped tight on the inner race, or set loose so it can turn: no default — unentered at a rod end, the check says so. */
+  fit: z.enum(["clamped", "freeToRotate"]).optional(),
   /** One shear plane or two: no default — unentered, the fastener's shear reads "not checked". */
   shear: z.enum(["single", "double"]).optional(),
   /** For pivots: what the part turns on. */

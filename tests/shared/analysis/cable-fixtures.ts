@@ -62,3 +62,18 @@ export function withProps(g: LinkageGraph, id: string, patch: Record<string, unk
   for (const [k, v] of Object.entries(patch)) if (v === undefined) delete (n.props as Record<string, unknown>)[k];
   return copy;
 }
+
+/** A roll wheel (D = 12 in) with a 1.5 in drum driving an aileron sector through two cables. */
+export function wheelRun(props: Record<string, unknown> = {}): LinkageGraph {
+  return graph(
+    [{ id: "wheel", kind: "controlWheel", label: "Wheel", position: { x: 0, y: 0 }, props: { axis: "roll", diameter: 12, columnArm: 20, attachArm: 1.5, ...props } },
+      mount("m"), cable("l", RIGGED), cable("r"), horn("horn", 3), surface("ail")],
+    [
+      j("wp", ["wheel", "pivot"], ["m", "mount"], goodBallPivot()),
+      j("l1", ["wheel", "attach"], ["l", "a"], goodClamp()), j("r1", ["wheel", "attach"], ["r", "a"], goodClamp()),
+      j("l2", ["l", "b"], ["horn", "attach"], goodClamp()), j("r2", ["r", "b"], ["horn", "attach"], goodClamp()),
+      j("hm", ["horn", "surface"], ["ail", "horn"], goodClamp()), j("hinge", ["ail", "hinge"], ["m", "mount"], goodBallPivot()),
+    ],
+    "roll",
+  );
+}

@@ -6,7 +6,7 @@ import { describe, expect, it } from "vitest";
 import { analyze } from "@/shared/analysis";
 import type { LinkageGraph } from "@/shared/linkage/schema";
 import { goodBallPivot, goodClamp, graph, horn, j, mount, pushrod, stick, surface, valid } from "./fixtures";
-import { cable, RIGGED, rudderCircuit, withProps } from "./cable-fixtures";
+import { cable, RIGGED, rudderCircuit, wheelRun, withProps } from "./cable-fixtures";
 
 const run = (g: LinkageGraph, s?: Parameters<typeof analyze>[1]) => analyze(valid(g), s);
 const codes = (g: LinkageGraph) => run(g).findings.map((f) => `${f.code}@${f.subject.id}`);
@@ -197,21 +197,6 @@ describe("rigging tension within the designer's range, with its temperature", ()
     expect(has(withProps(rudderCircuit(), "cableL", { riggingTemperature: 75 }), "rigging-temperature-differs")).toBe(false);
   });
 });
-
-/** A roll wheel (D = 12 in) with a 1.5 in drum driving an aileron sector through two cables. */
-function wheelRun(props: Record<string, unknown> = {}): LinkageGraph {
-  return graph(
-    [{ id: "wheel", kind: "controlWheel", label: "Wheel", position: { x: 0, y: 0 }, props: { axis: "roll", diameter: 12, columnArm: 20, attachArm: 1.5, ...props } },
-      mount("m"), cable("l", RIGGED), cable("r"), horn("horn", 3), surface("ail")],
-    [
-      j("wp", ["wheel", "pivot"], ["m", "mount"], goodBallPivot()),
-      j("l1", ["wheel", "attach"], ["l", "a"], goodClamp()), j("r1", ["wheel", "attach"], ["r", "a"], goodClamp()),
-      j("l2", ["l", "b"], ["horn", "attach"], goodClamp()), j("r2", ["r", "b"], ["horn", "attach"], goodClamp()),
-      j("hm", ["horn", "surface"], ["ail", "horn"], goodClamp()), j("hinge", ["ail", "hinge"], ["m", "mount"], goodBallPivot()),
-    ],
-    "roll",
-  );
-}
 
 describe("control wheel (14 CFR 23.397(b))", () => {
   it("puts in the roll couple 50 × D: 600 in·lbf on a 12 in wheel, 400 lbf on a 1.5 in drum", () => {

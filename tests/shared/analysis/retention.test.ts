@@ -79,6 +79,15 @@ describe("rule 3: bolt clamped in the ball; no self-locking nut on a bolt subjec
   });
   it("does not trip on a self-locking nut clamping a ball bearing's inner race (AC 43.13-1B 7-64d)", () => {
     expect(codes(goodRun(), "pivot")).toEqual([]);
+  });  // common practice, no source: an unrecorded fit is not taken as clamped.
+  it("says the fit is not checked when a rod end's bolt has no fit recorded", () => {
+    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, fit: undefined }));
+    expect(codes(g, "rodA")).toEqual(["bolt-fit-unrecorded"]);
+    expect(severityOf(g, "bolt-fit-unrecorded")).toBe("caution");
+  });
+  it("does not ask for the fit where it is recorded clamped, or where no rod end is", () => {
+    expect(codes(goodRun(), "rodA")).toEqual([]);
+    expect(codes(withHardware(goodRun(), "pivot", (h) => ({ ...h, fit: undefined })), "pivot")).toEqual([]);
   });
 });
 
@@ -155,6 +164,22 @@ describe("rule 6: torque within AC 43.13-1B table 7-1", () => {
   });
   it("asks for the torque when it is not recorded", () => {
     expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: undefined })), "rodA")).toEqual(["torque-unrecorded"]);
+  });  // Pattern not recorded: table 7-1 gives 1/4-28 tension 50–70, shear 30–40, maxima 100 and 60 in·lbf.
+  const noPattern = (t: number | undefined) => (h: JointHardware) => ({ ...h, nut: { type: "plainSafetyWire" as const }, torque: t });
+  it("does not take a nut of unrecorded pattern as a tension nut: 65 in·lbf is in range for one and over for the other", () => {
+    const g = withHardware(goodRun(), "rodA", noPattern(65));
+    expect(codes(g, "rodA")).toEqual(["nut-pattern-unrecorded"]);
+    expect(severityOf(g, "nut-pattern-unrecorded")).toBe("caution");
+    expect(analyze(valid(g)).findings.find((f) => f.code === "nut-pattern-unrecorded")!.message).toContain("50–70 in·lbf for a 1/4-28 tension nut, 30–40 in·lbf for a shear (thin) nut");
+  });
+  it("still calls a torque over both maxima a hazard (120 > 100 in·lbf)", () => {
+    expect(codes(withHardware(goodRun(), "rodA", noPattern(120)), "rodA")).toEqual(["torque-over-maximum"]);
+  });
+  it("asks for both torque and pattern when neither is recorded (advisory), and not at all once both are", () => {
+    const g = withHardware(goodRun(), "rodA", noPattern(undefined));
+    expect(codes(g, "rodA")).toEqual(["nut-pattern-unrecorded"]);
+    expect(severityOf(g, "nut-pattern-unrecorded")).toBe("advisory");
+    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, nut: { type: "plainSafetyWire" as const, pattern: "tension" as const }, torque: 60 })), "rodA")).toEqual([]);
   });
 });
 

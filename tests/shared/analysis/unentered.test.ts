@@ -11,7 +11,7 @@ import { demoPitchGeometry } from "@/shared/demo-geometry";
 import { defaultProps, ENGINE, NODE_KINDS, type NodeKind } from "@/shared/linkage/kinds";
 import { KIND_SCHEMAS } from "@/shared/linkage/kinds/schemas";
 import { graphSchema, type LinkageGraph } from "@/shared/linkage/schema";
-import { rudderCircuit, withProps } from "./cable-fixtures";
+import { rudderCircuit, wheelRun, withProps } from "./cable-fixtures";
 import { valid } from "./fixtures";
 
 /** The graph with part `id` marked as having `keys` unentered (through the schema, as a save would). */
@@ -198,5 +198,16 @@ describe("motion", () => {
     const r = analyze(mark(withGeometry(), "stop-stick", ["stopAt"]));
     expect(r.motion!.chains.length).toBe(0);
     expect(r.motion!.notChecked.join(" ")).toContain(`contact angle of "Stick stop"`);
+  });
+});
+
+describe("a wheel", () => {
+  // 14 CFR 23.397(b): the roll couple's minimum is 40 × D, D the wheel's diameter.
+  it("its diameter unentered: the roll couple is not judged against 40 × D", () => {
+    const g = wheelRun({ designCouple: 470 });
+    expect(codes(analyze(valid(g)))).toContain("wheel-couple-below-minimum@wheel");
+    const r = analyze(mark(g, "wheel", ["diameter"]));
+    expect(codes(r)).not.toContain("wheel-couple-below-minimum@wheel");
+    expect(codes(r)).toContain("values-unentered@wheel");
   });
 });
