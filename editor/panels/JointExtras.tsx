@@ -204,6 +204,9 @@ export function SuggestPart({ target, joint }: { target: RecordsTarget; joint: J
                   {data.bolts.length > 0 && (
                     <div>
                       <div className="text-[10px] font-semibold uppercase tracking-wide text-ink-soft">Bolts, best margin first</div>
+                      {!data.planesEntered && (
+                        <p className="text-ink-soft" data-testid="suggest-single-shear">Bolts are rated in single shear: this joint&apos;s shear planes are not entered.</p>
+                      )}
                       <ul className="divide-y divide-ink/5">
                         {data.bolts.map((s) => (
                           <SuggestionRow key={s.part.id} s={s} canPick={!readOnly} onPick={pick} />

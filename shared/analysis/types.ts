@@ -45,6 +45,8 @@ export type PushrodResult = {
 
 export type JointResult = {
   jointId: string;
+  /** False when the load rests on something not entered (see `todo`): radialLimit is then not the builder's. Engine v2.1; absent in older reports. */
+  loadKnown?: boolean;
   radialLimit: number; // lbf
   radialUltimate: number; // lbf, including the special factors in use
   rodEndRating: number | null; // lbf

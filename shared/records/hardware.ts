@@ -62,7 +62,8 @@ export function jointParts(j: Joint): [string, HardwareKind, string, string | nu
   const nut = hw.nut;
   if (nut && nut.type !== "none") {
     const th = boltThread(j) ?? "?";
-    out.push([`nut|${nut.type}|${nut.pattern}|${th}`, "nut", `${NUT_LABEL[nut.type] ?? nut.type} ${th} (${nut.pattern})`, null, 1]);
+    const pattern = nut.pattern ?? "pattern not recorded";
+    out.push([`nut|${nut.type}|${pattern}|${th}`, "nut", `${NUT_LABEL[nut.type] ?? nut.type} ${th} (${pattern})`, null, 1]);
     if (nut.type === "castellatedCotter") out.push([`cotterPin|${th}`, "cotterPin", `Cotter pin for ${th} castellated nut`, null, 1]);
   }
   const washers = [hw.washerUnderHead, hw.washerUnderNut].filter(Boolean) as { outsideDiameter: number; thickness?: number }[];

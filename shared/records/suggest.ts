@@ -25,6 +25,9 @@ export type SuggestResult = {
   /** Required ultimate load at the joint, lbf, from the analysis. */
   required: number | null;
   fit: { thread?: string; hand?: string; bore?: number };
+  /** Shear planes the bolts' strength is taken at: the joint's, or one when they are not entered (the lower strength). */
+  planes: 1 | 2;
+  planesEntered: boolean;
   rodEnds: Suggestion[];
   bolts: Suggestion[];
   /** Parts that fit but are too weak, or that carry the load but do not fit, with the reason. */
@@ -43,11 +46,13 @@ const byMargin = (a: Suggestion, b: Suggestion) => b.margin - a.margin || a.part
 export function suggestParts(joint: Joint, result: JointResult | null | undefined, library: Part[]): SuggestResult {
   const hw = joint.hardware;
   const re = hw.rodEnd;
-  const required = result && result.radialUltimate > 0 ? result.radialUltimate : null;
+  // A load that rests on values nobody entered (starting values, a stop's arm) is no requirement to rank parts by.
+  const required = result && result.loadKnown !== false && result.radialUltimate > 0 ? result.radialUltimate : null;
   const bore = re?.ballBore ?? (hw.bolt ? (hw.bolt.size === "custom" ? hw.bolt.diameter : AN_BOLTS_BY_SIZE[hw.bolt.size as AnBoltSize]?.diameter) : undefined);
   const fit = { thread: re?.thread, hand: re?.hand, bore };
-  const out: SuggestResult = { jointId: joint.id, required, fit, rodEnds: [], bolts: [], nearMisses: [] };
-  const planes: 1 | 2 = hw.shear === "single" ? 1 : 2;
+  // Shear planes not entered: a bolt is rated in single shear, the strength it has in either case.
+  const planes: 1 | 2 = hw.shear === "double" ? 2 : 1;
+  const out: SuggestResult = { jointId: joint.id, required, fit, planes, planesEntered: hw.shear !== undefined, rodEnds: [], bolts: [], nearMisses: [] };
 
   for (const part of library) {
     if (part.kind === "rodEnd" && re) {

@@ -34,6 +34,7 @@ export function jointResult(ctx: Ctx, j: number, loads: Loads, settings: Analysi
   const rodEndFactor = rodEnd?.factor ?? settings.fittingFactor;
   return {
     jointId: jt.id,
+    loadKnown: loadTodo === null,
     radialLimit,
     radialUltimate: radialLimit * settings.ultimateFactor * rodEndFactor,
     rodEndRating: hw?.rodEnd?.ratedUltimate ?? null,

@@ -48,6 +48,27 @@ describe("suggest a part", () => {
     expect(misses["F-bore"]).toBe("bore 0.3125 in, the joint needs 0.25 in");
   });
 
+  it("rates bolts in single shear where the joint's shear planes are not entered, and in double where they are", () => {
+    const result = { jointId: joint.id, radialUltimate: 2000 } as JointResult;
+    const unset = suggestParts({ ...joint, hardware: { ...joint.hardware, shear: undefined } }, result, LIBRARY);
+    expect(unset.planes).toBe(1);
+    expect(unset.planesEntered).toBe(false);
+    expect(unset.bolts.find((b) => b.part.partNumber === "AN4-st")!.capacity).toBeCloseTo(3681.6, 1); // single shear, as above
+    const dbl = suggestParts({ ...joint, hardware: { ...joint.hardware, shear: "double" } }, result, LIBRARY);
+    expect(dbl.planes).toBe(2);
+    expect(dbl.bolts.find((b) => b.part.partNumber === "AN4-st")!.capacity).toBeCloseTo(7363.1, 1); // two planes: twice 3681.55
+  });
+
+  it("ranks by no load where the joint's load rests on starting values", () => {
+    const g = { ...graph, nodes: graph.nodes.map((n) => (n.id === "stick" ? { ...n, unentered: ["gripArm"] } : n)) } as typeof graph;
+    const r = analyze(g).joints.find((j) => j.jointId === joint.id)!;
+    expect(r.loadKnown).toBe(false);
+    expect(r.radialUltimate).toBeGreaterThan(0); // computed from the starting value, so not to be used
+    const s = suggestParts(joint, r, LIBRARY);
+    expect(s.required).toBeNull();
+    expect(s.rodEnds.every((x) => x.margin === Infinity)).toBe(true);
+  });
+
   it("uses the engine's required load for the demo joint", () => {
     const report = analyze(graph);
     const r = report.joints.find((j) => j.jointId === joint.id)!;
