@@ -40,9 +40,10 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
       const d = THREADS_BY_NAME[re.thread]?.majorDiameter;
       add("engagement-length", `No witness hole: engaged thread length measured and recorded${d ? ` — at least ${fmt(d)} in in steel, ${fmt(2 * d)} in in aluminium` : ""}.`, SRC.engagement);
     }
-    if (hw.shear === "single") {
+    // Shear planes not entered: the inspector looks, since a single-shear rod end needs the washer.
+    if (hw.shear === "single" || hw.shear === undefined) {
       const bore = re.housingBore ?? re.ballDiameter;
-      add("retaining-washer", `Retaining washer fitted under the ${hw.freeSide === "nut" ? "nut" : "bolt head"} (the rod end's free side), larger across than the rod end's housing bore${bore ? ` (over ${fmt(bore)} in)` : ""}, so the eye cannot slide off if the ball comes out.`, SRC.retainingWasher);
+      add("retaining-washer", `${hw.shear === undefined ? "If the rod end is in single shear (not recorded): r" : "R"}etaining washer fitted under the ${hw.freeSide === "nut" ? "nut" : "bolt head"} (the rod end's free side), larger across than the rod end's housing bore${bore ? ` (over ${fmt(bore)} in)` : ""}, so the eye cannot slide off if the ball comes out.`, SRC.retainingWasher);
     }
   }
   const nut = hw.nut;

@@ -82,6 +82,15 @@ describe("suggest a part", () => {
 });
 
 describe("inspection checklist", () => {
+  it("asks for the retaining washer where a rod end's shear planes are not recorded, and not where it is in double shear", () => {
+    const g = demoPitchLinkage();
+    const id = "j-stick-fwd"; // a double-shear rod end in the demo
+    const codesAt = (graph: typeof g) => checklistFor(graph).filter((i) => i.jointId === id).map((i) => i.code);
+    expect(codesAt(g)).not.toContain("retaining-washer");
+    const unset = { ...g, joints: g.joints.map((j) => (j.id === id ? { ...j, hardware: { ...j.hardware, shear: undefined } } : j)) };
+    expect(codesAt(unset)).toContain("retaining-washer");
+    expect(checklistFor(unset).find((i) => i.jointId === id && i.code === "retaining-washer")!.text).toMatch(/^If the rod end is in single shear \(not recorded\)/);
+  });
   it("lists, for the demo pitch linkage, exactly the checks each joint's hardware calls for", () => {
     const items = checklistFor(demoPitchLinkage());
     const byJoint: Record<string, string[]> = {};
