@@ -61,7 +61,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     fields: [
       { type: "enum", path: "bolt.size", label: "Size", options: [...opts(AN_BOLTS), ["custom", "other"]], required: true },
       { type: "number", path: "bolt.diameter", label: "Shank diameter", q: "length", hint: "filled from the AN size" },
-      { type: "enum", path: "bolt.material", label: "Material", options: [["steel", "steel"], ["aluminium", "aluminium"]], required: true, default: "steel" },
+      { type: "enum", path: "bolt.material", label: "Material", options: [["steel", "steel"], ["aluminium", "aluminium"]], hint: "unset, an AN bolt counts as steel; another bolt's strength is not checked" },
       { type: "number", path: "bolt.grip", label: "Grip length", q: "length" },
       { type: "number", path: "bolt.stack", label: "Clamped stack", q: "length" },
       { type: "number", path: "bolt.threadsProtruding", label: "Threads past the nut", q: "count" },

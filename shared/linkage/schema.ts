@@ -71,7 +71,11 @@ export const boltSchema = z.object({
   size: z.enum([...AN_BOLTS, "custom"]),
   /** Shank diameter, in; filled from the AN size when not custom. */
   diameter: inches("bolt diameter").optional(),
-  material: z.enum(["steel", "aluminium"]).default("steel"),
+  /**
+   * No default. Unentered, an AN size is taken as steel — the AN bolt without a "DD" in its part number is alloy
+   * steel (from memory) — and a custom bolt's shear and bending are not checked.
+   */
+  material: z.enum(["steel", "aluminium"]).optional(),
   /** Grip length (unthreaded shank), in. */
   grip: inches("grip").optional(),
   /** Thickness of everything clamped between head and nut, in. */

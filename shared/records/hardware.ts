@@ -57,7 +57,8 @@ export function jointParts(j: Joint): [string, HardwareKind, string, string | nu
   const b = hw.bolt;
   if (b) {
     const name = b.size === "custom" ? `Bolt Ø${n3(b.diameter)} in` : `${b.size} bolt`;
-    out.push([`bolt|${b.size}|${n3(b.diameter)}|${n3(b.grip)}|${b.material}`, "bolt", `${name}, grip ${n3(b.grip)} in, ${b.material}`, null, 1]);
+    const material = b.material ?? (b.size === "custom" ? "material not recorded" : "steel");
+    out.push([`bolt|${b.size}|${n3(b.diameter)}|${n3(b.grip)}|${material}`, "bolt", `${name}, grip ${n3(b.grip)} in, ${material}`, null, 1]);
   }
   const nut = hw.nut;
   if (nut && nut.type !== "none") {

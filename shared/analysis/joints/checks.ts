@@ -163,6 +163,12 @@ function addCheck(a: Acc, id: CheckId, label: string, factor: number, allowable:
   };
 }
 
+const BOLT_MATERIAL_TODO = "enter the bolt's material (steel or aluminium)";
+/** A bolt's material: as entered; unentered, an AN size is steel (from memory: AN bolts without "DD" are alloy steel) and a custom bolt unknown. */
+function boltMaterial(b: NonNullable<JointHardware["bolt"]>): "steel" | "aluminium" | null {
+  return b.material ?? (b.size === "custom" ? null : "steel");
+}
+
 export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardware["bolt"]>) => number | null): JointCheck[] {
   const { ctx, j, settings, special } = c;
   const hw = ctx.joints[j].hardware;
@@ -192,10 +198,11 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
     const allow = pin?.shearStrength !== undefined && planes !== null ? SHEAR(pin.diameter, pin.shearStrength, planes) : null;
     addCheck(acc, "pinShear", shearLabel("clevis pin shear", planes), ff, allow, todo, pin ? `Fsu ${Math.round((pin.shearStrength ?? 0) / 1000)} ksi × πD²/4 × ${planes ?? "?"}` : "no pin recorded", PIN_SRC);
   } else if (hw.bolt) {
-    const alu = hw.bolt.material === "aluminium";
-    const allow = d === null || planes === null ? null : SHEAR(d, alu ? FSU_ALU : FSU_STEEL, planes);
-    addCheck(acc, "boltShear", shearLabel("bolt shear", planes), ff, allow, d === null ? "enter the bolt's shank diameter" : planes === null ? SHEAR_TODO : null,
-      `${alu ? "aluminium 37" : "steel 75"} ksi × πD²/4 × ${planes ?? "?"}`, alu ? SRC.aluminiumBolts : SRC.anBolts);
+    const mat = boltMaterial(hw.bolt);
+    const alu = mat === "aluminium";
+    const allow = d === null || planes === null || mat === null ? null : SHEAR(d, alu ? FSU_ALU : FSU_STEEL, planes);
+    addCheck(acc, "boltShear", shearLabel("bolt shear", planes), ff, allow, d === null ? "enter the bolt's shank diameter" : mat === null ? BOLT_MATERIAL_TODO : planes === null ? SHEAR_TODO : null,
+      mat === null ? `Fsu of the bolt's material × πD²/4 × ${planes ?? "?"}` : `${alu ? "aluminium 37" : "steel 75"} ksi × πD²/4 × ${planes ?? "?"}`, alu ? SRC.aluminiumBolts : SRC.anBolts);
   }
 
   const sides = holeSides(c, hw);
@@ -206,10 +213,11 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
   if ((hw.bolt || pin) && (hw.shear === "single" || (gaps !== undefined && gaps > 0))) {
     const members = sides.map((sd) => (sd === "from" ? mFrom : mTo));
     const ftu = pin ? (pin.shearStrength !== undefined ? pin.shearStrength / 0.6 : null) // Fsu ≈ 0.6 Ftu, from memory
-      : hw.bolt!.material === "aluminium" ? FTU_ALU : FTU_STEEL;
+      : boltMaterial(hw.bolt!) === null ? null : boltMaterial(hw.bolt!) === "aluminium" ? FTU_ALU : FTU_STEEL;
     const need: string[] = [];
     if (d === null) need.push("the shank diameter");
-    if (ftu === null) need.push("the pin's shear strength");
+    if (!pin && ftu === null) need.push("the bolt's material");
+    if (pin && ftu === null) need.push("the pin's shear strength");
     if (gaps === undefined) need.push("the washers and spacers between the member's face and the ball (0 if none)");
     let arm: number | null = null;
     let how = "";

@@ -214,3 +214,24 @@ describe("a bolt's shear planes left unentered are not assumed", () => {
     rel(c.allowable!, 2 * 3681.55, 1e-3);
   });
 });
+
+describe("a bolt's material is not assumed where the part number does not give it", () => {
+  const g = goodRun();
+  const patchBolt = (over: Record<string, unknown>) => (h: JointHardware) => ({ ...h, bolt: { ...h.bolt!, ...over } as NonNullable<JointHardware["bolt"]> });
+  it("an AN bolt with no material entered is steel: 75 ksi (AN bolts without DD are alloy steel, from memory)", () => {
+    const c = check(joint(withHardware(g, "rodA", patchBolt({ material: undefined })), "rodA"), "boltShear");
+    expect(c.status).toBe("computed");
+    rel(c.allowable!, 2 * 3681.55, 1e-3);
+  });
+  it("a custom bolt with no material entered is not checked, and says what to enter", () => {
+    const c = check(joint(withHardware(g, "rodA", patchBolt({ size: "custom", diameter: 0.25, material: undefined })), "rodA"), "boltShear");
+    expect(c.status).toBe("notChecked");
+    expect(c.allowable).toBeNull();
+    expect(c.todo).toBe("enter the bolt's material (steel or aluminium)");
+  });
+  it("a custom bolt with its material entered is checked", () => {
+    const c = check(joint(withHardware(g, "rodA", patchBolt({ size: "custom", diameter: 0.25, material: "aluminium" })), "rodA"), "boltShear");
+    expect(c.status).toBe("computed");
+    expect(c.allowable!).toBeLessThan(2 * 3681.55 * 0.6); // aluminium 37 ksi, not steel 75
+  });
+});
