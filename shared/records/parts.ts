@@ -39,7 +39,8 @@ export const boltSpec = z.object({
 export const nutSpec = z.object({
   type: z.enum(NUT_TYPES.filter((t) => t !== "none") as [string, ...string[]], { error: `type must be one of ${NUT_TYPES.filter((t) => t !== "none").join(", ")}` }),
   thread,
-  pattern: z.enum(["tension", "shear"], { error: "pattern must be tension or shear" }).default("tension"),
+  // No default: a nut recorded without its pattern would fill a joint with a pattern nobody chose.
+  pattern: z.enum(["tension", "shear"], { error: "pattern must be tension or shear (a thin nut)" }),
 });
 export const washerSpec = z.object({
   insideDiameter: inches("inside diameter"),

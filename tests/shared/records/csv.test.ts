@@ -94,3 +94,15 @@ describe("parts CSV import", () => {
     expect(round(typed)).toEqual(typed); // what was typed comes back exactly, apostrophes and all
   });
 });
+
+describe("a library nut's pattern", () => {
+  // A nut filled into a joint from the library carries its pattern to the torque check: none is assumed.
+  it("is required: a nut without it is refused with what to enter, and accepted with it", async () => {
+    const { partInput } = await import("@/shared/records/parts");
+    const nut = (spec: Record<string, unknown>) => partInput.safeParse({ kind: "nut", partNumber: "N-1", description: "", spec: { type: "selfLockingMetal", thread: "1/4-28", ...spec } });
+    const r = nut({});
+    expect(r.success).toBe(false);
+    expect(r.error!.issues.map((i) => i.message)).toContain("pattern must be tension or shear (a thin nut)");
+    expect(nut({ pattern: "shear" }).success).toBe(true);
+  });
+});
