@@ -7,6 +7,7 @@
  */
 import type { LinkageGraph } from "../linkage/schema";
 import { endName, indexById, jointName, partName } from "../linkage/names";
+import { valueWords } from "../analysis/unentered";
 
 export type FieldChange = { path: string; before: unknown; after: unknown };
 /** A part (with its kind and typed label) or a joint, and its name as shown. */
@@ -66,7 +67,9 @@ export function diffGraphs(a: GraphPart, b: GraphPart): GraphDiff {
   for (const n of b.nodes) {
     const old = aNodes.get(n.id);
     if (!old) continue;
-    const fields = diffFields({ kind: old.kind, label: old.label, props: old.props }, { kind: n.kind, label: n.label, props: n.props });
+    // Starting values in words ("grip arm and attach arm"), so confirming them shows as a change a reviewer can read.
+    const starting = (x: typeof n) => (x.unentered?.length ? valueWords(x.unentered) : undefined);
+    const fields = diffFields({ kind: old.kind, label: old.label, props: old.props, "starting values": starting(old) }, { kind: n.kind, label: n.label, props: n.props, "starting values": starting(n) });
     if (fields.length) nodes.changed.push({ ...part(n), fields });
     if (old.position.x !== n.position.x || old.position.y !== n.position.y) nodes.moved++;
   }

@@ -44,13 +44,22 @@ export function subjectMaterial(graph: LinkageGraph, subject: Subject): unknown 
   }
   if (subject.type === "node") {
     const n = graph.nodes.find((x) => x.id === subject.id);
-    return n ? { kind: n.kind, props: n.props } : null;
+    return n ? nodeMaterial(n) : null;
   }
   // The linkage as a whole: its parts and how they are joined, with every joint's hardware.
   return {
-    nodes: graph.nodes.map((n) => ({ id: n.id, kind: n.kind, props: n.props })).sort((a, b) => a.id.localeCompare(b.id)),
+    nodes: graph.nodes.map((n) => ({ id: n.id, ...nodeMaterial(n) })).sort((a, b) => a.id.localeCompare(b.id)),
     joints: graph.joints.map((j) => ({ id: j.id, material: subjectMaterial(graph, { type: "joint", id: j.id }) })).sort((a, b) => a.id.localeCompare(b.id)),
   };
+}
+
+/**
+ * A part as signed: its kind, its values and which of them are still starting values (confirming one changes what
+ * the check says of the run, so a sign-off given before it is stale). Absent `unentered` adds nothing, so
+ * revisions from before it existed keep their fingerprints.
+ */
+function nodeMaterial(n: LinkageGraph["nodes"][number]) {
+  return n.unentered?.length ? { kind: n.kind, props: n.props, unentered: [...n.unentered].sort() } : { kind: n.kind, props: n.props };
 }
 
 /** The fingerprint, or null when the subject is not in this graph. */

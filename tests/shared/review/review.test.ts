@@ -118,3 +118,22 @@ describe("diffGraphs names without comparing names", () => {
     expect(d.joints.changed).toEqual([]);
   });
 });
+
+describe("starting values in review", () => {
+  const marked = (): LinkageGraph => ({ ...demoPitchLinkage(), nodes: demoPitchLinkage().nodes.map((n) => (n.id === "stick" ? { ...n, unentered: ["gripArm", "attachArm"] } : n)) } as LinkageGraph);
+  it("confirming a starting value changes the part's and the linkage's fingerprint (a sign-off before it is stale)", () => {
+    const before = marked();
+    const after = demoPitchLinkage();
+    expect(fingerprint(before, { type: "node", id: "stick" })).not.toBe(fingerprint(after, { type: "node", id: "stick" }));
+    expect(fingerprint(before, { type: "linkage", id: "x" })).not.toBe(fingerprint(after, { type: "linkage", id: "x" }));
+    // Another part's fingerprint is untouched, and a graph without the field keeps its fingerprint (old revisions).
+    expect(fingerprint(before, { type: "node", id: "bellcrank" })).toBe(fingerprint(after, { type: "node", id: "bellcrank" }));
+  });
+  it("the diff shows the confirmation in words", () => {
+    const d = diffGraphs(marked(), demoPitchLinkage());
+    const stick = d.nodes.changed.find((c) => c.id === "stick")!;
+    expect(stick.fields).toEqual([{ path: "starting values", before: "grip arm and attach arm", after: undefined }]);
+    expect(d.same).toBe(false);
+    expect(diffGraphs(demoPitchLinkage(), demoPitchLinkage()).same).toBe(true);
+  });
+});
