@@ -71,6 +71,9 @@ export function NodeInspector({ id }: { id: string }) {
     return node ? { label: node.label, props: node.props } : null;
   }, [id, epoch, unitSystem]);
   const sections = useMemo(() => (kind ? nodeSections(kind) : []), [kind]);
+  // The part's starting values (shared/analysis/unentered.ts), as the form's field paths.
+  const unenteredKey = useEditorValue((s) => s.nodes.find((n) => n.id === id)?.unentered?.join(",") ?? "");
+  const marked = useMemo(() => new Set(unenteredKey ? unenteredKey.split(",").map((k) => `props.${k}`) : []), [unenteredKey]);
   const label = useEditorValue((s) => {
     const n = s.nodes.find((x) => x.id === id);
     return n ? partName(n) : "";
@@ -84,6 +87,20 @@ export function NodeInspector({ id }: { id: string }) {
       </h3>
       <SubjectFindings subjectKey={`node:${id}`} />
       <ReturnCableOffer />
+      {marked.size > 0 && (
+        <div data-testid="starting-values" className="rounded border border-caution/30 bg-caution/10 px-2 py-1 text-[11px] text-ink">
+          <p>
+            {marked.size === 1 ? "One value is" : `${marked.size} values are`} still the starting value{marked.size === 1 ? "" : "s"} this part was placed
+            with, marked below. The check computes nothing from {marked.size === 1 ? "it" : "them"}: enter yours from the plans or the part.
+          </p>
+          {!readOnly && (
+            <button type="button" data-testid="confirm-starting-values" onClick={() => api.getState().confirmValues(id)}
+              className="mt-1 min-h-8 rounded border border-ink/30 bg-white px-2 py-1 text-[12px] font-medium text-ink hover:bg-ink/5 focus-visible:outline focus-visible:outline-2 focus-visible:outline-ink">
+              {marked.size === 1 ? "This value is right" : "These values are right"}
+            </button>
+          )}
+        </div>
+      )}
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}
         testId="node-form"
@@ -91,6 +108,7 @@ export function NodeInspector({ id }: { id: string }) {
         sections={sections}
         value={value as Record<string, unknown>}
         unitSystem={unitSystem}
+        marked={marked}
         disabled={readOnly}
         onValid={onValid as never}
         onInvalid={setPending}

@@ -115,6 +115,7 @@ export function SchemaForm<S extends z.ZodType>({
   onInvalid,
   testId,
   onFieldChange,
+  marked,
 }: {
   schema: S;
   sections: SectionSpec[];
@@ -124,6 +125,8 @@ export function SchemaForm<S extends z.ZodType>({
   onValid: (v: z.output<S>) => void;
   onInvalid?: (count: number) => void;
   testId: string;
+  /** Field paths still at a part's starting values: each is labelled so, in words (not colour alone). */
+  marked?: ReadonlySet<string>;
   /** Lets a caller fill related fields (e.g. bolt diameter from its size). */
   onFieldChange?: (path: string, value: string | boolean, set: (path: string, value: string) => void) => void;
 }) {
@@ -203,6 +206,9 @@ export function SchemaForm<S extends z.ZodType>({
                     const err = vErr[k]?.message;
                     const id = `${testId}-${k}`;
                     const wide = f.type === "text";
+                    const starting = marked?.has(f.path) ?? false;
+                    // The "starting value" mark is inside the label, so it is part of the field's name for a screen reader.
+                    const described = err ? `${id}-err` : undefined;
                     return (
                       <div key={k} className={wide ? "col-span-2" : f.type === "bool" ? "col-span-2 sm:col-span-1" : ""}>
                         {f.type === "bool" ? (
@@ -216,9 +222,14 @@ export function SchemaForm<S extends z.ZodType>({
                               {f.label}
                               {f.type === "number" && unitLabel(f.q, unitSystem) && <span className="text-ink-soft/70"> ({unitLabel(f.q, unitSystem)})</span>}
                               {"required" in f && f.required && <span aria-hidden="true"> *</span>}
+                              {starting && (
+                                <span id={`${id}-start`} data-testid={`${id}-starting`} className="ml-1 rounded bg-caution/15 px-1 text-[10px] text-ink">
+                                  starting value
+                                </span>
+                              )}
                             </label>
                             {f.type === "enum" ? (
-                              <select id={id} data-testid={id} {...register(`v.${k}`)} aria-invalid={!!err} className="w-full rounded border border-ink/20 bg-white px-1 py-0.5 text-[12px] text-ink aria-[invalid=true]:border-hazard">
+                              <select id={id} data-testid={id} {...register(`v.${k}`)} aria-invalid={!!err} aria-describedby={described} className="w-full rounded border border-ink/20 bg-white px-1 py-0.5 text-[12px] text-ink aria-[invalid=true]:border-hazard">
                                 {!f.required && <option value="">— not set</option>}
                                 {f.required && <option value="" disabled>choose…</option>}
                                 {f.options.map(([v, l]) => (
@@ -238,7 +249,7 @@ export function SchemaForm<S extends z.ZodType>({
                                 autoComplete="off"
                                 placeholder={f.placeholder}
                                 aria-invalid={!!err}
-                                aria-describedby={err ? `${id}-err` : undefined}
+                                aria-describedby={described}
                                 {...register(`v.${k}`)}
                                 className="w-full rounded border border-ink/20 px-1 py-0.5 text-[12px] tabular-nums text-ink aria-[invalid=true]:border-hazard aria-[invalid=true]:bg-hazard/5"
                               />

@@ -10,6 +10,15 @@ import { pruneSelection } from "./selection";
 type Set = (partial: Partial<EditorState>) => void;
 type Get = () => EditorState;
 
+/**
+ * Whether an edit left a prop's value as it was: equal, or a number within a part in 10⁹ of it (a value shown
+ * in SI units and read back can come back a hair off, and that is not the builder entering it).
+ */
+function sameValue(a: unknown, b: unknown): boolean {
+  if (typeof a === "number" && typeof b === "number") return Math.abs(a - b) <= 1e-9 * Math.max(1, Math.abs(a));
+  return a === b || JSON.stringify(a) === JSON.stringify(b);
+}
+
 /** The graph document of the current state (what is saved and exported). */
 export function toGraph(s: Pick<EditorState, "meta" | "nodes" | "joints">, snap?: Snapshot): LinkageGraph {
   return {
@@ -34,12 +43,17 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
       if (get().readOnly) return "";
       const id = h.newId(kind);
       const count = get().nodes.filter((n) => n.kind === kind).length + 1;
+      const starting = defaultProps(kind, get().meta.system);
+      // The kind's starting values are placeholders, not the builder's: marked so until edited or confirmed
+      // (shared/analysis/unentered.ts). Values the caller supplies (a part from the library) are entered.
+      const unentered = Object.keys(starting).filter((k) => k !== "note" && !(init?.props && k in init.props));
       const node = {
         id,
         kind,
         label: init?.label ?? `${KIND_NAMES[kind]} ${count}`,
         position: { x: Math.round(position.x), y: Math.round(position.y) },
-        props: { ...defaultProps(kind, get().meta.system), ...(init?.props ?? {}) },
+        props: { ...starting, ...(init?.props ?? {}) },
+        ...(unentered.length ? { unentered } : {}),
       } as LinkageNode;
       if (!Number.isFinite(node.position.x) || !Number.isFinite(node.position.y)) {
         get().setNotice("Could not add the part: it was dropped outside the drawing.");
@@ -88,10 +102,27 @@ export function graphActions(set: Set, get: Get, commit: Commit, h: { newId: (ki
       if (!cur) return { ok: false, reason: `No part ${id}.` };
       const schema = schemaNow();
       if (!schema) return { ok: false, reason: SCHEMA_LOADING };
-      const parsed = schema.nodeSchema.safeParse({ ...cur, label: patch.label ?? cur.label, props: patch.props ?? cur.props });
+      const props = (patch.props ?? cur.props) as Record<string, unknown>;
+      const unentered = cur.unentered?.filter((k) => sameValue((cur.props as Record<string, unknown>)[k], props[k]));
+      const { unentered: _old, ...rest } = cur;
+      const parsed = schema.nodeSchema.safeParse({ ...rest, label: patch.label ?? cur.label, props, ...(unentered?.length ? { unentered } : {}) });
       if (!parsed.success) return { ok: false, reason: issuesText(parsed.error) };
       if (JSON.stringify(parsed.data) === JSON.stringify(cur)) return { ok: true, value: undefined };
       commit({ nodes: s.nodes.map((n) => (n.id === id ? parsed.data : n)) }, { coalesce: o?.coalesce });
+      return { ok: true, value: undefined };
+    },
+
+    confirmValues(id, keys) {
+      const s = get();
+      if (s.readOnly) return { ok: false, reason: READ_ONLY };
+      const cur = s.nodes.find((n) => n.id === id);
+      if (!cur) return { ok: false, reason: `No part ${id}.` };
+      if (!cur.unentered?.length) return { ok: true, value: undefined };
+      const left = keys ? cur.unentered.filter((k) => !keys.includes(k)) : [];
+      if (left.length === cur.unentered.length) return { ok: true, value: undefined };
+      const { unentered: _old, ...rest } = cur;
+      const next = (left.length ? { ...rest, unentered: left } : rest) as LinkageNode;
+      commit({ nodes: s.nodes.map((n) => (n.id === id ? next : n)) });
       return { ok: true, value: undefined };
     },
 

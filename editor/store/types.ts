@@ -80,7 +80,10 @@ export type EditorData = {
 export type EditActions = {
   addNode: (kind: NodeKind, position: XY, init?: { label?: string; props?: Partial<LinkageNode["props"]> }) => string;
   moveNodes: (moves: { id: string; position: XY }[], opts?: { transient?: boolean }) => void;
+  /** A prop whose value the patch changes is no longer a starting value (it leaves the part's `unentered`). */
   updateNode: (id: string, patch: { label?: string; props?: unknown }, opts?: { coalesce?: string }) => Result;
+  /** The builder says these starting values (all when `keys` is omitted) are right: they count as entered. One undo step. */
+  confirmValues: (id: string, keys?: string[]) => Result;
   /** `external`: the change comes from outside the joint card (e.g. a suggested part), so the card resets. */
   updateJointHardware: (id: string, hardware: unknown, opts?: { coalesce?: string; external?: boolean }) => Result;
   canConnect: (from: Endpoint, to: Endpoint) => Result;

@@ -283,3 +283,64 @@ describe("editor store", () => {
     expect(d.joints.removed[0].name).toBe("Control stick 1, attach ↔ Pushrod 1 A");
   });
 });
+
+describe("starting values (a part's unentered props)", () => {
+  const node = (store: ReturnType<typeof make>, id: string) => store.getState().nodes.find((n) => n.id === id)!;
+  it("a placed part has all its starting values marked; values supplied with it are not", () => {
+    const store = make();
+    const rod = store.getState().addNode("pushrod", { x: 0, y: 0 });
+    expect(node(store, rod).unentered).toEqual(["material", "outsideDiameter", "wall", "length"]);
+    const fromLibrary = store.getState().addNode("pushrod", { x: 0, y: 100 }, { props: { material: "6061-T6", outsideDiameter: 0.75, wall: 0.049 } });
+    expect(node(store, fromLibrary).unentered).toEqual(["length"]);
+    // A mount's note is not a value a check uses: nothing marked.
+    expect(node(store, store.getState().addNode("structureMount", { x: 0, y: 200 })).unentered).toBeUndefined();
+    expect(graphSchema.safeParse(toGraph(store.getState())).success).toBe(true);
+  });
+
+  it("changing a value clears only its mark; the same value again, or a hair off from unit conversion, does not", () => {
+    const store = make();
+    const s = () => store.getState();
+    const rod = s().addNode("pushrod", { x: 0, y: 0 });
+    const props = { ...node(store, rod).props };
+    expect(s().updateNode(rod, { props: { ...props, outsideDiameter: 0.625 } }).ok).toBe(true);
+    expect(node(store, rod).unentered).toEqual(["material", "wall", "length"]);
+    expect(s().updateNode(rod, { props: { ...node(store, rod).props, length: 36 * (1 + 1e-12) } }).ok).toBe(true);
+    expect(node(store, rod).unentered).toEqual(["material", "wall", "length"]);
+    expect(s().updateNode(rod, { label: "Aft rod" }).ok).toBe(true);
+    expect(node(store, rod).unentered).toEqual(["material", "wall", "length"]);
+    // Every value changed: the field goes.
+    expect(s().updateNode(rod, { props: { material: "6061-T6", outsideDiameter: 0.625, wall: 0.049, length: 30 } }).ok).toBe(true);
+    expect(node(store, rod).unentered).toBeUndefined();
+  });
+
+  it("confirming keeps the values, clears some or all marks, and is one undo step", () => {
+    const store = make();
+    const s = () => store.getState();
+    const crank = s().addNode("bellcrank", { x: 0, y: 0 });
+    const before = { ...node(store, crank).props };
+    expect(s().confirmValues(crank, ["armAngle"]).ok).toBe(true);
+    expect(node(store, crank).unentered).toEqual(["inputArm", "outputArm"]);
+    expect(s().confirmValues(crank).ok).toBe(true);
+    expect(node(store, crank).unentered).toBeUndefined();
+    expect(node(store, crank).props).toEqual(before);
+    s().undo();
+    expect(node(store, crank).unentered).toEqual(["inputArm", "outputArm"]);
+    // The check reads them: unentered arms give the crank a finding, confirmed ones none.
+    const codes = () => analyze(toGraph(s())).findings.filter((f) => f.code === "values-unentered" && f.subject.id === crank).length;
+    expect(codes()).toBe(1);
+    s().confirmValues(crank);
+    expect(codes()).toBe(0);
+  });
+
+  it("a read-only linkage refuses to confirm; copies keep the marks", () => {
+    const store = make();
+    const s = () => store.getState();
+    const stick = s().addNode("stick", { x: 0, y: 0 });
+    const ro = createEditorStore(toGraph(s()), { readOnly: true });
+    expect(ro.getState().confirmValues(stick).ok).toBe(false);
+    expect(ro.getState().nodes[0].unentered).toEqual(node(store, stick).unentered);
+    s().duplicate();
+    const copy = s().nodes.find((n) => n.id !== stick)!;
+    expect(copy.unentered).toEqual(node(store, stick).unentered);
+  });
+});
