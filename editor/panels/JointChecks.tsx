@@ -49,7 +49,7 @@ export function JointChecks({ jointId, cableEnd }: { jointId: string; cableEnd?:
           </tbody>
         </table>
       ) : (
-        r.todo.length === 0 && <p className="px-2 py-1 text-[11px] text-ink-soft" data-testid="joint-checks-empty">{cableEnd ? "Add the bolt or clevis pin and nut holding the terminal to have this joint checked." : "Add a bolt, rod end or bearing to this joint to have it checked."}</p>
+        r.checks.length === 0 && <p className="px-2 py-1 text-[11px] text-ink-soft" data-testid="joint-checks-empty">{cableEnd ? "Add the bolt or clevis pin and nut holding the terminal to have this joint checked." : "Add a bolt, rod end or bearing to this joint to have it checked."}</p>
       )}
     </section>
   );

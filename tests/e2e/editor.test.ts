@@ -8,7 +8,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, BrowserContext, Locator, Page } from "playwright-core";
 import sharp from "sharp";
 import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
-import { canvas, connect, dropPart, openJoint, saveStatus, waitSaved } from "../support/editor-page";
+import { canvas, connect, dropPart, openJoint, openPart, saveStatus, waitSaved } from "../support/editor-page";
 import { DEMO_BUILD, DEMO_USERS } from "@/db/demo-accounts";
 import { EXPORT_SIZE } from "@/editor/export";
 
@@ -96,6 +96,18 @@ describe("linkage editor in a real browser", () => {
     const card = page.getByTestId("joint-card");
     const checks = card.getByTestId("joint-checks");
     await checks.waitFor();
+    // The parts were placed with starting values: the load through the stick is not the builder's, so no check
+    // has a margin and the to-do names the stick's values. // common practice, no source
+    await expect.poll(() => checks.getByTestId("joint-todo").textContent(), { timeout: 5000 }).toMatch(/Enter the grip arm, attach arm and axis of ".*" \(still its starting values\)/);
+    await expect(checks.locator("[data-check=rodEndRating]").count()).resolves.toBe(0);
+    // The builder confirms the stick's values on its card (each is labelled as a starting value until then).
+    const part = await openPart(page, ids.stick);
+    await expect(part.getByTestId("node-form-props__gripArm-starting").count()).resolves.toBe(1);
+    await shot(page, "editor-04a-starting-values");
+    await part.getByTestId("confirm-starting-values").click();
+    await expect.poll(() => part.getByTestId("starting-values").count()).toBe(0);
+    await expect(part.getByTestId("node-form-props__gripArm-starting").count()).resolves.toBe(0);
+    await openJoint(page, jointId);
     // The rod end's thread in tension needs the body material (ASME B1.1 stress area × the body's Ftu).
     await expect.poll(() => checks.getByTestId("joint-todo").textContent(), { timeout: 5000 }).toMatch(/Enter the rod end's body material/);
     await expect(checks.locator("[data-check=threadTension]").count()).resolves.toBe(0);

@@ -52,3 +52,11 @@ export async function openJoint(p: Page, jointId: string) {
   await card.waitFor();
   return card;
 }
+
+/** Select a part by clicking it on the canvas and wait for its card; returns the card. */
+export async function openPart(p: Page, nodeId: string) {
+  await p.getByTestId(`node-${nodeId}`).click();
+  const card = p.getByTestId("node-form-panel");
+  await card.waitFor();
+  return card;
+}
