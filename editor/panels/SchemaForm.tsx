@@ -223,7 +223,7 @@ export function SchemaForm<S extends z.ZodType>({
                               {f.type === "number" && unitLabel(f.q, unitSystem) && <span className="text-ink-soft/70"> ({unitLabel(f.q, unitSystem)})</span>}
                               {"required" in f && f.required && <span aria-hidden="true"> *</span>}
                               {starting && (
-                                <span id={`${id}-start`} data-testid={`${id}-starting`} className="ml-1 rounded bg-caution/15 px-1 text-[10px] text-ink">
+                                <span id={`${id}-start`} data-testid={`${id}-starting`} className="ml-1 inline-block whitespace-nowrap rounded bg-caution/15 px-1 text-[10px] text-ink">
                                   starting value
                                 </span>
                               )}
