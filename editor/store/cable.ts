@@ -72,6 +72,9 @@ export function cableActions(get: Get, commit: Commit, newId: (kind: string) => 
         position: { x: cable.position.x, y: cable.position.y + 120 },
         props: { size, construction, material, length, terminalA, terminalB, tensionMin, tensionMax, rangeTemperature },
       };
+      // A value copied from a starting value is a starting value still (shared/analysis/unentered.ts).
+      const unentered = cable.unentered?.filter((k) => k in node.props);
+      if (unentered?.length) node.unentered = unentered;
       const joint = (port: string, to: Endpoint): Joint => ({ id: newId("joint"), from: { node: id, port }, to: { ...to }, hardware: defaultHardware() });
       commit({ nodes: [...s.nodes, node], joints: [...s.joints, joint("a", ends.a), joint("b", ends.b)], selection: { nodes: [id], joints: [] } });
       return id;

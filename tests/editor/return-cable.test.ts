@@ -85,3 +85,16 @@ describe("the return cable from the joint just drawn, and by key", () => {
     expect(COMMANDS.find((c) => c.id === "returnCable")!.keys).toBe("R");
   });
 });
+
+describe("the return cable's starting values", () => {
+  it("copies the marks of the values it copies: a starting size stays a starting size", () => {
+    const { s, sector, cable, horn } = sectorToHorn();
+    s().connect({ node: sector, port: "out" }, { node: cable, port: "a" });
+    s().connect({ node: cable, port: "b" }, { node: horn, port: "attach" });
+    expect(s().nodes.find((n) => n.id === cable)!.unentered).toEqual(["construction", "material", "terminalA", "terminalB"]);
+    const back = s().addReturnCable(cable);
+    const node = s().nodes.find((n) => n.id === back)!;
+    expect(node.unentered).toEqual(["construction", "material", "terminalA", "terminalB"]);
+    expect(nodeSchema.parse(node)).toEqual(node);
+  });
+});
