@@ -36,6 +36,7 @@
  *   MS = 7,363.1/1,152.3 − 1 = +5.390.
  */
 import { describe, expect, it } from "vitest";
+import { bellcrankPivotLoad } from "@/shared/linkage/kinds/bellcrank";
 import { analyze } from "@/shared/analysis";
 import { bellcrank, goodBallPivot, goodClamp, goodRodEndJoint, graph, hardware, horn, j, mount, pushrod, stick, stop, surface, valid } from "./fixtures";
 
@@ -156,5 +157,20 @@ describe("factors and settings", () => {
       if (jt.id === "bc-aft") jt.from.port = "in";
     }
     rel(analyze(valid(g)).pushrods.find((p) => p.nodeId === "aft")!.limitAxial, 668 * 4 / 3); // out arm 4 → in arm 3
+  });
+});
+
+describe("bellcrank pivot resultant (statics, from memory: |R|² = Fi² + Fo² − 2·Fi·Fo·cos α)", () => {
+  it("gives the vector sum at 90° and 180°, and the difference with the arms folded", () => {
+    expect(bellcrankPivotLoad(300, 400, 90)).toBeCloseTo(500, 9); // 3-4-5
+    expect(bellcrankPivotLoad(300, 400, 180)).toBeCloseTo(700, 9); // arms opposite: the loads add
+    expect(bellcrankPivotLoad(300, 400, 0)).toBeCloseTo(100, 9); // arms together: they subtract
+  });
+  it("scales exactly with the force where the arms are folded and the loads equal (no cancellation noise)", () => {
+    const f = 200 * (0.05 / 0.05000000000000001);
+    for (const k of [0.78, 3.1, 9.7]) {
+      const r = bellcrankPivotLoad(200, f, 0), rk = bellcrankPivotLoad(200 * k, f * k, 0);
+      expect(Math.abs(rk - k * r)).toBeLessThan(1e-12);
+    }
   });
 });

@@ -3,8 +3,12 @@ import type { Props } from "./schema";
 
 /** Resultant on a bellcrank pivot of two arm loads, arms at alpha degrees: |R|² = Fi² + Fo² − 2·Fi·Fo·cos α [from memory; statics]. */
 export function bellcrankPivotLoad(fi: number, fo: number, alphaDeg: number): number {
-  const c = Math.cos((alphaDeg * Math.PI) / 180);
-  return Math.sqrt(Math.max(0, fi * fi + fo * fo - 2 * fi * fo * c));
+  // |R|² = Fi² + Fo² − 2·Fi·Fo·cos α, written as (Fi − Fo)² + 4·Fi·Fo·sin²(α/2) (the same, by 1 − cos α = 2 sin²(α/2)):
+  // with the arms nearly folded (α near 0) and equal loads the first form cancels to rounding noise, the second
+  // does not, so the load scales exactly with the force.
+  const s = Math.sin((alphaDeg * Math.PI) / 360);
+  const d = fi - fo;
+  return Math.sqrt(Math.max(0, d * d + 4 * fi * fo * s * s));
 }
 
 export const bellcrank = defineKind<Props>()({
