@@ -18,11 +18,15 @@ function findingsPhrase(b: BadgeLike): string {
   return b.count === 1 ? `1 ${SEV_WORD[b.worst][0]}` : `${b.count} findings, worst a ${SEV_WORD[b.worst][0]}`;
 }
 
-/** "Bellcrank, Bellcrank under the seat, 1 hazard" (the kind once when the part has no label of its own). */
-export function partAccessibleName(node: Pick<LinkageNode, "kind" | "label">, badge: BadgeLike): string {
+/**
+ * "Bellcrank, Bellcrank under the seat, 1 hazard" (the kind once when the part has no label of its own), and
+ * ", 2 values to enter" when `toEnter` of its values are still the starting values it was placed with.
+ */
+export function partAccessibleName(node: Pick<LinkageNode, "kind" | "label">, badge: BadgeLike, toEnter = 0): string {
   const kind = (KIND_NAMES as Record<string, string>)[node.kind] ?? "Part";
   const name = partName(node);
-  return `${name === kind ? kind : `${kind}, ${name}`}, ${findingsPhrase(badge)}`;
+  const enter = toEnter > 0 ? `, ${toEnter} ${toEnter === 1 ? "value" : "values"} to enter` : "";
+  return `${name === kind ? kind : `${kind}, ${name}`}, ${findingsPhrase(badge)}${enter}`;
 }
 
 /** "Joint Aft pushrod B ↔ Elevator horn, attach, 3 findings, worst a hazard". */

@@ -23,7 +23,12 @@ export { PORT_SIDES };
 const POS: Record<Side, Position> = { left: Position.Left, right: Position.Right, top: Position.Top, bottom: Position.Bottom };
 
 
-function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: NodeKind; label: string; lines: string[]; selected: boolean }) {
+/**
+ * `toEnter`: how many of the part's values are still the starting values it was placed with. A small tab on
+ * the card's top edge says so in words (outside the card's box, so the card's size and ports stay put); a
+ * screen reader hears it in the part's name.
+ */
+function PartFrame({ id, kind, label, lines, selected, toEnter }: { id: string; kind: NodeKind; label: string; lines: string[]; selected: boolean; toEnter: number }) {
   const { readOnly } = useEditorConfig();
   const key = `node:${id}`;
   const badge = useEditorValue((s) => s.badgeBySubject[key]);
@@ -41,7 +46,16 @@ function PartFrame({ id, kind, label, lines, selected }: { id: string; kind: Nod
         selected ? "ring-2 ring-ink ring-offset-1" : "",
       ].join(" ")}
     >
-      <span id={partNameId(id)} className="sr-only">{partAccessibleName({ kind, label }, badge)}</span>
+      <span id={partNameId(id)} className="sr-only">{partAccessibleName({ kind, label }, badge, toEnter)}</span>
+      {toEnter > 0 && (
+        <span
+          aria-hidden="true"
+          data-testid={`to-enter-${id}`}
+          className="pointer-events-none absolute -top-2 right-2 rounded-sm border border-caution/50 bg-white px-1 text-[9px] font-medium leading-3 text-caution"
+        >
+          {toEnter} to enter
+        </span>
+      )}
       <div className="flex items-center gap-1.5" aria-hidden="true">
         <KindGlyph kind={kind} className="h-4 w-4 shrink-0 text-ink-soft" />
         <div className="min-w-0 flex-1 truncate text-[12px] font-semibold leading-4" title={label}>
@@ -113,7 +127,7 @@ function makeNode(kind: NodeKind) {
   const C = memo(function PartNode({ id, data, selected }: NodeProps<PartFlowNode>) {
     const { unitSystem } = useEditorConfig();
     const node = data.node;
-    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props, unitSystem)} selected={!!selected} />;
+    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props, unitSystem)} selected={!!selected} toEnter={node.unentered?.length ?? 0} />;
   });
   C.displayName = `${kind}Node`;
   return C;

@@ -53,16 +53,20 @@ function EndFields({ end }: { end: End }) {
   const title = <h4 className="text-[11px] font-semibold uppercase tracking-wide text-ink-soft">{partName(node)}, end {P}</h4>;
   if (node.kind === "cable") {
     const key = port === "a" ? "terminalA" : "terminalB";
+    // Still the terminal the cable was placed with: said here as on the cable's own card.
+    const start = node.unentered?.includes(key) ?? false;
+    const startId = `cable-terminal-${node.id}-${port}-start`;
     return (
       <div>
         {title}
         <label className="mt-0.5 block text-[11px] text-ink">
           Terminal at {P}
           <select className={field} disabled={readOnly} data-testid={`cable-terminal-${node.id}-${port}`} value={node.props[key]}
-            onChange={(ev) => set(key, ev.target.value)}>
+            aria-describedby={start ? startId : undefined} onChange={(ev) => set(key, ev.target.value)}>
             {CABLE_TERMINALS.map((t) => <option key={t} value={t}>{TERMINAL_NAMES[t]} — develops {Math.round(TERMINAL_EFFICIENCY[t] * 100)} % of the cable</option>)}
           </select>
         </label>
+        {start && <p id={startId} data-testid={startId} className="mt-0.5 text-[10px] leading-3 text-caution">starting value — enter yours (or confirm it on the cable&apos;s card)</p>}
       </div>
     );
   }

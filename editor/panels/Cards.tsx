@@ -50,6 +50,40 @@ function SubjectFindings({ subjectKey }: { subjectKey: string }) {
   );
 }
 
+/**
+ * The part's values still at the starting values it was placed with (the check uses none of them), in one
+ * line, and the builder's way to say they are right as they are.
+ */
+function StartingValues({ id, count }: { id: string; count: number }) {
+  const api = useEditorStoreApi();
+  const { readOnly } = useEditorConfig();
+  if (count === 0) return null;
+  const one = count === 1;
+  return (
+    <div className="flex flex-wrap items-center gap-x-2 gap-y-1 rounded border border-caution/30 bg-caution/5 px-2 py-1.5 text-[11px]" data-testid="starting-values">
+      <p className="min-w-0 flex-1 basis-48 text-ink" id={`starting-values-${id}`}>
+        {one
+          ? "1 value is still the starting value: the check does not use it until you enter yours or confirm it."
+          : `${count} values are still the starting values: the check uses none of them until you enter yours or confirm them.`}
+      </p>
+      {!readOnly && (
+        <button
+          type="button"
+          data-testid="btn-confirm-values"
+          aria-describedby={`starting-values-${id}`}
+          className="min-h-8 shrink-0 rounded border border-ink/30 bg-white px-2 py-1 text-[12px] font-medium text-ink hover:bg-paper"
+          onClick={() => {
+            // The button goes with the line: the focus goes to the card's title rather than to the page.
+            if (api.getState().confirmValues(id).ok) document.getElementById(CARD_TITLE_ID)?.focus();
+          }}
+        >
+          {one ? "This value is right" : "These values are right"}
+        </button>
+      )}
+    </div>
+  );
+}
+
 export function NodeInspector({ id }: { id: string }) {
   const api = useEditorStoreApi();
   const { unitSystem, readOnly } = useEditorConfig();
@@ -71,9 +105,9 @@ export function NodeInspector({ id }: { id: string }) {
     return node ? { label: node.label, props: node.props } : null;
   }, [id, epoch, unitSystem]);
   const sections = useMemo(() => (kind ? nodeSections(kind) : []), [kind]);
-  // The part's starting values (shared/analysis/unentered.ts), as the form's field paths.
-  const unenteredKey = useEditorValue((s) => s.nodes.find((n) => n.id === id)?.unentered?.join(",") ?? "");
-  const marked = useMemo(() => new Set(unenteredKey ? unenteredKey.split(",").map((k) => `props.${k}`) : []), [unenteredKey]);
+  // Read live (a string, so moves do not re-render the form): an edit or the button below unmarks a value.
+  const unentered = useEditorValue((s) => s.nodes.find((n) => n.id === id)?.unentered?.join(" ") ?? "");
+  const starting = useMemo(() => new Set(unentered ? unentered.split(" ").map((k) => `props.${k}`) : []), [unentered]);
   const label = useEditorValue((s) => {
     const n = s.nodes.find((x) => x.id === id);
     return n ? partName(n) : "";
@@ -87,20 +121,7 @@ export function NodeInspector({ id }: { id: string }) {
       </h3>
       <SubjectFindings subjectKey={`node:${id}`} />
       <ReturnCableOffer />
-      {marked.size > 0 && (
-        <div data-testid="starting-values" className="rounded border border-caution/30 bg-caution/10 px-2 py-1 text-[11px] text-ink">
-          <p>
-            {marked.size === 1 ? "One value is" : `${marked.size} values are`} still the starting value{marked.size === 1 ? "" : "s"} this part was placed
-            with, marked below. The check computes nothing from {marked.size === 1 ? "it" : "them"}: enter yours from the plans or the part.
-          </p>
-          {!readOnly && (
-            <button type="button" data-testid="confirm-starting-values" onClick={() => api.getState().confirmValues(id)}
-              className="mt-1 min-h-8 rounded border border-ink/30 bg-white px-2 py-1 text-[12px] font-medium text-ink hover:bg-ink/5 focus-visible:outline focus-visible:outline-2 focus-visible:outline-ink">
-              {marked.size === 1 ? "This value is right" : "These values are right"}
-            </button>
-          )}
-        </div>
-      )}
+      <StartingValues id={id} count={starting.size} />
       <SchemaForm
         key={`${id}:${epoch}:${unitSystem}`}
         testId="node-form"
@@ -108,10 +129,10 @@ export function NodeInspector({ id }: { id: string }) {
         sections={sections}
         value={value as Record<string, unknown>}
         unitSystem={unitSystem}
-        marked={marked}
         disabled={readOnly}
         onValid={onValid as never}
         onInvalid={setPending}
+        starting={starting}
       />
       {pending > 0 && <span className="sr-only">{pending} fields need attention</span>}
     </div>

@@ -58,7 +58,7 @@ function toForm(canonical: unknown, sections: SectionSpec[], u: UnitSystem): For
 }
 
 /** Typed form values → the canonical object, plus the errors found before the schema is asked. */
-function toCanonical(values: FormValues, sections: SectionSpec[], u: UnitSystem, base: Record<string, unknown>) {
+export function toCanonical(values: FormValues, sections: SectionSpec[], u: UnitSystem, base: Record<string, unknown>) {
   const out: Record<string, unknown> = structuredClone(base);
   const errors: Record<string, string> = {};
   for (const s of sections) {
@@ -77,7 +77,12 @@ function toCanonical(values: FormValues, sections: SectionSpec[], u: UnitSystem,
         else if (r.value === undefined) {
           setPath(out, f.path, undefined);
           if (f.required) errors[k] = `${f.label} is needed`;
-        } else setPath(out, f.path, fromDisplay(r.value, f.q, u));
+        } else {
+          // A box still showing the value it was given keeps that value exactly: boxes round (76.2 mm is
+          // 3.0000000000000004 in back), and typing in one field must not change, or unmark, another.
+          const was = getPath(base, f.path);
+          setPath(out, f.path, typeof was === "number" && String(raw) === inputText(was, f.q, u) ? was : fromDisplay(r.value, f.q, u));
+        }
       } else if (f.type === "enum") {
         if (raw === "" || raw === undefined) {
           setPath(out, f.path, undefined);
@@ -115,7 +120,7 @@ export function SchemaForm<S extends z.ZodType>({
   onInvalid,
   testId,
   onFieldChange,
-  marked,
+  starting,
 }: {
   schema: S;
   sections: SectionSpec[];
@@ -125,10 +130,10 @@ export function SchemaForm<S extends z.ZodType>({
   onValid: (v: z.output<S>) => void;
   onInvalid?: (count: number) => void;
   testId: string;
-  /** Field paths still at a part's starting values: each is labelled so, in words (not colour alone). */
-  marked?: ReadonlySet<string>;
   /** Lets a caller fill related fields (e.g. bolt diameter from its size). */
   onFieldChange?: (path: string, value: string | boolean, set: (path: string, value: string) => void) => void;
+  /** Paths of the fields still at the starting value the part was placed with: each says so, in words, under its box. */
+  starting?: ReadonlySet<string>;
 }) {
   const fieldPaths = useMemo(() => new Map(sections.flatMap((s) => s.fields.map((f) => [f.path, keyOf(f.path)] as const))), [sections]);
 
@@ -206,14 +211,13 @@ export function SchemaForm<S extends z.ZodType>({
                     const err = vErr[k]?.message;
                     const id = `${testId}-${k}`;
                     const wide = f.type === "text";
-                    const starting = marked?.has(f.path) ?? false;
-                    // The "starting value" mark is inside the label, so it is part of the field's name for a screen reader.
-                    const described = err ? `${id}-err` : undefined;
+                    const start = starting?.has(f.path) ?? false;
+                    const describedBy = [err && `${id}-err`, start && `${id}-start`].filter(Boolean).join(" ") || undefined;
                     return (
                       <div key={k} className={wide ? "col-span-2" : f.type === "bool" ? "col-span-2 sm:col-span-1" : ""}>
                         {f.type === "bool" ? (
                           <label htmlFor={id} className="flex items-center gap-1.5 py-0.5 text-[12px] text-ink">
-                            <input id={id} type="checkbox" data-testid={id} {...register(`v.${k}`)} />
+                            <input id={id} type="checkbox" data-testid={id} aria-describedby={describedBy} {...register(`v.${k}`)} />
                             {f.label}
                           </label>
                         ) : (
@@ -222,14 +226,9 @@ export function SchemaForm<S extends z.ZodType>({
                               {f.label}
                               {f.type === "number" && unitLabel(f.q, unitSystem) && <span className="text-ink-soft/70"> ({unitLabel(f.q, unitSystem)})</span>}
                               {"required" in f && f.required && <span aria-hidden="true"> *</span>}
-                              {starting && (
-                                <span id={`${id}-start`} data-testid={`${id}-starting`} className="ml-1 inline-block whitespace-nowrap rounded bg-caution/15 px-1 text-[10px] text-ink">
-                                  starting value
-                                </span>
-                              )}
                             </label>
                             {f.type === "enum" ? (
-                              <select id={id} data-testid={id} {...register(`v.${k}`)} aria-invalid={!!err} aria-describedby={described} className="w-full rounded border border-ink/20 bg-white px-1 py-0.5 text-[12px] text-ink aria-[invalid=true]:border-hazard">
+                              <select id={id} data-testid={id} {...register(`v.${k}`)} aria-invalid={!!err} aria-describedby={describedBy} data-starting={start || undefined} className="w-full rounded border border-ink/20 bg-white px-1 py-0.5 text-[12px] text-ink data-[starting=true]:border-dashed data-[starting=true]:border-caution/60 aria-[invalid=true]:border-hazard">
                                 {!f.required && <option value="">— not set</option>}
                                 {f.required && <option value="" disabled>choose…</option>}
                                 {f.options.map(([v, l]) => (
@@ -239,7 +238,7 @@ export function SchemaForm<S extends z.ZodType>({
                                 ))}
                               </select>
                             ) : f.type === "text" && f.multiline ? (
-                              <textarea id={id} data-testid={id} rows={2} {...register(`v.${k}`)} placeholder={f.placeholder} className="w-full rounded border border-ink/20 px-1 py-0.5 text-[12px] text-ink" />
+                              <textarea id={id} data-testid={id} rows={2} {...register(`v.${k}`)} placeholder={f.placeholder} aria-describedby={describedBy} className="w-full rounded border border-ink/20 px-1 py-0.5 text-[12px] text-ink" />
                             ) : (
                               <input
                                 id={id}
@@ -249,9 +248,10 @@ export function SchemaForm<S extends z.ZodType>({
                                 autoComplete="off"
                                 placeholder={f.placeholder}
                                 aria-invalid={!!err}
-                                aria-describedby={described}
+                                aria-describedby={describedBy}
+                                data-starting={start || undefined}
                                 {...register(`v.${k}`)}
-                                className="w-full rounded border border-ink/20 px-1 py-0.5 text-[12px] tabular-nums text-ink aria-[invalid=true]:border-hazard aria-[invalid=true]:bg-hazard/5"
+                                className="w-full rounded border border-ink/20 px-1 py-0.5 text-[12px] tabular-nums text-ink data-[starting=true]:border-dashed data-[starting=true]:border-caution/60 aria-[invalid=true]:border-hazard aria-[invalid=true]:bg-hazard/5"
                               />
                             )}
                           </>
@@ -259,6 +259,11 @@ export function SchemaForm<S extends z.ZodType>({
                         {err && (
                           <p id={`${id}-err`} data-testid={`${id}-error`} className="mt-0.5 text-[10px] leading-3 text-hazard">
                             {err}
+                          </p>
+                        )}
+                        {start && (
+                          <p id={`${id}-start`} data-testid={`${id}-starting`} className="mt-0.5 text-[10px] leading-3 text-caution">
+                            starting value — enter yours
                           </p>
                         )}
                         {!err && f.hint && <p className="mt-0.5 text-[10px] leading-3 text-ink-soft/80">{f.hint}</p>}

@@ -104,7 +104,7 @@ describe("linkage editor in a real browser", () => {
     const part = await openPart(page, ids.stick);
     await expect(part.getByTestId("node-form-props__gripArm-starting").count()).resolves.toBe(1);
     await shot(page, "editor-04a-starting-values");
-    await part.getByTestId("confirm-starting-values").click();
+    await part.getByTestId("btn-confirm-values").click();
     await expect.poll(() => part.getByTestId("starting-values").count()).toBe(0);
     await expect(part.getByTestId("node-form-props__gripArm-starting").count()).resolves.toBe(0);
     await openJoint(page, jointId);
