@@ -10,6 +10,8 @@ import type { AnalysisSettings, Finding, JointResult, PushrodResult } from "./ty
 import { type Ctx, nodeLabel } from "./context";
 import { selectSpecialFactor } from "./joints/factors";
 import { finding, fmt, fmtMargin, nodeSubject, num } from "./format";
+
+const WALL_KEYS = ["wall", "outsideDiameter"] as const;
 import { enterTodo, TUBE_KEYS, unenteredOf } from "./unentered";
 
 /** Margins are capped so a report stays finite and JSON-safe (an unloaded part has "infinite" margin). */
@@ -106,7 +108,7 @@ export function strengthFindings(ctx: Ctx, pushrodNodes: number[], pushrods: Pus
     const pr = pushrods[i];
     const n = ctx.nodes[pushrodNodes[i]];
     const name = nodeLabel(n);
-    if (n.kind === "pushrod" && !(2 * n.props.wall < n.props.outsideDiameter) && !unenteredOf(n, ["wall", "outsideDiameter"]).length) {
+    if (n.kind === "pushrod" && !(2 * n.props.wall < n.props.outsideDiameter) && !unenteredOf(n, WALL_KEYS).length) {
       out.push(finding("pushrod-wall-too-thick", "caution", nodeSubject(pr.nodeId),
         `Pushrod ${name}: a wall of ${fmt(n.props.wall, 3)} in on a ${fmt(n.props.outsideDiameter, 3)} in tube leaves no bore. The check treats it as a solid rod; check the entered size.`,
         SRC.engineering, [num("outside diameter", n.props.outsideDiameter, "in"), num("wall", n.props.wall, "in")]));

@@ -12,6 +12,9 @@ import { marginOfSafety } from "./allowables";
 import { finding, fmt, fmtMargin, nodeSubject, num } from "./format";
 import { unenteredOf } from "./unentered";
 
+const SIZE_KEY = ["size"] as const, CONSTRUCTION_KEY = ["construction"] as const, GROOVE_KEY = ["grooveFor"] as const;
+const DIAMETER_KEY = ["diameter"] as const, WRAP_KEY = ["wrapAngle"] as const;
+
 type CableNode = Extract<LinkageNode, { kind: "cable" }>;
 const MOVING = new Set(["input", "crank", "horn"]);
 
@@ -72,7 +75,7 @@ function turnbuckleFindings(ctx: Ctx, n: number, node: Extract<LinkageNode, { ki
     out.push(finding("turnbuckle-binding-unchecked", "caution", subj,
       `${name} is joined to a part that swings: not checked whether it can bind. Move the control to both ends of its travel and record that the turnbuckle lines up with the cable and cannot bind.`, CABLE_SRC.turnbuckleBind));
   for (const c of cablesAt(ctx, n)) {
-    if (unenteredOf(node, ["size"]).length || unenteredOf(c, ["size"]).length) continue; // starting values: values-unentered
+    if (unenteredOf(node, SIZE_KEY).length || unenteredOf(c, SIZE_KEY).length) continue; // starting values: values-unentered
     if (CABLE_SIZES.indexOf(p.size) < CABLE_SIZES.indexOf(c.props.size)) {
       out.push(finding("turnbuckle-undersized", "hazard", subj,
         `${name} is made for ${p.size} in cable but joins ${nodeLabel(c)}, a ${c.props.size} in cable: it will not develop the cable's strength. Use a turnbuckle made for ${c.props.size} in cable.`,
@@ -124,29 +127,31 @@ function pulleyFindings(ctx: Ctx, n: number, node: Extract<LinkageNode, { kind: 
   else if (p.guards === undefined)
     out.push(finding("pulley-guards-unrecorded", "caution", subj, `${name}: not checked — record whether its guard pins are fitted.`, CABLE_SRC.pulleyFit));
   for (const c of cables.slice(0, 1)) {
-    // Nothing is judged on a starting value of the pulley or its cable (values-unentered says what to enter).
-    if (unenteredOf(c, ["size", "construction"]).length) break;
+    // Each rule is judged only on values entered (values-unentered says what to enter): the groove and the guard
+    // need the cable's size, the pulley's diameter the size and construction too.
+    if (unenteredOf(c, SIZE_KEY).length) break;
     const d = CABLE_DIAMETER[c.props.size];
     if (p.grooveFor === undefined)
       out.push(finding("pulley-groove-unrecorded", "caution", subj, `${name}: not checked — record the cable size its groove is made for (it carries ${c.props.size} in cable).`, CABLE_SRC.pulleyFit));
-    else if (p.grooveFor !== c.props.size && !unenteredOf(node, ["grooveFor"]).length)
+    else if (p.grooveFor !== c.props.size && !unenteredOf(node, GROOVE_KEY).length)
       out.push(finding("pulley-groove-mismatch", "hazard", subj,
         `${name} has a groove for ${p.grooveFor} in cable but carries ${nodeLabel(c)}, ${c.props.size} in. A pulley must correspond to its cable; use the pulley made for ${c.props.size} in.`, CABLE_SRC.pulleyFit));
     if (p.guards === "fitted" && p.guardGap !== undefined && p.guardGap >= d)
       out.push(finding("pulley-guard-gap", "hazard", subj,
         `${name}: its guard stands ${fmt(p.guardGap, 3)} in from the flange, as wide as the ${fmt(d, 3)} in cable or wider, so the cable can slip past it. Close the guard up.`,
         CABLE_SRC.guardGap, [num("guard gap", p.guardGap, "in"), num("cable diameter", d, "in")]));
+    if (unenteredOf(c, CONSTRUCTION_KEY).length) break;
     const min = minPulleyDiameter(c.props.size, c.props.construction);
     if (!min)
       out.push(finding("nonflexible-over-pulley", "hazard", subj,
         `${nodeLabel(c)} is 1×19 nonflexible strand, which is not made to run over pulleys; over ${name} it fatigues and breaks. Use 7×19 flexible cable here.`, CABLE_SRC.nonflexible));
-    else if (p.diameter < min.inches - 1e-9 && !unenteredOf(node, ["diameter"]).length)
+    else if (p.diameter < min.inches - 1e-9 && !unenteredOf(node, DIAMETER_KEY).length)
       out.push(finding("pulley-too-small", "caution", subj,
         `${name} is ${fmt(p.diameter)} in across; for ${c.props.size} in ${c.props.construction.replace("x", "×")} cable the pulley should be at least ${fmt(min.inches)} in, or the cable fatigues where it bends. Use a larger pulley.`,
         min.source, [num("pulley diameter", p.diameter, "in"), num("minimum", min.inches, "in")]));
   }
   // Its load: the largest resultant put on it by a cable (recorded on its cable joints), limit.
-  let r = 0, from = unenteredOf(node, ["wrapAngle"]).length ? n + 1 : 0;
+  let r = 0, from = unenteredOf(node, WRAP_KEY).length ? n + 1 : 0;
   for (const k of ctx.ports[n]?.cable ?? []) { r = Math.max(r, loads.jointRadial[k]); from ||= loads.jointFrom[k]; }
   if (from) return; // its load rests on starting values: the unentered finding says which
   if (r > 0 && p.ratedLoad !== undefined) {

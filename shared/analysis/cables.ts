@@ -15,6 +15,8 @@ import { finding, fmt, fmtMargin, nodeSubject, num } from "./format";
 import { cablePartFindings } from "./cable-parts";
 import { TENSION_KEYS, unenteredOf } from "./unentered";
 
+const SIZE_KEY = ["size"] as const;
+
 /** Systems whose cables are primary controls (14 CFR 23.689(a)(1): aileron, elevator, rudder). */
 export const PRIMARY_SYSTEMS = new Set(["pitch", "roll", "yaw"]);
 /** Rigging measured this far from the temperature the range is given at: compare with the designer's chart. common practice, no source */
@@ -93,13 +95,14 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
     if (node.kind !== "cable") continue;
     const p = node.props;
     const d = CABLE_DIAMETER[p.size];
-    // Starting values are not the builder's cable: values-unentered says so, and nothing here is judged on them.
-    if (unenteredOf(node, TENSION_KEYS).length) continue;
-    if (primary && d < MIN_PRIMARY_CABLE)
+    // Each rule is judged only on values the builder entered (values-unentered names the rest): the size alone
+    // for the smallest size allowed, all of its strength values for its strength.
+    if (primary && d < MIN_PRIMARY_CABLE && !unenteredOf(node, SIZE_KEY).length)
       out.push(finding("cable-too-small", "hazard", subj,
         `${name} is ${p.size} in: no cable under 1/8 in may be used in the aileron, elevator or rudder controls. Use 1/8 in cable or larger.`,
         CABLE_SRC.smallCable, [num("cable diameter", d, "in"), num("minimum", MIN_PRIMARY_CABLE, "in")]));
     const r = byId.get(node.id)!;
+    if (unenteredOf(node, TENSION_KEYS).length) continue;
     if (r.breakingStrength === null)
       out.push(finding("cable-strength-unknown", "caution", subj,
         `${name}: no breaking strength is tabled for ${p.size} in ${p.construction.replace("x", "×")} ${p.material} cable, so its strength is not checked. Use a tabled size or check it against the maker's certified breaking strength.`,

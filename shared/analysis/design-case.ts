@@ -42,10 +42,16 @@ export function hingeMomentCase(ctx: Ctx, loads: Loads, surfaces: SurfaceResult[
     const n = ctx.nodeIndex.get(sr.nodeId)!;
     const node = ctx.nodes[n];
     const hm = node.kind === "controlSurface" ? node.props.hingeMoment : undefined;
-    if (hm === undefined || !key || !(sr.hingeMomentLimit > 0)) {
+    // A hinge moment whose link force rests on starting values (a horn's arm, say) cannot set the loads: the
+    // maximum pilot force does (factor 1, the larger), and the unentered finding names what to enter.
+    const tainted = loads.nodeFrom[n] !== 0;
+    if (hm === undefined || !key || !(sr.hingeMomentLimit > 0) || tainted) {
       sr.designHingeMoment = hm ?? null;
       sr.loadCase = sr.hingeMomentLimit > 0 ? "maximumPilotForce" : null;
       scale = Math.max(scale, 1);
+      if (hm !== undefined && key && tainted)
+        out.push(finding("hinge-moment-waits", "advisory", nodeSubject(node.id),
+          `The hinge moment of ${node.label || node.id} is not used yet: the force it would set passes through starting values (see the part that lists them). Loads come from the input's maximum force until they are entered.`, DESIGN_LOAD_SRC.hingeMoments));
       if (hm !== undefined && !key)
         out.push(finding("hinge-moment-not-used", "advisory", nodeSubject(node.id),
           `The hinge moment of ${node.label || node.id} is not used: 14 CFR 23.395 bounds it by the stick and pedal forces of 23.397(b), which do not cover a ${system} run. Loads come from the input's force.`, DESIGN_LOAD_SRC.hingeMoments));

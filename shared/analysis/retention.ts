@@ -12,6 +12,8 @@ import { MIN_PREVAILING_TORQUE, PREVAILING_SRC } from "../hardware/plates";
 import { type Ctx, jointLabel, jointsAt, nodeLabel, pushrodNodeOf } from "./context";
 import { boltDiameter } from "./allowables";
 import { finding, fmt, jointSubject, nodeSubject, num } from "./format";
+
+const MATERIAL_KEY = ["material"] as const;
 import { unenteredOf } from "./unentered";
 
 // Module-level aliases: read the tables once, not through re-export getters on every joint.
@@ -65,7 +67,7 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
           const p = pushrodNodeOf(ctx, j);
           pn = p >= 0 ? nodes[p] : null;
           // A starting-value material is no material: the longer (aluminium) rule applies until it is entered.
-          if (pn && pn.kind === "pushrod" && !unenteredOf(pn, ["material"]).length) family = TUBES[pn.props.material]?.family ?? null;
+          if (pn && pn.kind === "pushrod" && !unenteredOf(pn, MATERIAL_KEY).length) family = TUBES[pn.props.material]?.family ?? null;
           if (!family) family = "aluminium";
         }
         const k = engagementMultiple(family);
@@ -290,7 +292,7 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
 /** The internal thread a rod end screws into, in words: its own (female), the pushrod's, or unknown (taken as aluminium). */
 function internalThread(shank: string, pn: Ctx["nodes"][number] | null): string {
   if (shank === "female") return "the rod end's own (steel) internal thread";
-  if (pn && pn.kind === "pushrod" && !unenteredOf(pn, ["material"]).length && TUBES[pn.props.material]?.family) return `the ${pn.props.material} pushrod's internal thread`;
+  if (pn && pn.kind === "pushrod" && !unenteredOf(pn, MATERIAL_KEY).length && TUBES[pn.props.material]?.family) return `the ${pn.props.material} pushrod's internal thread`;
   return "an internal thread of unknown material (taken as aluminium, the longer rule)";
 }
 

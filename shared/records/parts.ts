@@ -34,7 +34,8 @@ export const boltSpec = z.object({
   diameter: inches("diameter").optional(),
   grip: inches("grip").optional(),
   length: inches("length").optional(),
-  material: z.enum(["steel", "aluminium"], { error: "material must be steel or aluminium" }).default("steel"),
+  // No default: unentered, an AN size is steel (AN bolts without DD are alloy steel, from memory) and a custom bolt is not rated.
+  material: z.enum(["steel", "aluminium"], { error: "material must be steel or aluminium" }).optional(),
 });
 export const nutSpec = z.object({
   type: z.enum(NUT_TYPES.filter((t) => t !== "none") as [string, ...string[]], { error: `type must be one of ${NUT_TYPES.filter((t) => t !== "none").join(", ")}` }),
@@ -239,7 +240,7 @@ export function describeSpec(p: PartInput): string {
   const s = p.spec as Record<string, unknown>;
   switch (p.kind) {
     case "rodEnd": return `${s.thread} ${s.hand} ${s.shank}, bore ${s.ballBore} in, ${s.ratedUltimate} lbf ult.`;
-    case "bolt": return `${s.size}${s.diameter ? ` Ø${s.diameter} in` : ""}${s.grip ? `, grip ${s.grip} in` : ""}, ${s.material}`;
+    case "bolt": return `${s.size}${s.diameter ? ` Ø${s.diameter} in` : ""}${s.grip ? `, grip ${s.grip} in` : ""}, ${s.material ?? (s.size === "custom" ? "material not recorded" : "steel")}`;
     case "nut": return `${s.type} ${s.thread} (${s.pattern})`;
     case "washer": return `ID ${s.insideDiameter} × OD ${s.outsideDiameter} in${s.thickness ? ` × ${s.thickness}` : ""}`;
     case "tube": return `${s.material} ${s.outsideDiameter} × ${s.wall} in`;

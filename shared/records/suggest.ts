@@ -76,7 +76,9 @@ export function suggestParts(joint: Joint, result: JointResult | null | undefine
       const s = part.spec as PartSpec<"bolt">;
       const d = boltDiameterOf(s);
       if (d === null || !sameBore(d, bore)) continue;
-      const capacity = boltShearStrength(d, s.material === "aluminium" ? ALUMINIUM_BOLT_FSU : STEEL_BOLT_FSU, planes);
+      const material = s.material ?? (s.size === "custom" ? null : "steel");
+      if (material === null) { out.nearMisses.push({ part, reason: "a custom bolt with no material recorded: its strength is not known" }); continue; }
+      const capacity = boltShearStrength(d, material === "aluminium" ? ALUMINIUM_BOLT_FSU : STEEL_BOLT_FSU, planes);
       if (required === null) { out.bolts.push({ part, capacity, margin: Infinity, what: "bolt shear" }); continue; }
       const margin = capacity / required - 1;
       if (margin >= 0) out.bolts.push({ part, capacity, margin, what: "bolt shear" });

@@ -164,6 +164,9 @@ function addCheck(a: Acc, id: CheckId, label: string, factor: number, allowable:
 }
 
 const BOLT_MATERIAL_TODO = "enter the bolt's material (steel or aluminium)";
+/** The to-do of a bolt with no shank diameter (a custom bolt): joints/findings.ts words it as its own finding. */
+export const BOLT_DIAMETER_TODO = "enter the bolt's shank diameter";
+const MATERIAL_KEY = ["material"] as const;
 /** A bolt's material: as entered; unentered, an AN size is steel (from memory: AN bolts without "DD" are alloy steel) and a custom bolt unknown. */
 function boltMaterial(b: NonNullable<JointHardware["bolt"]>): "steel" | "aluminium" | null {
   return b.material ?? (b.size === "custom" ? null : "steel");
@@ -201,7 +204,7 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
     const mat = boltMaterial(hw.bolt);
     const alu = mat === "aluminium";
     const allow = d === null || planes === null || mat === null ? null : SHEAR(d, alu ? FSU_ALU : FSU_STEEL, planes);
-    addCheck(acc, "boltShear", shearLabel("bolt shear", planes), ff, allow, d === null ? "enter the bolt's shank diameter" : mat === null ? BOLT_MATERIAL_TODO : planes === null ? SHEAR_TODO : null,
+    addCheck(acc, "boltShear", shearLabel("bolt shear", planes), ff, allow, d === null ? BOLT_DIAMETER_TODO : mat === null ? BOLT_MATERIAL_TODO : planes === null ? SHEAR_TODO : null,
       mat === null ? `Fsu of the bolt's material × πD²/4 × ${planes ?? "?"}` : `${alu ? "aluminium 37" : "steel 75"} ksi × πD²/4 × ${planes ?? "?"}`, alu ? SRC.aluminiumBolts : SRC.anBolts);
   }
 
@@ -253,7 +256,7 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
     const s = sides[i], m = s === "from" ? mFrom : mTo;
     const n = s === "from" ? ctx.jFrom[j] : ctx.jTo[j];
     const need = m && m.material !== undefined && m.thickness !== undefined && m.edgeDistance !== undefined ? NONE : missing(m, HOLE_NEEDS);
-    const todo = need.length ? `enter the ${need.join(", ")} of ${n >= 0 ? labelOf(ctx.nodes[n]) : s}'s member at the hole` : d === null ? "enter the bolt's shank diameter" : null;
+    const todo = need.length ? `enter the ${need.join(", ")} of ${n >= 0 ? labelOf(ctx.nodes[n]) : s}'s member at the hole` : d === null ? BOLT_DIAMETER_TODO : null;
     let bearAllow: number | null = null, tearAllow: number | null = null, basis = "", short: string | null = null;
     if (!todo && m && d !== null) {
       const plate = PLATES[m.material!];
@@ -290,10 +293,10 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
     } else {
       const n = ctx.jFrom[j] >= 0 && ctx.nodeRole[ctx.jFrom[j]] === "link" ? ctx.jFrom[j] : ctx.jTo[j];
       const pn = n >= 0 ? ctx.nodes[n] : null;
-      const starting = pn ? unenteredOf(pn, ["material"]).length > 0 : false;
+      const starting = pn ? unenteredOf(pn, MATERIAL_KEY).length > 0 : false;
       const mat = pn && pn.kind === "pushrod" && !starting ? TUBES[pn.props.material] : undefined;
       if (mat) { ftu = mat.ftu; body = mat; source = mat.source; }
-      else todo = starting ? enterTodo(pn!, ["material"]) : "enter the pushrod's material";
+      else todo = starting ? enterTodo(pn!, MATERIAL_KEY) : "enter the pushrod's material";
     }
     const allow = th && ftu !== null ? th.tensileStressArea * ftu : null;
     addCheck(acc, "threadTension", threadLabel(texts, re.thread), ff, allow, todo, threadBasis(texts, re.thread, body), todo ? THREAD_SRC : source);

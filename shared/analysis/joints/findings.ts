@@ -8,7 +8,7 @@ import type { AnalysisSettings, CheckId, Finding, JointCheck, JointResult } from
 import { type Ctx, jointLabel, nodeLabel } from "../context";
 import { finding, fmt, fmtMargin, jointSubject, num } from "../format";
 import { boltDiameter } from "../allowables";
-import { fastenerDiameter } from "./checks";
+import { BOLT_DIAMETER_TODO, fastenerDiameter } from "./checks";
 import { movingRole } from "./factors";
 
 const jl = jointLabel, fastenerDia = fastenerDiameter, boltDia = boltDiameter, MIN_ED = MIN_EDGE_RATIO;
@@ -79,7 +79,7 @@ export function jointFindings(ctx: Ctx, results: JointResult[], s: AnalysisSetti
         out.push(finding("bearing-rating-missing", "caution", subj,
           `Not checked: the ball or roller bearing at joint ${jl(ctx, j)} has no rating recorded, so it cannot be compared with the ${fmt(c.required!)} lbf it must carry. Enter the bearing's rated radial load from its maker.`,
           c.source, [num("required ultimate", c.required!, "lbf")]));
-      else if (own && c.id === "boltShear")
+      else if (own && c.id === "boltShear" && c.todo === BOLT_DIAMETER_TODO)
         out.push(finding("bolt-diameter-unknown", "caution", subj,
           `Not checked: the custom bolt at joint ${jl(ctx, j)} has no diameter recorded, so its shear, bending and the bearing at its holes cannot be checked. Enter the shank diameter.`, SRC.anBolts));
       else rest.push(c);

@@ -13,6 +13,8 @@ import type { Finding } from "../types";
 import { type Ctx, jointsAt, nodeLabel } from "../context";
 import type { Loads } from "../loads";
 import { finding, fmt, jointSubject, linkageSubject, nodeSubject, num } from "../format";
+
+const STOP_KEY = ["stopAt"] as const, TRAVEL_KEYS = ["travelUp", "travelDown"] as const;
 import { unenteredLoadKeys, unenteredOf } from "../unentered";
 
 const STOP_SRC = { kind: "published", text: "14 CFR 23.675: stops positively limit travel and take the system loads" } as const;
@@ -103,7 +105,7 @@ function stopLoad(ctx: Ctx, loads: Loads, j: number, loadTodo: (string | null)[]
   loads.jointRadial[j] = m / arm;
   loads.jointFrom[j] = taintAt(ctx, loads, x);
   // Where the stop or the surface's travel is a starting value, the comparison is left to the motion and unentered notes.
-  if (part.kind === "controlSurface" && !unenteredOf(stop, ["stopAt"]).length && !unenteredOf(part, ["travelUp", "travelDown"]).length) {
+  if (part.kind === "controlSurface" && !unenteredOf(stop, STOP_KEY).length && !unenteredOf(part, TRAVEL_KEYS).length) {
     const travel = Math.max(part.props.travelUp, part.props.travelDown);
     if (Math.abs(stop.props.stopAt) > travel)
       out.push(finding("stop-beyond-travel", "caution", nodeSubject(stop.id),

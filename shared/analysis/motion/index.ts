@@ -15,6 +15,9 @@ import { buildChains, type Chain } from "./chain";
 import { type ChainSweep, mu as muDeg, sweepChain } from "./sweep";
 import { chainFindings, MOTION_SRC, atInput, type Ends } from "./findings";
 import { riggingRange } from "./rigging";
+import { enterTodo, unenteredOf } from "../unentered";
+
+const LENGTH_KEY = ["length"] as const;
 import type { MotionChainSummary, MotionReport, WorstLoad } from "./types";
 
 export type { MotionReport, MotionChainSummary, WorstLoad } from "./types";
@@ -82,9 +85,11 @@ export function analyzeMotion(ctx: Ctx, settings: AnalysisSettings, steps?: numb
           if (m > maxT.value) maxT = { value: m, at: sw.theta[k], rodId };
         }
       }
-      const rig = riggingRange(ctx, st.rod, [st.jointA, st.jointB]);
       const rodNode = ctx.nodes[st.rod];
       const card = (rodNode.props as { length: number }).length;
+      // The length on the card is a starting value: nothing to compare the geometry's length with yet.
+      const startLength = unenteredOf(rodNode, LENGTH_KEY).length > 0;
+      const rig = startLength ? { ok: false as const, toEnter: [enterTodo(rodNode, LENGTH_KEY).replace(/^enter /, "")] } : riggingRange(ctx, st.rod, [st.jointA, st.jointB]);
       rods.push({ rodId, needed: st.length, card, shortest: rig.ok ? rig.shortest : null, longest: rig.ok ? rig.longest : null, misalignment: (Math.asin(Math.min(1, Math.abs(st.dz) / st.length)) * 180) / Math.PI });
       if (!rig.ok) {
         notChecked.push(`Rigging of ${nodeLabel(rodNode)} (the geometry needs ${fmt(st.length, 3)} in centre to centre, the card says ${fmt(card, 3)} in): enter ${rig.toEnter.join("; ")}.`);

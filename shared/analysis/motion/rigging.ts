@@ -9,6 +9,9 @@
  */
 import type { LinkageNode } from "../../linkage/schema";
 import { THREADS_BY_NAME, TUBE_MATERIALS_BY_NAME } from "../../hardware";
+import { unenteredOf } from "../unentered";
+
+const MATERIAL_KEY = ["material"] as const;
 import { type Ctx, jointLabel } from "../context";
 
 export type Rigging =
@@ -22,7 +25,8 @@ export function minEngagement(threadMajor: number, family: "steel" | "aluminium"
 
 export function riggingRange(ctx: Ctx, rod: number, joints: [number, number]): Rigging {
   const node = ctx.nodes[rod] as Extract<LinkageNode, { kind: "pushrod" }>;
-  const family = TUBE_MATERIALS_BY_NAME[node.props.material]?.family ?? "aluminium";
+  // A starting-value material is no material: the longer (aluminium) rule, as the retention check does.
+  const family = unenteredOf(node, MATERIAL_KEY).length ? "aluminium" : TUBE_MATERIALS_BY_NAME[node.props.material]?.family ?? "aluminium";
   const toEnter: string[] = [];
   let minus = 0, plus = 0;
   const mins: number[] = [];

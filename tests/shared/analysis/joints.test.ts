@@ -235,3 +235,16 @@ describe("a bolt's material is not assumed where the part number does not give i
     expect(c.allowable!).toBeLessThan(2 * 3681.55 * 0.6); // aluminium 37 ksi, not steel 75
   });
 });
+
+describe("a custom bolt with its diameter but no material", () => {
+  it("is reported as a check not made for want of its material, not as a bolt without a diameter", () => {
+    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: { ...h.bolt!, size: "custom", diameter: 0.25, material: undefined } }));
+    const r = run(g);
+    const f = r.findings.filter((x) => x.subject.id === "rodA").map((x) => x.code);
+    expect(f).not.toContain("bolt-diameter-unknown");
+    expect(r.findings.find((x) => x.code === "joint-checks-not-made" && x.subject.id === "rodA")!.message).toContain("enter the bolt's material");
+    // Without its diameter the own message is still given.
+    const g2 = withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: { ...h.bolt!, size: "custom", diameter: undefined, material: "steel" } }));
+    expect(run(g2).findings.map((x) => `${x.code}@${x.subject.id}`)).toContain("bolt-diameter-unknown@rodA");
+  });
+});

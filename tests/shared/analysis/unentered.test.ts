@@ -211,3 +211,35 @@ describe("a wheel", () => {
     expect(codes(r)).toContain("values-unentered@wheel");
   });
 });
+
+describe("found in review: places a starting value still reached a figure", () => {
+  it("a hinge moment whose force passes through a starting horn arm does not set the loads (14 CFR 23.395 case waits)", () => {
+    // 14 CFR 23.395: 125 % of the hinge moment sets the loads between the minimum and maximum pilot forces; a hinge
+    // moment giving 80 % of the maximum-force case lowers them (the minimum for a stick in pitch is 60 %).
+    const limit = analyze(demoPitchLinkage()).surfaces[0].hingeMomentLimit;
+    const g = withProps(demoPitchLinkage(), "elevator", { hingeMoment: (0.8 * limit) / 1.25 });
+    const entered = analyze(valid(g));
+    expect(entered.designCase.scale).toBeLessThan(1); // the hinge-moment case lowers the loads when entered
+    const r = analyze(mark(g, "horn", ["hornArm"]));
+    expect(r.designCase.scale).toBe(1);
+    expect(codes(r)).toContain("hinge-moment-waits@elevator");
+    expect(codes(entered)).not.toContain("hinge-moment-waits@elevator");
+  });
+
+  it("a pushrod whose length is a starting value is not held against the geometry's length", () => {
+    const withGeometry = { ...demoPitchLinkage(), geometry: demoPitchGeometry() };
+    const entered = analyze(valid(withGeometry));
+    expect(entered.motion!.notChecked.join(" ")).not.toContain(`length of "Aft pushrod"`);
+    const r = analyze(mark(withGeometry, "pushrod-aft", ["length"]));
+    expect(r.motion!.notChecked.join(" ")).toContain(`enter the length of "Aft pushrod" (still its starting value)`);
+    expect(r.motion!.chains[0].rods.find((x) => x.rodId === "pushrod-aft")!.shortest).toBeNull();
+    expect(codes(r).some((c) => c.startsWith("rigging-out-of-range@pushrod-aft"))).toBe(false);
+  });
+
+  it("a cable whose size was entered is still judged too small when only a terminal is a starting value", () => {
+    // AC 43.13-1B 7-149 (as the cables tests): no cable under 1/8 in in the primary controls.
+    const r = analyze(mark(withProps(rudderCircuit(), "cableL", { size: "1/16" }), "cableL", ["terminalA"]));
+    expect(codes(r)).toContain("cable-too-small@cableL");
+    expect(r.cables.find((c) => c.nodeId === "cableL")!.margin).toBeNull();
+  });
+});

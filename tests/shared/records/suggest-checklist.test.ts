@@ -59,6 +59,15 @@ describe("suggest a part", () => {
     expect(dbl.bolts.find((b) => b.part.partNumber === "AN4-st")!.capacity).toBeCloseTo(7363.1, 1); // two planes: twice 3681.55
   });
 
+  it("rates a library AN bolt with no material as steel, and does not rate a custom one", () => {
+    const custom: Part = { id: "C-1", kind: "bolt", partNumber: "C-1", description: "", createdAt: at, updatedAt: at, spec: { size: "custom", diameter: 0.25 } };
+    const an: Part = { id: "AN4-x", kind: "bolt", partNumber: "AN4-x", description: "", createdAt: at, updatedAt: at, spec: { size: "AN4" } };
+    const s = suggestParts(joint, { jointId: joint.id, radialUltimate: 2000 } as JointResult, [custom, an]);
+    expect(s.bolts.map((b) => b.part.partNumber)).toEqual(["AN4-x"]);
+    expect(s.bolts[0].capacity).toBeCloseTo(3681.6, 1); // steel, single shear (the demo joint), as above
+    expect(s.nearMisses.find((m) => m.part.partNumber === "C-1")!.reason).toBe("a custom bolt with no material recorded: its strength is not known");
+  });
+
   it("ranks by no load where the joint's load rests on starting values", () => {
     const g = { ...graph, nodes: graph.nodes.map((n) => (n.id === "stick" ? { ...n, unentered: ["gripArm"] } : n)) } as typeof graph;
     const r = analyze(g).joints.find((j) => j.jointId === joint.id)!;
