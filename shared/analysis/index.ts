@@ -92,14 +92,21 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   for (const [n, v] of motion.loads.surface) loads.surfaceMoment[n] = v;
   findings.push(...motion.findings);
 
+  // The to-do of a load carried through a part's starting values, made once per such part (not once per joint).
+  const loadTodos = new Map<number, string>();
+  const loadTodoFrom = (from: number): string | null => {
+    if (!from) return null;
+    let t = loadTodos.get(from);
+    if (t === undefined) loadTodos.set(from, (t = enterTodo(ctx.nodes[from - 1], unenteredLoadKeys(ctx.nodes[from - 1]))));
+    return t;
+  };
   const pushrods: PushrodResult[] = [];
   const surfaces: SurfaceResult[] = [];
   const pushrodNodes: number[] = [];
   for (let n = 0; n < ctx.nodes.length; n++) {
     const node = ctx.nodes[n];
     if (node.kind === "pushrod") {
-      const from = loads.nodeFrom[n];
-      pushrods.push(pushrodResult(node, loads.pushrodAxial[n], loads.driven[n] === 1, s, from ? enterTodo(ctx.nodes[from - 1], unenteredLoadKeys(ctx.nodes[from - 1])) : null));
+      pushrods.push(pushrodResult(node, loads.pushrodAxial[n], loads.driven[n] === 1, s, loadTodoFrom(loads.nodeFrom[n])));
       pushrodNodes.push(n);
     } else if (ctx.nodeRole[n] === "surface") {
       surfaces.push({ nodeId: node.id, hingeMomentLimit: loads.surfaceMoment[n], driven: loads.driven[n] === 1, designHingeMoment: null, loadCase: null });
@@ -111,9 +118,7 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   const joints: JointResult[] = new Array(ctx.joints.length);
   for (let j = 0; j < ctx.joints.length; j++) {
     // A load carried through a part's starting values is not the builder's: the joint's checks say what to enter.
-    const from = loads.jointFrom[j];
-    const todo = path.loadTodo[j] ?? (from ? enterTodo(ctx.nodes[from - 1], unenteredLoadKeys(ctx.nodes[from - 1])) : null);
-    joints[j] = jointResult(ctx, j, loads, s, todo, cc.cableJoint[j] === 1 ? CABLE_JOINT : OTHER_JOINT);
+    joints[j] = jointResult(ctx, j, loads, s, path.loadTodo[j] ?? loadTodoFrom(loads.jointFrom[j]), cc.cableJoint[j] === 1 ? CABLE_JOINT : OTHER_JOINT);
   }
   const cables = cableResults(ctx, cc, loads, s);
   const cautions = settingsCautions(s, findings);

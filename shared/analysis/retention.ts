@@ -12,9 +12,7 @@ import { MIN_PREVAILING_TORQUE, PREVAILING_SRC } from "../hardware/plates";
 import { type Ctx, jointLabel, jointsAt, nodeLabel, pushrodNodeOf } from "./context";
 import { boltDiameter } from "./allowables";
 import { finding, fmt, jointSubject, nodeSubject, num } from "./format";
-
-const MATERIAL_KEY = ["material"] as const;
-import { unenteredOf } from "./unentered";
+import { MATERIAL_KEY, unenteredOf } from "./unentered";
 
 // Module-level aliases: read the tables once, not through re-export getters on every joint.
 const BOLTS = AN_BOLTS_BY_SIZE, THREADS = THREADS_BY_NAME, TORQUE = TORQUE_BY_THREAD, TUBES = TUBE_MATERIALS_BY_NAME, SRC = SRC_;

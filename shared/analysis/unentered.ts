@@ -70,11 +70,10 @@ export const VALUE_WORDS: Record<string, string> = {
 const NONE: readonly string[] = Object.freeze([]);
 
 export function unenteredOf(node: LinkageNode, keys?: readonly string[]): readonly string[] {
-  const u = (node as { unentered?: unknown }).unentered;
-  // Most parts have none: no allocation on the 10,000-part path.
+  const u = node.unentered;
+  // Most parts have none: no allocation on the 10,000-part path. (A graph that skipped the schema may hold anything.)
   if (!Array.isArray(u) || u.length === 0) return NONE;
-  if (!keys) return u.filter((k): k is string => typeof k === "string");
-  return keys.filter((k) => u.includes(k));
+  return keys ? keys.filter((k) => u.includes(k)) : u;
 }
 
 /** "grip arm and link arm", "outside diameter, wall thickness and length". */
@@ -95,6 +94,8 @@ export function unenteredLoadKeys(node: LinkageNode): readonly string[] {
 }
 
 const SRC_UNENTERED = { kind: "commonPractice", text: "a margin is computed only from values the builder entered; starting values are not data" } as const;
+/** A pushrod's tube material alone (the thread-engagement rule and the rod end's thread check read it). */
+export const MATERIAL_KEY = ["material"] as const;
 /** A pushrod's tube, as its column and tension allowables need it. */
 export const TUBE_KEYS = ["material", "outsideDiameter", "wall", "length"] as const;
 /** A cable's strength: its breaking strength and the terminals' efficiency. */
@@ -106,7 +107,7 @@ export const TENSION_KEYS = ["size", "construction", "material", "terminalA", "t
  */
 export function unenteredFindings(ctx: Ctx, out: Finding[]) {
   for (const node of ctx.nodes) {
-    if (!(node as { unentered?: unknown }).unentered) continue;
+    if (!node.unentered) continue;
     const keys = unenteredOf(node).filter((k) => k !== "note");
     if (keys.length === 0) continue;
     const undone: string[] = [];

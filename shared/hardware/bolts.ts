@@ -47,3 +47,11 @@ export const MIN_BOLT_DIAMETER = 0.19;
 export function boltShearStrength(diameter: number, fsu: number, planes: 1 | 2): number {
   return fsu * ((Math.PI * diameter * diameter) / 4) * planes;
 }
+
+/**
+ * A bolt's material: as entered; not entered, an AN size is steel (from memory: AN bolts without "DD" in the part
+ * number are alloy steel) and a custom bolt is unknown (null). The one place that reads an unentered material.
+ */
+export function boltMaterialOf(b: { size: string; material?: "steel" | "aluminium" }): "steel" | "aluminium" | null {
+  return b.material ?? (b.size === "custom" ? null : "steel");
+}

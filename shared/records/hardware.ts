@@ -2,7 +2,7 @@
  * The hardware list of a build: every part the joint cards of the current revisions call for, grouped
  * into lines by an identity key, with quantities and where each is used. Pure.
  */
-import { AN_BOLTS_BY_SIZE, type AnBoltSize } from "../hardware";
+import { AN_BOLTS_BY_SIZE, boltMaterialOf, type AnBoltSize } from "../hardware";
 import type { Joint, LinkageGraph } from "../linkage/schema";
 import { jointName, partName } from "../linkage/names";
 import { cableHardware } from "./cable-records";
@@ -57,7 +57,7 @@ export function jointParts(j: Joint): [string, HardwareKind, string, string | nu
   const b = hw.bolt;
   if (b) {
     const name = b.size === "custom" ? `Bolt Ø${n3(b.diameter)} in` : `${b.size} bolt`;
-    const material = b.material ?? (b.size === "custom" ? "material not recorded" : "steel");
+    const material = boltMaterialOf(b) ?? "material not recorded";
     out.push([`bolt|${b.size}|${n3(b.diameter)}|${n3(b.grip)}|${material}`, "bolt", `${name}, grip ${n3(b.grip)} in, ${material}`, null, 1]);
   }
   const nut = hw.nut;

@@ -5,6 +5,7 @@
 import Papa from "papaparse";
 import { z } from "zod";
 import { AN_BOLTS, NUT_TYPES, THREADS, TUBE_MATERIALS } from "../linkage/schema";
+import { boltMaterialOf } from "../hardware/bolts";
 
 export const PART_KINDS = ["rodEnd", "bolt", "nut", "washer", "tube", "bushing"] as const;
 export type PartKind = (typeof PART_KINDS)[number];
@@ -240,7 +241,7 @@ export function describeSpec(p: PartInput): string {
   const s = p.spec as Record<string, unknown>;
   switch (p.kind) {
     case "rodEnd": return `${s.thread} ${s.hand} ${s.shank}, bore ${s.ballBore} in, ${s.ratedUltimate} lbf ult.`;
-    case "bolt": return `${s.size}${s.diameter ? ` Ø${s.diameter} in` : ""}${s.grip ? `, grip ${s.grip} in` : ""}, ${s.material ?? (s.size === "custom" ? "material not recorded" : "steel")}`;
+    case "bolt": return `${s.size}${s.diameter ? ` Ø${s.diameter} in` : ""}${s.grip ? `, grip ${s.grip} in` : ""}, ${boltMaterialOf(s as { size: string; material?: "steel" | "aluminium" }) ?? "material not recorded"}`;
     case "nut": return `${s.type} ${s.thread} (${s.pattern})`;
     case "washer": return `ID ${s.insideDiameter} × OD ${s.outsideDiameter} in${s.thickness ? ` × ${s.thickness}` : ""}`;
     case "tube": return `${s.material} ${s.outsideDiameter} × ${s.wall} in`;

@@ -3,7 +3,7 @@
  * ball bore; bolts: the bore's diameter) and carry its required ultimate load, ordered by margin.
  * Pure: the required load comes from the stored analysis of the revision (JointResult.radialUltimate).
  */
-import { AN_BOLTS_BY_SIZE, ALUMINIUM_BOLT_FSU, STEEL_BOLT_FSU, boltShearStrength, type AnBoltSize } from "../hardware";
+import { AN_BOLTS_BY_SIZE, ALUMINIUM_BOLT_FSU, STEEL_BOLT_FSU, boltMaterialOf, boltShearStrength, type AnBoltSize } from "../hardware";
 import type { Joint } from "../linkage/schema";
 import type { JointResult } from "../analysis/types";
 import type { Part, PartSpec } from "./parts";
@@ -76,7 +76,7 @@ export function suggestParts(joint: Joint, result: JointResult | null | undefine
       const s = part.spec as PartSpec<"bolt">;
       const d = boltDiameterOf(s);
       if (d === null || !sameBore(d, bore)) continue;
-      const material = s.material ?? (s.size === "custom" ? null : "steel");
+      const material = boltMaterialOf(s);
       if (material === null) { out.nearMisses.push({ part, reason: "a custom bolt with no material recorded: its strength is not known" }); continue; }
       const capacity = boltShearStrength(d, material === "aluminium" ? ALUMINIUM_BOLT_FSU : STEEL_BOLT_FSU, planes);
       if (required === null) { out.bolts.push({ part, capacity, margin: Infinity, what: "bolt shear" }); continue; }

@@ -14,7 +14,8 @@ import {
 import { SRC } from "../../hardware/sources";
 import { THREADS_BY_NAME, type ThreadName } from "../../hardware/threads";
 import { TUBE_MATERIALS_BY_NAME, type TubeMaterial } from "../../hardware/materials";
-import { enterTodo, unenteredOf } from "../unentered";
+import { enterTodo, MATERIAL_KEY, unenteredOf } from "../unentered";
+import { boltMaterialOf } from "../../hardware/bolts";
 import type { JointHardware, Member } from "../../linkage/schema";
 import type { AnalysisSettings, CheckId, JointCheck, JointRole, SourceTag, SpecialFactor } from "../types";
 import { type Ctx, nodeLabel } from "../context";
@@ -166,11 +167,6 @@ function addCheck(a: Acc, id: CheckId, label: string, factor: number, allowable:
 const BOLT_MATERIAL_TODO = "enter the bolt's material (steel or aluminium)";
 /** The to-do of a bolt with no shank diameter (a custom bolt): joints/findings.ts words it as its own finding. */
 export const BOLT_DIAMETER_TODO = "enter the bolt's shank diameter";
-const MATERIAL_KEY = ["material"] as const;
-/** A bolt's material: as entered; unentered, an AN size is steel (from memory: AN bolts without "DD" are alloy steel) and a custom bolt unknown. */
-function boltMaterial(b: NonNullable<JointHardware["bolt"]>): "steel" | "aluminium" | null {
-  return b.material ?? (b.size === "custom" ? null : "steel");
-}
 
 export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardware["bolt"]>) => number | null): JointCheck[] {
   const { ctx, j, settings, special } = c;
@@ -201,7 +197,7 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
     const allow = pin?.shearStrength !== undefined && planes !== null ? SHEAR(pin.diameter, pin.shearStrength, planes) : null;
     addCheck(acc, "pinShear", shearLabel("clevis pin shear", planes), ff, allow, todo, pin ? `Fsu ${Math.round((pin.shearStrength ?? 0) / 1000)} ksi × πD²/4 × ${planes ?? "?"}` : "no pin recorded", PIN_SRC);
   } else if (hw.bolt) {
-    const mat = boltMaterial(hw.bolt);
+    const mat = boltMaterialOf(hw.bolt);
     const alu = mat === "aluminium";
     const allow = d === null || planes === null || mat === null ? null : SHEAR(d, alu ? FSU_ALU : FSU_STEEL, planes);
     addCheck(acc, "boltShear", shearLabel("bolt shear", planes), ff, allow, d === null ? BOLT_DIAMETER_TODO : mat === null ? BOLT_MATERIAL_TODO : planes === null ? SHEAR_TODO : null,
@@ -216,7 +212,7 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
   if ((hw.bolt || pin) && (hw.shear === "single" || (gaps !== undefined && gaps > 0))) {
     const members = sides.map((sd) => (sd === "from" ? mFrom : mTo));
     const ftu = pin ? (pin.shearStrength !== undefined ? pin.shearStrength / 0.6 : null) // Fsu ≈ 0.6 Ftu, from memory
-      : boltMaterial(hw.bolt!) === null ? null : boltMaterial(hw.bolt!) === "aluminium" ? FTU_ALU : FTU_STEEL;
+      : boltMaterialOf(hw.bolt!) === null ? null : boltMaterialOf(hw.bolt!) === "aluminium" ? FTU_ALU : FTU_STEEL;
     const need: string[] = [];
     if (d === null) need.push("the shank diameter");
     if (!pin && ftu === null) need.push("the bolt's material");

@@ -9,9 +9,7 @@
  */
 import type { LinkageNode } from "../../linkage/schema";
 import { THREADS_BY_NAME, TUBE_MATERIALS_BY_NAME } from "../../hardware";
-import { unenteredOf } from "../unentered";
-
-const MATERIAL_KEY = ["material"] as const;
+import { MATERIAL_KEY, unenteredOf } from "../unentered";
 import { type Ctx, jointLabel } from "../context";
 
 export type Rigging =
