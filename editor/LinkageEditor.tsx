@@ -172,6 +172,15 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
     [store, canEdit, fitAll, saveNow, file.openImport, file.exportFile, exportPicture, keepPicture, exporting, keeping, geoOpen, focusSubject, listOpen],
   );
 
+  // On a phone the run opens as a list: a deep-linked subject (a comment's link, a finding's) opens its card
+  // there, once, as a tap on it would; in the diagram the canvas centres and selects it (canvas/viewport.ts).
+  const openedLink = useRef(false);
+  useEffect(() => {
+    if (openedLink.current || !opening) return;
+    openedLink.current = true;
+    if (listRef.current) ctx.openCard(opening);
+  }, [opening, ctx]);
+
   // Keyboard: one handler over the command list (editor/commands.ts).
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => handleKey(e, ctx);

@@ -132,6 +132,29 @@ describe("the reviewer in the editor", () => {
     await expect.poll(() => samPage.getByTestId("notice").textContent()).toMatch(/part no-such-part, which is not in revision/);
   });
 
+  it("on a 390 px phone (the run as a list) a ?select= and a ?focus= link open that joint's card in view", async () => {
+    const phone = await (await browser.newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true })).newPage();
+    phone.on("pageerror", (e) => errors.push(String(e)));
+    try {
+      await signInPage(phone, sam.email, sam.password);
+      for (const q of ["?select=j-stick-fwd", `?focus=joint:${DEMO_WRONG_JOINT}`]) {
+        await phone.goto(editorUrl(demoLinkageId, q));
+        await phone.locator("[data-testid=linkage-editor][data-view=list]").waitFor({ timeout: 60_000 });
+        const card = phone.getByTestId("joint-card");
+        await card.waitFor();
+        const want = q.includes("focus") ? DEMO_WRONG_JOINT : "j-stick-fwd";
+        await expect.poll(() => phone.evaluate(() => document.activeElement?.getAttribute("data-subject"))).toBe(`joint:${want}`);
+        // The card's title is on screen, not below the list.
+        const t = (await phone.evaluate(() => document.activeElement!.getBoundingClientRect().toJSON())) as DOMRect;
+        expect(t.top).toBeGreaterThanOrEqual(0);
+        expect(t.bottom).toBeLessThanOrEqual(844);
+      }
+      await shot(phone, "editor-review-02b-phone-deep-link");
+    } finally {
+      await phone.context().close();
+    }
+  });
+
   it("can select and inspect, but Delete, Backspace, nudge, paste, undo and dragging change nothing", async () => {
     await open(samPage, editorUrl(demoLinkageId));
     expect(await samPage.getByTestId("parts-tray").count()).toBe(0);
