@@ -34,7 +34,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     fields: [
       { type: "enum", path: "rodEnd.shank", label: "Shank", options: opts(["male", "female"] as const), required: true, default: "male" },
       { type: "enum", path: "rodEnd.thread", label: "Thread (UNF)", options: opts(THREADS), required: true },
-      { type: "enum", path: "rodEnd.hand", label: "Thread hand", options: [["RH", "right-hand"], ["LH", "left-hand"]], required: true, default: "RH" },
+      { type: "enum", path: "rodEnd.hand", label: "Thread hand", options: [["RH", "right-hand"], ["LH", "left-hand"]], hint: "unset, the hardware list and checklist ask for it (the jam nut has the same hand)" },
       { type: "number", path: "rodEnd.ballBore", label: "Ball bore", q: "length", required: true },
       { type: "number", path: "rodEnd.ballDiameter", label: "Ball diameter", q: "length" },
       { type: "number", path: "rodEnd.housingBore", label: "Housing bore", q: "length", hint: "the retaining washer must be larger" },

@@ -297,7 +297,7 @@ function internalThread(shank: string, pn: Ctx["nodes"][number] | null): string 
 function handAt(ctx: Ctx, n: number, port: string): "RH" | "LH" | null {
   for (const j of jointsAt(ctx, n, port)) {
     const re = ctx.joints[j].hardware?.rodEnd;
-    if (re) return re.hand ?? "RH";
+    if (re) return re.hand ?? null; // unrecorded: not taken as RH
   }
   return null;
 }

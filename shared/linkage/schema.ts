@@ -51,7 +51,8 @@ export const AN_BOLTS = ["AN3", "AN4", "AN5", "AN6", "AN7", "AN8"] as const;
 export const rodEndSchema = z.object({
   shank: z.enum(["male", "female"]).default("male"),
   thread: threadSchema,
-  hand: z.enum(["RH", "LH"]).default("RH"),
+  /** No default: a jam nut is bought by the rod end's hand, so an unrecorded hand is asked for, never taken as RH. */
+  hand: z.enum(["RH", "LH"]).optional(),
   ballBore: inches("ball bore"),
   ballDiameter: inches("ball diameter").optional(),
   /** Bore of the housing (eye) the ball sits in; a retaining washer must be larger. */

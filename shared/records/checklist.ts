@@ -34,7 +34,7 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
   const add = (code: ItemCode, text: string, source: SourceTag) => items.push({ jointId: j.id, subject: "joint", where, code, text, source });
   const re = hw.rodEnd;
   if (re) {
-    add("jam-nut", `Jam nut on the ${re.thread} ${re.hand} rod end tight against the fitting and marked across nut and fitting.`, SRC.jamNut);
+    add("jam-nut", `Jam nut on the ${re.thread}${re.hand ? ` ${re.hand}` : ""} rod end${re.hand ? "" : " (the same hand as the rod end; record it on the joint card)"} tight against the fitting and marked across nut and fitting.`, SRC.jamNut);
     if (re.hasWitnessHole !== false) add("witness-hole", "Witness hole blocked: a fine wire does not pass through it (the rod end is screwed in far enough).", SRC.engagement);
     else {
       const d = THREADS_BY_NAME[re.thread]?.majorDiameter;

@@ -50,9 +50,11 @@ export function jointParts(j: Joint): [string, HardwareKind, string, string | nu
   const re = hw.rodEnd;
   if (re) {
     const pn = re.partNumber?.trim() || null;
-    out.push([pn ? `rodEnd|${pn.toLowerCase()}` : `rodEnd|${re.thread}|${re.hand}|${re.shank}|${n3(re.ballBore)}`, "rodEnd",
-      `Rod end ${re.thread} ${re.hand} ${re.shank}, bore ${n3(re.ballBore)} in`, pn, 1]);
-    if (hw.jamNut?.fitted) out.push([`jamNut|${re.thread}|${re.hand}`, "jamNut", `Jam nut ${re.thread} ${re.hand}`, null, 1]);
+    // An unrecorded hand is listed as such: a jam nut of the wrong hand does not go on.
+    const hand = re.hand ?? "hand not recorded";
+    out.push([pn ? `rodEnd|${pn.toLowerCase()}` : `rodEnd|${re.thread}|${hand}|${re.shank}|${n3(re.ballBore)}`, "rodEnd",
+      `Rod end ${re.thread} ${re.hand ?? "(hand not recorded)"} ${re.shank}, bore ${n3(re.ballBore)} in`, pn, 1]);
+    if (hw.jamNut?.fitted) out.push([`jamNut|${re.thread}|${hand}`, "jamNut", re.hand ? `Jam nut ${re.thread} ${re.hand}` : `Jam nut ${re.thread}, hand not recorded (the rod end's hand)`, null, 1]);
   }
   const b = hw.bolt;
   if (b) {

@@ -59,7 +59,7 @@ export function suggestParts(joint: Joint, result: JointResult | null | undefine
       const s = part.spec as PartSpec<"rodEnd">;
       const misfit = [
         s.thread !== re.thread ? `thread ${s.thread}, the joint needs ${re.thread}` : null,
-        s.hand !== re.hand ? `${s.hand} thread, the joint needs ${re.hand}` : null,
+        re.hand && s.hand !== re.hand ? `${s.hand} thread, the joint needs ${re.hand}` : null,
         !sameBore(s.ballBore, re.ballBore) ? `bore ${s.ballBore} in, the joint needs ${re.ballBore} in` : null,
       ].filter(Boolean) as string[];
       if (misfit.length) {

@@ -217,6 +217,9 @@ describe("rule 9: one RH and one LH end per pushrod", () => {
   it("does not trip with RH and LH ends", () => {
     expect(codes(goodRun(), "rod")).toEqual([]);
   });
+  it("does not take an unrecorded hand as RH (one RH end and one of no recorded hand)", () => {
+    expect(codes(withHardware(goodRun(), "rodB", patchRodEnd({ hand: undefined })), "rod")).toEqual([]);
+  });
 });
 
 describe("rule 10: misalignment rating present", () => {

@@ -48,6 +48,14 @@ describe("suggest a part", () => {
     expect(misses["F-bore"]).toBe("bore 0.3125 in, the joint needs 0.25 in");
   });
 
+  it("does not refuse a rod end for its hand where the joint's hand is not recorded", () => {
+    const result = { jointId: joint.id, radialUltimate: 2000 } as JointResult;
+    const noHand = { ...joint, hardware: { ...joint.hardware, rodEnd: { ...joint.hardware.rodEnd!, hand: undefined } } };
+    const s = suggestParts(noHand, result, LIBRARY);
+    expect(s.rodEnds.map((x) => x.part.partNumber)).toEqual(["C-RH", "B-6000", "A-4200"]);
+    expect(s.nearMisses.map((m) => m.reason).join(" ")).not.toMatch(/thread, the joint needs/);
+  });
+
   it("rates bolts in single shear where the joint's shear planes are not entered, and in double where they are", () => {
     const result = { jointId: joint.id, radialUltimate: 2000 } as JointResult;
     const unset = suggestParts({ ...joint, hardware: { ...joint.hardware, shear: undefined } }, result, LIBRARY);
@@ -155,5 +163,18 @@ describe("hardware list", () => {
     const lh = lines.find((l) => l.description === "Rod end 1/4-28 LH male, bore 0.25 in")!;
     expect(lh.partNumber).toBe("LW-SRE4M-LH");
     expect(lh.usedIn.map((u) => u.jointId)).toEqual(["j-fwd-bellcrank", DEMO_WRONG_JOINT]);
+  });
+
+  it("lists a rod end of no recorded hand, and its jam nut, as such, apart from the RH and LH ones", () => {
+    const g = demoPitchLinkage();
+    const id = "j-stick-fwd"; // an RH rod end with a jam nut in the demo
+    const noHand = { ...g, joints: g.joints.map((j) => (j.id === id ? { ...j, hardware: { ...j.hardware, rodEnd: { ...j.hardware.rodEnd!, hand: undefined, partNumber: undefined } } } : j)) };
+    const q = Object.fromEntries(hardwareList([{ id: "L1", name: "Pitch", graph: noHand }]).map((l) => [l.description, l.quantity]));
+    expect(q["Rod end 1/4-28 (hand not recorded) male, bore 0.25 in"]).toBe(1);
+    expect(q["Jam nut 1/4-28, hand not recorded (the rod end's hand)"]).toBe(1);
+    expect(q["Jam nut 1/4-28 RH"]).toBe(1); // one fewer than the demo's two
+    const item = checklistFor(noHand).find((i) => i.jointId === id && i.code === "jam-nut")!;
+    expect(item.text).toMatch(/^Jam nut on the 1\/4-28 rod end \(the same hand as the rod end; record it on the joint card\)/);
+    expect(checklistFor(g).find((i) => i.jointId === id && i.code === "jam-nut")!.text).toMatch(/^Jam nut on the 1\/4-28 RH rod end tight/);
   });
 });

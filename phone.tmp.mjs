@@ -1,0 +1,17 @@
+import { chromium } from "playwright-core";
+const U = "http://127.0.0.1:3000/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/linkages/f24006fb-7d9b-45b1-a88b-13cecd0c656a";
+const browser = await chromium.launch({ executablePath: "/usr/bin/chromium", args: ["--headless", "--no-sandbox", "--disable-gpu"] });
+const context = await browser.newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true });
+const { csrfToken } = await (await context.request.get("http://127.0.0.1:3000/api/auth/csrf")).json();
+await context.request.post("http://127.0.0.1:3000/api/auth/callback/credentials", { form: { csrfToken, email: "dana@demo.linkwright.test", password: "larkspur-builder", json: "true" } });
+const page = await context.newPage();
+await page.goto(`${U}?select=pushrod-aft`, { waitUntil: "networkidle" });
+await page.waitForTimeout(1500);
+console.log("deep link: confirm visible", await page.getByTestId("btn-confirm-values").count(), "scrollY", await page.evaluate(() => scrollY));
+await page.goto(U, { waitUntil: "networkidle" });
+await page.waitForTimeout(1000);
+await page.locator('[data-run-item="node:pushrod-aft"]').tap();
+await page.waitForTimeout(800);
+console.log("after tap: confirm", await page.getByTestId("btn-confirm-values").count(), "scrollY", await page.evaluate(() => scrollY), "active", await page.evaluate(() => document.activeElement?.id || document.activeElement?.tagName));
+await page.screenshot({ path: "/tmp/phone-tap.png" });
+await browser.close();
