@@ -7,6 +7,9 @@ import { DESIGN_LOAD_SRC, leverRuleForce } from "../hardware";
 import type { AnalysisSettings, Finding } from "./types";
 import { type Ctx, nodeLabel } from "./context";
 import { finding, fmt, nodeSubject, num } from "./format";
+import { unenteredOf } from "./unentered";
+
+const GRIP = ["gripArm"] as const;
 
 export function secondaryInputFindings(ctx: Ctx, s: AnalysisSettings, out: Finding[]) {
   const system = ctx.graph.system;
@@ -15,7 +18,12 @@ export function secondaryInputFindings(ctx: Ctx, s: AnalysisSettings, out: Findi
     if (ctx.nodeRole[n] !== "input") continue;
     const node = ctx.nodes[n];
     const p = node.props as { designForce?: number; forceSource?: "designer" | "leverRule"; gripArm?: number };
-    if (node.kind === "stick" && p.forceSource === "leverRule" && p.gripArm !== undefined) {
+    if (node.kind === "stick" && p.forceSource === "leverRule" && unenteredOf(node, GRIP).length) {
+      // The rule's force rests on the grip arm: a starting value gives no figure to state.
+      out.push(finding("secondary-force-lever-rule", "advisory", nodeSubject(node.id),
+        `${nodeLabel(node)}: the design force comes from the lever rule, (1 + R)/3 × 50 lbf held between 50 and 150 lbf, where R is the grip arm — still a starting value. Enter the grip arm (or the designer's figure, where the plans give one) for the force.`,
+        DESIGN_LOAD_SRC.lever));
+    } else if (node.kind === "stick" && p.forceSource === "leverRule" && p.gripArm !== undefined) {
       out.push(finding("secondary-force-lever-rule", "advisory", nodeSubject(node.id),
         `${nodeLabel(node)}: the design force is ${fmt(leverRuleForce(p.gripArm), 0)} lbf by the lever rule, (1 + ${fmt(p.gripArm, 2)})/3 × 50 lbf, held between 50 and 150 lbf. Use the designer's figure instead where the plans give one.`,
         DESIGN_LOAD_SRC.lever, [num("design force", leverRuleForce(p.gripArm), "lbf")]));

@@ -130,6 +130,15 @@ describe("secondary inputs: the force has a stated source", () => {
     rel(r5.pushrods[0].limitAxial, 100);
     rel(run(flap({ forceSource: "leverRule" })).pushrods[0].limitAxial, 150 * 4);
     expect(r5.findings.map((f) => f.code)).not.toContain("secondary-force-default");
+    expect(r5.findings.find((f) => f.code === "secondary-force-lever-rule")!.message).toMatch(/is 100 lbf by the lever rule/);
+  });
+  it("states no lever-rule force from a grip arm that is still a starting value, and asks for the arm", () => {
+    const g = setProps(flap({ forceSource: "leverRule" }), "stick", { gripArm: 5, attachArm: 5 });
+    g.nodes.find((n) => n.id === "stick")!.unentered = ["gripArm"];
+    const f = run(g).findings.find((x) => x.code === "secondary-force-lever-rule")!;
+    expect(f.message).toMatch(/grip arm — still a starting value\. Enter the grip arm/);
+    expect(f.message).not.toMatch(/100 lbf/);
+    expect(f.numbers ?? []).toEqual([]);
   });
 });
 
