@@ -33,22 +33,34 @@ const terminal = (): JointHardware => hw({
 const pivot = (): JointHardware => hw({
   bearing: "ballBearing", bearingRating: 4000,
   bolt: { size: "AN5", material: "steel", grip: 1.25, stack: 1.25, threadsProtruding: 2 },
-  nut: { type: "selfLockingMetal", pattern: "tension" },
+  nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 8 }, // invented demo drag
   washerUnderHead: { outsideDiameter: 0.75, thickness: 0.063 },
   washerUnderNut: { outsideDiameter: 0.75, thickness: 0.063 },
-  torque: 120, // AC 43.13-1B table 7-1: 5/16-24 tension nut 100–140 in·lbf
+  torque: 120, // AC 43.13-1B table 7-1: 5/16-24 tension nut 100–140 in·lbf, plus the 8 in·lbf drag
   holes: { from: BRACKET, to: BRACKET },
 });
 /** Where a cable passes a pulley or fairlead: nothing bolted, the guide carries it. */
 const passing = (): JointHardware => ({ fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" });
-/** The horn on the rudder spar: two AN3 bolts. */
+/** An AN3 through a clevis: the fairlead block and the pedal stop (double shear). */
 const hornBolts = (): JointHardware => hw({
   bolt: { size: "AN3", material: "steel", grip: 0.5, stack: 0.5, threadsProtruding: 2 },
-  nut: { type: "selfLockingMetal", pattern: "tension" },
+  nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 3 }, // invented demo drag
   washerUnderHead: { outsideDiameter: 0.438, thickness: 0.032 },
   washerUnderNut: { outsideDiameter: 0.438, thickness: 0.032 },
-  torque: 22, // AC 43.13-1B table 7-1: 10-32 tension nut 20–25 in·lbf
+  torque: 25, // AC 43.13-1B table 7-1: 10-32 tension nut 20–25 in·lbf, plus the 3 in·lbf drag
   holes: { from: { material: "4130N", thickness: 0.125, edgeDistance: 0.38 }, to: { material: "2024-T3", thickness: 0.19, edgeDistance: 0.38 } },
+});
+
+/** The horn on the rudder spar: AN4 bolts through the horn and the spar doubler, two members (single shear). */
+const hornOnSpar = (): JointHardware => hw({
+  shear: "single",
+  spacers: 0,
+  bolt: { size: "AN4", material: "steel", grip: 0.375, stack: 0.375, threadsProtruding: 2 },
+  nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 8 }, // invented demo drag
+  washerUnderHead: { outsideDiameter: 0.5, thickness: 0.063 },
+  washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
+  torque: 65, // AC 43.13-1B table 7-1: 1/4-28 tension nut 50–70 in·lbf, plus the 8 in·lbf drag
+  holes: { from: { material: "4130N", thickness: 0.125, edgeDistance: 0.5 }, to: { material: "2024-T3", thickness: 0.19, edgeDistance: 0.5 } },
 });
 
 const at = (x: number, y: number) => ({ x, y });
@@ -97,7 +109,7 @@ export function demoRudderLinkage(): LinkageGraph {
     j("rd-j-tb-right", ["rd-cable-right", "b"], [DEMO_RUDDER_FAULT_PART, "a"], passing()),
     j("rd-j-horn-left", ["rd-tb-left", "b"], ["rd-horn", "attach"], terminal()),
     j("rd-j-horn-right", [DEMO_RUDDER_FAULT_PART, "b"], ["rd-horn", "attach"], terminal()),
-    j("rd-j-horn-spar", ["rd-horn", "surface"], ["rd-rudder", "horn"], hornBolts()),
+    j("rd-j-horn-spar", ["rd-horn", "surface"], ["rd-rudder", "horn"], hornOnSpar()),
     j("rd-j-hinge", ["rd-rudder", "hinge"], ["rd-fin", "mount"], pivot()),
     j("rd-j-stop", ["rd-stop", "contact"], ["rd-pedal-right", "attach"], hornBolts()),
   ];

@@ -38,7 +38,7 @@ function rodEndJoint(hand: "RH" | "LH", rating?: number): JointHardware {
     jamNut: { fitted: true, tightened: true },
     engagement: { witnessHoleVerified: true },
     bolt: { size: "AN4", material: "steel", grip: 0.75, stack: 0.75, threadsProtruding: 2 },
-    nut: { type: "selfLockingMetal", pattern: "tension" },
+    nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 8 }, // invented demo drag: 50–70 + 8 in·lbf
     washerUnderHead: { outsideDiameter: 0.625, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
     torque: 60,
@@ -52,7 +52,7 @@ function ballPivot(size: "AN4" | "AN5", torque: number): JointHardware {
   return hw({
     bearing: "ballBearing",
     bolt: { size, material: "steel", grip: 1.25, stack: 1.25, threadsProtruding: 2 },
-    nut: { type: "selfLockingMetal", pattern: "tension" },
+    nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 8 }, // invented demo drag
     washerUnderHead: { outsideDiameter: 0.75, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.75, thickness: 0.063 },
     torque,
@@ -73,14 +73,19 @@ function bushingPivot(size: "AN5" | "AN6"): JointHardware {
   });
 }
 
-/** Clamped bolted attachment (horn to spar), AN3 through the horn and spar. */
-function boltedClamp(): JointHardware {
+/**
+ * Clamped bolted attachment, AN4: the horn to the spar (two members, so single shear) or a stop bolted through a
+ * clevis on the stick (double shear).
+ */
+function boltedClamp(shear: "single" | "double" = "single"): JointHardware {
   return hw({
-    bolt: { size: "AN3", material: "steel", grip: 0.5, stack: 0.5, threadsProtruding: 2 },
-    nut: { type: "selfLockingMetal", pattern: "tension" },
-    washerUnderHead: { outsideDiameter: 0.438, thickness: 0.032 },
-    washerUnderNut: { outsideDiameter: 0.438, thickness: 0.032 },
-    torque: 22,
+    shear,
+    bolt: { size: "AN4", material: "steel", grip: 0.375, stack: 0.375, threadsProtruding: 2 },
+    nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 8 }, // invented demo drag: 50–70 + 8 in·lbf
+    washerUnderHead: { outsideDiameter: 0.5, thickness: 0.063 },
+    washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
+    torque: 65,
+    spacers: 0,
     // The horn's steel base and the surface's 2024-T3 spar doubler.
     holes: { from: { material: "4130N", thickness: 0.125, edgeDistance: 0.38 }, to: { material: "2024-T3", thickness: 0.19, edgeDistance: 0.38 } },
   });
@@ -118,8 +123,9 @@ export function demoPitchLinkage(): LinkageGraph {
     rodEnd: rodEnd("LH"),
     engagement: { witnessHoleVerified: true },
     shear: "single",
+    freeSide: "head",
     bolt: { size: "AN4", material: "steel", grip: 0.5, stack: 0.5, threadsProtruding: 2 },
-    nut: { type: "selfLockingMetal", pattern: "tension" },
+    nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 8 }, // invented demo drag
     washerUnderHead: { outsideDiameter: 0.438, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
     torque: 60,
@@ -135,7 +141,7 @@ export function demoPitchLinkage(): LinkageGraph {
     joint(DEMO_WRONG_JOINT, ["pushrod-aft", "b"], ["horn", "attach"], wrong),
     joint("j-horn-elevator", ["horn", "surface"], ["elevator", "horn"], boltedClamp()),
     joint("j-elevator-hinge", ["elevator", "hinge"], ["mount-tail", "mount"], ballPivot("AN4", 60)),
-    joint("j-stick-stop", ["stop-stick", "contact"], ["stick", "attach"], boltedClamp()),
+    joint("j-stick-stop", ["stop-stick", "contact"], ["stick", "attach"], boltedClamp("double")),
   ];
   return { formatVersion: FORMAT_VERSION, name: "Larkspur LX-2 pitch", system: "pitch", nodes, joints };
 }
@@ -165,7 +171,7 @@ export function generateLinkage(nodeCount: number): LinkageGraph {
   nodes.push({ id: "m-stick", kind: "structureMount", label: "", position: pos(0, 1), props: { note: "" } });
   addJoint(["stick", "pivot"], ["m-stick", "mount"], ballPivot("AN5", 120));
   nodes.push({ id: "stop", kind: "travelStop", label: "", position: pos(0, -1), props: { stopAt: 15, arm: 8 } });
-  addJoint(["stop", "contact"], ["stick", "attach"], boltedClamp());
+  addJoint(["stop", "contact"], ["stick", "attach"], boltedClamp("double"));
 
   // Open ends waiting for a pushrod: [node id, port, column, row].
   const open: [string, string, number, number][] = [["stick", "attach", 0, 0]];

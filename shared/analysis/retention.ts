@@ -7,7 +7,7 @@
 import { AN_BOLTS_BY_SIZE, MIN_BOLT_DIAMETER, SRC as SRC_, THREADS_BY_NAME, TORQUE_BY_THREAD, TUBE_MATERIALS_BY_NAME } from "../hardware";
 import type { Joint } from "../linkage/schema";
 import type { Finding, JointRole } from "./types";
-import { turnsOnBolt } from "./joints/factors";
+import { movingRole, turnsOnBolt } from "./joints/factors";
 import { MIN_PREVAILING_TORQUE, PREVAILING_SRC } from "../hardware/plates";
 import { type Ctx, jointLabel, jointsAt, nodeLabel, pushrodNodeOf } from "./context";
 import { boltDiameter } from "./allowables";
@@ -17,15 +17,17 @@ import { MATERIAL_KEY, unenteredOf } from "./unentered";
 // Module-level aliases: read the tables once, not through re-export getters on every joint.
 const BOLTS = AN_BOLTS_BY_SIZE, THREADS = THREADS_BY_NAME, TORQUE = TORQUE_BY_THREAD, TUBES = TUBE_MATERIALS_BY_NAME, SRC = SRC_;
 const MIN_D = MIN_BOLT_DIAMETER, MIN_DRAG = MIN_PREVAILING_TORQUE;
+/** No aluminium bolt under 1/4 in. // AC 43.13-1B 7-41 */
+const ALU_MIN_D = 0.25;
 
 function torqueNumbers(v: number, min: number, max: number) {
   return [num("applied torque", v, "in·lbf"), num("table minimum", min, "in·lbf"), num("table maximum", max, "in·lbf")];
 }
 
-/** Tolerance on grip vs stack, in: a measurement tolerance of 1/64 in. [engineering judgement] */
+/** Tolerance on grip vs stack, in: a measurement tolerance of 1/64 in. // common practice, no source */
 export const GRIP_TOLERANCE = 1 / 64;
 
-/** Engagement multiple of the thread diameter: 1×D in steel, 2×D in aluminium (rule 2). */
+/** Engagement multiple of the thread diameter: 1×D in steel, 2×D in aluminium (rule 2). // common practice, no source (domain.md §4 rule 2) */
 export function engagementMultiple(family: "steel" | "aluminium"): number {
   return family === "steel" ? 1 : 2;
 }
@@ -60,7 +62,8 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         let family: "steel" | "aluminium" | null = null;
         // The pushrod the rod end screws into; the words for its thread are made only for a finding (internalThread).
         let pn: Ctx["nodes"][number] | null = null;
-        if (re.shank === "female") family = "steel";
+        // A female rod end's own internal thread: its body's material (an aluminium or unrecorded body takes the longer rule).
+        if (re.shank === "female") family = re.bodyMaterial === undefined || re.bodyMaterial === "aluminium" ? "aluminium" : "steel";
         else {
           const p = pushrodNodeOf(ctx, j);
           pn = p >= 0 ? nodes[p] : null;
@@ -76,13 +79,13 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         if (!verified) {
           if (len !== undefined && len < required) {
             out.push(finding("thread-engagement-short", "hazard", jointSubject(jt.id),
-              `The rod end at joint ${jointLabel(ctx, j)} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${internalThread(re.shank, pn)}). Screw it in further and re-adjust the other end.`,
+              `The rod end at joint ${jointLabel(ctx, j)} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${internalThread(re, pn)}). Screw it in further and re-adjust the other end.`,
               SRC.engagement, [num("engaged length", len, "in"), num("required", required, "in")]));
           } else if (len === undefined) {
             out.push(finding("thread-engagement-unverified", "caution", jointSubject(jt.id),
               re.hasWitnessHole !== false
                 ? `The thread engagement at joint ${jointLabel(ctx, j)} is not verified: check that a wire will not pass through the witness hole, or record the engaged length (at least ${fmt(required, 3)} in, ${k}×D).`
-                : `The rod end at joint ${jointLabel(ctx, j)} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${internalThread(re.shank, pn)}).`,
+                : `The rod end at joint ${jointLabel(ctx, j)} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${internalThread(re, pn)}).`,
               SRC.engagement, [num("required", required, "in")]));
           }
         }
@@ -100,7 +103,25 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       }
 
       // Rule 4: retaining washer on a single-shear rod end.
-      if (hw.shear === "single") {
+      if (hw.shear === "single" && hw.freeSide === undefined) {
+        // Which side is free is not recorded: a washer larger than the bore on both sides holds the eye either way;
+        // otherwise the side decides, so it is asked for (never taken as the head).
+        const bore = re.housingBore ?? re.ballDiameter;
+        const ws = [hw.washerUnderHead, hw.washerUnderNut].filter((w): w is NonNullable<typeof w> => !!w);
+        if (!ws.length) {
+          out.push(finding("retaining-washer-missing", "hazard", jointSubject(jt.id),
+            `The rod end at joint ${jointLabel(ctx, j)} is in single shear with no washer under the bolt head or the nut. If the ball comes out of its housing nothing holds the eye on the bolt: fit a washer whose outside diameter is larger than the housing bore${bore ? ` (over ${fmt(bore, 3)} in)` : ""} on the rod end's free side.`,
+            SRC.retainingWasher, bore ? [num("housing bore", bore, "in")] : []));
+        } else if (bore === undefined) {
+          out.push(finding("retaining-washer-unverifiable", "caution", jointSubject(jt.id),
+            `The rod end at joint ${jointLabel(ctx, j)} is in single shear, but neither its housing bore nor its ball diameter is recorded, so its retaining washer cannot be checked. Record the housing bore, and which side of the rod end is free (head or nut).`,
+            SRC.retainingWasher));
+        } else if (!(ws.length === 2 && ws.every((w) => w.outsideDiameter > bore))) {
+          out.push(finding("retaining-washer-side-unrecorded", "caution", jointSubject(jt.id),
+            `Not checked: the rod end at joint ${jointLabel(ctx, j)} is in single shear, and which side of it is free (against the ball, not the member) is not recorded. The retaining washer must be on that side and larger than the ${fmt(bore, 3)} in ${re.housingBore !== undefined ? "housing bore" : "ball (no housing bore recorded)"}; the washer under the head is ${hw.washerUnderHead ? `${fmt(hw.washerUnderHead.outsideDiameter, 3)} in` : "not fitted"}, under the nut ${hw.washerUnderNut ? `${fmt(hw.washerUnderNut.outsideDiameter, 3)} in` : "not fitted"}. Record the free side on the joint's card.`,
+            SRC.retainingWasher, [num("housing bore", bore, "in")]));
+        }
+      } else if (hw.shear === "single") {
         const bore = re.housingBore ?? re.ballDiameter;
         const nutSide = hw.freeSide === "nut";
         const w = nutSide ? hw.washerUnderNut : hw.washerUnderHead;
@@ -179,12 +200,17 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         SRC.minBolt, [num("bolt diameter", d, "in"), num("minimum", MIN_D, "in")]));
     }
 
-    // Aluminium bolts: none under 1/4 in in primary structure (AC 43.13-1B 7-41).
-    const primary = ctx.graph.system !== "flap" && ctx.graph.system !== "trim";
-    if (bolt.material === "aluminium" && d !== null && d < 0.25 - 1e-9 && primary) {
+    // Aluminium bolts: none under 1/4 in (AC 43.13-1B 7-41 says primary structure; a control run of any system is
+    // held to it here, as the primary-structure test is the structure's, not the control's), and none where the
+    // joint is taken apart again and again (AC 43.13-1B 7-41, from memory): a rod end or a moving joint.
+    if (bolt.material === "aluminium" && d !== null && d < ALU_MIN_D - 1e-9) {
       out.push(finding("aluminium-bolt-small", "hazard", jointSubject(jt.id),
-        `The aluminium bolt at joint ${jointLabel(ctx, j)} is ${fmt(d, 3)} in in diameter; aluminium bolts under 1/4 in do not belong in primary structure, and a ${ctx.graph.system} run is primary. Use a steel bolt.`,
-        SRC.minBolt, [num("bolt diameter", d, "in"), num("minimum", 0.25, "in")]));
+        `The aluminium bolt at joint ${jointLabel(ctx, j)} is ${fmt(d, 3)} in in diameter; aluminium bolts under 1/4 in do not belong in a control run. Use a steel bolt.`,
+        SRC.minBolt, [num("bolt diameter", d, "in"), num("minimum", ALU_MIN_D, "in")]));
+    } else if (bolt.material === "aluminium" && (re || movingRole(role))) {
+      out.push(finding("aluminium-bolt-moving-joint", "advisory", jointSubject(jt.id),
+        `The bolt at joint ${jointLabel(ctx, j)} is aluminium, at a joint that is ${re ? "disconnected for rigging" : "moving"}. Aluminium bolts and nuts are not used where they are taken out again and again for maintenance and inspection; use a steel bolt unless the designer calls for aluminium here.`,
+        SRC.minBolt));
     }
 
     const hasNut = nut && nut.type !== "none";
@@ -231,13 +257,16 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
           const ceiling = pattern === "shear" ? trow.ceiling.shear : trow.ceiling.tension;
           const pat = pattern ?? "tension";
           const lo = range.min + (drag ?? 0), hi = range.max + (drag ?? 0);
+          // The applied torque includes the nut's drag, so its ceiling does too (the table's figures are without it).
+          const top = ceiling + (drag ?? 0);
           const plusDrag = selfLocking ? (drag === undefined ? " plus the nut's drag torque" : ` plus the measured ${fmt(drag, 1)} in·lbf drag`) : "";
           if (pattern === undefined) {
             const both = `${fmt(trow.tension.min, 0)}–${fmt(trow.tension.max, 0)} in·lbf for a ${row.thread} tension nut, ${fmt(trow.shear.min, 0)}–${fmt(trow.shear.max, 0)} in·lbf for a shear (thin) nut${plusDrag}`;
-            if (tq !== undefined && tq > Math.max(trow.ceiling.tension, trow.ceiling.shear))
+            const topEither = Math.max(trow.ceiling.tension, trow.ceiling.shear) + (drag ?? 0);
+            if (tq !== undefined && tq > topEither)
               out.push(finding("torque-over-maximum", "hazard", jointSubject(jt.id),
-                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(Math.max(trow.ceiling.tension, trow.ceiling.shear), 0)} in·lbf maximum allowable for a ${row.thread} nut of either pattern. The bolt may have yielded: replace the bolt and the nut, and torque the new ones within the table (${both}).`,
-                SRC.torqueCeiling, [num("applied torque", tq, "in·lbf"), num("maximum allowable", Math.max(trow.ceiling.tension, trow.ceiling.shear), "in·lbf")]));
+                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(topEither, 0)} in·lbf maximum allowable for a ${row.thread} nut of either pattern${drag ? ` (with the measured ${fmt(drag, 1)} in·lbf drag)` : ""}. The bolt may have yielded: replace the bolt and the nut, and torque the new ones within the table (${both}).`,
+                SRC.torqueCeiling, [num("applied torque", tq, "in·lbf"), num("maximum allowable", topEither, "in·lbf")]));
             else
               out.push(finding("nut-pattern-unrecorded", tq === undefined ? "advisory" : "caution", jointSubject(jt.id),
                 tq === undefined
@@ -247,10 +276,10 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
           } else if (tq === undefined) {
             out.push(finding("torque-unrecorded", "advisory", jointSubject(jt.id),
               `Record the torque applied at joint ${jointLabel(ctx, j)}: ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${pat} nut${plusDrag}.`, source));
-          } else if (tq > ceiling) {
+          } else if (tq > top) {
             out.push(finding("torque-over-maximum", "hazard", jointSubject(jt.id),
-              `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(ceiling, 0)} in·lbf maximum allowable for a ${row.thread} ${pat} nut. The bolt may have yielded: replace the bolt and the nut, and torque the new ones within ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf${plusDrag}.`,
-              SRC.torqueCeiling, [...torqueNumbers(tq, range.min, range.max), num("maximum allowable", ceiling, "in·lbf")]));
+              `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(top, 0)} in·lbf maximum allowable for a ${row.thread} ${pat} nut${drag ? ` (${fmt(ceiling, 0)} in·lbf plus the measured ${fmt(drag, 1)} in·lbf drag)` : ""}. The bolt may have yielded: replace the bolt and the nut, and torque the new ones within ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf${plusDrag}.`,
+              SRC.torqueCeiling, [...torqueNumbers(tq, range.min, range.max), num("maximum allowable", top, "in·lbf")]));
           } else if (tq < lo) {
             out.push(finding("torque-low", "caution", jointSubject(jt.id),
               `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, below the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}. Re-torque it.`, source, torqueNumbers(tq, range.min, range.max)));
@@ -258,9 +287,17 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
             if (selfLocking && drag === undefined)
               out.push(finding("torque-check-drag", "caution", jointSubject(jt.id),
                 `Not checked: the nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the table's ${fmt(range.max, 0)} in·lbf for a ${row.thread} ${pat} nut, and its drag torque is not recorded. Measure the nut's drag torque and record it: the torque is within the table only if it is no more than ${fmt(range.max, 0)} in·lbf plus the drag.`, source, torqueNumbers(tq, range.min, range.max)));
+            else if (nut.type === "castellatedCotter")
+              // Past the range to line up a cotter-pin slot, within the maximum allowable: accepted practice (from memory).
+              out.push(finding("torque-high", "advisory", jointSubject(jt.id),
+                `The castellated nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(lo, 0)}–${fmt(hi, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut but within the ${fmt(top, 0)} in·lbf maximum allowable. Going past the range to line up the cotter-pin slot is acceptable up to that maximum; if the slot lines up lower, back off and re-torque within the range.`, source, [...torqueNumbers(tq, lo, hi), num("maximum allowable", top, "in·lbf")]));
             else
               out.push(finding("torque-high", "caution", jointSubject(jt.id),
-                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(lo, 0)}–${fmt(hi, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}. Over-torque stretches the bolt; replace the bolt and nut and torque within the range.`, source, torqueNumbers(tq, lo, hi)));
+                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(lo, 0)}–${fmt(hi, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}, though within the ${fmt(top, 0)} in·lbf maximum allowable. Back the nut off and torque it again within the range.`, source, [...torqueNumbers(tq, lo, hi), num("maximum allowable", top, "in·lbf")]));
+          } else if (selfLocking && drag === undefined) {
+            // Within the bare table range, but the range is the table's plus the nut's drag: a torque here may be low.
+            out.push(finding("torque-drag-unrecorded", "advisory", jointSubject(jt.id),
+              `Not checked against the nut's drag: the self-locking nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, and the range is ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${pat} nut plus its drag torque, which is not recorded. Measure the drag (the torque to turn the nut before it seats) and record it on the joint's card.`, source, torqueNumbers(tq, range.min, range.max)));
           }
           // A re-used self-locking nut whose drag has fallen below the minimum no longer locks.
           const minDrag = MIN_DRAG[row.thread];
@@ -288,8 +325,10 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
 }
 
 /** The internal thread a rod end screws into, in words: its own (female), the pushrod's, or unknown (taken as aluminium). */
-function internalThread(shank: string, pn: Ctx["nodes"][number] | null): string {
-  if (shank === "female") return "the rod end's own (steel) internal thread";
+function internalThread(re: NonNullable<Joint["hardware"]["rodEnd"]>, pn: Ctx["nodes"][number] | null): string {
+  if (re.shank === "female")
+    return re.bodyMaterial === undefined ? "the rod end's own internal thread (body material not recorded: taken as aluminium, the longer rule)"
+      : re.bodyMaterial === "aluminium" ? "the rod end's own aluminium internal thread" : "the rod end's own steel internal thread";
   if (pn && pn.kind === "pushrod" && !unenteredOf(pn, MATERIAL_KEY).length && TUBES[pn.props.material]?.family) return `the ${pn.props.material} pushrod's internal thread`;
   return "an internal thread of unknown material (taken as aluminium, the longer rule)";
 }

@@ -31,10 +31,10 @@ export function goodRodEndJoint(over: Partial<JointHardware> = {}, re: Partial<R
     jamNut: { fitted: true, tightened: true },
     engagement: { witnessHoleVerified: true },
     bolt: { size: "AN4", material: "steel", grip: 0.75, stack: 0.75, threadsProtruding: 2 },
-    nut: { type: "selfLockingMetal", pattern: "tension" },
+    nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 8 }, // fixture drag, above the 3.5/6.5 in·lbf minimums
     washerUnderHead: { outsideDiameter: 0.625, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.5, thickness: 0.063 },
-    torque: 60, // AC 43.13-1B table 7-1: 1/4-28 tension nut 50–70 in·lbf
+    torque: 60, // AC 43.13-1B table 7-1: 1/4-28 tension nut 50–70 in·lbf, plus the 8 in·lbf drag
     // The member each side: the rod end's own side is its eye (covered by the rating), the other a steel fork.
     holes: { from: steelFork, to: steelFork },
     spacers: 0,
@@ -46,10 +46,10 @@ export function goodBallPivot(over: Partial<JointHardware> = {}): JointHardware 
   return hardware({
     bearing: "ballBearing",
     bolt: { size: "AN5", material: "steel", grip: 1.25, stack: 1.25, threadsProtruding: 2 },
-    nut: { type: "selfLockingMetal", pattern: "tension" },
+    nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 8 }, // fixture drag, above the 3.5/6.5 in·lbf minimums
     washerUnderHead: { outsideDiameter: 0.75, thickness: 0.063 },
     washerUnderNut: { outsideDiameter: 0.75, thickness: 0.063 },
-    torque: 120, // AC 43.13-1B table 7-1: 5/16-24 tension nut 100–140 in·lbf
+    torque: 120, // AC 43.13-1B table 7-1: 5/16-24 tension nut 100–140 in·lbf, plus the 8 in·lbf drag
     bearingRating: 4000, // fixture part: the maker's rated radial load
     // The turning part's side is the bearing's housing (its rating); the mount is a 4130N bracket, e/D 2.0 for an AN5.
     holes: { from: { material: "4130N", thickness: 0.25, edgeDistance: 0.625, cheeks: 2 }, to: { material: "4130N", thickness: 0.25, edgeDistance: 0.625, cheeks: 2 } },
@@ -60,10 +60,10 @@ export function goodBallPivot(over: Partial<JointHardware> = {}): JointHardware 
 export function goodClamp(over: Partial<JointHardware> = {}): JointHardware {
   return hardware({
     bolt: { size: "AN3", material: "steel", grip: 0.5, stack: 0.5, threadsProtruding: 2 },
-    nut: { type: "selfLockingMetal", pattern: "tension" },
+    nut: { type: "selfLockingMetal", pattern: "tension", dragTorque: 3 }, // fixture drag, above the 2 in·lbf minimum
     washerUnderHead: { outsideDiameter: 0.438, thickness: 0.032 },
     washerUnderNut: { outsideDiameter: 0.438, thickness: 0.032 },
-    torque: 22, // AC 43.13-1B table 7-1: 10-32 tension nut 20–25 in·lbf
+    torque: 25, // AC 43.13-1B table 7-1: 10-32 tension nut 20–25 in·lbf, plus the 3 in·lbf drag
     // The horn's steel base and the surface's 2024-T3 spar doubler, e/D 2.0 for an AN3.
     holes: { from: { material: "4130N", thickness: 0.125, edgeDistance: 0.38 }, to: { material: "2024-T3", thickness: 0.19, edgeDistance: 0.38 } },
     ...over,

@@ -173,20 +173,40 @@ describe("nuts, bolts and torque", () => {
     const tq = (torque: number, dragTorque?: number) => withHardware(goodRun(), "rodA", (h) => ({ ...h, torque, nut: { ...h.nut!, dragTorque } }));
     expect(codes(tq(75, 10), "rodA")).toEqual([]); // 1/4-28 tension 50–70 + 10 drag
     expect(codes(tq(85, 10), "rodA")).toEqual(["torque-high"]);
-    expect(codes(tq(105, 10), "rodA")).toEqual(["torque-over-maximum"]); // over the 100 in·lbf column (from memory)
-    expect(run(tq(105, 10)).findings.find((f) => f.code === "torque-over-maximum")!.severity).toBe("hazard");
+    // The maximum allowable takes the drag as the range does: the 100 in·lbf column (from memory) + 10 drag.
+    expect(codes(tq(105, 10), "rodA")).toEqual(["torque-high"]);
+    expect(codes(tq(111, 10), "rodA")).toEqual(["torque-over-maximum"]);
+    expect(run(tq(111, 10)).findings.find((f) => f.code === "torque-over-maximum")!.severity).toBe("hazard");
   });
   it("drag below the minimum for a re-used self-locking nut is a caution", () => {
     const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 60, nut: { ...h.nut!, dragTorque: 2, reused: true } }));
     expect(codes(g, "rodA")).toEqual(["nut-drag-low"]); // 1/4-28 minimum 3.5 in·lbf (from memory)
     expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 63, nut: { ...h.nut!, dragTorque: 4, reused: true } })), "rodA")).toEqual([]);
   });
-  it("aluminium bolts under 1/4 in in primary structure (AC 43.13-1B 7-41), not in a flap run", () => {
-    const alu = (g: LinkageGraph) => withHardware(g, "horn", (h) => ({ ...h, bolt: { ...h.bolt!, material: "aluminium" } }));
+  it("aluminium bolts under 1/4 in (AC 43.13-1B 7-41) in a run of any system, flaps too; not an AN4", () => {
+    const alu = (g: LinkageGraph, id = "horn") => withHardware(g, id, (h) => ({ ...h, bolt: { ...h.bolt!, material: "aluminium" } }));
     expect(codes(alu(goodRun()), "horn")).toContain("aluminium-bolt-small");
     const flap = goodRun();
     flap.system = "flap";
-    expect(codes(alu(flap), "horn")).not.toContain("aluminium-bolt-small");
+    expect(codes(alu(flap), "horn")).toContain("aluminium-bolt-small");
+    expect(codes(withHardware(goodRun(), "horn", (h) => ({ ...h, bolt: { size: "AN4" as const, material: "aluminium" as const, grip: 0.5, stack: 0.5, threadsProtruding: 2 } })), "horn")).not.toContain("aluminium-bolt-small");
+  });
+  it("an aluminium AN4 at a rod end (taken apart for rigging) is an advisory; at a clamped horn it is not (AC 43.13-1B 7-41, from memory)", () => {
+    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: { ...h.bolt!, material: "aluminium" } }));
+    expect(codes(g, "rodA")).toContain("aluminium-bolt-moving-joint");
+    expect(run(g).findings.find((f) => f.code === "aluminium-bolt-moving-joint")!.severity).toBe("advisory");
+    const clamp = withHardware(goodRun(), "horn", (h) => ({ ...h, bolt: { size: "AN4" as const, material: "aluminium" as const, grip: 0.5, stack: 0.5, threadsProtruding: 2 } }));
+    expect(codes(clamp, "horn")).not.toContain("aluminium-bolt-moving-joint");
+  });
+  it("a female rod end's own thread is taken as aluminium unless its body is recorded as steel (2×D, then 1×D)", () => {
+    // 1/4-28: 1×D = 0.25 in in steel, 2×D = 0.5 in in aluminium (domain.md §4 rule 2, common practice)
+    const female = (bodyMaterial?: "aluminium" | "alloySteel") => withHardware(goodRun(), "rodA", (h) => ({
+      ...h, rodEnd: { ...h.rodEnd!, shank: "female" as const, hasWitnessHole: false, bodyMaterial }, engagement: { witnessHoleVerified: false, engagedLength: 0.3 },
+    }));
+    expect(codes(female("alloySteel"), "rodA")).not.toContain("thread-engagement-short");
+    expect(codes(female("aluminium"), "rodA")).toContain("thread-engagement-short");
+    expect(codes(female(undefined), "rodA")).toContain("thread-engagement-short");
+    expect(run(female(undefined)).findings.find((f) => f.code === "thread-engagement-short")!.message).toContain("body material not recorded");
   });
   it("the retaining washer is looked for on the rod end's free side", () => {
     const single = (freeSide: "head" | "nut") => withHardware(goodRun(), "rodA", (h) => ({ ...h, shear: "single", freeSide, washerUnderHead: { outsideDiameter: 0.4 }, washerUnderNut: { outsideDiameter: 0.625 } }));

@@ -92,7 +92,11 @@ describe("rule 3: bolt clamped in the ball; no self-locking nut on a bolt subjec
 });
 
 describe("rule 4: retaining washer on a single-shear rod end", () => {
-  const single = (washerOD?: number) => (h: JointHardware) => ({ ...h, shear: "single" as const, washerUnderHead: washerOD === undefined ? undefined : { outsideDiameter: washerOD } });
+  const single = (washerOD?: number) => (h: JointHardware) => ({ ...h, shear: "single" as const, freeSide: "head" as const, washerUnderHead: washerOD === undefined ? undefined : { outsideDiameter: washerOD } });
+  const sideUnset = (head?: number, nut?: number) => (h: JointHardware) => ({
+    ...h, shear: "single" as const, freeSide: undefined,
+    washerUnderHead: head === undefined ? undefined : { outsideDiameter: head }, washerUnderNut: nut === undefined ? undefined : { outsideDiameter: nut },
+  });
   it("trips with a washer no larger than the housing bore (0.438 in on a 0.500 in bore)", () => {
     const c = codes(withHardware(goodRun(), "rodB", single(0.438)), "rodB");
     expect(c).toContain("retaining-washer-small");
@@ -112,6 +116,17 @@ describe("rule 4: retaining washer on a single-shear rod end", () => {
   });
   it("does not apply in double shear", () => {
     expect(codes(withHardware(goodRun(), "rodB", (h) => ({ ...h, washerUnderHead: { outsideDiameter: 0.3 } })), "rodB")).toEqual([]);
+  });
+  it("free side not recorded: asks for it rather than taking the head, when one side's washer is not over the bore", () => {
+    // A 0.625 in washer under the head and a 0.5 in one under the nut on a 0.500 in bore: right only if the head side is free.
+    const g = withHardware(goodRun(), "rodB", sideUnset(0.625, 0.5));
+    expect(codes(g, "rodB").sort()).toEqual(["retaining-washer-side-unrecorded", "rod-end-single-shear"].sort());
+    expect(severityOf(g, "retaining-washer-side-unrecorded")).toBe("caution");
+    expect(codes(withHardware(goodRun(), "rodB", sideUnset(0.625)), "rodB")).toContain("retaining-washer-side-unrecorded");
+  });
+  it("free side not recorded: washers over the bore on both sides hold the eye either way; none at all is a hazard", () => {
+    expect(codes(withHardware(goodRun(), "rodB", sideUnset(0.625, 0.625)), "rodB")).toEqual(["rod-end-single-shear"]);
+    expect(codes(withHardware(goodRun(), "rodB", sideUnset()), "rodB")).toContain("retaining-washer-missing");
   });
 });
 
@@ -140,8 +155,26 @@ describe("rule 5: thread protrusion and grip", () => {
 });
 
 describe("rule 6: torque within AC 43.13-1B table 7-1", () => {
+  const noDrag = (torque: number) => (h: JointHardware) => ({ ...h, nut: { ...h.nut!, dragTorque: undefined }, torque });
   it("trips below the range (45 < 50 in·lbf, 1/4-28 tension nut)", () => {
-    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 45 })), "rodA")).toEqual(["torque-low"]); // table 7-1: 50–70
+    expect(codes(withHardware(goodRun(), "rodA", noDrag(45)), "rodA")).toEqual(["torque-low"]); // table 7-1: 50–70
+  });
+  it("trips below the range plus the measured drag (57 < 50 + 8 in·lbf)", () => {
+    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 57 })), "rodA")).toEqual(["torque-low"]); // table 7-1: 50–70, fixture drag 8
+  });
+  it("a self-locking nut in the bare range with no drag recorded is not checked against the drag (advisory), not passed", () => {
+    const g = withHardware(goodRun(), "rodA", noDrag(60));
+    expect(codes(g, "rodA")).toEqual(["torque-drag-unrecorded"]);
+    expect(severityOf(g, "torque-drag-unrecorded")).toBe("advisory");
+    expect(analyze(valid(g)).findings.find((f) => f.code === "torque-drag-unrecorded")!.message).toMatch(/^Not checked against the nut's drag/);
+  });
+  it("the maximum allowable takes the measured drag too: a 10-32 shear nut with 12 in·lbf drag at 26 in·lbf is in its 24–27 range, not over 25", () => {
+    // AC 43.13-1B table 7-1: 10-32 shear 12–15 in·lbf; maximum allowable 25 (domain.md, from memory)
+    const clamp10 = (torque: number) => (h: JointHardware) => ({ ...h, nut: { type: "selfLockingMetal" as const, pattern: "shear" as const, dragTorque: 12 }, torque });
+    expect(codes(withHardware(goodRun(), "horn", clamp10(26)), "horn")).toEqual([]);
+    const over = withHardware(goodRun(), "horn", clamp10(38)); // over 25 + 12
+    expect(codes(over, "horn")).toEqual(["torque-over-maximum"]);
+    expect(analyze(valid(over)).findings.find((f) => f.code === "torque-over-maximum")!.message).toContain("above the 37 in·lbf maximum allowable");
   });
   it("trips above the range on a nut without drag torque (75 > 70 in·lbf)", () => {
     const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, nut: { type: "plainSafetyWire", pattern: "tension" }, torque: 75 })); // table 7-1: 50–70
@@ -149,7 +182,7 @@ describe("rule 6: torque within AC 43.13-1B table 7-1", () => {
     expect(severityOf(g, "torque-high")).toBe("caution");
   });
   it("only advises on a self-locking nut above the range (the excess may be drag torque)", () => {
-    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 75 }));
+    const g = withHardware(goodRun(), "rodA", noDrag(75));
     expect(codes(g, "rodA")).toEqual(["torque-check-drag"]);
     expect(severityOf(g, "torque-check-drag")).toBe("caution");
   });
@@ -158,9 +191,18 @@ describe("rule 6: torque within AC 43.13-1B table 7-1", () => {
     expect(codes(withHardware(goodRun(), "rodA", shear(35)), "rodA")).toEqual([]); // table 7-1: 1/4-28 shear 30–40
     expect(codes(withHardware(goodRun(), "rodA", shear(45)), "rodA")).toEqual(["torque-high"]);
   });
-  it("does not trip within the range", () => {
-    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 50 })), "rodA")).toEqual([]); // table 7-1 minimum 50
-    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 70 })), "rodA")).toEqual([]); // table 7-1 maximum 70
+  it("does not trip within the range plus the drag", () => {
+    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 58 })), "rodA")).toEqual([]); // table 7-1 minimum 50 + 8 drag
+    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 78 })), "rodA")).toEqual([]); // table 7-1 maximum 70 + 8 drag
+  });
+  it("above the range but within the maximum: re-torque, never 'replace' (caution); a castellated nut lining up its slot is an advisory", () => {
+    const wired = withHardware(goodRun(), "rodA", (h) => ({ ...h, nut: { type: "plainSafetyWire" as const, pattern: "tension" as const }, torque: 80 }));
+    const m = analyze(valid(wired)).findings.find((f) => f.code === "torque-high")!;
+    expect(m.severity).toBe("caution");
+    expect(m.message).toMatch(/within the 100 in·lbf maximum allowable\. Back the nut off and torque it again/);
+    expect(m.message).not.toMatch(/replace/i);
+    const castle = withHardware(goodRun(), "rodA", (h) => ({ ...h, nut: { type: "castellatedCotter" as const, pattern: "tension" as const, cotterPinNew: true }, torque: 80 }));
+    expect(severityOf(castle, "torque-high")).toBe("advisory");
   });
   it("asks for the torque when it is not recorded", () => {
     expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: undefined })), "rodA")).toEqual(["torque-unrecorded"]);

@@ -1,0 +1,12 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "dana@demo.linkwright.test", pw: "larkspur-builder" });
+await page.goto(B + "/builds", { waitUntil: "networkidle" });
+await audit(page, "builds");
+await page.screenshot({ path: "/tmp/lw/p-builds.png", fullPage: true });
+const links = await page.$$eval("a[href]", (as) => as.map((a) => a.getAttribute("href")));
+console.log(links);
+const bl = links.find((h) => /^\/builds\/[0-9a-f-]{36}$/.test(h));
+await page.goto(B + bl, { waitUntil: "networkidle" });
+const links2 = await page.$$eval("a[href]", (as) => as.map((a) => a.getAttribute("href")));
+console.log([...new Set(links2)]);
+await browser.close();

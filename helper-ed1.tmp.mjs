@@ -1,0 +1,12 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "dana@demo.linkwright.test", pw: "larkspur-builder" });
+const BU = B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20";
+await page.goto(BU, { waitUntil: "networkidle" });
+await page.getByRole("table").getByRole("link", { name: "Larkspur LX-2 pitch" }).tap();
+await page.waitForLoadState("networkidle"); await page.waitForTimeout(1500);
+console.log(page.url());
+await page.screenshot({ path: "/tmp/lw/ed-top.png" });
+await audit(page, "editor");
+const items = await page.$$eval("[data-run-item]", (els) => els.map((e) => e.getAttribute("data-run-item") + " | " + e.tagName + " | " + e.textContent.trim().slice(0, 50)));
+console.log(items);
+await browser.close();

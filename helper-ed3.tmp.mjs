@@ -1,0 +1,25 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "dana@demo.linkwright.test", pw: "larkspur-builder" });
+const L = B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/linkages/2b0de79f-ace0-4e44-88d3-aa5a9321e01a";
+await page.goto(L, { waitUntil: "networkidle" }); await page.waitForTimeout(1500);
+await page.locator('[data-run-item="joint:j-aft-horn"]').tap();
+await page.waitForTimeout(800);
+const labelled = await page.$$eval('input[type=checkbox]', els => els.map(e => `${e.name||e.id}: label=${!!e.closest("label") || (e.id && !!document.querySelector('label[for="'+e.id+'"]'))} labelBox=${(() => { const l = e.closest("label"); if (!l) return ""; const r = l.getBoundingClientRect(); return Math.round(r.width)+"x"+Math.round(r.height); })()}`));
+console.log(labelled.join("\n"));
+const jam = page.locator('[name="v.jamNut__fitted"], #v\\.jamNut__fitted').first();
+await jam.scrollIntoViewIfNeeded();
+await page.screenshot({ path: "/tmp/lw/ed-jam-before.png" });
+await jam.tap();
+await page.locator('[name="v.jamNut__tightened"], #v\\.jamNut__tightened').first().tap();
+await page.waitForTimeout(1200);
+await page.screenshot({ path: "/tmp/lw/ed-jam-after.png" });
+const status = await page.locator("text=/saved|unsaved|Saving|changes/i").allTextContents(); console.log("status", status.slice(0,5));
+// where is the Save button?
+const save = page.getByRole("button", { name: /^Save$/ });
+console.log("save count", await save.count(), await save.first().boundingBox(), "scrollY", await page.evaluate(() => scrollY));
+await save.first().tap();
+await page.waitForTimeout(2000);
+console.log("status after", (await page.locator("text=/saved|unsaved|Saving|changes/i").allTextContents()).slice(0,5));
+await page.screenshot({ path: "/tmp/lw/ed-after-save.png" });
+console.log(await page.locator("text=/hazard/i").allTextContents());
+await browser.close();

@@ -1,0 +1,10 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "dana@demo.linkwright.test", pw: "larkspur-builder" });
+await page.goto(B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/hardware", { waitUntil: "networkidle" }); await page.waitForTimeout(800);
+await page.screenshot({ path: "/tmp/lw/hw-view.png" });
+await page.mouse.wheel(0, 300); 
+await page.evaluate(() => scrollTo(0, 350)); await page.waitForTimeout(300);
+await page.screenshot({ path: "/tmp/lw/hw-view2.png" });
+const info = await page.evaluate(() => { const t = document.querySelector("table"); const box = t.parentElement; return { tw: t.getBoundingClientRect().width, bw: box.getBoundingClientRect().width, ovx: getComputedStyle(box).overflowX, cols: [...t.querySelectorAll("thead th")].map(th => th.textContent.trim()) }; });
+console.log(info);
+await browser.close();

@@ -1,0 +1,23 @@
+import { open, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "dana@demo.linkwright.test", pw: "larkspur-builder", phone: false });
+const L = B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/linkages/2b0de79f-ace0-4e44-88d3-aa5a9321e01a";
+await page.goto(L, { waitUntil: "networkidle" }); await page.waitForTimeout(1500);
+const ids = await page.$$eval(".react-flow__node", ns => ns.map(n => n.getAttribute("data-id")));
+console.log("nodes in DOM", ids);
+console.log("edges in DOM", await page.$$eval(".react-flow__edge", ns => ns.map(n => n.getAttribute("data-id") || n.getAttribute("aria-label"))));
+const tab = async (k) => { for (let i = 0; i < k; i++) await page.keyboard.press("Tab"); };
+const act = () => page.evaluate(() => { const e = document.activeElement; return (e.getAttribute("aria-label") || e.textContent).slice(0, 80) + " role=" + e.getAttribute("role") + " desc=" + (e.getAttribute("aria-describedby") ? document.getElementById(e.getAttribute("aria-describedby").split(" ")[0])?.textContent?.slice(0, 80) : ""); });
+await tab(34); console.log("focus", await act());
+await page.screenshot({ path: "/tmp/lw/kb-edge-focus.png", clip: { x: 190, y: 300, width: 900, height: 450 } });
+await tab(8); console.log("focus", await act());
+await page.screenshot({ path: "/tmp/lw/kb-node-focus.png", clip: { x: 190, y: 300, width: 900, height: 450 } });
+await page.keyboard.press("Enter"); await page.waitForTimeout(600);
+console.log("after Enter", await page.evaluate(() => document.activeElement.outerHTML.slice(0, 150)));
+await page.screenshot({ path: "/tmp/lw/kb-node-enter.png" });
+await page.keyboard.press("Escape"); await page.waitForTimeout(300);
+console.log("after Esc", await act());
+// press Fit then check DOM nodes again
+await page.getByRole("button", { name: "Fit", exact: true }).focus(); await page.keyboard.press("Enter"); await page.waitForTimeout(800);
+console.log("nodes after Fit", await page.$$eval(".react-flow__node", ns => ns.map(n => n.getAttribute("data-id"))));
+await page.screenshot({ path: "/tmp/lw/kb-fit.png" });
+await browser.close();

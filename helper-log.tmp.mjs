@@ -1,0 +1,11 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "dana@demo.linkwright.test", pw: "larkspur-builder" });
+page.on("response", r => { if (r.status() >= 400) console.log("HTTP", r.status(), r.url()); });
+await page.goto(B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/log", { waitUntil: "networkidle" }); await page.waitForTimeout(800);
+await page.getByRole("button", { name: "New entry" }).tap(); await page.waitForTimeout(700);
+console.log("url", page.url(), "active", await page.evaluate(() => document.activeElement?.outerHTML.slice(0, 150)));
+await page.screenshot({ path: "/tmp/lw/log-new.png" });
+await audit(page, "log new");
+const fields = await page.$$eval("form input, form textarea, form select", els => els.map(e => `${e.tagName} ${e.type} name=${e.name} label=${e.labels?.[0]?.textContent?.trim().slice(0,30)} ${Math.round(e.getBoundingClientRect().width)}x${Math.round(e.getBoundingClientRect().height)}`));
+console.log(fields.join("\n"));
+await browser.close();

@@ -1,0 +1,21 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "dana@demo.linkwright.test", pw: "larkspur-builder" });
+page.on("response", r => { if (r.status() >= 400) console.log("HTTP", r.status(), r.url()); });
+await page.goto(B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/log", { waitUntil: "networkidle" }); await page.waitForTimeout(800);
+await page.getByRole("button", { name: "New entry" }).tap(); await page.waitForTimeout(500);
+console.log(await page.$$eval("form label", ls => ls.filter(l => l.querySelector("input[type=checkbox]")).map(l => l.textContent.trim() + " " + Math.round(l.getBoundingClientRect().width) + "x" + Math.round(l.getBoundingClientRect().height))));
+// submit empty first
+const submit = page.locator("form").first().locator("button[type=submit]");
+console.log("submit text", await submit.allTextContents());
+await submit.first().tap(); await page.waitForTimeout(800);
+await page.screenshot({ path: "/tmp/lw/log-empty-submit.png" });
+console.log("after empty submit active:", await page.evaluate(() => document.activeElement?.outerHTML.slice(0, 150)), await page.locator("[role=alert], .text-hazard").allTextContents());
+await page.getByLabel("Title").fill("Jam nut at the horn");
+await page.getByLabel("What was done").fill("Fitted and tightened the jam nut on the aft rod end.");
+await page.getByRole("checkbox", { name: "Pitch" }).tap();
+await page.getByLabel("Linkage revision (optional)").selectOption({ index: 1 });
+await submit.first().tap(); await page.waitForTimeout(1500);
+await page.screenshot({ path: "/tmp/lw/log-saved.png" });
+console.log("entries:", (await page.locator("text=/entries in the log/").allTextContents()));
+console.log("active", await page.evaluate(() => document.activeElement?.outerHTML.slice(0, 150)));
+await browser.close();

@@ -1,0 +1,14 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "sam@demo.linkwright.test", pw: "larkspur-reviewer" });
+page.on("response", r => { if (r.status() >= 400) console.log("HTTP", r.status(), r.url()); });
+const L = B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/linkages/2b0de79f-ace0-4e44-88d3-aa5a9321e01a";
+await page.goto(B + "/builds", { waitUntil: "networkidle" });
+await page.screenshot({ path: "/tmp/lw/rv-builds.png" });
+await page.goto(L, { waitUntil: "networkidle" }); await page.waitForTimeout(1500);
+await page.screenshot({ path: "/tmp/lw/rv-editor-top.png" });
+await audit(page, "rv editor");
+await page.locator('[data-run-item="joint:j-aft-horn"]').tap(); await page.waitForTimeout(800);
+await page.screenshot({ path: "/tmp/lw/rv-joint-full.png", fullPage: true });
+const btns = await page.$$eval("button", bs => bs.filter(b => b.offsetParent).map(b => b.textContent.trim().slice(0, 40)));
+console.log(btns.join(" | "));
+await browser.close();

@@ -1,0 +1,15 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "sam@demo.linkwright.test", pw: "larkspur-reviewer" });
+page.on("response", r => { if (r.status() >= 400) console.log("HTTP", r.status(), r.url()); });
+const L = B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/linkages/2b0de79f-ace0-4e44-88d3-aa5a9321e01a";
+await page.goto(L, { waitUntil: "networkidle" }); await page.waitForTimeout(1500);
+await page.locator('[data-run-item="joint:j-aft-horn"]').tap(); await page.waitForTimeout(600);
+const ack = page.getByRole("button", { name: "Acknowledge…" }).first();
+await ack.scrollIntoViewIfNeeded();
+console.log("ack box", await ack.boundingBox());
+await ack.tap(); await page.waitForTimeout(600);
+await page.screenshot({ path: "/tmp/lw/rv-ack-open.png" });
+console.log("active", await page.evaluate(() => document.activeElement?.outerHTML.slice(0, 200)));
+const dlg = await page.locator("[role=dialog]").count(); console.log("dialogs", dlg);
+await audit(page, "ack");
+await browser.close();

@@ -1,0 +1,21 @@
+import { open, audit, B } from "./helper-lib.tmp.mjs";
+const { browser, page } = await open({ email: "sam@demo.linkwright.test", pw: "larkspur-reviewer" });
+page.on("response", r => { if (r.status() >= 400) console.log("HTTP", r.status(), r.url()); });
+const L = B + "/builds/acbd7c41-5dc6-4b6f-9054-890c8d1efa20/linkages/2b0de79f-ace0-4e44-88d3-aa5a9321e01a";
+await page.goto(L, { waitUntil: "networkidle" }); await page.waitForTimeout(1500);
+await page.locator('[data-run-item="joint:j-aft-horn"]').tap(); await page.waitForTimeout(600);
+await page.getByRole("button", { name: "Acknowledge…" }).first().tap(); await page.waitForTimeout(400);
+await page.getByPlaceholder(/Why this is acceptable/).fill("Demo: washer checked against the drawing; larger washer on order.");
+await page.getByRole("button", { name: "Record acknowledgement" }).tap(); await page.waitForTimeout(1500);
+await page.screenshot({ path: "/tmp/lw/rv-acked.png" });
+// no touch way back to sign-off: reload
+await page.reload({ waitUntil: "networkidle" }); await page.waitForTimeout(1500);
+const sign = page.getByRole("button", { name: /Sign off/ });
+await page.getByPlaceholder("What you inspected and on what basis").fill("Inspected every joint of the pitch run against the plans.");
+await sign.tap(); await page.waitForTimeout(2000);
+await sign.count() && console.log("still there");
+const rp = page.locator("text=/Signed off|signed off/").first();
+await rp.scrollIntoViewIfNeeded().catch(()=>{});
+await page.screenshot({ path: "/tmp/lw/rv-signed.png" });
+console.log("alerts", await page.locator("[role=alert]").allTextContents(), await page.locator("text=/Signed off/i").allTextContents());
+await browser.close();
