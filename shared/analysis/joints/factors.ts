@@ -28,15 +28,16 @@ export function movingRole(role: JointRole): boolean {
 /**
  * Whether a part turns directly on the bolt or pin at this joint (a plain bearing with angular motion):
  * a plain bushing or clevis pin, a bolt set free to turn, a moving joint whose bearing is recorded as `none`,
- * or a pivot or hinge with no bearing recorded.
+ * or a moving joint (pivot, hinge, or a link end without a rod end) with no bearing recorded.
  */
 export function turnsOnBolt(hw: JointHardware | undefined, role: JointRole): boolean {
   if (!hw) return false;
   if (hw.fit === "freeToRotate" || hw.bearing === "plainBushing" || hw.bearing === "clevisPin") return true;
   if (hw.rodEnd || hw.bearing === "ballBearing" || hw.bearing === "rodEnd") return false;
   if (!(hw.bolt || hw.clevisPin)) return false;
-  // Nothing recorded: a pivot or hinge turns on something, so on the bolt; a link end (a fork, a terminal) is left alone.
-  if (hw.bearing === undefined) return role === "pivot" || role === "hinge";
+  // Nothing recorded at a moving joint with no rod end: a pivot or hinge turns on something, and so does a link end
+  // (a fork or a terminal on a horn or a crank arm) — on the bolt, until a bearing is recorded.
+  if (hw.bearing === undefined) return movingRole(role);
   return movingRole(role) && hw.bearing === "none";
 }
 

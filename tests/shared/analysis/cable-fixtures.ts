@@ -25,6 +25,12 @@ export const fairlead = (id: string, over: Partial<Props<"fairlead">> = {}): Lin
 /** The rigging record on the left cable: 30 lbf at 70 °F, the designer's range 25–35 lbf at 70 °F (invented). */
 export const RIGGED = { riggingTension: 30, riggingTemperature: 70, tensionMin: 25, tensionMax: 35, rangeTemperature: 70 };
 
+/**
+ * A cable terminal on a pedal or horn arm: the terminal turns on the bolt as the arm swings, so a castellated nut
+ * with a new cotter pin, snugged (AC 43.13-1B 7-64a: no self-locking nut on a bolt subject to rotation).
+ */
+export const terminalBolt = () => goodClamp({ nut: { type: "castellatedCotter", pattern: "shear", cotterPinNew: true }, torque: undefined, bearing: "none" });
+
 export function rudderCircuit(): LinkageGraph {
   return graph(
     [
@@ -35,16 +41,16 @@ export function rudderCircuit(): LinkageGraph {
     [
       j("pivL", ["pedalL", "pivot"], ["floor", "mount"], goodBallPivot()),
       j("pivR", ["pedalR", "pivot"], ["floor", "mount"], goodBallPivot()),
-      j("pedL", ["pedalL", "attach"], ["cableL", "a"], goodClamp()),
-      j("pedR", ["pedalR", "attach"], ["cableR", "a"], goodClamp()),
+      j("pedL", ["pedalL", "attach"], ["cableL", "a"], terminalBolt()),
+      j("pedR", ["pedalR", "attach"], ["cableR", "a"], terminalBolt()),
       j("overP", ["cableL", "run"], ["pulley", "cable"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" }),
       j("pulleyAxle", ["pulley", "pivot"], ["floor", "mount"], goodBallPivot()),
       j("thruF", ["cableR", "run"], ["fairlead", "cable"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" }),
       j("fairMount", ["fairlead", "mount"], ["floor", "mount"], goodClamp()),
       j("tbLa", ["cableL", "b"], ["tbL", "a"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" }),
       j("tbRa", ["cableR", "b"], ["tbR", "a"], { fit: "clamped", shear: "double", torqueStripe: false, photos: [], note: "" }),
-      j("hornL", ["tbL", "b"], ["horn", "attach"], goodClamp()),
-      j("hornR", ["tbR", "b"], ["horn", "attach"], goodClamp()),
+      j("hornL", ["tbL", "b"], ["horn", "attach"], terminalBolt()),
+      j("hornR", ["tbR", "b"], ["horn", "attach"], terminalBolt()),
       j("hornMount", ["horn", "surface"], ["rudder", "horn"], goodClamp()),
       j("hinge", ["rudder", "hinge"], ["fin", "mount"], goodBallPivot()),
       j("stopR", ["stop", "contact"], ["pedalR", "attach"], goodClamp()),

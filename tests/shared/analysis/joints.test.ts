@@ -110,6 +110,16 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(selectSpecialFactor(hw, "pivot", s, { cable: true })).toMatchObject({ value: 2, name: "cable-system joint factor" });
     expect(selectSpecialFactor({ ...hw, bearing: "ballBearing" }, "pivot", s).value).toBe(1.15);
   });
+  it("a link end with no rod end and no bearing recorded (a fork on a crank arm) is taken to turn on its bolt: 3.33 (23.693), not 1.15", () => {
+    const bare = { ...goodRun().joints[1].hardware, rodEnd: undefined, jamNut: undefined, engagement: undefined, bearing: undefined };
+    expect(selectSpecialFactor(bare, "link", s).value).toBe(3.33);
+    expect(selectSpecialFactor({ ...bare, bearing: "ballBearing" }, "link", s).value).toBe(1.15);
+    expect(selectSpecialFactor(bare, "other", s).value).toBe(1.15); // a clamped attachment does not move
+    // Its self-locking nut is asked about (caution), not passed.
+    const g = withHardware(goodRun(), "rodB", (h) => ({ ...h, rodEnd: undefined, jamNut: undefined, engagement: undefined, bearing: undefined }));
+    expect(codes(g, "rodB")).toContain("self-locking-nut-on-turning-bolt");
+    expect(run(g).findings.find((f) => f.code === "self-locking-nut-on-turning-bolt" && f.subject.id === "rodB")!.severity).toBe("caution");
+  });
   it("6.67 at a hinge that is not a ball or roller bearing (23.657(a)); fitting factor at a ball-bearing hinge", () => {
     const g = withHardware(goodRun(), "hinge", (h) => ({ ...h, bearing: "plainBushing" }));
     const r = joint(g, "hinge");
