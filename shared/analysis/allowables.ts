@@ -62,6 +62,9 @@ export function columnAllowable({ area, inertia, length, e, fty, k = 1 }: Column
   return { load: johnsonLoad(area, fty, e, slenderness), mode: "johnson", slenderness, transition };
 }
 
+/** The to-do of a part or joint no stick, pedal or wheel drives: its load is not known (shown as zero). */
+export const UNDRIVEN_TODO = "connect it to the run: no stick, pedal or wheel drives it, so its load is not known";
+
 /**
  * `loadTodo`: what to enter before the load is the builder's (a part upstream still at starting values), or null.
  * The tube's own starting values come first: the allowables are not shown from a tube nobody entered.
@@ -69,7 +72,8 @@ export function columnAllowable({ area, inertia, length, e, fty, k = 1 }: Column
 export function pushrodResult(node: Extract<LinkageNode, { kind: "pushrod" }>, limitAxial: number, driven: boolean, settings: AnalysisSettings, loadTodo: string | null = null): PushrodResult {
   const p = node.props;
   const tube = unenteredOf(node, TUBE_KEYS);
-  const todo = tube.length ? enterTodo(node, tube) : loadTodo;
+  // Nothing drives it: a zero load is no load to hold the tube against ("not checked", never a margin).
+  const todo = tube.length ? enterTodo(node, tube) : loadTodo ?? (driven ? null : UNDRIVEN_TODO);
   const mat = TUBE_MATERIALS_BY_NAME[p.material] ?? TUBE_MATERIALS_BY_NAME["4130N"];
   const sec = tubeSection(p.outsideDiameter, p.wall);
   const col = columnAllowable({ area: sec.area, inertia: sec.inertia, length: p.length, e: mat.e, fty: mat.fty, k: 1 });

@@ -7,7 +7,7 @@ import type { LinkageGraph } from "../linkage/schema";
 import { DEFAULT_SETTINGS, settingsSchema, type AnalysisSettings, type Finding, type JointResult, type PushrodResult, type Report, type SurfaceResult } from "./types";
 import { buildContext } from "./context";
 import { propagate } from "./loads";
-import { marginOfSafety, pushrodResult, strengthFindings } from "./allowables";
+import { marginOfSafety, pushrodResult, strengthFindings, UNDRIVEN_TODO } from "./allowables";
 import { jointResult } from "./joints/result";
 import type { FactorOptions } from "./joints/factors";
 import { jointFindings } from "./joints/findings";
@@ -118,7 +118,10 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   const joints: JointResult[] = new Array(ctx.joints.length);
   for (let j = 0; j < ctx.joints.length; j++) {
     // A load carried through a part's starting values is not the builder's: the joint's checks say what to enter.
-    joints[j] = jointResult(ctx, j, loads, s, path.loadTodo[j] ?? loadTodoFrom(loads.jointFrom[j]), cc.cableJoint[j] === 1 ? CABLE_JOINT : OTHER_JOINT);
+    // A joint no input reaches carries no known load (zero is not a load): its checks are not made.
+    const a = ctx.jFrom[j], b = ctx.jTo[j];
+    const driven = (a >= 0 && loads.driven[a] === 1) || (b >= 0 && loads.driven[b] === 1);
+    joints[j] = jointResult(ctx, j, loads, s, path.loadTodo[j] ?? loadTodoFrom(loads.jointFrom[j]) ?? (driven ? null : UNDRIVEN_TODO), cc.cableJoint[j] === 1 ? CABLE_JOINT : OTHER_JOINT);
   }
   const cables = cableResults(ctx, cc, loads, s);
   const cautions = settingsCautions(s, findings);

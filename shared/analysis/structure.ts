@@ -106,7 +106,7 @@ export function structureFindings(ctx: Ctx, loads: Loads, out: Finding[], cc?: C
       const node = nodes[n];
       if (!loads.driven[n] && ctx.degree[n] > 0 && LOAD_PATH.has(ctx.nodeRole[n]))
         out.push(finding("part-not-driven", "advisory", nodeSubject(node.id),
-          `No input drives ${nodeLabel(node)}, so its loads are shown as zero, not computed. Connect it to the run or check the joints leading to it.`, SRC.structure));
+          `No input drives ${nodeLabel(node)}, so its loads are not known and its margins and those of its joints are not checked. Connect it to the run or check the joints leading to it.`, SRC.structure));
     }
   }
 

@@ -7,7 +7,7 @@ import { MIN_EDGE_RATIO, SRC } from "../../hardware";
 import type { AnalysisSettings, CheckId, Finding, JointCheck, JointResult } from "../types";
 import { type Ctx, jointLabel, nodeLabel } from "../context";
 import { finding, fmt, fmtMargin, jointSubject, num } from "../format";
-import { boltDiameter } from "../allowables";
+import { boltDiameter, UNDRIVEN_TODO } from "../allowables";
 import { BOLT_DIAMETER_TODO, fastenerDiameter } from "./checks";
 import { movingRole } from "./factors";
 
@@ -84,7 +84,8 @@ export function jointFindings(ctx: Ctx, results: JointResult[], s: AnalysisSetti
           `Not checked: the custom bolt at joint ${jl(ctx, j)} has no diameter recorded, so its shear, bending and the bearing at its holes cannot be checked. Enter the shank diameter.`, SRC.anBolts));
       else rest.push(c);
     }
-    if (rest.length)
+    // A joint nothing drives is told once per part (part-not-driven), not again per joint; its card says "not checked".
+    if (rest.length && !rest.every((c) => c.todo === UNDRIVEN_TODO))
       out.push(finding("joint-checks-not-made", "caution", subj,
         `Not checked at joint ${jl(ctx, j)}: ${rest.map((c) => c.label).join(", ")}. To check ${rest.length === 1 ? "it" : "them"}: ${r.todo.filter((t) => rest.some((c) => c.todo?.includes(t))).join("; ")}.`,
         { kind: "commonPractice", text: "a check without its inputs is not made" }));

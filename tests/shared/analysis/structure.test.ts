@@ -20,6 +20,30 @@ describe("input that reaches no surface", () => {
   });
 });
 
+describe("parts nothing drives: not checked, never a margin from a zero load", () => {
+  it("with the stick's rod end removed, the pushrod and the joints past it read 'not checked' with what to do", () => {
+    const g = goodRun();
+    g.joints = g.joints.filter((x) => x.id !== "rodA");
+    const r = analyze(valid(g));
+    const rod = r.pushrods.find((p) => p.nodeId === "rod")!;
+    expect(rod.driven).toBe(false);
+    expect(rod.marginCompression).toBeNull();
+    expect(rod.marginTension).toBeNull();
+    expect(rod.todo).toMatch(/no stick, pedal or wheel drives it/);
+    const rodB = r.joints.find((x) => x.jointId === "rodB")!;
+    expect(rodB.checks.length).toBeGreaterThan(0);
+    expect(rodB.checks.every((c) => c.status === "notChecked" && c.margin === null)).toBe(true);
+    // Said once per part (part-not-driven), not once more per joint.
+    expect(codes(g)).toContain("part-not-driven@rod");
+    expect(codes(g).filter((c) => c.startsWith("joint-checks-not-made"))).toEqual([]);
+  });
+  it("in the whole run every pushrod and joint has its margins", () => {
+    const r = analyze(valid(goodRun()));
+    expect(r.pushrods.every((p) => p.driven && p.marginCompression !== null && p.todo === null)).toBe(true);
+    expect(r.joints.every((x) => x.checks.every((c) => c.status === "computed"))).toBe(true);
+  });
+});
+
 describe("pushrod without two ends", () => {
   it("trips when one end is not joined", () => {
     const g = goodRun();
