@@ -3,7 +3,7 @@
  * checks of the whole run (full and free travel; stops contact before the surface limits). Pure.
  * An item's key is (jointId, code); jointId is "" for items of the whole linkage.
  */
-import { AN_BOLTS_BY_SIZE, SRC, THREADS_BY_NAME, type AnBoltSize } from "../hardware";
+import { AN_BOLTS_BY_SIZE, SRC, THREADS_BY_NAME, TORQUE_BY_THREAD, type AnBoltSize } from "../hardware";
 import type { Joint, LinkageGraph } from "../linkage/schema";
 import { jointName, partName } from "../linkage/names";
 import type { Report, SourceTag } from "../analysis/types";
@@ -11,7 +11,7 @@ import { CABLE_PART_CODES, cableParts } from "./cable-records";
 
 export const ITEM_CODES = [
   "jam-nut", "witness-hole", "engagement-length", "retaining-washer", "nut-locking", "cotter-pin", "safety-wire",
-  "torque", "torque-stripe", "full-free-travel", "stops-before-limits", "not-checked", ...CABLE_PART_CODES,
+  "thread-protrusion", "torque", "torque-stripe", "full-free-travel", "stops-before-limits", "not-checked", ...CABLE_PART_CODES,
 ] as const;
 export type ItemCode = (typeof ITEM_CODES)[number];
 
@@ -43,20 +43,33 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
     // Shear planes not entered: the inspector looks, since a single-shear rod end needs the washer.
     if (hw.shear === "single" || hw.shear === undefined) {
       const bore = re.housingBore ?? re.ballDiameter;
-      add("retaining-washer", `${hw.shear === undefined ? "If the rod end is in single shear (not recorded): r" : "R"}etaining washer fitted under the ${hw.freeSide === "nut" ? "nut" : "bolt head"} (the rod end's free side), larger across than the rod end's housing bore${bore ? ` (over ${fmt(bore)} in)` : ""}, so the eye cannot slide off if the ball comes out.`, SRC.retainingWasher);
+      add("retaining-washer", `${hw.shear === undefined ? "If the rod end is in single shear (not recorded): r" : "R"}etaining washer fitted ${hw.freeSide === undefined ? "on the rod end's free side (not recorded: under the bolt head or the nut, whichever is against the ball)" : `under the ${hw.freeSide === "nut" ? "nut" : "bolt head"} (the rod end's free side)`}, larger across than the rod end's housing bore${bore ? ` (over ${fmt(bore)} in)` : ""}, so the eye cannot slide off if the ball comes out.`, SRC.retainingWasher);
     }
   }
   const nut = hw.nut;
+  // A part turning on the bolt (a bushing, a clevis pin, nothing, or a bolt set free): its castellated nut is snugged, not torqued.
+  const turns = hw.fit === "freeToRotate" || hw.bearing === "plainBushing" || hw.bearing === "clevisPin" || hw.bearing === "none";
   if (nut && nut.type !== "none") {
-    if (nut.type === "castellatedCotter") add("cotter-pin", "Castellated nut secured with a new cotter pin, legs bent back and trimmed.", SRC.cotter);
+    if (nut.type === "castellatedCotter") add("cotter-pin", `Castellated nut ${turns ? "snugged so the part still turns freely, " : ""}secured with a new cotter pin, legs bent back and trimmed.`, SRC.cotter);
     else if (nut.type === "plainSafetyWire") add("safety-wire", "Nut safety-wired, the wire pulling in the tightening direction.", SRC.nutLocking);
     else if (nut.type === "plain") add("nut-locking", "Plain nut: it is not locked. Replace it with a self-locking nut (where the bolt is clamped and nothing turns on it) or a castellated nut with a new cotter pin, or safety-wire it — not a lock washer, which does not belong in a control run.", SRC.nutLocking);
-    else add("nut-locking", "Self-locking nut: the locking feature grips (it cannot be turned by hand) and at least one full thread shows past the nut.", SRC.protrusion);
+    else add("nut-locking", "Self-locking nut: the locking feature grips (it cannot be turned by hand).", SRC.nutLocking);
+    if (hw.bolt) add("thread-protrusion", "At least one full thread of the bolt shows past the nut.", SRC.protrusion);
   }
-  if (hw.bolt && hw.nut?.type !== "castellatedCotter") {
-    const size = hw.bolt.size !== "custom" ? AN_BOLTS_BY_SIZE[hw.bolt.size as AnBoltSize]?.size : "custom bolt";
-    if (hw.torque !== undefined) add("torque", `${size} nut torqued to ${fmt(hw.torque)} in·lbf (including the nut's drag).`, SRC.torqueTable);
-    add("torque-stripe", "Torque stripe across nut, bolt and washer, unbroken.", { kind: "commonPractice", text: "torque seal marks a torqued fastener" });
+  if (hw.bolt && nut && nut.type !== "none" && !(nut.type === "castellatedCotter" && turns)) {
+    const row = hw.bolt.size !== "custom" ? AN_BOLTS_BY_SIZE[hw.bolt.size as AnBoltSize] : undefined;
+    const size = row?.size ?? "custom bolt";
+    const t = row ? TORQUE_BY_THREAD[row.thread] : undefined;
+    const selfLocking = nut.type === "selfLockingMetal" || nut.type === "selfLockingInsert";
+    const drag = selfLocking ? (nut.dragTorque !== undefined ? ` plus the measured ${fmt(nut.dragTorque)} in·lbf drag` : " plus the nut's drag torque (measure it and record it)") : "";
+    const range = !t ? "the bolt maker's torque"
+      : nut.pattern === undefined ? `table 7-1: ${t.tension.min}–${t.tension.max} in·lbf for a tension nut, ${t.shear.min}–${t.shear.max} for a shear (thin) nut (pattern not recorded)${drag}`
+      : `table 7-1: ${t[nut.pattern].min}–${t[nut.pattern].max} in·lbf for a ${nut.pattern} nut${drag}`;
+    const slot = nut.type === "castellatedCotter" && t && nut.pattern ? `; to line up the cotter-pin slot, no further than the ${t.ceiling[nut.pattern]} in·lbf maximum allowable` : "";
+    add("torque", hw.torque !== undefined
+      ? `${size} nut torqued to ${fmt(hw.torque)} in·lbf — ${range}${slot}.`
+      : `${size} nut torqued within ${range}${slot}, and the torque recorded on the joint card (none is recorded).`, SRC.torqueTable);
+    add("torque-stripe", "Torque stripe across nut, bolt and washer, applied after the torque, unbroken.", { kind: "commonPractice", text: "torque seal marks a torqued fastener" });
   }
   return items;
 }

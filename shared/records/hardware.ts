@@ -13,10 +13,10 @@ export const HARDWARE_STATE_LABEL: Record<HardwareState, string> = {
   to_order: "To order", ordered: "Ordered", received: "Received", installed: "Installed", inspected: "Inspected",
 };
 
-export const HARDWARE_KINDS = ["rodEnd", "jamNut", "bolt", "nut", "washer", "cotterPin", "cable", "cableTerminal", "turnbuckle", "pulley", "fairlead"] as const;
+export const HARDWARE_KINDS = ["rodEnd", "jamNut", "bolt", "clevisPin", "nut", "washer", "cotterPin", "cable", "cableTerminal", "turnbuckle", "pulley", "fairlead"] as const;
 export type HardwareKind = (typeof HARDWARE_KINDS)[number];
 export const HARDWARE_KIND_LABEL: Record<HardwareKind, string> = {
-  rodEnd: "Rod end", jamNut: "Jam nut", bolt: "Bolt", nut: "Nut", washer: "Washer", cotterPin: "Cotter pin",
+  rodEnd: "Rod end", jamNut: "Jam nut", bolt: "Bolt", clevisPin: "Clevis pin", nut: "Nut", washer: "Washer", cotterPin: "Cotter pin",
   cable: "Cable", cableTerminal: "Cable terminal", turnbuckle: "Turnbuckle", pulley: "Pulley", fairlead: "Fairlead",
 };
 /** Where a line is used: at a joint, or (cable-system parts) the part itself; `jointId` is then the part's id. */
@@ -54,13 +54,20 @@ export function jointParts(j: Joint): [string, HardwareKind, string, string | nu
     const hand = re.hand ?? "hand not recorded";
     out.push([pn ? `rodEnd|${pn.toLowerCase()}` : `rodEnd|${re.thread}|${hand}|${re.shank}|${n3(re.ballBore)}`, "rodEnd",
       `Rod end ${re.thread} ${re.hand ?? "(hand not recorded)"} ${re.shank}, bore ${n3(re.ballBore)} in`, pn, 1]);
-    if (hw.jamNut?.fitted) out.push([`jamNut|${re.thread}|${hand}`, "jamNut", re.hand ? `Jam nut ${re.thread} ${re.hand}` : `Jam nut ${re.thread}, hand not recorded (the rod end's hand)`, null, 1]);
+    // Every threaded rod end needs its jam nut, fitted yet or not: the one the check asks for is on the list to get.
+    out.push([`jamNut|${re.thread}|${hand}`, "jamNut", re.hand ? `Jam nut ${re.thread} ${re.hand}` : `Jam nut ${re.thread}, hand not recorded (the rod end's hand)`, null, 1]);
   }
   const b = hw.bolt;
   if (b) {
     const name = b.size === "custom" ? `Bolt Ø${n3(b.diameter)} in` : `${b.size} bolt`;
     const material = boltMaterialOf(b) ?? "material not recorded";
     out.push([`bolt|${b.size}|${n3(b.diameter)}|${n3(b.grip)}|${material}`, "bolt", `${name}, grip ${n3(b.grip)} in, ${material}`, null, 1]);
+  }
+  const pin = hw.clevisPin;
+  if (pin) {
+    out.push([`clevisPin|${n3(pin.diameter)}`, "clevisPin", `Clevis pin Ø${n3(pin.diameter)} in`, null, 1]);
+    // Held by a cotter pin alone (a nut's own cotter pin is listed with the nut).
+    if (pin.retention === "cotterPinOnly") out.push([`cotterPin|pin|${n3(pin.diameter)}`, "cotterPin", `Cotter pin for Ø${n3(pin.diameter)} in clevis pin`, null, 1]);
   }
   const nut = hw.nut;
   if (nut && nut.type !== "none") {

@@ -293,14 +293,15 @@ describe("hardware list and checklist", () => {
   it("lists the demo's hardware with quantities and keeps a state per line", async () => {
     const lines = (await viewer.request("GET", `${B()}/hardware`)).body.lines;
     const jam = lines.find((l: { key: string }) => l.key === "jamNut|1/4-28|LH");
-    expect(jam).toMatchObject({ quantity: 1, state: "to_order", usedIn: [{ jointId: "j-fwd-bellcrank", linkageId }] });
+    // Two: the one fitted, and the one the seeded wrong joint needs (it has none; the list says to get it).
+    expect(jam).toMatchObject({ quantity: 2, state: "to_order", usedIn: [{ jointId: "j-fwd-bellcrank", linkageId }, { jointId: "j-aft-horn", linkageId }] });
     expect((await viewer.request("PUT", `${B()}/hardware`, { key: jam.key, state: "received" })).status).toBe(403);
     expect((await owner.request("PUT", `${B()}/hardware`, { key: jam.key, state: "received" })).status).toBe(200);
     expect((await owner.request("PUT", `${B()}/hardware`, { key: "nothing|here", state: "received" })).status).toBe(404);
     const after = (await viewer.request("GET", `${B()}/hardware`)).body.lines.find((l: { key: string }) => l.key === jam.key);
     expect(after.state).toBe("received");
     const csv = (await exportFile(viewer, buildId, "hardware-csv")).bytes.toString("utf8");
-    expect(csv).toContain('jamNut,Jam nut 1/4-28 LH,,1,Received,"Pitch run: Forward pushrod B ↔ Bellcrank under the seat, in"');
+    expect(csv).toContain('jamNut,Jam nut 1/4-28 LH,,2,Received,"Pitch run: Forward pushrod B ↔ Bellcrank under the seat, in | Pitch run: Aft pushrod B ↔ Elevator horn, attach"');
   });
 
   it("names a line's first three places and counts the rest; ?line= gives that line whole (the CSV always has all)", async () => {

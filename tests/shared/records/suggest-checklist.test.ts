@@ -112,18 +112,20 @@ describe("inspection checklist", () => {
     const items = checklistFor(demoPitchLinkage());
     const byJoint: Record<string, string[]> = {};
     for (const i of items) (byJoint[i.jointId] ??= []).push(i.code);
-    const rodEndJoint = ["jam-nut", "witness-hole", "nut-locking", "torque", "torque-stripe"];
+    // Every nut: its locking and a full thread past it (AC 43.13-1B 7-37); a torqued nut: the torque and its stripe.
+    const locked = ["nut-locking", "thread-protrusion", "torque", "torque-stripe"];
+    const rodEndJoint = ["jam-nut", "witness-hole", ...locked];
     expect(byJoint).toEqual({
-      "j-stick-pivot": ["cotter-pin"], // castellated nut on a bushing: snugged, pinned, not torqued
+      "j-stick-pivot": ["cotter-pin", "thread-protrusion"], // castellated nut on a bushing: snugged, pinned, not torqued
       "j-stick-fwd": rodEndJoint,
       "j-fwd-bellcrank": rodEndJoint,
-      "j-bellcrank-pivot": ["nut-locking", "torque", "torque-stripe"],
+      "j-bellcrank-pivot": locked,
       "j-bellcrank-aft": rodEndJoint,
       // the seeded wrong joint: single shear, so the retaining washer is checked; the jam nut is checked though none is recorded
-      [DEMO_WRONG_JOINT]: ["jam-nut", "witness-hole", "retaining-washer", "nut-locking", "torque", "torque-stripe"],
-      "j-horn-elevator": ["nut-locking", "torque", "torque-stripe"],
-      "j-elevator-hinge": ["nut-locking", "torque", "torque-stripe"],
-      "j-stick-stop": ["nut-locking", "torque", "torque-stripe"],
+      [DEMO_WRONG_JOINT]: ["jam-nut", "witness-hole", "retaining-washer", ...locked],
+      "j-horn-elevator": locked,
+      "j-elevator-hinge": locked,
+      "j-stick-stop": locked,
       "": ["full-free-travel", "stops-before-limits"],
     });
     const washer = items.find((i) => i.jointId === DEMO_WRONG_JOINT && i.code === "retaining-washer")!;
@@ -132,6 +134,27 @@ describe("inspection checklist", () => {
     expect(items.find((i) => i.jointId === "j-bellcrank-pivot" && i.code === "torque")!.text).toContain("120 in·lbf"); // demo value
     expect(items.find((i) => i.code === "stops-before-limits")!.text).toContain("Elevator 25° up / 20° down"); // demo travel
     for (const i of items) expect(i.source.text.length).toBeGreaterThan(0);
+  });
+  it("torque items: the table range with the drag, asked for when not recorded; a castellated nut on a clamped bolt is torqued, on a bushing snugged", () => {
+    const g = demoPitchLinkage();
+    const at = (graph: typeof g, id: string, code: string) => checklistFor(graph).find((i) => i.jointId === id && i.code === code)?.text;
+    // AC 43.13-1B table 7-1: 1/4-28 tension nut 50–70 in·lbf; demo drag 8 in·lbf (invented)
+    expect(at(g, "j-stick-fwd", "torque")).toBe("AN4 nut torqued to 60 in·lbf — table 7-1: 50–70 in·lbf for a tension nut plus the measured 8 in·lbf drag.");
+    const patch = (id: string, f: (h: (typeof g.joints)[number]["hardware"]) => (typeof g.joints)[number]["hardware"]) =>
+      ({ ...g, joints: g.joints.map((j) => (j.id === id ? { ...j, hardware: f(j.hardware) } : j)) });
+    const noTorque = patch("j-stick-fwd", (h) => ({ ...h, torque: undefined, nut: { ...h.nut!, dragTorque: undefined } }));
+    expect(at(noTorque, "j-stick-fwd", "torque")).toBe("AN4 nut torqued within table 7-1: 50–70 in·lbf for a tension nut plus the nut's drag torque (measure it and record it), and the torque recorded on the joint card (none is recorded).");
+    const castleClamped = patch("j-stick-fwd", (h) => ({ ...h, nut: { type: "castellatedCotter", pattern: "tension", cotterPinNew: true } }));
+    expect(at(castleClamped, "j-stick-fwd", "torque")).toMatch(/to line up the cotter-pin slot, no further than the 100 in·lbf maximum allowable/); // 1/4-28 tension column, from memory
+    expect(at(g, "j-stick-pivot", "torque")).toBeUndefined(); // castellated on a bushing
+    expect(at(g, "j-stick-pivot", "cotter-pin")).toMatch(/snugged so the part still turns freely/);
+  });
+  it("asks for the retaining washer on the free side where the side is not recorded, and names the side where it is", () => {
+    const g = demoPitchLinkage();
+    const text = (graph: typeof g) => checklistFor(graph).find((i) => i.jointId === DEMO_WRONG_JOINT && i.code === "retaining-washer")!.text;
+    expect(text(g)).toMatch(/^Retaining washer fitted under the bolt head \(the rod end's free side\)/);
+    const unset = { ...g, joints: g.joints.map((j) => (j.id === DEMO_WRONG_JOINT ? { ...j, hardware: { ...j.hardware, freeSide: undefined } } : j)) };
+    expect(text(unset)).toMatch(/on the rod end's free side \(not recorded: under the bolt head or the nut, whichever is against the ball\)/);
   });
   it("adds a joint's to-do from the report when a check could not be made, and none when every check was made", () => {
     const g = demoPitchLinkage();
@@ -158,11 +181,19 @@ describe("hardware list", () => {
     expect(q["Rod end 1/4-28 RH male, bore 0.25 in"]).toBe(2);
     expect(q["Rod end 1/4-28 LH male, bore 0.25 in"]).toBe(2);
     expect(q["Jam nut 1/4-28 RH"]).toBe(2);
-    expect(q["Jam nut 1/4-28 LH"]).toBe(1); // the wrong joint has none
+    expect(q["Jam nut 1/4-28 LH"]).toBe(2); // the wrong joint has none fitted, and needs one: it is on the list to get
     expect(q["Cotter pin for 5/16-24 castellated nut"]).toBe(1);
     const lh = lines.find((l) => l.description === "Rod end 1/4-28 LH male, bore 0.25 in")!;
     expect(lh.partNumber).toBe("LW-SRE4M-LH");
     expect(lh.usedIn.map((u) => u.jointId)).toEqual(["j-fwd-bellcrank", DEMO_WRONG_JOINT]);
+  });
+
+  it("lists a clevis pin and, where a cotter pin alone holds it, that cotter pin", () => {
+    const g = demoPitchLinkage();
+    const withPin = { ...g, joints: g.joints.map((j) => (j.id === "j-stick-fwd" ? { ...j, hardware: { ...j.hardware, clevisPin: { diameter: 0.25, retention: "cotterPinOnly" as const } } } : j)) };
+    const q = Object.fromEntries(hardwareList([{ id: "L1", name: "Pitch", graph: withPin }]).map((l) => [l.description, l.quantity]));
+    expect(q["Clevis pin Ø0.25 in"]).toBe(1);
+    expect(q["Cotter pin for Ø0.25 in clevis pin"]).toBe(1);
   });
 
   it("lists a rod end of no recorded hand, and its jam nut, as such, apart from the RH and LH ones", () => {
