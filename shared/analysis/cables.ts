@@ -24,6 +24,9 @@ export const RIGGING_TEMPERATURE_SPREAD = 10; // °F
 /** Wheel minimums (14 CFR 23.397(b)): pitch 100 lbf; roll 40·D in·lbf. */
 export const WHEEL_PITCH_MIN = 100; // 14 CFR 23.397(b)
 export const WHEEL_ROLL_MIN_PER_IN = 40; // 14 CFR 23.397(b)
+/** Wheel design values (14 CFR 23.397(b)): pitch 200 lbf; roll 50·D in·lbf. */
+export const WHEEL_PITCH_DESIGN = 200; // 14 CFR 23.397(b)
+export const WHEEL_ROLL_DESIGN_PER_IN = 50; // 14 CFR 23.397(b)
 
 export function cableResults(ctx: Ctx, cc: CableCtx, loads: Loads, s: AnalysisSettings): CableResult[] {
   const out: CableResult[] = [];
@@ -59,7 +62,9 @@ export function cableResults(ctx: Ctx, cc: CableCtx, loads: Loads, s: AnalysisSe
 
 export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: CableResult[], s: AnalysisSettings, out: Finding[]) {
   const primary = PRIMARY_SYSTEMS.has(ctx.graph.system);
-  const factors = `limit × ${fmt(s.ultimateFactor, 2)} ultimate factor × ${fmt(s.cableFactor, 2)} cable-system factor`;
+  // 14 CFR 23.693 sets the cable-system factor for the joints of a cable system; this check puts it on the cable too
+  // (a conservative choice of its own, said so in the words).
+  const factors = `limit × ${fmt(s.ultimateFactor, 2)} ultimate factor × ${fmt(s.cableFactor, 2)} cable-system factor, which 14 CFR 23.693 sets for the joints and this check puts on the cable as well`;
   const byId = new Map(results.map((r) => [r.nodeId, r]));
   for (let n = 0; n < ctx.nodes.length; n++) {
     const node = ctx.nodes[n];
@@ -82,13 +87,13 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
         const min = WHEEL_ROLL_MIN_PER_IN * p.diameter;
         if (c < min)
           out.push(finding("wheel-couple-below-minimum", "hazard", subj,
-            `${name}: the roll couple used is ${fmt(c)} in·lbf, below the minimum of 40 × D = ${fmt(min)} in·lbf for a ${fmt(p.diameter)} in wheel. The design couple is 50 × D = ${fmt(50 * p.diameter)} in·lbf; the minimum applies only where the hinge moments are lower.`,
+            `${name}: the roll couple used is ${fmt(c)} in·lbf, below the minimum of 40 × D = ${fmt(min)} in·lbf for a ${fmt(p.diameter)} in wheel. The design couple is ${WHEEL_ROLL_DESIGN_PER_IN} × D = ${fmt(WHEEL_ROLL_DESIGN_PER_IN * p.diameter)} in·lbf; the minimum applies only where the hinge moments are lower.`,
             SRC.pilotForces, [num("roll couple", c, "in·lbf"), num("minimum", min, "in·lbf")]));
       } else {
         const f = p.designForce ?? s.pilotForce.pitchWheel;
         if (f < WHEEL_PITCH_MIN)
           out.push(finding("wheel-force-below-minimum", "hazard", subj,
-            `${name}: the pitch force used is ${fmt(f)} lbf, below the minimum of ${WHEEL_PITCH_MIN} lbf at a wheel. The design force is 200 lbf; the minimum applies only where the hinge moments are lower.`,
+            `${name}: the pitch force used is ${fmt(f)} lbf, below the minimum of ${WHEEL_PITCH_MIN} lbf at a wheel. The design force is ${WHEEL_PITCH_DESIGN} lbf; the minimum applies only where the hinge moments are lower.`,
             SRC.pilotForces, [num("pitch force", f, "lbf"), num("minimum", WHEEL_PITCH_MIN, "lbf")]));
       }
     }
@@ -101,6 +106,10 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
       out.push(finding("cable-too-small", "hazard", subj,
         `${name} is ${p.size} in: no cable under 1/8 in may be used in the aileron, elevator or rudder controls. Use 1/8 in cable or larger.`,
         CABLE_SRC.smallCable, [num("cable diameter", d, "in"), num("minimum", MIN_PRIMARY_CABLE, "in")]));
+    else if (ctx.graph.system === "trim" && d < MIN_PRIMARY_CABLE && !unenteredOf(node, SIZE_KEY).length)
+      out.push(finding("trim-cable-small", "advisory", subj,
+        `${name} is ${p.size} in, under the 1/8 in of the primary controls. A trim-tab cable may be smaller only where the airplane is safely controllable with the tab in its most adverse position; keep the designer's showing of that with the build records, or use 1/8 in cable.`,
+        CABLE_SRC.smallCable, [num("cable diameter", d, "in"), num("primary-control minimum", MIN_PRIMARY_CABLE, "in")]));
     const r = byId.get(node.id)!;
     if (unenteredOf(node, TENSION_KEYS).length) continue;
     if (r.breakingStrength === null)

@@ -48,7 +48,7 @@ export type Loads = {
   inputs: InputLoad[];
 };
 
-export const DUAL_CONTROL_SHARE = 0.75; // Part 23 appendix A
+export const DUAL_CONTROL_SHARE = 0.75; // 14 CFR 23.399: each pilot at 75 % (the two acting together; from memory for the paragraph)
 
 /** The design pilot force at an input's grip or pedal, limit, lbf (0 for a part that is not an input). */
 export function designForce(node: LinkageNode, graph: LinkageGraph, settings: AnalysisSettings): number {

@@ -4,7 +4,7 @@ import type { SourceTag } from "../analysis/types";
 export const SRC = {
   pilotForces: { kind: "published", text: "14 CFR 23.397(b)" },
   systemLoads: { kind: "published", text: "14 CFR 23.395" },
-  dualControls: { kind: "published", text: "14 CFR Part 23 appendix A (dual controls, 75 % each)" },
+  dualControls: { kind: "published", text: "14 CFR 23.399 (dual controls, 75 % of each pilot's force)" },
   ultimateFactor: { kind: "published", text: "14 CFR 23.303" },
   fittingFactor: { kind: "published", text: "14 CFR 23.625" },
   highestFactorOnly: { kind: "published", text: "14 CFR 23.619" },

@@ -195,13 +195,15 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
   if (isPin) {
     const todo = !pin ? "enter the clevis pin's diameter and shear strength" : pin.shearStrength === undefined ? "enter the clevis pin's shear strength (Fsu) from its maker" : planes === null ? SHEAR_TODO : null;
     const allow = pin?.shearStrength !== undefined && planes !== null ? SHEAR(pin.diameter, pin.shearStrength, planes) : null;
-    addCheck(acc, "pinShear", shearLabel("clevis pin shear", planes), ff, allow, todo, pin ? `Fsu ${Math.round((pin.shearStrength ?? 0) / 1000)} ksi × πD²/4 × ${planes ?? "?"}` : "no pin recorded", PIN_SRC);
+    addCheck(acc, "pinShear", shearLabel("clevis pin shear", planes), ff, allow, todo, pin ? `Fsu ${pin.shearStrength === undefined ? "?" : Math.round(pin.shearStrength / 1000)} ksi × πD²/4 × ${planes ?? "?"}` : "no pin recorded", PIN_SRC);
   } else if (hw.bolt) {
     const mat = boltMaterialOf(hw.bolt);
     const alu = mat === "aluminium";
     const allow = d === null || planes === null || mat === null ? null : SHEAR(d, alu ? FSU_ALU : FSU_STEEL, planes);
     addCheck(acc, "boltShear", shearLabel("bolt shear", planes), ff, allow, d === null ? BOLT_DIAMETER_TODO : mat === null ? BOLT_MATERIAL_TODO : planes === null ? SHEAR_TODO : null,
-      mat === null ? `Fsu of the bolt's material × πD²/4 × ${planes ?? "?"}` : `${alu ? "aluminium 37" : "steel 75"} ksi × πD²/4 × ${planes ?? "?"}`, alu ? SRC.aluminiumBolts : SRC.anBolts);
+      mat === null ? `Fsu of the bolt's material × πD²/4 × ${planes ?? "?"}`
+        : `${alu ? "aluminium" : "steel"} ${Math.round((alu ? FSU_ALU : FSU_STEEL) / 1000)} ksi${hw.bolt.material === undefined ? " (an AN bolt, taken as steel: material not recorded)" : ""} × πD²/4 × ${planes ?? "?"}`,
+      alu ? SRC.aluminiumBolts : SRC.anBolts);
   }
 
   const sides = holeSides(c, hw);

@@ -115,6 +115,13 @@ describe("cable size in a primary system (14 CFR 23.689(a)(1))", () => {
   it("trips for 3/32 in in the rudder", () => expect(codes(small())).toContain("cable-too-small@cableR"));
   it("does not trip for 1/8 in", () => expect(has(rudderCircuit(), "cable-too-small")).toBe(false));
   it("does not trip in a trim system", () => expect(has({ ...small(), system: "trim" }, "cable-too-small")).toBe(false));
+  it("in a trim system a cable under 1/8 in is an advisory: only where the airplane is safely controllable with the tab at its worst (23.689(a)(1))", () => {
+    const f = run({ ...small(), system: "trim" }).findings.find((x) => x.code === "trim-cable-small")!;
+    expect(f.severity).toBe("advisory");
+    expect(f.message).toMatch(/safely controllable with the tab in its most adverse position/);
+    expect(has({ ...rudderCircuit(), system: "trim" }, "trim-cable-small")).toBe(false); // 1/8 in
+    expect(has(small(), "trim-cable-small")).toBe(false); // the rudder: the hazard above instead
+  });
 });
 
 describe("cable strength × terminal efficiency against limit × 1.5 × 2.0", () => {
@@ -122,6 +129,8 @@ describe("cable strength × terminal efficiency against limit × 1.5 × 2.0", ()
     const g = withProps(rudderCircuit(), "cableL", { terminalB: "thimble" }); // from memory: 80 %
     expect(codes(g)).toContain("cable-strength-weak@cableL");
     expect(run(g).cables[0].allowable).toBeCloseTo(1600, 9);
+    // The words say the 2.0 is the check's own choice on the cable: 14 CFR 23.693 sets it for the joints.
+    expect(run(g).findings.find((x) => x.code === "cable-strength-weak")!.message).toContain("which 14 CFR 23.693 sets for the joints and this check puts on the cable as well");
   });
   it("trips in stainless: 1,760 lbf (AC 43.13-1B table 7-3, comp B) < 1,800", () => {
     expect(codes(withProps(rudderCircuit(), "cableL", { material: "stainless" }))).toContain("cable-strength-weak@cableL");

@@ -110,6 +110,13 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(selectSpecialFactor(hw, "pivot", s, { cable: true })).toMatchObject({ value: 2, name: "cable-system joint factor" });
     expect(selectSpecialFactor({ ...hw, bearing: "ballBearing" }, "pivot", s).value).toBe(1.15);
   });
+  it("the bolt-shear basis says when an AN bolt is taken as steel, and a pin without its strength shows no number", () => {
+    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: { ...h.bolt!, material: undefined } }));
+    expect(check(joint(g, "rodA"), "boltShear").basis).toBe("steel 75 ksi (an AN bolt, taken as steel: material not recorded) × πD²/4 × 2"); // from memory: AN steel 75 ksi shear
+    expect(check(joint(goodRun(), "rodA"), "boltShear").basis).toBe("steel 75 ksi × πD²/4 × 2");
+    const pin = withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: undefined, clevisPin: { diameter: 0.25 } }));
+    expect(check(joint(pin, "rodA"), "pinShear").basis).toBe("Fsu ? ksi × πD²/4 × 2");
+  });
   it("a link end with no rod end and no bearing recorded (a fork on a crank arm) is taken to turn on its bolt: 3.33 (23.693), not 1.15", () => {
     const bare = { ...goodRun().joints[1].hardware, rodEnd: undefined, jamNut: undefined, engagement: undefined, bearing: undefined };
     expect(selectSpecialFactor(bare, "link", s).value).toBe(3.33);
