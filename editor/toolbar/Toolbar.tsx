@@ -32,7 +32,8 @@ type Props = {
 };
 
 export function Toolbar({ ctx, title, save, picture, importInput }: Props) {
-  const buttons = COMMANDS.filter((c) => c.button && !c.button.hidden?.(ctx));
+  // A reader (reviewer, viewer) is not shown the editing buttons at all: a row of greyed-out tools only crowds a phone.
+  const buttons = COMMANDS.filter((c) => c.button && !c.button.hidden?.(ctx) && (!c.edit || ctx.canEdit));
   // One subscription for every button's enabled state (a list of booleans, compared shallowly).
   const enabled = useStore(ctx.store, useShallow((s) => buttons.map((c) => (!c.edit || ctx.canEdit) && (c.enabled ? c.enabled(s, ctx) : true))));
   const group = (g: NonNullable<Command["button"]>["group"], className?: string) =>
@@ -68,8 +69,12 @@ export function Toolbar({ ctx, title, save, picture, importInput }: Props) {
         </span>
       )}
       <Divider />
-      {group("edit")}
-      <Divider />
+      {ctx.canEdit && (
+        <>
+          {group("edit")}
+          <Divider />
+        </>
+      )}
       {group("file")}
       <input ref={importInput.ref} type="file" accept=".json,application/json" className="hidden" data-testid="import-input" onChange={importInput.onChange} />
       <PictureStatus state={picture.state} onDismiss={picture.dismiss} />
