@@ -97,7 +97,7 @@ function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId
               )}
             </div>
           )}
-          <button type="submit" data-testid="signoff-submit" disabled={!statement.trim() || actions.signOff.isPending} className="rounded bg-ok px-2 py-0.5 text-[11px] font-medium text-white disabled:opacity-50">
+          <button type="submit" data-testid="signoff-submit" disabled={!statement.trim() || actions.signOff.isPending} className="min-h-6 rounded bg-ok px-2 py-0.5 text-[11px] font-medium text-white disabled:opacity-50">
             Sign off revision {current}
           </button>
         </form>

@@ -19,7 +19,7 @@ type Props = { buildId: string; linkageId: string; subject: Subject; me: ReviewM
 const when = (iso: string) => new Date(iso).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" });
 const errText = (e: unknown) => (e instanceof ApiFailure ? (e.fields ? Object.values(e.fields).join(" ") : e.message) : e ? String(e) : "");
 const box = "w-full rounded border border-ink/20 bg-white px-2 py-1 text-[12px] text-ink focus:border-advisory focus:outline-none";
-const btn = "rounded px-2 py-0.5 text-[11px] font-medium disabled:opacity-50";
+const btn = "min-h-6 rounded px-2 py-0.5 text-[11px] font-medium disabled:opacity-50";
 
 function Composer({ testId, placeholder, submitLabel, onSubmit, busy, error, autoFocus }: { testId: string; placeholder: string; submitLabel: string; onSubmit: (text: string) => Promise<unknown>; busy: boolean; error?: string; autoFocus?: boolean }) {
   const [text, setText] = useState("");
@@ -55,7 +55,7 @@ function CommentItem({ c, me, onEdit, editing, setEditing }: { c: CommentView; m
         <span>· r{c.revision}</span>
         {c.editedAt && <span title={c.editedAt}>· edited</span>}
         {canEdit && !editing && (
-          <button type="button" data-testid="comment-edit" className="ml-auto text-advisory hover:underline" onClick={() => { setDraft(c.body); setEditing(true); }}>
+          <button type="button" data-testid="comment-edit" className="ml-auto min-h-6 text-advisory hover:underline" onClick={() => { setDraft(c.body); setEditing(true); }}>
             edit
           </button>
         )}
@@ -147,12 +147,12 @@ function SubjectFindingsReview({ findings, me, actions }: { findings: FindingVie
               <span className={`font-semibold ${f.severity === "hazard" ? "text-hazard" : f.severity === "caution" ? "text-caution" : "text-advisory"}`}>{f.severity}</span>
               <span className="font-semibold text-ink-soft" data-code={f.code}>{findingTitle(f.code)}</span>
               {me.canAcknowledge && !ack && (
-                <button type="button" data-testid={`ack-open-${f.code}`} className="ml-auto text-advisory hover:underline" onClick={() => { setOpen(open === key ? null : key); setReason(""); }}>
+                <button type="button" data-testid={`ack-open-${f.code}`} className="ml-auto min-h-6 text-advisory hover:underline" onClick={() => { setOpen(open === key ? null : key); setReason(""); }}>
                   Acknowledge…
                 </button>
               )}
               {me.canAcknowledge && ack && (
-                <button type="button" className="ml-auto text-ink-soft hover:underline" onClick={() => actions.withdraw.mutate(ack.id)}>
+                <button type="button" className="ml-auto min-h-6 text-ink-soft hover:underline" onClick={() => actions.withdraw.mutate(ack.id)}>
                   Withdraw
                 </button>
               )}

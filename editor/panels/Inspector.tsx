@@ -1,7 +1,7 @@
 "use client";
 /** The right-hand inspector: the node properties form or the joint card of the selection, with its findings. */
 import dynamic from "next/dynamic";
-import { useEditorConfig, useEditorStore } from "../context";
+import { useEditorConfig, useEditorStore, useEditorStoreApi } from "../context";
 import { LinkageFindings } from "./Findings";
 import type { RecordsTarget } from "./JointExtras";
 import { CARD_TITLE_ID } from "./card-title";
@@ -25,7 +25,7 @@ function LinkageOverview({ linkageName }: { linkageName: string }) {
   const { nodes, joints, sel } = useEditorStore((s) => ({ nodes: s.nodes.length, joints: s.joints.length, sel: s.selection.nodes.length + s.selection.joints.length }));
   return (
     <div className="space-y-2 text-[12px] text-ink" data-testid="linkage-overview">
-      <h3 className="text-sm font-semibold">{linkageName}</h3>
+      <h3 id={CARD_TITLE_ID} tabIndex={-1} data-subject="linkage" className="text-sm font-semibold">{linkageName}</h3>
       <p className="text-ink-soft">
         {nodes} part{nodes === 1 ? "" : "s"}, {joints} joint{joints === 1 ? "" : "s"}
         {sel > 1 ? ` · ${sel} selected` : ""}.
@@ -38,6 +38,33 @@ function LinkageOverview({ linkageName }: { linkageName: string }) {
       </p>
       <LinkageFindings />
     </div>
+  );
+}
+
+/**
+ * Leaves the part's or joint's card for the whole linkage (its sign-off, revisions and comments): the touch and
+ * pointer way to what Escape does, with the focus on the linkage's heading.
+ */
+function BackToLinkage() {
+  const api = useEditorStoreApi();
+  return (
+    <button
+      type="button"
+      data-testid="card-close"
+      className="-mt-1 flex min-h-11 items-center gap-1 rounded px-1 text-[12px] font-medium text-advisory hover:bg-paper hover:underline md:min-h-7"
+      onClick={() => {
+        api.getState().select(null);
+        const focusHeading = (n: number) =>
+          requestAnimationFrame(() => {
+            const h = document.getElementById(CARD_TITLE_ID);
+            if (h?.dataset.subject === "linkage") h.focus();
+            else if (n > 0) focusHeading(n - 1);
+          });
+        focusHeading(30);
+      }}
+    >
+      <span aria-hidden="true">←</span> Back to the whole linkage
+    </button>
   );
 }
 
@@ -63,6 +90,7 @@ export default function Inspector({
   const subject = single ?? ({ type: "linkage", id: linkageId } as const);
   return (
     <div className="space-y-3 p-3" data-testid="inspector">
+      {single && <BackToLinkage />}
       {single?.type === "node" && <NodeInspector id={single.id} />}
       {single?.type === "joint" && <JointInspector id={single.id} records={buildId ? { buildId, linkageId } : undefined} />}
       {!single && <LinkageOverview linkageName={linkageName} />}

@@ -132,7 +132,7 @@ describe("the reviewer in the editor", () => {
     await expect.poll(() => samPage.getByTestId("notice").textContent()).toMatch(/part no-such-part, which is not in revision/);
   });
 
-  it("on a 390 px phone (the run as a list) a ?select= and a ?focus= link open that joint's card in view", async () => {
+  it("on a 390 px phone (the run as a list) a ?select= and a ?focus= link open that joint's card in view; a tap goes back to the whole linkage", async () => {
     const phone = await (await browser.newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true })).newPage();
     phone.on("pageerror", (e) => errors.push(String(e)));
     try {
@@ -150,6 +150,23 @@ describe("the reviewer in the editor", () => {
         expect(t.bottom).toBeLessThanOrEqual(844);
       }
       await shot(phone, "editor-review-02b-phone-deep-link");
+
+      // The reviewer's buttons on the joint's card are big enough to tap.
+      const tall = (testId: string) => phone.locator(`[data-testid^="${testId}"]`).first().evaluate((el) => el.getBoundingClientRect().height);
+      await phone.locator("[data-testid^=ack-open-]").first().waitFor();
+      expect(await tall("ack-open-")).toBeGreaterThanOrEqual(24);
+      expect(await tall("comment-submit")).toBeGreaterThanOrEqual(24);
+      // A tap takes the card panel back to the whole linkage (its sign-off and comments), the focus on its heading.
+      const back = phone.getByTestId("card-close");
+      expect((await back.textContent())?.trim()).toMatch(/Back to the whole linkage/);
+      expect(await tall("card-close")).toBeGreaterThanOrEqual(24);
+      await back.tap();
+      await phone.getByTestId("linkage-overview").waitFor();
+      expect(await phone.getByTestId("joint-card").count()).toBe(0);
+      await phone.locator(`[data-testid=review-thread][data-subject="linkage:${demoLinkageId}"]`).waitFor();
+      await expect.poll(() => phone.evaluate(() => document.activeElement?.getAttribute("data-subject"))).toBe("linkage");
+      expect(await tall("signoff-submit")).toBeGreaterThanOrEqual(24);
+      await shot(phone, "editor-review-02c-phone-back-to-linkage");
     } finally {
       await phone.context().close();
     }
