@@ -54,7 +54,7 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
           picks the ones that fit (thread, hand, bore) and carry the load, best margin first.{" "}
           {canEdit ? (
             <>Add them one by one above, or import a CSV with a header row such as
-              <code className="mx-1 rounded bg-ink/5 px-1">kind,partNumber,thread,hand,ballBore,ratedUltimate</code>.</>
+              <code className="mx-1 break-all rounded bg-ink/5 px-1">kind,partNumber,thread,hand,ballBore,ratedUltimate</code>.</>
           ) : (
             <>The build&apos;s owner and builders fill this library.</>
           )}

@@ -31,7 +31,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="" extra={<Badge>{ROLE_LABEL[role]}</Badge>} />
       <Main className="mx-auto grid max-w-6xl gap-6 p-6 lg:grid-cols-3">
-        <div className="space-y-6 lg:col-span-2">
+        <div className="min-w-0 space-y-6 lg:col-span-2">
           <p className="text-ink-soft">{build.model || "Model not set"}{build.registration ? ` · ${build.registration}` : ""}</p>
           <LinkagesPanel buildId={build.id} initial={linkages} canEdit={can(role, "edit")} />
           <Card title="Recent log entries" actions={<Link href={`/builds/${build.id}/log`} className="text-xs text-advisory hover:underline">Open the build log</Link>}>
@@ -50,7 +50,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
           </Card>
           <Caution />
         </div>
-        <aside className="space-y-6">
+        <aside className="min-w-0 space-y-6">
           <Card title="Open findings">
             {linkages.length === 0 ? (
               <p className="text-ink-soft">Findings appear here once a linkage has parts and joints.</p>
