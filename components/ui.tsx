@@ -41,9 +41,9 @@ export function Card({ title, actions, children, className = "" }: { title?: Rea
   return (
     <section className={`rounded-lg border border-ink/10 bg-white ${className}`}>
       {title || actions ? (
-        <header className="flex items-center justify-between border-b border-ink/10 px-4 py-2">
+        <header className="flex flex-wrap items-center justify-between gap-2 border-b border-ink/10 px-4 py-2">
           <h2 className="text-sm font-semibold">{title}</h2>
-          <div className="flex gap-2">{actions}</div>
+          <div className="flex flex-wrap gap-2">{actions}</div>
         </header>
       ) : null}
       <div className="p-4">{children}</div>

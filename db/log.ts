@@ -12,6 +12,7 @@ type EntryRow = {
   linkage_id: string | null; revision: number | null; author_id: string | null; created_at: Date; updated_at: Date;
   author_name?: string | null; linkage_name?: string | null;
   revision_summary?: { hazard: number; caution: number; advisory: number } | null;
+  has_picture?: boolean | null;
 };
 
 const isoDay = (d: string | Date) => (typeof d === "string" ? d.slice(0, 10) : `${d.getFullYear()}-${String(d.getMonth() + 1).padStart(2, "0")}-${String(d.getDate()).padStart(2, "0")}`);
@@ -28,6 +29,7 @@ const toEntry = (r: EntryRow, files: StoredFile[] = []): LogEntry => ({
   revision: r.revision,
   /** Findings counts of the tied revision, as stored with it. */
   revisionSummary: r.revision_summary ? { hazard: r.revision_summary.hazard, caution: r.revision_summary.caution, advisory: r.revision_summary.advisory } : null,
+  hasPicture: !!r.has_picture,
   author: r.author_name ?? null,
   createdAt: r.created_at.toISOString(),
   updatedAt: r.updated_at.toISOString(),
@@ -63,13 +65,16 @@ async function attachFiles(buildId: string, rows: EntryRow[]) {
   return rows.map((r) => toEntry(r, byEntry.get(r.id) ?? []));
 }
 
+/** Whether the tied revision's picture was kept (the entry shows it, or says how to keep one). */
+const pictureKept = () => db.raw("exists (select 1 from revision_pictures rp where rp.linkage_id = e.linkage_id and rp.revision = e.revision) as has_picture");
+
 const withJoins = (q: ReturnType<typeof filtered>) => q
   .leftJoin("users as u", "u.id", "e.author_id")
   .leftJoin("linkages as l", "l.id", "e.linkage_id")
   .leftJoin("linkage_revisions as lr", function () {
     this.on("lr.linkage_id", "e.linkage_id").andOn("lr.revision", "e.revision");
   })
-  .select("e.*", "u.name as author_name", "l.name as linkage_name", "lr.summary as revision_summary");
+  .select("e.*", "u.name as author_name", "l.name as linkage_name", "lr.summary as revision_summary", pictureKept());
 
 /** The log's order, newest first: by date, then by when it was written (the id breaks ties). */
 export const LOG_KEYS: Key[] = [{ expr: "e.date", type: "date" }, { expr: "e.created_at", type: "timestamptz" }, { expr: "e.id", type: "uuid" }];
@@ -159,7 +164,7 @@ export async function getEntry(buildId: string, id: string) {
       this.on("lr.linkage_id", "e.linkage_id").andOn("lr.revision", "e.revision");
     })
     .where({ "e.build_id": buildId, "e.id": id })
-    .first("e.*", "u.name as author_name", "l.name as linkage_name", "lr.summary as revision_summary");
+    .first("e.*", "u.name as author_name", "l.name as linkage_name", "lr.summary as revision_summary", pictureKept());
   return row ? (await attachFiles(buildId, [row]))[0] : null;
 }
 

@@ -1,7 +1,7 @@
 /** The build log: dated entries with hours, systems, attached files and optionally the linkage revision they concern. */
 import { z } from "zod";
 import { SYSTEMS, systemSchema, type ControlSystem } from "../linkage/schema";
-import { isoTime, pageFields, patchWithSomething, REVISION_MAX, severityCounts, text } from "./common";
+import { isoTime, pageFields, patchWithSomething, REVISION_MAX, severityCounts } from "./common";
 import { storedFile } from "./files";
 
 const isoDate = z.string({ error: "date is required (YYYY-MM-DD)" }).regex(/^\d{4}-\d{2}-\d{2}$/, "date must be YYYY-MM-DD")
@@ -10,7 +10,8 @@ const isoDate = z.string({ error: "date is required (YYYY-MM-DD)" }).regex(/^\d{
 const entryFields = z.object({
   date: isoDate,
   hours: z.number({ error: "hours must be a number" }).min(0, "hours cannot be negative").max(24, "at most 24 hours in one entry"),
-  title: text("title", 200),
+  // Said to the person writing the entry (the form shows it under the Title box).
+  title: z.string({ error: "Enter a title" }).trim().min(1, "Enter a title").max(200, "A title is at most 200 characters"),
   text: z.string().max(20_000, "text is at most 20,000 characters").default(""),
   systems: z.array(z.enum(SYSTEMS, { error: `systems are ${SYSTEMS.join(", ")}` })).max(6).default([]),
   /** Optionally the linkage revision this work concerns: its picture and findings show in the entry. */
@@ -43,6 +44,8 @@ export const logEntry = z.object({
   revision: z.number().int().nullable(),
   /** Findings counts of the tied revision, as stored with it. */
   revisionSummary: severityCounts.nullable(),
+  /** Whether a picture of the tied revision was kept for the log. */
+  hasPicture: z.boolean(),
   /** The author's name (null once the account is gone). */
   author: z.string().nullable(),
   createdAt: isoTime,

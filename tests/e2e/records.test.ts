@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Browser, Page } from "playwright-core";
 import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
 import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
+import { signIn } from "../support/http";
 import { testImage } from "../support/upload";
 import { demoPitchLinkage } from "@/shared/demo";
 import { analyze } from "@/shared/analysis";
@@ -10,12 +11,14 @@ import { analyze } from "@/shared/analysis";
 let browser: Browser;
 let page: Page;
 let buildId: string, linkageId: string;
+let builderEmail = "";
 const errors: string[] = [];
 
 beforeAll(async () => {
   browser = await launchBrowser();
   const builder = await makeUser("e2e-records");
   ({ buildId, linkageId } = await makeBuild({ owner: builder }));
+  builderEmail = builder.email;
   const graph = demoPitchLinkage();
   await testDb("linkage_revisions").where({ linkage_id: linkageId, revision: 1 }).update({ graph: JSON.stringify(graph), analysis: JSON.stringify(analyze(graph)) });
   page = await browser.newPage({ viewport: { width: 1280, height: 900 } });
@@ -46,6 +49,10 @@ describe("build records in the browser", () => {
     await page.goto(`${APP_URL}/builds/${buildId}/log`);
     await page.getByText("The log is empty").waitFor();
     await page.getByRole("button", { name: "Write the first entry" }).click();
+    // Saved without a title, the form says what to do in words (not the field's key).
+    await page.getByRole("button", { name: "Save entry" }).click();
+    await page.getByText("Enter a title").waitFor();
+    expect(await page.getByText("title is required").count()).toBe(0);
     await page.getByLabel("Title").fill("Rigged the elevator");
     await page.getByLabel("Hours").fill("2.5");
     await page.getByLabel("Pitch").check();
@@ -56,6 +63,22 @@ describe("build records in the browser", () => {
     await page.getByTestId("hours-chart").locator(".recharts-bar-rectangle").first().waitFor();
     expect(await page.getByTestId("hours-by-system").textContent()).toContain("2.5 h");
     await shot(page, "records-02-log");
+
+    // An entry tied to a revision whose picture was never kept says so, and asks for no picture.
+    const api = await signIn(builderEmail, TEST_PASSWORD);
+    const tied = await api.request("POST", `/api/builds/${buildId}/log`, { date: "2026-01-02", hours: 1, title: "Checked the pitch run", linkageId, revision: 1 });
+    expect(tied.status).toBe(201);
+    const pictureAsks: string[] = [];
+    const onRequest = (r: { url(): string }) => { if (/\/revisions\/\d+\/picture/.test(r.url())) pictureAsks.push(r.url()); };
+    page.on("request", onRequest);
+    await page.reload();
+    const entry = page.getByTestId("log-entry").filter({ hasText: "Checked the pitch run" });
+    await entry.getByTestId("log-no-picture").waitFor();
+    expect(await entry.getByTestId("log-no-picture").textContent()).toMatch(/^No picture was kept for revision 1\. .*Keep for the log/);
+    expect(await entry.locator("img").count()).toBe(0);
+    await page.waitForLoadState("networkidle");
+    page.off("request", onRequest);
+    expect(pictureAsks).toEqual([]);
 
     await page.goto(`${APP_URL}/builds/${buildId}/parts`);
     await page.getByText("No parts in this library yet").waitFor();
@@ -73,6 +96,36 @@ describe("build records in the browser", () => {
     const link = page.getByRole("link", { name: /Pitch run: Control stick, attach ↔ Forward pushrod A/ }).first();
     expect(await link.getAttribute("href")).toBe(`/builds/${buildId}/linkages/${linkageId}?select=j-stick-fwd`);
     await shot(page, "records-04-hardware");
+
+    // Every select shows its whole value, at desktop and phone width.
+    const unreadable = () => page.locator("select").evaluateAll((els) => els.flatMap((el) => {
+      const s = el as HTMLSelectElement;
+      const cs = getComputedStyle(s);
+      const ctx = document.createElement("canvas").getContext("2d")!;
+      ctx.font = `${cs.fontWeight} ${cs.fontSize} ${cs.fontFamily}`;
+      const text = s.options[s.selectedIndex]?.text ?? "";
+      const need = ctx.measureText(text).width + parseFloat(cs.paddingLeft) + parseFloat(cs.paddingRight) + 16; // the arrow
+      return s.clientWidth < need ? [`${s.getAttribute("aria-label")}: "${text}" in ${s.clientWidth} px`] : [];
+    }));
+    expect(await unreadable()).toEqual([]);
+    await page.setViewportSize({ width: 390, height: 844 });
+    expect(await unreadable()).toEqual([]);
+    await page.setViewportSize({ width: 1280, height: 900 });
+
+    // A state changed by keyboard is saved and the focus stays on its select through the save and the refetch.
+    const state = page.locator("select[data-state-key]").first();
+    const lineKey = (await state.getAttribute("data-state-key"))!;
+    await state.focus();
+    const hardwareCall = (method: string) => page.waitForResponse((r) => r.url().endsWith(`/api/builds/${buildId}/hardware`) && r.request().method() === method);
+    const [saved, refetched] = [hardwareCall("PUT"), hardwareCall("GET")];
+    await page.keyboard.press("ArrowDown");
+    expect((await saved).status()).toBe(200);
+    await (await refetched).finished();
+    await page.waitForTimeout(300); // the refetch's render
+    expect(await page.evaluate(() => document.activeElement?.getAttribute("data-state-key"))).toBe(lineKey);
+    expect(await page.locator(`select[data-state-key="${lineKey}"]`).inputValue()).toBe("ordered");
+    const lines = (await api.request("GET", `/api/builds/${buildId}/hardware`)).body.lines as { key: string; state: string }[];
+    expect(lines.find((l) => l.key === lineKey)?.state).toBe("ordered");
     expect(errors).toEqual([]);
   });
 });

@@ -3,7 +3,7 @@ import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { ExportButton } from "@/components/records/ExportButton";
 import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type ColumnFiltersState, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import { api } from "@/components/api-client";
 import { Card, EmptyState, Input, Select } from "@/components/ui";
 import { HARDWARE_KIND_LABEL, HARDWARE_STATES, HARDWARE_STATE_LABEL, type HardwareState } from "@/shared/records/hardware";
@@ -33,6 +33,18 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
     onSuccess: (full) => { if (full) qc.setQueryData<Line[]>(key, (old) => old?.map((l) => (l.key === full.key ? { ...l, usedIn: full.usedIn } : l))); },
     onError: (e) => setError(e instanceof Error ? e.message : String(e)),
   });
+  // The cells read the mutations through a ref: the columns stay the same objects, so a save re-renders a row's
+  // select instead of mounting a new one (which would drop the keyboard's focus to the page).
+  const live = useRef({ setState, showAll });
+  live.current = { setState, showAll };
+  // The select whose state was just saved: if the refetch still loses its focus (a re-sort), it is given back.
+  const lastSaved = useRef<string | null>(null);
+  useEffect(() => {
+    const k = lastSaved.current;
+    if (!k) return;
+    if (!document.activeElement || document.activeElement === document.body) document.querySelector<HTMLSelectElement>(`select[data-state-key="${CSS.escape(k)}"]`)?.focus();
+    if (!q.isFetching) lastSaved.current = null;
+  }, [q.data, q.isFetching]);
   const [sorting, setSorting] = useState<SortingState>([]);
   const [filter, setFilter] = useState("");
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
@@ -57,9 +69,9 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
             ))}
             {l.usedInCount > l.usedIn.length ? (
               <li>
-                <button type="button" className="min-h-6 text-ink-soft underline hover:text-ink disabled:opacity-60" data-testid="hardware-used-in-more" disabled={showAll.isPending}
-                  onClick={() => showAll.mutate(l.key)}>
-                  {showAll.isPending && showAll.variables === l.key ? "Loading…" : `…and ${l.usedInCount - l.usedIn.length} more place${l.usedInCount - l.usedIn.length === 1 ? "" : "s"}: show all`}
+                <button type="button" className="min-h-6 text-ink-soft underline hover:text-ink disabled:opacity-60" data-testid="hardware-used-in-more" disabled={live.current.showAll.isPending}
+                  onClick={() => live.current.showAll.mutate(l.key)}>
+                  {live.current.showAll.isPending && live.current.showAll.variables === l.key ? "Loading…" : `…and ${l.usedInCount - l.usedIn.length} more place${l.usedInCount - l.usedIn.length === 1 ? "" : "s"}: show all`}
                 </button>
               </li>
             ) : null}
@@ -71,15 +83,16 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
       header: "State", filterFn: "equals",
       sortingFn: (a, b) => HARDWARE_STATES.indexOf(a.original.state) - HARDWARE_STATES.indexOf(b.original.state),
       cell: (c) => canEdit ? (
-        <Select aria-label={`State of ${c.row.original.description}`} value={c.getValue()} className={`w-32 ${STATE_TONE[c.getValue()]}`} onChange={(e) => setState.mutate({ key: c.row.original.key, state: e.target.value as HardwareState })}>
+        <Select aria-label={`State of ${c.row.original.description}`} data-state-key={c.row.original.key} value={c.getValue()} className={`min-w-36 ${STATE_TONE[c.getValue()]}`}
+          onChange={(e) => { lastSaved.current = c.row.original.key; live.current.setState.mutate({ key: c.row.original.key, state: e.target.value as HardwareState }); }}>
           {HARDWARE_STATES.map((s) => <option key={s} value={s}>{HARDWARE_STATE_LABEL[s]}</option>)}
         </Select>
       ) : <span className={STATE_TONE[c.getValue()]}>{HARDWARE_STATE_LABEL[c.getValue()]}</span>,
     }),
-  ], [buildId, canEdit, setState, showAll]);
+  ], [buildId, canEdit]);
 
   const table = useReactTable({
-    data: q.data, columns, state: { sorting, globalFilter: filter, columnFilters }, onSortingChange: setSorting, onGlobalFilterChange: setFilter, onColumnFiltersChange: setColumnFilters,
+    data: q.data, columns, getRowId: (l) => l.key, state: { sorting, globalFilter: filter, columnFilters }, onSortingChange: setSorting, onGlobalFilterChange: setFilter, onColumnFiltersChange: setColumnFilters,
     getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(), getFilteredRowModel: getFilteredRowModel(),
   });
   const count = (s: HardwareState) => q.data.filter((l) => l.state === s).reduce((a, l) => a + l.quantity, 0);
@@ -105,8 +118,8 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
         <Card
           title={<span className="font-normal text-ink-soft">{HARDWARE_STATES.map((s) => `${HARDWARE_STATE_LABEL[s]} ${count(s)}`).join(" · ")}</span>}
           actions={<>
-            <Select aria-label="Only kind" value={colFilter("kind")} onChange={(e) => setColFilter("kind", e.target.value)} className="w-32"><option value="">All kinds</option>{Object.entries(KIND_LABEL).map(([k, v]) => <option key={k} value={k}>{v}</option>)}</Select>
-            <Select aria-label="Only state" value={colFilter("state")} onChange={(e) => setColFilter("state", e.target.value)} className="w-32"><option value="">All states</option>{HARDWARE_STATES.map((s) => <option key={s} value={s}>{HARDWARE_STATE_LABEL[s]}</option>)}</Select>
+            <Select aria-label="Only kind" value={colFilter("kind")} onChange={(e) => setColFilter("kind", e.target.value)} className="min-w-36 sm:w-40"><option value="">All kinds</option>{Object.entries(KIND_LABEL).map(([k, v]) => <option key={k} value={k}>{v}</option>)}</Select>
+            <Select aria-label="Only state" value={colFilter("state")} onChange={(e) => setColFilter("state", e.target.value)} className="min-w-36 sm:w-40"><option value="">All states</option>{HARDWARE_STATES.map((s) => <option key={s} value={s}>{HARDWARE_STATE_LABEL[s]}</option>)}</Select>
             <Input aria-label="Filter hardware" placeholder="Filter…" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-44" />
           </>}
         >

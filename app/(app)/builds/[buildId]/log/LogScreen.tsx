@@ -133,8 +133,10 @@ function EntryCard({ e, buildId, canEdit }: { e: Entry; buildId: string; canEdit
       {e.text ? <p className="mt-1 whitespace-pre-wrap text-sm">{e.text}</p> : null}
       {e.linkageId && e.revision ? (
         <div className="mt-2 flex items-center gap-3 rounded bg-paper p-2 text-sm">
-          {/* eslint-disable-next-line @next/next/no-img-element */}
-          <img src={`/api/builds/${buildId}/linkages/${e.linkageId}/revisions/${e.revision}/picture`} alt="" className="h-16 rounded border border-ink/10 bg-white" onError={(ev) => { (ev.target as HTMLImageElement).style.display = "none"; }} />
+          {e.hasPicture ? (
+            /* eslint-disable-next-line @next/next/no-img-element */
+            <img src={`/api/builds/${buildId}/linkages/${e.linkageId}/revisions/${e.revision}/picture`} alt="" className="h-16 rounded border border-ink/10 bg-white" onError={(ev) => { (ev.target as HTMLImageElement).style.display = "none"; }} />
+          ) : null}
           <div>
             <a className="hover:underline" href={`/builds/${buildId}/linkages/${e.linkageId}`}>{e.linkageName ?? "Linkage"}, revision {e.revision}</a>
             {e.revisionSummary ? (
@@ -145,6 +147,11 @@ function EntryCard({ e, buildId, canEdit }: { e: Entry; buildId: string; canEdit
                 {e.revisionSummary.advisory} advisory
               </p>
             ) : null}
+            {e.hasPicture ? null : (
+              <p className="text-xs text-ink-soft" data-testid="log-no-picture">
+                No picture was kept for revision {e.revision}. In the editor, Keep for the log (key K) keeps the picture of the revision being edited for its log entries.
+              </p>
+            )}
           </div>
         </div>
       ) : null}
