@@ -24,6 +24,9 @@ export function usePagedList<T, F extends object = object>(o: { key: QueryKey; u
   return { ...q, items, total: first?.total ?? 0, first };
 }
 
+/** "entries" → "entry", "threads" → "thread". */
+const singular = (noun: string) => (noun.endsWith("ies") ? `${noun.slice(0, -3)}y` : noun.replace(/s$/, ""));
+
 /**
  * The end of a paged list: says how many of how many are shown, loads the next page when it scrolls
  * into view (an IntersectionObserver on a sentinel), and offers a button for keyboard users.
@@ -44,7 +47,7 @@ export function LoadMore(p: { shown: number; total: number; noun: string; hasMor
   return (
     <div ref={sentinel} className="flex flex-wrap items-center justify-between gap-2 py-3 text-sm text-ink-soft" data-testid="load-more">
       <span aria-live="polite" data-testid="shown-count">
-        {p.hasMore ? `Showing ${p.shown.toLocaleString("en-US")} of ${p.total.toLocaleString("en-US")} ${p.noun}, newest first.` : `All ${p.total.toLocaleString("en-US")} ${p.noun} shown.`}
+        {p.hasMore ? `Showing ${p.shown.toLocaleString("en-US")} of ${p.total.toLocaleString("en-US")} ${p.noun}, newest first.` : p.total === 1 ? `1 ${singular(p.noun)} shown.` : `All ${p.total.toLocaleString("en-US")} ${p.noun} shown.`}
       </span>
       {p.error ? <span role="alert" className="text-hazard">{p.error instanceof Error ? p.error.message : "The next page could not be loaded."}</span> : null}
       {p.hasMore ? <Button tone="secondary" size="sm" onClick={() => p.onMore()} disabled={p.loading}>{p.loading ? "Loading…" : p.error ? "Try again" : "Load more"}</Button> : null}

@@ -80,6 +80,18 @@ function untilFrame(f: () => boolean, frames = 120) {
 }
 const PHONE = "(max-width: 767px)";
 
+/** The one selected part or joint, if exactly one thing is selected first. */
+function selectedSubject(store: EditorStore): SubjectRef | null {
+  const sel = store.getState().selection;
+  return sel.nodes.length ? { type: "node", id: sel.nodes[0] } : sel.joints.length ? { type: "joint", id: sel.joints[0] } : null;
+}
+/** A part's or joint's focusable element in the list or on the canvas (null while not drawn). */
+function subjectElement(subject: SubjectRef, list: boolean) {
+  return list
+    ? document.querySelector<HTMLElement>(`[data-run-item="${subject.type}:${CSS.escape(subject.id)}"]`)
+    : document.querySelector<HTMLElement>(`.react-flow__${subject.type === "node" ? "node" : "edge"}[data-id="${CSS.escape(subject.id)}"]`);
+}
+
 function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
   const { store, canEdit, buildName, linkageName, system } = props;
   const fitAll = useFitAll();
@@ -146,13 +158,9 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
       returnFocus: (from: EventTarget | null) => {
         const el = from as Element | null;
         if (!el || typeof el.closest !== "function" || !el.closest("[data-card-panel]")) return false;
-        const sel = store.getState().selection;
-        const subject: SubjectRef | null = sel.nodes.length ? { type: "node", id: sel.nodes[0] } : sel.joints.length ? { type: "joint", id: sel.joints[0] } : null;
+        const subject = selectedSubject(store);
         if (!subject) return false;
-        const find = () =>
-          listRef.current
-            ? document.querySelector<HTMLElement>(`[data-run-item="${subject.type}:${CSS.escape(subject.id)}"]`)
-            : document.querySelector<HTMLElement>(`.react-flow__${subject.type === "node" ? "node" : "edge"}[data-id="${CSS.escape(subject.id)}"]`);
+        const find = () => subjectElement(subject, listRef.current);
         const now = find();
         if (now) now.focus();
         else {
@@ -166,7 +174,23 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
         const sel = store.getState().selection.nodes;
         if (sel.length === 1) setJoinFor(sel[0]);
       },
-      toggleList: () => setListOpen((v) => !v),
+      toggleList: () => {
+        // The focused part, joint or row goes with the view it was in: the focus moves to the selection in the
+        // other view (or to the view itself) rather than to the page. A focus elsewhere (toolbar, card) stays.
+        const was = document.activeElement;
+        const lost = !was || was === document.body || !!was.closest("#main");
+        setListOpen((v) => !v);
+        if (!lost) return;
+        const subject = selectedSubject(store);
+        let frames = 0;
+        untilFrame(() => {
+          const t = subject ? subjectElement(subject, listRef.current) : null;
+          if (t) t.focus();
+          else if (!subject || ++frames > 30) document.getElementById("main")?.focus();
+          else return false;
+          return true;
+        });
+      },
       listOpen,
     }),
     [store, canEdit, fitAll, saveNow, file.openImport, file.exportFile, exportPicture, keepPicture, exporting, keeping, geoOpen, focusSubject, listOpen],

@@ -5,7 +5,7 @@
  * With nothing selected it shows the linkage's review panel: sign-off, history and diff.
  */
 import { findingTitle } from "@/shared/analysis/finding-title";
-import { useState } from "react";
+import { useRef, useState } from "react";
 import { LoadMore } from "@/components/paged";
 import type { Subject } from "@/shared/analysis/types";
 import { ApiFailure } from "@/components/api-client";
@@ -23,6 +23,7 @@ const btn = "min-h-6 rounded px-2 py-0.5 text-[11px] font-medium disabled:opacit
 
 function Composer({ testId, placeholder, submitLabel, onSubmit, busy, error, autoFocus }: { testId: string; placeholder: string; submitLabel: string; onSubmit: (text: string) => Promise<unknown>; busy: boolean; error?: string; autoFocus?: boolean }) {
   const [text, setText] = useState("");
+  const field = useRef<HTMLTextAreaElement>(null);
   return (
     <form
       className="space-y-1"
@@ -32,10 +33,12 @@ function Composer({ testId, placeholder, submitLabel, onSubmit, busy, error, aut
         try {
           await onSubmit(text);
           setText("");
+          // The button is disabled with the box empty: the focus stays in the box for the next comment.
+          field.current?.focus();
         } catch {}
       }}
     >
-      <textarea data-testid={`${testId}-body`} className={box} rows={2} value={text} placeholder={placeholder} onChange={(e) => setText(e.target.value)} autoFocus={autoFocus} maxLength={10000} />
+      <textarea ref={field} data-testid={`${testId}-body`} className={box} rows={2} value={text} placeholder={placeholder} onChange={(e) => setText(e.target.value)} autoFocus={autoFocus} maxLength={10000} />
       {error && <p role="alert" className="text-[11px] text-hazard">{error}</p>}
       <button type="submit" data-testid={`${testId}-submit`} disabled={busy || !text.trim()} className={`${btn} bg-ink text-white`}>
         {busy ? "Sending…" : submitLabel}
@@ -55,7 +58,7 @@ function CommentItem({ c, me, onEdit, editing, setEditing }: { c: CommentView; m
         <span>· r{c.revision}</span>
         {c.editedAt && <span title={c.editedAt}>· edited</span>}
         {canEdit && !editing && (
-          <button type="button" data-testid="comment-edit" className="ml-auto min-h-6 text-advisory hover:underline" onClick={() => { setDraft(c.body); setEditing(true); }}>
+          <button type="button" data-testid="comment-edit" className="ml-auto text-advisory hover:underline" onClick={() => { setDraft(c.body); setEditing(true); }}>
             edit
           </button>
         )}

@@ -8,7 +8,8 @@
 import { useCallback, useLayoutEffect, useMemo, useRef } from "react";
 import { useReactFlow, useStoreApi, type Connection, type EdgeChange, type IsValidConnection, type NodeChange, type Viewport } from "@xyflow/react";
 import type { NodeKind } from "@/shared/linkage/schema";
-import { useEditorConfig, useEditorStore, useEditorStoreApi } from "../context";
+import { useEditorConfig, useEditorStore, useEditorStoreApi, useEditorValue } from "../context";
+import { jointAccessibleName } from "../a11y";
 import { cardSize, layoutHandles, type PartFlowNode } from "../nodes";
 import type { JointFlowEdge } from "../joints/JointEdge";
 import { SEVERITY_HEX } from "../presentation";
@@ -22,7 +23,7 @@ export const jointNameId = (id: string) => `joint-name-${id}`;
 export const CANVAS_KEYS_ID = "canvas-keys";
 
 type NodeCacheEntry = { src: EditorState["nodes"][number]; sel: boolean; m: EditorState["measured"][string] | undefined; ro: boolean; rf: PartFlowNode };
-type EdgeCacheEntry = { src: EditorState["joints"][number]; sel: boolean; rf: JointFlowEdge };
+type EdgeCacheEntry = { src: EditorState["joints"][number]; sel: boolean; name: string; rf: JointFlowEdge };
 
 /** React Flow nodes from the store, reusing the same object for every part that did not change. */
 function toFlowNodes(s: EditorState, readOnly: boolean, cache: Map<string, NodeCacheEntry>): PartFlowNode[] {
@@ -84,14 +85,18 @@ export function NodesToFlow({ readOnly }: { readOnly: boolean }) {
 /** The store's joints as React Flow edges, reusing the same object for every joint that did not change. */
 export function useFlowEdges(): JointFlowEdge[] {
   const { joints, selected } = useEditorStore((s) => ({ joints: s.joints, selected: s.selection.joints }));
+  // Every joint's spoken name, one string (a drag frame that renames nothing re-renders nothing).
+  const spoken = useEditorValue((s) => s.joints.map((j) => jointAccessibleName(j, s.nodes, s.badgeBySubject[`joint:${j.id}`])).join("\n"));
   const cache = useRef(new Map<string, EdgeCacheEntry>());
   return useMemo(() => {
     const sel = new Set(selected);
+    const names = spoken.split("\n");
     const next = new Map<string, EdgeCacheEntry>();
-    const out = joints.map((j) => {
+    const out = joints.map((j, i) => {
       const isSel = sel.has(j.id);
+      const name = names[i] ?? "";
       const c = cache.current.get(j.id);
-      if (c && c.src === j && c.sel === isSel) {
+      if (c && c.src === j && c.sel === isSel && c.name === name) {
         next.set(j.id, c);
         return c.rf;
       }
@@ -104,15 +109,16 @@ export function useFlowEdges(): JointFlowEdge[] {
         targetHandle: j.to.port,
         data: { joint: j },
         selected: isSel,
-        // aria-labelledby wins over React Flow's own "Edge from <id> to <id>" label: the joint is heard by its name.
+        // The joint is heard by its name, as the app names it everywhere, never React Flow's "Edge from <id> to <id>".
+        ariaLabel: name,
         domAttributes: { "aria-roledescription": "joint", "aria-labelledby": jointNameId(j.id) },
       };
-      next.set(j.id, { src: j, sel: isSel, rf });
+      next.set(j.id, { src: j, sel: isSel, name, rf });
       return rf;
     });
     cache.current = next;
     return out;
-  }, [joints, selected]);
+  }, [joints, selected, spoken]);
 }
 
 /** React Flow's events as store actions (stable callbacks: React Flow re-checks its store on a new one). */

@@ -92,6 +92,10 @@ describe("the editor by keyboard only", () => {
     await page.getByTestId("joint-card").waitFor();
     expect(await page.evaluate(() => document.activeElement?.id)).toBe("editor-card-title");
     expect(await page.getByTestId("joint-card").textContent()).toContain("Control horn 1, attach ↔ Pushrod 1 B");
+    // On the canvas the joint is named as everywhere else, not React Flow's "Edge from <id> to <id>".
+    const edgeLabel = await page.locator(".react-flow__edge").first().getAttribute("aria-label");
+    expect(edgeLabel).toMatch(/^Joint Control horn 1, attach ↔ Pushrod 1 B, (no findings|\d+ findings?|1 \w+)/);
+    expect(edgeLabel).not.toMatch(/Edge from/);
 
     // Escape goes back to the joint on the canvas; Tab to the stick, Enter opens it, Escape back, J joins it.
     await page.keyboard.press("Escape");
@@ -137,6 +141,26 @@ describe("the editor by keyboard only", () => {
     expect(p1).toEqual({ x: p0.x + 10, y: p0.y });
     expect((await savedGraph()).joints.map((j) => [j.from.node, j.to.node].sort().join("|")).sort()).toEqual([[horn, pushrod].sort().join("|"), [pushrod, stick].sort().join("|")].sort());
     await shot(page, "keyboard-03-done");
+
+    // L switches to the list and back: the focus goes with the selected part, never to the page.
+    expect(await focused(page)).toMatchObject({ kind: "part", id: horn });
+    await page.keyboard.press("l");
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute("data-run-item"))).toBe(`node:${horn}`);
+    await page.keyboard.press("l");
+    await expect.poll(async () => (await focused(page)).id).toBe(horn);
+    expect((await focused(page)).kind).toBe("part");
+
+    // The Keys sheet keeps Tab inside itself while open; Escape closes it and gives the focus back to "Keys ?".
+    await page.getByTestId("btn-shortcuts").focus();
+    await page.keyboard.press("Enter");
+    await page.getByTestId("shortcuts-sheet").waitFor();
+    for (const key of ["Tab", "Tab", "Shift+Tab", "Shift+Tab", "Shift+Tab"]) {
+      await page.keyboard.press(key);
+      expect(await page.evaluate(() => !!document.activeElement?.closest("[data-testid=shortcuts-sheet]"))).toBe(true);
+    }
+    await page.keyboard.press("Escape");
+    await expect.poll(() => page.getByTestId("shortcuts-sheet").count()).toBe(0);
+    await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute("data-testid"))).toBe("btn-shortcuts");
     expect(errors).toEqual([]);
   }, 120_000);
 

@@ -58,6 +58,9 @@ describe("review and sign-off in a real browser", () => {
     const c = thread(samPage).getByTestId("comment");
     await c.first().waitFor();
     expect(await c.first().innerText()).toContain("no jam nut");
+    // The focus stays in the (emptied) comment box, not on the page; one thread is said in the singular.
+    await expect.poll(() => samPage.evaluate(() => document.activeElement?.getAttribute("data-testid"))).toBe("comment-body");
+    expect(await thread(samPage).getByTestId("shown-count").textContent()).toBe("1 thread shown.");
     // Rendered as text, the address as a safe link.
     const link = c.first().locator("a");
     expect(await link.getAttribute("href")).toBe("https://example.test/retaining-washers");
