@@ -16,7 +16,7 @@ export function DataTable<T>({ table, testId, rowTestId }: { table: Table<T>; te
                 return (
                   <th key={h.id} className="py-1 pr-3 font-medium" aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}>
                     {h.column.getCanSort() ? (
-                      <button type="button" className="hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
+                      <button type="button" className="touch-target inline-flex items-center hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
                         {label}{sorted === "asc" ? " ▲" : sorted === "desc" ? " ▼" : ""}
                       </button>
                     ) : label}

@@ -204,7 +204,7 @@ function EntryForm({ buildId, linkages, onDone }: { buildId: string; linkages: {
         <fieldset className="sm:col-span-2">
           <legend className="text-xs font-semibold uppercase tracking-wide text-ink-soft">Systems</legend>
           <div className="mt-1 flex flex-wrap gap-3 text-sm">
-            {SYSTEMS.map((s) => <label key={s} className="flex items-center gap-1"><input type="checkbox" value={s} {...form.register("systems")} />{SYSTEM_LABEL[s]}</label>)}
+            {SYSTEMS.map((s) => <label key={s} className="touch-target flex items-center gap-1"><input type="checkbox" value={s} {...form.register("systems")} />{SYSTEM_LABEL[s]}</label>)}
           </div>
         </fieldset>
         <div className="sm:col-span-2">

@@ -77,7 +77,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
         <section key={`${g.subject}:${g.jointId}`} className="rounded-lg border border-ink/10 bg-white" data-testid={g.subject === "part" ? `checklist-part-${g.jointId}` : `checklist-joint-${g.jointId || "linkage"}`}>
           <header className="flex flex-wrap items-center justify-between gap-2 border-b border-ink/10 px-4 py-2">
             <h2 className="text-sm font-semibold">{g.where}</h2>
-            {g.jointId ? <Link className="no-print text-xs text-advisory hover:underline" href={`/builds/${p.buildId}/linkages/${p.linkageId}?select=${encodeURIComponent(g.jointId)}`}>Open in the editor</Link> : null}
+            {g.jointId ? <Link className="no-print touch-target inline-flex items-center text-xs text-advisory hover:underline" href={`/builds/${p.buildId}/linkages/${p.linkageId}?select=${encodeURIComponent(g.jointId)}`}>Open in the editor</Link> : null}
           </header>
           <ul className="divide-y divide-ink/5">
             {g.items.map((i) => <ItemRow key={i.code} i={i} canTick={p.canTick} onChange={(v) => tick.mutate({ jointId: i.jointId, code: i.code, ...v })} />)}
@@ -115,7 +115,7 @@ function ItemRow({ i, canTick, onChange }: { i: Item & { pending?: QueuedTick };
           </form>
         ) : i.note ? (
           <p className="mt-1 text-xs"><span className="font-semibold">Note:</span> {i.note} {canTick ? <button type="button" className="no-print text-advisory hover:underline" onClick={() => setEditing(true)}>edit</button> : null}</p>
-        ) : canTick ? <button type="button" className="no-print mt-1 text-xs text-advisory hover:underline" onClick={() => setEditing(true)}>Add a note</button> : null}
+        ) : canTick ? <button type="button" className="no-print touch-target mt-1 inline-flex items-center text-xs text-advisory hover:underline" onClick={() => setEditing(true)}>Add a note</button> : null}
       </div>
     </li>
   );
