@@ -12,6 +12,29 @@ import type { AnalysisSettings, DesignCase, Finding, SurfaceResult } from "./typ
 import type { Ctx } from "./context";
 import type { Loads } from "./loads";
 import { finding, fmt, linkageSubject, nodeSubject } from "./format";
+import { WHEEL_PITCH_DESIGN, WHEEL_PITCH_MIN, WHEEL_ROLL_DESIGN_PER_IN, WHEEL_ROLL_MIN_PER_IN } from "./cables";
+import { CABLE_JOINT_FACTOR } from "./joints/factors";
+
+/**
+ * The lowest factor the hinge-moment case may put on the loads: each input's own minimum force over the force it
+ * is driven with (14 CFR 23.397(b)) — a stick's or pedal's from the table, a wheel's 100 lbf in pitch and
+ * 40 · D of its 50 · D couple in roll — the highest of the run's inputs (the floor none of them may go under).
+ */
+function minimumScale(ctx: Ctx, s: AnalysisSettings, key: "pitchStick" | "rollStick" | "yawPedal"): number {
+  let floor = 0;
+  let any = false;
+  for (let n = 0; n < ctx.nodes.length; n++) {
+    const node = ctx.nodes[n];
+    if (ctx.nodeRole[n] !== "input") continue;
+    any = true;
+    let f: number;
+    if (node.kind === "controlWheel") {
+      f = node.props.axis === "roll" ? WHEEL_ROLL_MIN_PER_IN / s.pilotForce.rollWheel : WHEEL_PITCH_MIN / (node.props.designForce ?? s.pilotForce.pitchWheel);
+    } else f = PILOT_FORCE_TABLE[key].min / s.pilotForce[key]; // 14 CFR 23.397(b) minimum
+    if (f > floor) floor = f;
+  }
+  return any ? floor : PILOT_FORCE_TABLE[key].min / s.pilotForce[key];
+}
 
 export const HINGE_MOMENT_FACTOR = 1.25; // 14 CFR 23.395
 
@@ -38,6 +61,7 @@ export function hingeMomentCase(ctx: Ctx, loads: Loads, surfaces: SurfaceResult[
   let scale = 0;
   let any = false;
   let governing: DesignCase["governing"] = "maximumPilotForce";
+  let minScale: number | null = null; // made once, at the first surface with a hinge moment
   for (const sr of surfaces) {
     const n = ctx.nodeIndex.get(sr.nodeId)!;
     const node = ctx.nodes[n];
@@ -60,7 +84,7 @@ export function hingeMomentCase(ctx: Ctx, loads: Loads, surfaces: SurfaceResult[
     any = true;
     const want = HINGE_MOMENT_FACTOR * hm; // 14 CFR 23.395: 125 % of the hinge moment
     const raw = want / sr.hingeMomentLimit;
-    const min = PILOT_FORCE_TABLE[key].min / s.pilotForce[key]; // 14 CFR 23.397(b) minimum
+    const min = (minScale ??= minimumScale(ctx, s, key)); // 14 CFR 23.397(b) minimum of each input
     let f: number, c: DesignCase["governing"];
     if (raw >= 1) { f = 1; c = "maximumPilotForce"; }
     else if (raw <= min) { f = Math.min(1, min); c = "minimumPilotForce"; }
@@ -100,6 +124,11 @@ export function settingsCautions(s: AnalysisSettings, out: Finding[]): string[] 
   f(s.ultimateFactor, FACTOR_MINIMUMS.ultimateFactor, "ultimate factor", "14 CFR 23.303");
   f(s.fittingFactor, FACTOR_MINIMUMS.fittingFactor, "fitting factor", "14 CFR 23.625");
   f(s.bearingFactor, FACTOR_MINIMUMS.bearingFactor, "bearing factor", "14 CFR 23.693");
+  f(s.cableFactor ?? CABLE_JOINT_FACTOR, CABLE_JOINT_FACTOR, "cable-system factor", "14 CFR 23.693");
+  if (s.pilotForce.pitchWheel < WHEEL_PITCH_DESIGN)
+    msgs.push(`The wheel's pitch force is set to ${fmt(s.pilotForce.pitchWheel, 0)} lbf, below the ${WHEEL_PITCH_DESIGN} lbf of 14 CFR 23.397(b); only the hinge-moment case of 23.395 may lower it, and never below ${WHEEL_PITCH_MIN} lbf.`);
+  if (s.pilotForce.rollWheel < WHEEL_ROLL_DESIGN_PER_IN)
+    msgs.push(`The wheel's roll couple is set to ${fmt(s.pilotForce.rollWheel, 0)} × D in·lbf, below the ${WHEEL_ROLL_DESIGN_PER_IN} × D of 14 CFR 23.397(b); only the hinge-moment case of 23.395 may lower it, and never below ${WHEEL_ROLL_MIN_PER_IN} × D.`);
   if (msgs.length)
     out.push(finding("settings-below-minimum", "caution", linkageSubject("settings"),
       `${msgs.join(" ")} Every result of this check is computed with these settings.`, SRC.pilotForces));

@@ -86,6 +86,15 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
   // 14 CFR 23.399: the dual-control case never replaces the single-pilot full-force case.
   if (s.dualControls) maxLoads(loads, propagate(ctx, { ...s, dualControls: false }, cc.pretension));
   const motion = analyzeMotion(ctx, s);
+  // 14 CFR 23.399 for the swept runs too: each member keeps the larger of the dual-control case (75 % each, added)
+  // and one pilot at full force, as the perpendicular-arm loads just did.
+  if (s.dualControls && ctx.graph.geometry) {
+    const single = analyzeMotion(ctx, { ...s, dualControls: false });
+    for (const k of ["pushrod", "joint", "surface"] as const) {
+      const into = motion.loads[k];
+      for (const [n, v] of single.loads[k]) if (!(v <= (into.get(n) ?? -Infinity))) into.set(n, v);
+    }
+  }
   // With geometry the swept runs' worst-step loads replace the perpendicular-arm loads of their members.
   for (const [n, v] of motion.loads.pushrod) loads.pushrodAxial[n] = v;
   for (const [j, v] of motion.loads.joint) loads.jointRadial[j] = v;

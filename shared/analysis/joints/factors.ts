@@ -64,7 +64,9 @@ export function factorTable(settings: AnalysisSettings): FactorTable {
 export function selectSpecialFactor(hw: JointHardware | undefined, role: JointRole, settings: AnalysisSettings, opts: FactorOptions = {}): SpecialFactor {
   const t = factorTable(settings);
   let other: SpecialFactor | null = null;
-  if (role === "hinge" && hw && hw.bearing !== "ballBearing" && !hw.rodEnd && (hw.bolt || hw.clevisPin || hw.bearing)) other = t.hinge;
+  // A rod end as a hinge bearing is a ball in a plain race: with the setting that treats rod ends as plain bearings,
+  // the hinge factor applies to it as to any hinge that is not a ball or roller bearing (14 CFR 23.657(a)).
+  if (role === "hinge" && hw && hw.bearing !== "ballBearing" && (!hw.rodEnd || settings.bearingFactorOnRodEnds) && (hw.bolt || hw.clevisPin || hw.bearing)) other = t.hinge;
   // A joint of a cable system takes the cable factor (14 CFR 23.693) — in place of 3.33 where a part turns on it.
   else if (opts.cable) other = t.cable;
   else if (turnsOnBolt(hw, role) || (!!hw?.rodEnd && settings.bearingFactorOnRodEnds)) other = t.bearing;

@@ -106,10 +106,12 @@ function stopLoad(ctx: Ctx, loads: Loads, j: number, loadTodo: (string | null)[]
   loads.jointFrom[j] = taintAt(ctx, loads, x);
   // Where the stop or the surface's travel is a starting value, the comparison is left to the motion and unentered notes.
   if (part.kind === "controlSurface" && !unenteredOf(stop, STOP_KEY).length && !unenteredOf(part, TRAVEL_KEYS).length) {
-    const travel = Math.max(part.props.travelUp, part.props.travelDown);
+    // The stop acts one way: a positive angle stops the surface going up, a negative one going down.
+    const up = stop.props.stopAt >= 0;
+    const travel = up ? part.props.travelUp : part.props.travelDown;
     if (Math.abs(stop.props.stopAt) > travel)
       out.push(finding("stop-beyond-travel", "caution", nodeSubject(stop.id),
-        `${nodeLabel(stop)} contacts at ${fmt(Math.abs(stop.props.stopAt), 1)}°, past the ${fmt(travel, 1)}° travel of ${nodeLabel(part)}: the surface reaches its limit before the stop does. Set the stop to contact at or before the surface's travel.`,
+        `${nodeLabel(stop)} contacts at ${fmt(Math.abs(stop.props.stopAt), 1)}° ${up ? "up" : "down"}, past the ${fmt(travel, 1)}° ${up ? "up" : "down"} travel of ${nodeLabel(part)}: the surface reaches its limit before the stop does. Set the stop to contact at or before the surface's travel.`,
         STOP_SRC, [num("stop angle", Math.abs(stop.props.stopAt), "°"), num("surface travel", travel, "°")]));
   }
 }

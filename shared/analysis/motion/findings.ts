@@ -75,7 +75,7 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
     if (dir === "forward" ? ends.stopForward : ends.stopBack) continue;
     const rod = ctx.nodes[ch.stages[stage].rod];
     out.push(finding("motion-cannot-assemble", "hazard", nodeSubject(rod.id),
-      `${nodeLabel(input)} cannot reach its ${dir} stop (${fmt(limit, 1)}°): at ${atInput(fail)} ${nodeLabel(rod)} can no longer join its two arms — a crank runs out of travel and the run jams before the stop. Shorten that crank's travel or change the arm lengths or pivot positions.`,
+      `${nodeLabel(input)} cannot reach its ${dir} stop (${fmt(limit, 1)}°): at ${atInput(fail)} ${nodeLabel(rod)} can no longer join its two arms — a crank runs out of travel and the run jams before the stop. Set the input's stop short of this point, or change the arm lengths or pivot positions so the run reaches its stop.`,
       MOTION_SRC.closure, [num("input position", fail, "°"), num("input stop", dir === "forward" ? limit : -limit, "°")]));
   }
   const dt = geo.designTravel;

@@ -16,7 +16,7 @@ import type { Chain } from "./chain";
 const DEG = 180 / Math.PI;
 const TAU = 2 * Math.PI;
 /** |sin μ| below this (μ within 0.06° of 0° or 180°) is toggle. */
-export const TOGGLE_SIN = 1e-3;
+export const TOGGLE_SIN = 1e-3; // common practice, no source: a numerical tolerance (about 0.06° from toggle)
 
 export type ChainSweep = {
   chain: Chain;

@@ -9,6 +9,7 @@ import { describe, expect, it } from "vitest";
 import { analyze } from "@/shared/analysis";
 import { graphSchema, type LinkageGraph } from "@/shared/linkage/schema";
 import { goodClamp, goodRun, j, stick, mount, goodBallPivot, valid } from "./fixtures";
+import { wheelRun } from "./cable-fixtures";
 
 const run = (g: LinkageGraph, settings = {}) => analyze(valid(g), settings);
 const jr = (g: LinkageGraph, id: string, settings = {}) => run(g, settings).joints.find((x) => x.jointId === id)!;
@@ -49,6 +50,11 @@ describe("stops (14 CFR 23.675): load = the moment of the part it stops / its ar
     setProps(past, "stop", { stopAt: 30, arm: 3 });
     expect(codes(past)).toContain("stop-beyond-travel"); // 30° past the elevator's 25° up
     setProps(past, "stop", { stopAt: 20 });
+    expect(codes(past)).not.toContain("stop-beyond-travel");
+    // A stop acts one way: −22° (down) is past the 20° down travel though under the 25° up one; +22° (up) is not.
+    setProps(past, "stop", { stopAt: -22 });
+    expect(codes(past)).toContain("stop-beyond-travel");
+    setProps(past, "stop", { stopAt: 22 });
     expect(codes(past)).not.toContain("stop-beyond-travel");
   });
 });
@@ -142,7 +148,31 @@ describe("secondary inputs: the force has a stated source", () => {
   });
 });
 
+describe("a wheel's own minimum under the hinge-moment case (14 CFR 23.397(b))", () => {
+  it("a roll wheel's loads go no lower than 40 · D of its 50 · D couple (× 0.8), not the roll stick's 40/67", () => {
+    const g = wheelRun();
+    (g.nodes.find((n) => n.id === "ail")!.props as { hingeMoment?: number }).hingeMoment = 1; // in·lbf: far below anything the wheel gives
+    const r = run(g);
+    expect(r.designCase.governing).toBe("minimumPilotForce");
+    rel(r.designCase.scale, 40 / 50);
+  });
+  it("a stick's floor is still the stick's (40/67 in roll)", () => {
+    const g = goodRun();
+    g.system = "roll";
+    (g.nodes.find((n) => n.kind === "controlSurface")!.props as { hingeMoment?: number }).hingeMoment = 1;
+    rel(run(g).designCase.scale, 40 / 67); // 14 CFR 23.397(b): roll stick 40 minimum, 67 maximum
+  });
+});
+
 describe("settings below the published minimums", () => {
+  it("wheel forces under 200 lbf and 50 · D, and a cable factor under 2.0, are cautioned too; none at the defaults", () => {
+    const r = run(goodRun(), { pilotForce: { pitchStick: 167, rollStick: 67, yawPedal: 200, other: 100, pitchWheel: 150, rollWheel: 45 }, cableFactor: 1.5 });
+    const text = r.settingsCautions.join(" ");
+    expect(text).toMatch(/wheel's pitch force is set to 150 lbf, below the 200 lbf of 14 CFR 23.397\(b\)/);
+    expect(text).toMatch(/wheel's roll couple is set to 45 × D in·lbf, below the 50 × D/);
+    expect(text).toMatch(/cable-system factor is set to 1.5, below the 2 of 14 CFR 23.693/);
+    expect(run(goodRun()).settingsCautions).toEqual([]);
+  });
   it("a caution shown with the results, and the text in the report; none at the defaults", () => {
     const r = run(goodRun(), { pilotForce: { pitchStick: 120, rollStick: 67, yawPedal: 200, other: 100 }, fittingFactor: 1 });
     expect(r.findings.map((f) => f.code)).toContain("settings-below-minimum");

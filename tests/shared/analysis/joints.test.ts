@@ -127,6 +127,11 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(codes(g, "rodB")).toContain("self-locking-nut-on-turning-bolt");
     expect(run(g).findings.find((f) => f.code === "self-locking-nut-on-turning-bolt" && f.subject.id === "rodB")!.severity).toBe("caution");
   });
+  it("a rod end as a hinge bearing takes 6.67 (23.657(a)) when rod ends are treated as plain bearings; the fitting factor otherwise", () => {
+    const hw = { ...goodRun().joints[1].hardware, bearing: undefined };
+    expect(selectSpecialFactor(hw, "hinge", s).value).toBe(1.15);
+    expect(selectSpecialFactor(hw, "hinge", { ...s, bearingFactorOnRodEnds: true })).toMatchObject({ value: 6.67, name: "hinge bearing factor" });
+  });
   it("6.67 at a hinge that is not a ball or roller bearing (23.657(a)); fitting factor at a ball-bearing hinge", () => {
     const g = withHardware(goodRun(), "hinge", (h) => ({ ...h, bearing: "plainBushing" }));
     const r = joint(g, "hinge");

@@ -151,3 +151,16 @@ describe("motion: the report", () => {
     expect(fwd.limit).toBeGreaterThan((167 * 20) / 6 / 1.0);
   });
 });
+
+describe("dual controls on a swept run (14 CFR 23.399)", () => {
+  const bar: Bar = { a: 3, c: 2.5, o2: [0, 0], o4: [40, 0], alpha: -90, beta: -90 };
+  it("keeps one pilot's full-force load where it is the larger: the 75 % dual case alone would understate a single stick", () => {
+    const g = barRun(bar);
+    const single = analyze(g).pushrods.find((p) => p.nodeId === "rod")!.limitAxial;
+    const dual = analyze(g, { dualControls: true }).pushrods.find((p) => p.nodeId === "rod")!.limitAxial;
+    // One stick: the dual case is 75 % of one pilot's force, so the full-force case governs and is kept.
+    expect(dual).toBeCloseTo(single, 9);
+    const joint = (r: ReturnType<typeof analyze>) => r.joints.find((j) => j.radialLimit > 0)!;
+    expect(joint(analyze(g, { dualControls: true })).radialLimit).toBeCloseTo(joint(analyze(g)).radialLimit, 9);
+  });
+});
