@@ -101,7 +101,7 @@ export function demoPitchLinkage(): LinkageGraph {
   const y = 200;
   const nodes: LinkageNode[] = [
     { id: "stick", kind: "stick", label: "Control stick", position: { x: 0, y },
-      props: { gripArm: 20, attachArm: 6, axis: "pitch", travelFwd: 15, travelAft: 15 } },
+      props: { gripArm: 20, attachArm: 6, axis: "pitch", travelFwd: 12, travelAft: 15 } },
     { id: "pushrod-fwd", kind: "pushrod", label: "Forward pushrod", position: { x: 220, y },
       props: { material: "4130N", outsideDiameter: 0.75, wall: 0.035, length: 30 } },
     { id: "bellcrank", kind: "bellcrank", label: "Bellcrank under the seat", position: { x: 440, y },
@@ -109,13 +109,13 @@ export function demoPitchLinkage(): LinkageGraph {
     { id: "pushrod-aft", kind: "pushrod", label: "Aft pushrod", position: { x: 660, y },
       props: { material: "6061-T6", outsideDiameter: 1.5, wall: 0.058, length: 72 } },
     { id: "horn", kind: "controlHorn", label: "Elevator horn", position: { x: 880, y },
-      props: { hornArm: 2.5, linkAngle: 90, boltCount: 2, boltSpacing: 1.5 } },
+      props: { hornArm: 5, linkAngle: 90, boltCount: 2, boltSpacing: 1.5 } },
     { id: "elevator", kind: "controlSurface", label: "Elevator", position: { x: 1100, y },
       props: { travelUp: 25, travelDown: 20 } },
     { id: "mount-stick", kind: "structureMount", label: "Seat-frame stick mount", position: { x: 0, y: 380 }, props: { note: "Welded lugs on the seat frame" } },
     { id: "mount-bellcrank", kind: "structureMount", label: "Bellcrank bracket", position: { x: 440, y: 380 }, props: { note: "Bracket riveted to the seat rib" } },
     { id: "mount-tail", kind: "structureMount", label: "Stabilizer rear spar", position: { x: 1100, y: 380 }, props: { note: "Hinge brackets on the stabilizer rear spar" } },
-    { id: "stop-stick", kind: "travelStop", label: "Stick stop", position: { x: 0, y: 20 }, props: { stopAt: 15, arm: 8 } },
+    { id: "stop-stick", kind: "travelStop", label: "Stick stop", position: { x: 0, y: 20 }, props: { stopAt: 12, arm: 8 } },
   ];
   const wrong = hw({
     // The deliberate mistake: single shear on the horn, no jam nut, and a 0.438 in washer under the

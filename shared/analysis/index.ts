@@ -32,7 +32,7 @@ export { analyzeMotion, sweepGraph, MOTION_NOT_CHECKED, atInput, type MotionRepo
 export { selectSpecialFactor, turnsOnBolt, HINGE_BEARING_FACTOR, CABLE_JOINT_FACTOR, type FactorOptions } from "./joints/factors";
 export { HINGE_MOMENT_FACTOR } from "./design-case";
 
-export const ENGINE_VERSION = "2.2.0"; // 2.1: starting values (unentered) are not used for margins; pushrod margins may be null. 2.1.1: an unrecorded rod-end hand is not taken as RH; no lever-rule force from a starting grip arm. 2.2: torque maximum with drag, retaining-washer side asked, undriven parts not checked, link ends turn on their bolt, trim cables
+export const ENGINE_VERSION = "2.2.0"; // 2.1: starting values (unentered) are not used for margins; pushrod margins may be null. 2.1.1: an unrecorded rod-end hand is not taken as RH; no lever-rule force from a starting grip arm. 2.2: torque maximum with drag, retaining-washer side asked, undriven parts not checked, link ends turn on their bolt, trim cables, swept surface travel against the card, dual-control sweeps keep the full-force case, wheel minimums
 
 export const NOTICE =
   "Linkwright's numbers are an aid to the builder's own engineering and the designer's data, not a substitute. " +

@@ -37,7 +37,7 @@ describe("the geometry view's model", () => {
   it("lists the turning parts with their arm lengths and each rod's two ends", () => {
     const g = demoPitchLinkage();
     expect(turningParts(g.nodes).map((p) => [p.id, p.arms.map((a) => `${a.port}:${a.length}`).join(",")])).toEqual([
-      ["stick", "attach:6,grip:20"], ["bellcrank", "in:3,out:4"], ["horn", "attach:2.5"],
+      ["stick", "attach:6,grip:20"], ["bellcrank", "in:3,out:4"], ["horn", "attach:5"],
     ]);
     const rods = rodLinks(g);
     expect(rods.find((r) => r.id === "pushrod-aft")).toMatchObject({ a: { node: "bellcrank", port: "out" }, b: { node: "horn", port: "attach" } });

@@ -16,6 +16,9 @@ export const MOTION_SRC = {
   designTravel: { kind: "commonPractice", text: "rig the surface to the designer's travel within its tolerance" },
 } as const satisfies Record<string, SourceTag>;
 
+/** Swept travel this far past the card's before it is a finding, degrees. // common practice, no source: a rigging tolerance */
+export const SURFACE_TRAVEL_SLACK = 1;
+
 /** "12.5° forward", "3.0° back", "neutral". */
 export function atInput(theta: number): string {
   if (Math.abs(theta) < 0.05) return "neutral";
@@ -77,6 +80,26 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
     out.push(finding("motion-cannot-assemble", "hazard", nodeSubject(rod.id),
       `${nodeLabel(input)} cannot reach its ${dir} stop (${fmt(limit, 1)}°): at ${atInput(fail)} ${nodeLabel(rod)} can no longer join its two arms — a crank runs out of travel and the run jams before the stop. Set the input's stop short of this point, or change the arm lengths or pivot positions so the run reaches its stop.`,
       MOTION_SRC.closure, [num("input position", fail, "°"), num("input stop", dir === "forward" ? limit : -limit, "°")]));
+  }
+  // The surface's own travel on its card: swept past it, the surface would reach its limits before the input
+  // reaches its stops, so something other than the stops would stop the run (14 CFR 23.675).
+  if (ch.surface >= 0) {
+    const surf = ctx.nodes[ch.surface];
+    if (surf.kind === "controlSurface") {
+      let up = 0, down = 0, upAt = 0, downAt = 0;
+      for (let k = eb; k <= ef; k++) {
+        if (!sw.ok[k]) continue;
+        const v = sw.deflection[k];
+        if (v > up) { up = v; upAt = sw.theta[k]; }
+        if (-v > down) { down = -v; downAt = sw.theta[k]; }
+      }
+      for (const [got, at, card, word] of [[up, upAt, surf.props.travelUp, "up"], [down, downAt, surf.props.travelDown, "down"]] as const) {
+        if (got > card + SURFACE_TRAVEL_SLACK)
+          out.push(finding("motion-surface-past-travel", "caution", nodeSubject(surf.id),
+            `Over the input's travel ${nodeLabel(surf)} swings ${fmt(got, 1)}° ${word} (at ${atInput(at)} of ${nodeLabel(input)}), past the ${fmt(card, 1)}° ${word} travel on its card: it would reach its limit before the input reaches its stop, so the surface or its hinges, not the stops, would end the travel. Set the input's stops (or the arm ratios) so the surface stops at its travel, or correct the travel on its card.`,
+            MOTION_SRC.stops, [num(`${word} travel swept`, got, "°"), num(`${word} travel on the card`, card, "°"), num("input position", at, "°")]));
+      }
+    }
   }
   const dt = geo.designTravel;
   if (dt && ch.surface >= 0) {

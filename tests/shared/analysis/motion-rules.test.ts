@@ -45,6 +45,21 @@ describe("surface travel at the stops vs the designer's travel", () => {
   });
 });
 
+describe("surface travel swept vs the surface's own travel on its card (14 CFR 23.675: the stops end the travel)", () => {
+  it("trips when the sweep drives the elevator past its 20° down travel (a 4 in stick arm on a 2.5 in horn)", () => {
+    const g = barRun({ a: 4, c: 2.5, o2: [0, 0], o4: [40, 0], alpha: -60, beta: -90 });
+    const f = analyze(g).findings.filter((x) => x.code === "motion-surface-past-travel");
+    expect(f.map((x) => x.message.match(/swings [\d.]+° (up|down)/)![1])).toEqual(["down"]);
+    expect(f[0].numbers.find((n) => n.label === "down travel on the card")!.value).toBe(20);
+    expect(f[0].numbers.find((n) => n.label === "down travel swept")!.value).toBeGreaterThan(21); // past the 1° slack (common practice)
+  });
+  it("does not trip where the sweep stays within the card's travel (3 in arm, 2.5 in horn), nor on the demo run to scale", () => {
+    expect(analyze(barRun({ a: 3, c: 2.5, o2: [0, 0], o4: [40, 0], alpha: -90, beta: -90 })).findings.map((x) => x.code)).not.toContain("motion-surface-past-travel");
+    const demo = { ...demoPitchLinkage(), geometry: demoPitchGeometry() };
+    expect(analyze(demo).findings.map((x) => x.code)).not.toContain("motion-surface-past-travel");
+  });
+});
+
 describe("stops", () => {
   it("a stop beyond the input's travel is never reached", () => {
     expect(codes(withStop(barRun(square), "elevator", 20))).toContain("stop-never-reached");
