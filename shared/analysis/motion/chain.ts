@@ -26,6 +26,8 @@ export type Stage = {
   b: number;
   length: number;
   dz: number;
+  /** Both attach points' out-of-plane offsets were entered (an unentered one is taken as 0 for the length only). */
+  dzKnown: boolean;
   /** The branch the chain is assembled in: the side of the line A→O4 that B lies on at neutral. */
   branch: 1 | -1;
   /** cos and sin of the angle from this follower's arm to its other arm (the next stage's driver arm). */
@@ -70,6 +72,10 @@ function linkJoints(ctx: Ctx, n: number, port: string): number[] {
 function armAngle(pg: PartGeometry | undefined, port: string): number | undefined {
   const v = pg?.arms[port as keyof PartGeometry["arms"]];
   return typeof v === "number" ? v : undefined;
+}
+
+function offsetKnown(pg: PartGeometry | undefined, port: string): boolean {
+  return typeof pg?.offsets[port as keyof PartGeometry["offsets"]] === "number";
 }
 
 function offsetOf(pg: PartGeometry | undefined, port: string): number {
@@ -153,7 +159,7 @@ export function buildChains(ctx: Ctx, geo: LinkageGeometry): ChainsResult {
         chain.stages.push({
           rod, jointA: ja, jointB: jb, driver: d, follower: d + 1,
           o2x: gd.pivot.x, o2y: gd.pivot.y, a: exitArm, alpha0, o4x: gf.pivot.x, o4y: gf.pivot.y, c: inArm, beta0,
-          b, length: Math.hypot(b, dz), dz, branch: side < 0 ? -1 : 1, nextCos: 1, nextSin: 0,
+          b, length: Math.hypot(b, dz), dz, dzKnown: offsetKnown(gf, nextPort) && offsetKnown(gd, exitPort), branch: side < 0 ? -1 : 1, nextCos: 1, nextSin: 0,
         });
         if (!(b > 1e-9)) { broken = `the two ends of ${nodeLabel(nodes[rod])} are at the same point`; break; }
       }

@@ -62,8 +62,9 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
         SRC.transmission, [num("minimum transmission angle", lo, "°"), num("maximum transmission angle", hi, "°"), num("input position", bad.at, "°")]));
     }
     // Rod-end misalignment: the rod's angle to the plane the bolts are square to (constant in planar motion).
+    // Offsets not entered: not judged (the run's notes ask for them), never read as in line.
     const mis = (Math.asin(Math.min(1, Math.abs(st.dz) / st.length)) * 180) / Math.PI;
-    for (const j of [st.jointA, st.jointB]) {
+    if (st.dzKnown) for (const j of [st.jointA, st.jointB]) {
       const rated = ctx.joints[j].hardware?.rodEnd?.ratedMisalignment;
       if (rated !== undefined && mis > rated)
         out.push(finding("motion-misalignment", "hazard", jointSubject(ctx.joints[j].id),

@@ -90,7 +90,9 @@ export function analyzeMotion(ctx: Ctx, settings: AnalysisSettings, steps?: numb
       // The length on the card is a starting value: nothing to compare the geometry's length with yet.
       const startLength = unenteredOf(rodNode, LENGTH_KEY).length > 0;
       const rig = startLength ? { ok: false as const, toEnter: [enterTodo(rodNode, LENGTH_KEY).replace(/^enter /, "")] } : riggingRange(ctx, st.rod, [st.jointA, st.jointB]);
-      rods.push({ rodId, needed: st.length, card, shortest: rig.ok ? rig.shortest : null, longest: rig.ok ? rig.longest : null, misalignment: (Math.asin(Math.min(1, Math.abs(st.dz) / st.length)) * 180) / Math.PI });
+      rods.push({ rodId, needed: st.length, card, shortest: rig.ok ? rig.shortest : null, longest: rig.ok ? rig.longest : null, misalignment: st.dzKnown ? (Math.asin(Math.min(1, Math.abs(st.dz) / st.length)) * 180) / Math.PI : null });
+      if (!st.dzKnown && (ctx.joints[st.jointA].hardware?.rodEnd || ctx.joints[st.jointB].hardware?.rodEnd))
+        notChecked.push(`Rod-end misalignment at ${nodeLabel(rodNode)}: enter the out-of-plane offset of each of its attach points in the geometry (0 where they are in line with the arms).`);
       if (!rig.ok) {
         notChecked.push(`Rigging of ${nodeLabel(rodNode)} (the geometry needs ${fmt(st.length, 3)} in centre to centre, the card says ${fmt(card, 3)} in): enter ${rig.toEnter.join("; ")}.`);
       } else if (st.length < rig.shortest - 1e-6 || st.length > rig.longest + 1e-6) {

@@ -31,7 +31,7 @@ export type MotionChainSummary = {
   failBack: number | null;
   failForward: number | null;
   /** Per pushrod: the centre-to-centre length the geometry needs, the card's, and the rigging range if known. */
-  rods: { rodId: string; needed: number; card: number; shortest: number | null; longest: number | null; misalignment: number }[];
+  rods: { rodId: string; needed: number; card: number; shortest: number | null; longest: number | null; misalignment: number | null }[];
 };
 
 export type MotionReport = {

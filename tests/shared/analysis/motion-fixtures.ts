@@ -38,8 +38,8 @@ export function barRun(bar: Bar, extra: Partial<LinkageGeometry> = {}): LinkageG
     geometry: {
       plane: "side", datum: "test",
       parts: {
-        stick: { pivot: { x: bar.o2[0], y: bar.o2[1] }, arms: { attach: bar.alpha }, offsets: bar.dzA ? { attach: bar.dzA } : {} },
-        horn: { pivot: { x: bar.o4[0], y: bar.o4[1] }, arms: { attach: bar.beta }, offsets: bar.dzB ? { attach: bar.dzB } : {} },
+        stick: { pivot: { x: bar.o2[0], y: bar.o2[1] }, arms: { attach: bar.alpha }, offsets: bar.dzA !== undefined ? { attach: bar.dzA } : {} },
+        horn: { pivot: { x: bar.o4[0], y: bar.o4[1] }, arms: { attach: bar.beta }, offsets: bar.dzB !== undefined ? { attach: bar.dzB } : {} },
       },
       ...extra,
     },

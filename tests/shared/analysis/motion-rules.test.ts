@@ -21,11 +21,18 @@ function withStop(g: LinkageGraph, target: string, stopAt: number): LinkageGraph
 describe("rod-end misalignment (rated ± angle vs the rod's angle out of the plane)", () => {
   it("trips when the rod leaves the plane by more than the rating", () => {
     // 30 in rod rising 7 in out of plane: asin(7 / 30.8) ≈ 13.1° > 12° rated (geometry; rating from the card)
-    expect(codes(barRun({ ...square, dzB: 7 }))).toContain("motion-misalignment");
+    expect(codes(barRun({ ...square, dzA: 0, dzB: 7 }))).toContain("motion-misalignment");
   });
   it("does not trip within the rating", () => {
     // 2 in over 30 in: ≈ 3.8° < 12°
-    expect(codes(barRun({ ...square, dzB: 2 }))).not.toContain("motion-misalignment");
+    expect(codes(barRun({ ...square, dzA: 0, dzB: 2 }))).not.toContain("motion-misalignment");
+  });
+  it("with an attach point's offset not entered it is not checked (never read as in line) and the run's notes ask for it", () => {
+    const r = analyze(barRun({ ...square, dzB: 7 }));
+    expect(r.findings.map((f) => f.code)).not.toContain("motion-misalignment");
+    expect(r.motion.chains[0].rods[0].misalignment).toBeNull();
+    expect(r.motion.notChecked.join(" ")).toMatch(/Rod-end misalignment at "Rod": enter the out-of-plane offset of each of its attach points/);
+    expect(analyze(barRun({ ...square, dzA: 0, dzB: 2 })).motion.chains[0].rods[0].misalignment).toBeCloseTo((Math.asin(2 / Math.hypot(30, 2)) * 180) / Math.PI, 9);
   });
 });
 
