@@ -18,7 +18,7 @@ const CLEVIS: Member = { material: "4130N", thickness: 0.18, edgeDistance: 0.375
 const BRACKET: Member = { material: "4130N", thickness: 0.25, edgeDistance: 0.75, cheeks: 2 };
 
 function hw(over: Partial<JointHardware>): JointHardware {
-  return { fit: "clamped", shear: "double", torqueStripe: true, photos: [], note: "", ...over };
+  return { fit: "clamped", shear: "double", spacers: 0, torqueStripe: true, photos: [], note: "", ...over };
 }
 /** A cable terminal or turnbuckle eye in a clevis on an AN3 bolt. */
 const terminal = (): JointHardware => hw({

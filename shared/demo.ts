@@ -28,7 +28,7 @@ const FORK: Member = { material: "4130N", thickness: 0.25, edgeDistance: 0.5, ch
 const BRACKET: Member = { material: "4130N", thickness: 0.25, edgeDistance: 0.75, cheeks: 2 };
 
 function hw(over: Partial<JointHardware>): JointHardware {
-  return { fit: "clamped", shear: "double", torqueStripe: true, photos: [], note: "", ...over };
+  return { fit: "clamped", shear: "double", spacers: 0, torqueStripe: true, photos: [], note: "", ...over };
 }
 
 /** A rod end clamped in a double-shear clevis on an AN4 bolt: the good, complete joint card. */

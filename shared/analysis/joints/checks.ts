@@ -248,6 +248,14 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
       `${how ? how + "; " : ""}allowable Ftu ${ftu === null ? "?" : Math.round(ftu / 1000)} ksi × shape factor ${SHAPE} × πD³/32`, BENDING_SRC, "in·lbf", arm);
   }
 
+  else if ((hw.bolt || pin) && (hw.shear === undefined || gaps === undefined)) {
+    // Whether the bolt bends is not known: a single-shear joint does, a double-shear one with gaps in the stack does.
+    // Listed as not checked with what decides it, never left out as if there were nothing to check.
+    addCheck(acc, "boltBending", `${pin ? "pin" : "bolt"} bending`, ff, null,
+      hw.shear === undefined ? "choose single or double shear on the joint's card" : "enter the washers and spacers between the member's face and the ball (0 if none)",
+      "M = P × arm, by the shear planes and the gaps in the stack", BENDING_SRC, "in·lbf", null);
+  }
+
   // Bearing and tear-out at the hole in each member.
   const texts = textsOf(ctx);
   for (let i = 0; i < sides.length; i++) {

@@ -21,7 +21,7 @@ export type Member = NonNullable<NonNullable<JointHardware["holes"]>["from"]>;
 export const steelFork: Member = { material: "4130N", thickness: 0.25, edgeDistance: 0.5, cheeks: 2 };
 
 export function hardware(over: Partial<JointHardware> = {}): JointHardware {
-  return { fit: "clamped", shear: "double", torqueStripe: true, photos: [], note: "", ...over };
+  return { fit: "clamped", shear: "double", spacers: 0, torqueStripe: true, photos: [], note: "", ...over };
 }
 
 /** A complete, correct rod-end joint: AN4 in double shear, jam nut tight, witness hole checked. */

@@ -110,6 +110,14 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(selectSpecialFactor(hw, "pivot", s, { cable: true })).toMatchObject({ value: 2, name: "cable-system joint factor" });
     expect(selectSpecialFactor({ ...hw, bearing: "ballBearing" }, "pivot", s).value).toBe(1.15);
   });
+  it("bolt bending is listed as not checked, with what decides it, where the shear planes or the gaps in the stack are not entered", () => {
+    const noGaps = check(joint(withHardware(goodRun(), "rodA", (h) => ({ ...h, spacers: undefined })), "rodA"), "boltBending");
+    expect(noGaps).toMatchObject({ status: "notChecked", margin: null, todo: "enter the washers and spacers between the member's face and the ball (0 if none)" });
+    const noPlanes = check(joint(withHardware(goodRun(), "rodA", (h) => ({ ...h, shear: undefined })), "rodA"), "boltBending");
+    expect(noPlanes).toMatchObject({ status: "notChecked", margin: null, todo: "choose single or double shear on the joint's card" });
+    // Double shear with no gaps (0 entered): nothing bends the bolt, no line.
+    expect(check(joint(goodRun(), "rodA"), "boltBending")).toBeUndefined();
+  });
   it("the bolt-shear basis says when an AN bolt is taken as steel, and a pin without its strength shows no number", () => {
     const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: { ...h.bolt!, material: undefined } }));
     expect(check(joint(g, "rodA"), "boltShear").basis).toBe("steel 75 ksi (an AN bolt, taken as steel: material not recorded) × πD²/4 × 2"); // from memory: AN steel 75 ksi shear

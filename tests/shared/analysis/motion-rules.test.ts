@@ -30,9 +30,9 @@ describe("rod-end misalignment (rated ± angle vs the rod's angle out of the pla
   it("with an attach point's offset not entered it is not checked (never read as in line) and the run's notes ask for it", () => {
     const r = analyze(barRun({ ...square, dzB: 7 }));
     expect(r.findings.map((f) => f.code)).not.toContain("motion-misalignment");
-    expect(r.motion.chains[0].rods[0].misalignment).toBeNull();
-    expect(r.motion.notChecked.join(" ")).toMatch(/Rod-end misalignment at "Rod": enter the out-of-plane offset of each of its attach points/);
-    expect(analyze(barRun({ ...square, dzA: 0, dzB: 2 })).motion.chains[0].rods[0].misalignment).toBeCloseTo((Math.asin(2 / Math.hypot(30, 2)) * 180) / Math.PI, 9);
+    expect(r.motion!.chains[0].rods[0].misalignment).toBeNull();
+    expect(r.motion!.notChecked.join(" ")).toMatch(/Rod-end misalignment at "Rod": enter the out-of-plane offset of each of its attach points/);
+    expect(analyze(barRun({ ...square, dzA: 0, dzB: 2 })).motion!.chains[0].rods[0].misalignment).toBeCloseTo((Math.asin(2 / Math.hypot(30, 2)) * 180) / Math.PI, 9);
   });
 });
 
