@@ -110,6 +110,9 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(selectSpecialFactor(hw, "pivot", s, { cable: true })).toMatchObject({ value: 2, name: "cable-system joint factor" });
     expect(selectSpecialFactor({ ...hw, bearing: "ballBearing" }, "pivot", s).value).toBe(1.15);
   });
+  it("the report says the hinge joints carry the control system's load only (the air load is the designer's), with and without geometry", () => {
+    expect(run(goodRun()).assumptions.some((a) => a.startsWith("Hinge joints are checked for the control system's load only"))).toBe(true);
+  });
   it("bolt bending is listed as not checked, with what decides it, where the shear planes or the gaps in the stack are not entered", () => {
     const noGaps = check(joint(withHardware(goodRun(), "rodA", (h) => ({ ...h, spacers: undefined })), "rodA"), "boltBending");
     expect(noGaps).toMatchObject({ status: "notChecked", margin: null, todo: "enter the washers and spacers between the member's face and the ball (0 if none)" });
