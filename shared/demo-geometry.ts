@@ -17,7 +17,7 @@ export function demoPitchGeometry(): LinkageGeometry {
     parts: {
       stick: part(20, 0, { attach: -90, grip: 90 }),
       bellcrank: part(50, -3, { in: -90, out: 90 }),
-      horn: part(122, 3.5, { attach: -90 }),
+      horn: part(122, 6, { attach: -90 }), // the 5 in arm down to y 1, level with the bellcrank's output arm
     },
   };
 }

@@ -40,7 +40,7 @@ describe("geometry and motion", () => {
   it("enters the demo run's geometry, charts it, plays it and flags a pivot moved out of the band", async () => {
     await page.goto(`${APP_URL}/builds/${buildId}/linkages/${linkageId}`);
     await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
-    // Stick travel of 5° each way (the demo's arms gear the elevator about 3.2 : 1).
+    // Stick travel of 5° each way (the demo's arms gear the elevator about 1.6 : 1).
     await page.locator('.react-flow__node[data-id="stick"]').click();
     await page.getByLabel(/Forward travel/).fill("5");
     await page.getByLabel(/Aft travel/).fill("5");
@@ -57,7 +57,7 @@ describe("geometry and motion", () => {
     };
     await enter("stick", { x: "20", y: "0", attach: "-90", grip: "90" });
     await enter("bellcrank", { x: "50", y: "-3", in: "-90", out: "90" });
-    await enter("horn", { x: "122", y: "3.5", attach: "-90" });
+    await enter("horn", { x: "122", y: "6", attach: "-90" }); // the 5 in arm reaches down to y 1, level with the bellcrank's out arm
 
     await page.getByTestId("motion-charts").waitFor();
     await expect.poll(() => page.locator("[data-testid=motion-charts] .recharts-line").count()).toBeGreaterThanOrEqual(4);
@@ -80,10 +80,10 @@ describe("geometry and motion", () => {
     const atNeutral = await rodX();
     await page.getByTestId("geometry-slider").focus();
     await page.keyboard.press("End");
-    await expect.poll(() => page.getByTestId("geometry-readout").textContent()).toMatch(/5\.0° fwd/);
+    await expect.poll(() => page.getByTestId("geometry-readout").textContent()).toMatch(/^Input 5\.0° fwd/);
     expect(await rodX()).not.toBe(atNeutral);
     await page.getByTestId("geometry-play").click();
-    await expect.poll(() => page.getByTestId("geometry-readout").textContent()).not.toMatch(/5\.0° fwd/);
+    await expect.poll(() => page.getByTestId("geometry-readout").textContent()).not.toMatch(/^Input 5\.0° fwd/); // the input moved (the worst-angle note may name 5.0° fwd)
     await page.getByTestId("geometry-play").click();
     await shot(page, "geometry-02-moved");
 
