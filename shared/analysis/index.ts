@@ -18,7 +18,7 @@ import { retentionFindings } from "./retention";
 import { structureFindings } from "./structure";
 import { sortFindings, summarize } from "./report";
 import { finding, linkageSubject } from "./format";
-import { analyzeMotion, type MotionReport } from "./motion";
+import { analyzeMotion, type MotionReport, type WorstLoad } from "./motion";
 import { cableContext } from "./cable-circuits";
 import { cableFindings, cableResults } from "./cables";
 import { enterTodo, unenteredFindings, unenteredLoadKeys } from "./unentered";
@@ -95,6 +95,13 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
       const into = motion.loads[k];
       for (const [n, v] of single.loads[k]) if (!(v <= (into.get(n) ?? -Infinity))) into.set(n, v);
     }
+    // The worst-loads table shows the load each member is checked at: the single pilot's where it is larger.
+    const key = (w: WorstLoad) => `${w.subject.type}:${w.subject.id}|${w.what}|${w.inputId}`;
+    const solo = new Map(single.report.worstLoads.map((w) => [key(w), w]));
+    motion.report.worstLoads = motion.report.worstLoads.map((w) => {
+      const o = solo.get(key(w));
+      return o && o.limit > w.limit ? o : w;
+    });
   }
   // With geometry the swept runs' worst-step loads replace the perpendicular-arm loads of their members.
   for (const [n, v] of motion.loads.pushrod) loads.pushrodAxial[n] = v;
