@@ -21,19 +21,17 @@ import { CABLE_JOINT_FACTOR } from "./joints/factors";
  * 40 · D of its 50 · D couple in roll — the highest of the run's inputs (the floor none of them may go under).
  */
 function minimumScale(ctx: Ctx, s: AnalysisSettings, key: "pitchStick" | "rollStick" | "yawPedal"): number {
-  let floor = 0;
-  let any = false;
+  let floor = 0; // every input's floor is positive: 0 means the run has no input
   for (let n = 0; n < ctx.nodes.length; n++) {
     const node = ctx.nodes[n];
     if (ctx.nodeRole[n] !== "input") continue;
-    any = true;
     let f: number;
     if (node.kind === "controlWheel") {
       f = node.props.axis === "roll" ? WHEEL_ROLL_MIN_PER_IN / s.pilotForce.rollWheel : WHEEL_PITCH_MIN / (node.props.designForce ?? s.pilotForce.pitchWheel);
     } else f = PILOT_FORCE_TABLE[key].min / s.pilotForce[key]; // 14 CFR 23.397(b) minimum
     if (f > floor) floor = f;
   }
-  return any ? floor : PILOT_FORCE_TABLE[key].min / s.pilotForce[key];
+  return floor > 0 ? floor : PILOT_FORCE_TABLE[key].min / s.pilotForce[key];
 }
 
 export const HINGE_MOMENT_FACTOR = 1.25; // 14 CFR 23.395
