@@ -23,7 +23,7 @@ const PAGE = 25;
 
 export default function GeometryPanel({ onClose }: { onClose: () => void }) {
   const api = useEditorStoreApi();
-  const { nodes, joints, geo, settings, readOnly, report } = useEditorStore((s) => ({ nodes: s.nodes, joints: s.joints, geo: s.meta.geometry, settings: s.settings, readOnly: s.readOnly, report: s.report }));
+  const { nodes, joints, geo, settings, readOnly, report, system } = useEditorStore((s) => ({ nodes: s.nodes, joints: s.joints, geo: s.meta.geometry, settings: s.settings, readOnly: s.readOnly, report: s.report, system: s.meta.system }));
   const [error, setError] = useState<string | null>(null);
   const [page, setPage] = useState(0);
   const parts = useMemo(() => turningParts(nodes), [nodes]);
@@ -92,6 +92,8 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
   }
   const nodeById = indexById(nodes);
   const summary = report?.motion?.chains[0];
+  // Read from this sweep, so it follows the geometry as it is edited (the saved report says the same after a save).
+  const sense = motion?.report.chains[0]?.sense ?? null;
   const worstAt = summary ? summary.minTransmission.at : null;
   const pct = (t: number) => (sw ? ((t - sw.theta[0]) / (sw.theta[sw.theta.length - 1] - sw.theta[0] || 1)) * 100 : 0);
   const shown = parts.slice(page * PAGE, page * PAGE + PAGE);
@@ -120,6 +122,14 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
             <option value="ccw">counter-clockwise</option><option value="cw">clockwise</option>
           </select>
         </label>
+        {system === "pitch" && (
+          <label className="flex flex-col text-[10px] text-ink-soft">Pitch surface
+            <select value={geo.pitchSurface ?? ""} disabled={readOnly} data-testid="geometry-pitch-surface" className="rounded border border-ink/15 bg-white px-1 py-0.5 text-[12px] text-ink"
+              onChange={(e) => set({ ...geo, pitchSurface: e.target.value === "" ? undefined : (e.target.value as "tail" | "canard") })}>
+              <option value="">not said (tail taken)</option><option value="tail">tail, behind the wing</option><option value="canard">canard, ahead of the wing</option>
+            </select>
+          </label>
+        )}
         <NumField label="Designer up" unit="°" optional value={geo.designTravel?.up} disabled={readOnly} testId="design-up"
           onChange={(v) => set({ ...geo, designTravel: v === undefined ? undefined : { down: 0, tolerance: 1, ...geo.designTravel, up: v } })} />
         <NumField label="Designer down" unit="°" optional value={geo.designTravel?.down} disabled={readOnly || !geo.designTravel} testId="design-down"
@@ -149,6 +159,14 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
             {sw.ok[k] ? <> · surface <b>{sw.deflection[k].toFixed(1)}°</b> · gearing {sw.gearing[k].toFixed(2)} · transmission {lo.toFixed(0)}°–{hi.toFixed(0)}°</> : <> · <span className="text-hazard">the run cannot close here</span></>}
             {worstAt !== null && <> · worst angle at {inputWord(worstAt)} (red mark)</>}
           </p>
+          {sense ? (
+            <p className={`mt-1 text-[11px] ${sense.forward === sense.expected ? "" : "font-medium text-hazard"}`} data-testid="geometry-sense">
+              Control sense: {sw && nodes[sw.chain.input]?.kind === "controlWheel" ? "wheel" : "stick"} forward takes the trailing edge <b>{sense.forward}</b>
+              {sense.forward === sense.expected
+                ? <> — the right way for a {sense.surface === "tail" ? "tail behind the wing" : "canard ahead of the wing"}{sense.surfaceRecorded ? "" : " (tail taken: the geometry does not say)"}. Still move the controls on the aircraft.</>
+                : <> — reversed for a {sense.surface === "tail" ? "tail behind the wing" : "canard ahead of the wing"}: see the findings.</>}
+            </p>
+          ) : null}
           <MotionCharts sw={sw} at={sw.theta[k]} stops={[sw.theta[ends.eb], sw.theta[ends.ef]]} />
           <StopsPicture geo={geo} parts={parts} rods={rods} nodes={nodes} sw={sw} steps={[ends.eb, sw.neutral, ends.ef]} title={api.getState().meta.name} />
         </div>

@@ -32,7 +32,7 @@ export { analyzeMotion, sweepGraph, MOTION_NOT_CHECKED, atInput, type MotionRepo
 export { selectSpecialFactor, turnsOnBolt, HINGE_BEARING_FACTOR, CABLE_JOINT_FACTOR, type FactorOptions } from "./joints/factors";
 export { HINGE_MOMENT_FACTOR } from "./design-case";
 
-export const ENGINE_VERSION = "2.2.0"; // 2.1: starting values (unentered) are not used for margins; pushrod margins may be null. 2.1.1: an unrecorded rod-end hand is not taken as RH; no lever-rule force from a starting grip arm. 2.2: torque maximum with drag, retaining-washer side asked, undriven parts not checked, link ends turn on their bolt, trim cables, swept surface travel against the card, dual-control sweeps keep the full-force case, wheel minimums
+export const ENGINE_VERSION = "2.3.0"; // 2.3: control sense of pitch runs from the geometry (motion chains carry `sense`). 2.1: starting values (unentered) are not used for margins; pushrod margins may be null. 2.1.1: an unrecorded rod-end hand is not taken as RH; no lever-rule force from a starting grip arm. 2.2: torque maximum with drag, retaining-washer side asked, undriven parts not checked, link ends turn on their bolt, trim cables, swept surface travel against the card, dual-control sweeps keep the full-force case, wheel minimums
 
 export const NOTICE =
   "Linkwright's numbers are an aid to the builder's own engineering and the designer's data, not a substitute. " +
@@ -59,6 +59,7 @@ export const MOTION_ASSUMPTIONS: readonly string[] = [
   "Runs with geometry are swept through the input's travel in small steps on the branch they are assembled in; each pushrod, rod end, pivot and hinge load is its largest over the travel the run has (to its stops), with the input position where it occurs.",
   "The design force acts at the grip or pedal square to its arm; each rod's load is the torque over its effective arm (arm × sine of the angle between rod and arm), along the rod's own axis when it leaves the plane.",
   "Motion is planar: every pivot bolt is square to the plane, so a rod end's misalignment is the rod's angle out of the plane and does not change over the travel.",
+  "Control sense is read from the sweep for a pitch run from a stick or wheel only, with the forward and up directions set in the geometry (stick forward: a tail's trailing edge down, a canard's up; a tail where the geometry does not say). It is no substitute for moving the controls on the aircraft, which the checklist asks for on every run.",
 ];
 
 /** Every run swept: the perpendicular-arm and no-geometry lines give way to the motion ones; some swept: both. */

@@ -34,6 +34,8 @@ export const SRC = {
   handedEnds: { kind: "commonPractice", text: "one RH and one LH end (cf. AC 43.13-1B 7-165, turnbuckles)" },
   misalignment: { kind: "fromMemory", text: "rod-end rated misalignment, typically ±6° to ±14°" },
   transmission: { kind: "published", text: "mechanism-design texts: transmission angle 40°–140°" },
+  // Recalled, not read here: the motion-and-effect table of 14 CFR 23.779 before Part 23 was rewritten in 2017.
+  controlSense: { kind: "fromMemory", text: "14 CFR 23.779 (motion and effect of cockpit controls: elevator rearward for nose up, aileron right for right wing down, right pedal forward for nose right)" },
   structure: { kind: "commonPractice", text: "a control run is a tree of pushrods between mounted cranks" },
   engineering: { kind: "commonPractice", text: "engineering judgement where the published sources are silent" },
 } as const satisfies Record<string, SourceTag>;

@@ -7,6 +7,8 @@
  * an optional out-of-plane offset of each attach point (inches, + toward the viewer). A pushrod's length
  * follows from its two attach points. `designTravel` is the surface travel the designer gives, with its
  * tolerance; `inputForward` and `surfaceUp` say which way of turning, in the view, is forward and up.
+ * `pitchSurface` says whether a pitch run's surface is a tail behind the wing or a canard ahead of it (which way
+ * its trailing edge must go when the stick goes forward); not recorded, a tail is taken and the report says so.
  */
 import { z } from "zod";
 
@@ -46,6 +48,8 @@ export const geometrySchema = z
     /** Which way the surface turns, in the view, when it deflects up (or right). */
     surfaceUp: rotation.default("ccw"),
     designTravel: designTravelSchema.optional(),
+    /** A pitch run's surface: a tail behind the wing (stick forward, trailing edge down) or a canard ahead of it (up). */
+    pitchSurface: z.enum(["tail", "canard"]).optional(),
   })
   .superRefine((g, ctx) => {
     const n = Object.keys(g.parts).length;

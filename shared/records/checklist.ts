@@ -11,7 +11,7 @@ import { CABLE_PART_CODES, cableParts } from "./cable-records";
 
 export const ITEM_CODES = [
   "jam-nut", "witness-hole", "engagement-length", "retaining-washer", "nut-locking", "cotter-pin", "safety-wire",
-  "thread-protrusion", "torque", "torque-stripe", "full-free-travel", "stops-before-limits", "not-checked", ...CABLE_PART_CODES,
+  "thread-protrusion", "torque", "torque-stripe", "control-sense", "full-free-travel", "stops-before-limits", "not-checked", ...CABLE_PART_CODES,
 ] as const;
 export type ItemCode = (typeof ITEM_CODES)[number];
 
@@ -74,6 +74,29 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
   return items;
 }
 
+/**
+ * What the controls of a run must do, by its system (SRC.controlSense, from memory): the pilot's motion and
+ * the surface's answer, checked on the aircraft with the controls moved by hand.
+ */
+export function controlSenseText(g: LinkageGraph): string {
+  const kinds = new Set(g.nodes.map((n) => n.kind));
+  const hand = kinds.has("controlWheel") && !kinds.has("stick") ? "wheel" : kinds.has("controlWheel") ? "stick or wheel" : "stick";
+  switch (g.system) {
+    case "pitch":
+      return `Control sense: ${hand} back raises the nose — the elevator's trailing edge goes up (on a canard, down); ${hand} forward, the opposite. Watched at the surface, not read from the drawing.`;
+    case "roll":
+      return `Control sense: ${hand} to the right — right aileron's trailing edge up, left aileron's down (right wing down); to the left, the opposite. Watched at both ailerons.`;
+    case "yaw":
+      return "Control sense: right pedal forward — rudder's trailing edge to the right (nose right); left pedal forward, to the left. Watched at the rudder.";
+    case "flap":
+      return "Control sense: the flap control forward or up for flaps up, rearward or down for flaps down; at each setting both flaps are at the same angle.";
+    case "trim":
+      return "Control sense: the trim control moves the way the nose is to go (forward or down for nose down); an elevator's tab goes the other way from the elevator (trailing edge up to trim nose down); the indicator agrees.";
+    default:
+      return "Control sense: each control moves its surface the way the designer's drawings show, watched at the surface.";
+  }
+}
+
 export function linkageItems(g: LinkageGraph): ChecklistItem[] {
   const where = "Whole linkage";
   const surfaces = g.nodes.filter((n) => n.kind === "controlSurface");
@@ -82,6 +105,7 @@ export function linkageItems(g: LinkageGraph): ChecklistItem[] {
     .map((s) => (s.kind === "controlSurface" ? `${partName(s)} ${s.props.travelUp}° up / ${s.props.travelDown}° down` : ""))
     .join("; ");
   const items: ChecklistItem[] = [
+    { jointId: "", subject: "linkage", where, code: "control-sense", text: controlSenseText(g), source: SRC.controlSense },
     { jointId: "", subject: "linkage", where, code: "full-free-travel", text: "Full and free travel from stop to stop with the controls moved by hand: no binding, rubbing or contact with structure or wiring, at every position.", source: { kind: "commonPractice", text: "control-system inspection" } },
   ];
   if (surfaces.length || stops.length) {

@@ -9,6 +9,7 @@ import { type Ctx, jointLabel, nodeLabel } from "../context";
 import { TRANSMISSION_MAX, TRANSMISSION_MIN } from "../kinematics";
 import { type ChainSweep, mu as muDeg, TOGGLE_SIN } from "./sweep";
 import type { LinkageGeometry } from "../../linkage/geometry";
+import type { MotionChainSummary } from "./types";
 
 export const MOTION_SRC = {
   closure: { kind: "published", text: "four-bar loop closure (mechanism-design texts)" },
@@ -18,6 +19,35 @@ export const MOTION_SRC = {
 
 /** Swept travel this far past the card's before it is a finding, degrees. // common practice, no source: a rigging tolerance */
 export const SURFACE_TRAVEL_SLACK = 1;
+
+/**
+ * Below this much surface movement at a travel end, which way the surface went is not read, degrees.
+ * // common practice, no source: half a degree is about what a builder can see at the trailing edge.
+ */
+export const SENSE_MIN_DEFLECTION = 0.5;
+
+type Sense = NonNullable<MotionChainSummary["sense"]>;
+
+/**
+ * Control sense of a pitch run from a stick or wheel (SRC.controlSense, from memory: elevator rearward for nose
+ * up): which way the surface's trailing edge goes with the input forward, read at the ends of the travel the
+ * run has, against the way it must go — down on a tail behind the wing, up on a canard ahead of it (a tail where
+ * the geometry does not say). The view's forward and up directions are the geometry's. Null when not a pitch
+ * run from a stick or wheel, or when neither end moves the surface by SENSE_MIN_DEFLECTION or the two ends
+ * move it the same way (then the run is not a lever one way and the other, and other findings say why).
+ */
+export function controlSense(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: LinkageGeometry): Sense | null {
+  const input = ctx.nodes[sw.chain.input];
+  if (ctx.graph.system !== "pitch" || (input.kind !== "stick" && input.kind !== "controlWheel")) return null;
+  const f = sw.theta[ends.ef] > 0 ? sw.deflection[ends.ef] : 0;
+  const b = sw.theta[ends.eb] < 0 ? sw.deflection[ends.eb] : 0;
+  const fOk = Math.abs(f) >= SENSE_MIN_DEFLECTION, bOk = Math.abs(b) >= SENSE_MIN_DEFLECTION;
+  if (!fOk && !bOk) return null;
+  if (fOk && bOk && Math.sign(f) === Math.sign(b)) return null;
+  const forward = (fOk ? f > 0 : b < 0) ? "up" : "down";
+  const surface = geo.pitchSurface ?? "tail";
+  return { forward, expected: surface === "canard" ? "up" : "down", surface, surfaceRecorded: geo.pitchSurface !== undefined };
+}
 
 /** "12.5° forward", "3.0° back", "neutral". */
 export function atInput(theta: number): string {
@@ -101,6 +131,17 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
             MOTION_SRC.stops, [num(`${word} travel swept`, got, "°"), num(`${word} travel on the card`, card, "°"), num("input position", at, "°")]));
       }
     }
+  }
+  const sense = controlSense(ctx, sw, ends, geo);
+  if (sense && sense.forward !== sense.expected) {
+    const surf = nodeLabel(ctx.nodes[ch.surface >= 0 ? ch.surface : ch.horn]);
+    // The end the sense was read at: forward where it moves the surface enough, else back.
+    const k = sw.theta[ends.ef] > 0 && Math.abs(sw.deflection[ends.ef]) >= SENSE_MIN_DEFLECTION ? ends.ef : ends.eb;
+    const moved = `${k === ends.ef ? "pushing" : "pulling"} ${nodeLabel(input)} ${k === ends.ef ? "forward" : "back"} moves the trailing edge of ${surf} ${fmt(Math.abs(sw.deflection[k]), 1)}° ${sw.deflection[k] > 0 ? "up" : "down"} (at ${atInput(sw.theta[k])})`;
+    const must = sense.surface === "tail" ? "On a tail behind the wing, stick forward must take the trailing edge down to lower the nose" : "On a canard ahead of the wing, stick forward must take the trailing edge up to lower the nose";
+    out.push(finding("control-sense-reversed", "hazard", nodeSubject(input.id),
+      `In the geometry, ${moved}. ${must}: this run is rigged the wrong way round (reversed pitch control). ${sense.surfaceRecorded ? "" : "The geometry does not say tail or canard, so a tail was taken; if the surface is a canard, set that in the geometry. "}Check which side of each pivot the pushrods attach and the arm angles, and that the geometry's forward and up directions match this view; then move the stick on the aircraft and watch the surface.`,
+      SRC.controlSense, [num("surface deflection", sw.deflection[k], "°"), num("input position", sw.theta[k], "°")]));
   }
   const dt = geo.designTravel;
   if (dt && ch.surface >= 0) {

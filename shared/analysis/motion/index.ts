@@ -13,7 +13,7 @@ import { buildContext, type Ctx, jointsAt, nodeLabel, otherNode } from "../conte
 import { designForce } from "../loads";
 import { buildChains, type Chain } from "./chain";
 import { type ChainSweep, mu as muDeg, sweepChain } from "./sweep";
-import { chainFindings, MOTION_SRC, atInput, type Ends } from "./findings";
+import { chainFindings, controlSense, MOTION_SRC, atInput, type Ends } from "./findings";
 import { riggingRange } from "./rigging";
 import { enterTodo, unenteredOf } from "../unentered";
 
@@ -120,8 +120,12 @@ export function analyzeMotion(ctx: Ctx, settings: AnalysisSettings, steps?: numb
     summaries.push({
       inputId: input.id, hornId: ctx.nodes[ch.horn].id, surfaceId: ch.surface >= 0 ? ctx.nodes[ch.surface].id : null, steps: sw.theta.length - 1,
       travelBack: -sw.theta[eb], travelForward: sw.theta[ef], deflectionBack: sw.deflection[eb], deflectionForward: sw.deflection[ef],
-      gearingNeutral: sw.gearing[sw.neutral], minTransmission: minT, maxTransmission: maxT, failBack: sw.failBack, failForward: sw.failForward, rods,
+      gearingNeutral: sw.gearing[sw.neutral], minTransmission: minT, maxTransmission: maxT, failBack: sw.failBack, failForward: sw.failForward,
+      sense: controlSense(ctx, sw, ends, geo), rods,
     });
+    // Only a pitch run's sense is read from the geometry; every run's is a checklist item on the aircraft.
+    if (summaries.at(-1)!.sense === null)
+      notChecked.push(`Control sense of the run from ${nodeLabel(input)}: not read from the geometry${ctx.graph.system === "pitch" && (input.kind === "stick" || input.kind === "controlWheel") ? " (the surface hardly moves over the travel)" : " (only a pitch run's is)"}. Move the control on the aircraft and watch the surface; it is on the checklist.`);
   }
   return { report: { checked: chains.length > 0, notChecked, chains: summaries, worstLoads }, findings, loads, sweeps, ends: allEnds };
 }

@@ -30,6 +30,13 @@ export type MotionChainSummary = {
   /** Input deflection where a part runs out (the chain will not close), each way; null when it closes to the stop. */
   failBack: number | null;
   failForward: number | null;
+  /**
+   * Control sense of a pitch run from a stick or wheel (14 CFR 23.779, from memory): which way the surface's
+   * trailing edge goes when the input goes forward, and which way it must go (down on a tail, up on a canard);
+   * `surfaceRecorded` false: the geometry does not say tail or canard and a tail was taken. Null: not read from
+   * the geometry (not a pitch run, or the surface hardly moves) — the checklist asks for it on the aircraft.
+   */
+  sense: { forward: "up" | "down"; expected: "up" | "down"; surface: "tail" | "canard"; surfaceRecorded: boolean } | null;
   /** Per pushrod: the centre-to-centre length the geometry needs, the card's, and the rigging range if known. */
   rods: { rodId: string; needed: number; card: number; shortest: number | null; longest: number | null; misalignment: number | null }[];
 };

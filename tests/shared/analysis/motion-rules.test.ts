@@ -67,6 +67,53 @@ describe("surface travel swept vs the surface's own travel on its card (14 CFR 2
   });
 });
 
+describe("control sense of a pitch run (14 CFR 23.779 table, from memory: elevator rearward for nose up)", () => {
+  // Both arms up: stick forward (ccw in this view) pulls the horn's tip forward, so the elevator goes up — reversed.
+  const reversed = square;
+  // Stick arm up, horn arm down: the same push turns the horn the other way, so the elevator goes down — right.
+  const right: Bar = { ...square, beta: -90 };
+  const sense = (g: LinkageGraph) => analyze(g).findings.filter((f) => f.code === "control-sense-reversed");
+  it("trips when stick forward raises a tail's trailing edge, naming the travel and saying a tail was taken", () => {
+    const f = sense(barRun(reversed));
+    expect(f).toHaveLength(1);
+    expect(f[0].severity).toBe("hazard");
+    expect(f[0].subject).toEqual({ type: "node", id: "stick" });
+    expect(f[0].message).toMatch(/pushing "Stick" forward moves the trailing edge of "Elevator" 15(\.0)?° up \(at 15(\.0)?° forward\)/);
+    expect(f[0].message).toMatch(/a tail was taken/);
+    expect(f[0].numbers.find((n) => n.label === "surface deflection")!.value).toBeCloseTo(15, 6); // parallelogram: surface = stick
+    expect(analyze(barRun(reversed)).motion!.chains[0].sense).toEqual({ forward: "up", expected: "down", surface: "tail", surfaceRecorded: false });
+  });
+  it("does not trip when stick forward lowers a tail's trailing edge, nor on the demo run to scale", () => {
+    expect(sense(barRun(right))).toEqual([]);
+    expect(analyze(barRun(right)).motion!.chains[0].sense).toMatchObject({ forward: "down", expected: "down" });
+    const demo = { ...demoPitchLinkage(), geometry: demoPitchGeometry() };
+    expect(sense(demo)).toEqual([]);
+    expect(analyze(demo).motion!.chains[0].sense?.forward).toBe("down");
+  });
+  it("a canard ahead of the wing wants the opposite: the reversed-for-a-tail run is right, the other trips", () => {
+    expect(sense(barRun(reversed, { pitchSurface: "canard" }))).toEqual([]);
+    const f = sense(barRun(right, { pitchSurface: "canard" }));
+    expect(f.map((x) => x.message.match(/On a canard ahead of the wing/) !== null)).toEqual([true]);
+    expect(f[0].message).not.toMatch(/a tail was taken/); // recorded
+    expect(sense(barRun(reversed, { pitchSurface: "tail" }))[0].message).not.toMatch(/a tail was taken/);
+  });
+  it("a mirrored view (forward and up both clockwise) reads the same sense; one direction flipped alone reverses it", () => {
+    expect(sense(barRun(reversed, { inputForward: "cw", surfaceUp: "cw" }))).toHaveLength(1);
+    expect(sense(barRun(reversed, { surfaceUp: "cw" }))).toEqual([]);
+  });
+  it("read at the back end when the forward end does not move the surface", () => {
+    const f = sense(barRun({ ...reversed, forward: 0 }));
+    expect(f[0].message).toMatch(/pulling "Stick" back moves the trailing edge of "Elevator" 15(\.0)?° down/);
+  });
+  it("not read for a roll run: the run's notes send the builder to the aircraft and the checklist", () => {
+    const g = graphSchema.parse({ ...barRun(reversed), system: "roll" });
+    const r = analyze(g);
+    expect(r.findings.map((f) => f.code)).not.toContain("control-sense-reversed");
+    expect(r.motion!.chains[0].sense).toBeNull();
+    expect(r.motion!.notChecked.join(" ")).toMatch(/Control sense of the run from "Stick": not read from the geometry \(only a pitch run's is\)\. Move the control on the aircraft/);
+  });
+});
+
 describe("stops", () => {
   it("a stop beyond the input's travel is never reached", () => {
     expect(codes(withStop(barRun(square), "elevator", 20))).toContain("stop-never-reached");

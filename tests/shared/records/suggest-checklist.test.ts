@@ -126,7 +126,7 @@ describe("inspection checklist", () => {
       "j-horn-elevator": locked,
       "j-elevator-hinge": locked,
       "j-stick-stop": locked,
-      "": ["full-free-travel", "stops-before-limits"],
+      "": ["control-sense", "full-free-travel", "stops-before-limits"],
     });
     const washer = items.find((i) => i.jointId === DEMO_WRONG_JOINT && i.code === "retaining-washer")!;
     expect(washer.text).toContain("over 0.5 in"); // the demo rod end's housing bore, 0.500 in (shared/demo.ts, invented part)
@@ -134,6 +134,21 @@ describe("inspection checklist", () => {
     expect(items.find((i) => i.jointId === "j-bellcrank-pivot" && i.code === "torque")!.text).toContain("120 in·lbf"); // demo value
     expect(items.find((i) => i.code === "stops-before-limits")!.text).toContain("Elevator 25° up / 20° down"); // demo travel
     for (const i of items) expect(i.source.text.length).toBeGreaterThan(0);
+  });
+  it("asks for the control sense of every run, in the words of its system (14 CFR 23.779 table, from memory)", () => {
+    const g = demoPitchLinkage();
+    const sense = (graph: typeof g) => checklistFor(graph).filter((i) => i.code === "control-sense");
+    const pitch = sense(g);
+    expect(pitch).toHaveLength(1);
+    expect(pitch[0].jointId).toBe("");
+    expect(pitch[0].text).toMatch(/^Control sense: stick back raises the nose — the elevator's trailing edge goes up \(on a canard, down\)/);
+    expect(pitch[0].source.kind).toBe("fromMemory");
+    expect(sense({ ...g, system: "roll" })[0].text).toMatch(/stick to the right — right aileron's trailing edge up, left aileron's down/);
+    expect(sense({ ...g, system: "yaw" })[0].text).toMatch(/right pedal forward — rudder's trailing edge to the right/);
+    expect(sense({ ...g, system: "trim" })[0].text).toMatch(/trailing edge up to trim nose down/);
+    // A wheel instead of a stick is named as such.
+    const wheel = { ...g, nodes: g.nodes.map((n) => (n.kind === "stick" ? ({ ...n, kind: "controlWheel" } as unknown as (typeof g.nodes)[number]) : n)) };
+    expect(sense(wheel)[0].text).toMatch(/^Control sense: wheel back raises the nose/);
   });
   it("torque items: the table range with the drag, asked for when not recorded; a castellated nut on a clamped bolt is torqued, on a bushing snugged", () => {
     const g = demoPitchLinkage();
