@@ -68,6 +68,17 @@ describe("geometry and motion", () => {
     expect(await transmissionFindings()).toBe(0);
     expect(chartScripts.length).toBeGreaterThan(0); // loaded with the geometry view
     await expect.poll(() => page.getByTestId("motion-status").textContent()).toBe("Motion checked");
+    // Control sense (14 CFR 23.779 table, from memory): the demo's stick forward takes the elevator down, right for a tail.
+    expect(await page.getByTestId("geometry-sense").textContent()).toMatch(/^Control sense: stick forward takes the trailing edge down — the right way for a tail behind the wing \(tail taken: the geometry does not say\)/);
+    const senseFindings = () => page.locator('[data-testid=finding][data-code="control-sense-reversed"]').count();
+    expect(await senseFindings()).toBe(0);
+    // Said to be a canard, the same run is reversed: a hazard, until it is set back to a tail.
+    await page.getByTestId("geometry-pitch-surface").selectOption("canard");
+    await expect.poll(() => page.getByTestId("geometry-sense").textContent()).toMatch(/reversed for a canard ahead of the wing/);
+    await expect.poll(senseFindings, { timeout: 20_000 }).toBeGreaterThan(0); // in the list, and on the selected stick's card
+    await page.getByTestId("geometry-pitch-surface").selectOption("tail");
+    await expect.poll(senseFindings, { timeout: 20_000 }).toBe(0);
+    expect(await page.getByTestId("geometry-sense").textContent()).not.toMatch(/tail taken/);
     await shot(page, "geometry-01-entered");
     // The picture: the run at the back stop, neutral and the forward stop, 3 × 360 px drawn at 2×.
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("geometry-picture").click()]);
@@ -107,6 +118,7 @@ describe("geometry and motion", () => {
     const row = await testDb("linkage_revisions").where({ linkage_id: linkageId, revision: rev.current_revision }).first();
     const graph = typeof row.graph === "string" ? JSON.parse(row.graph) : row.graph;
     expect(graph.geometry.datum).toBe("firewall face, top longeron");
+    expect(graph.geometry.pitchSurface).toBe("tail");
     expect(graph.geometry.parts.bellcrank.pivot.y).toBeGreaterThan(5);
     // The arrow keys moved the pivot in the geometry, not the selected card on the diagram.
     expect(graph.nodes.find((n: { id: string }) => n.id === "stick").position).toEqual(demoPitchLinkage().nodes[0].position);
