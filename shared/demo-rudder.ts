@@ -110,7 +110,7 @@ export function demoRudderLinkage(): LinkageGraph {
     j("rd-j-horn-left", ["rd-tb-left", "b"], ["rd-horn", "attach"], terminal()),
     j("rd-j-horn-right", [DEMO_RUDDER_FAULT_PART, "b"], ["rd-horn", "attach"], terminal()),
     j("rd-j-horn-spar", ["rd-horn", "surface"], ["rd-rudder", "horn"], hornOnSpar()),
-    j("rd-j-hinge", ["rd-rudder", "hinge"], ["rd-fin", "mount"], pivot()),
+    j("rd-j-hinge", ["rd-rudder", "hinge"], ["rd-fin", "mount"], { ...pivot(), hingeLoad: 120 }), // invented demo hinge load
     j("rd-j-stop", ["rd-stop", "contact"], ["rd-pedal-right", "attach"], hornBolts()),
   ];
   return { formatVersion: FORMAT_VERSION, name: "Yaw — pedals to rudder", system: "yaw", nodes, joints };

@@ -140,7 +140,7 @@ export function demoPitchLinkage(): LinkageGraph {
     joint("j-bellcrank-aft", ["bellcrank", "out"], ["pushrod-aft", "a"], rodEndJoint("RH")),
     joint(DEMO_WRONG_JOINT, ["pushrod-aft", "b"], ["horn", "attach"], wrong),
     joint("j-horn-elevator", ["horn", "surface"], ["elevator", "horn"], boltedClamp()),
-    joint("j-elevator-hinge", ["elevator", "hinge"], ["mount-tail", "mount"], ballPivot("AN4", 60)),
+    joint("j-elevator-hinge", ["elevator", "hinge"], ["mount-tail", "mount"], { ...ballPivot("AN4", 60), hingeLoad: 150 }), // invented demo hinge load
     joint("j-stick-stop", ["stop-stick", "contact"], ["stick", "attach"], boltedClamp("double")),
   ];
   return { formatVersion: FORMAT_VERSION, name: "Larkspur LX-2 pitch", system: "pitch", nodes, joints };
@@ -221,11 +221,11 @@ export function generateLinkage(nodeCount: number): LinkageGraph {
     nodes.push({ id: sf, kind: "controlSurface", label: "", position: pos(col + 3, row), props: { travelUp: 25, travelDown: 20 } });
     addJoint([hn, "surface"], [sf, "horn"], boltedClamp());
     nodes.push({ id: mt, kind: "structureMount", label: "", position: pos(col + 3, row + 1), props: { note: "" } });
-    addJoint([sf, "hinge"], [mt, "mount"], ballPivot("AN4", 60));
+    addJoint([sf, "hinge"], [mt, "mount"], { ...ballPivot("AN4", 60), hingeLoad: 150 }); // invented, as the demo's
     for (; padLeft > 0 && i === 0; padLeft--) {
       const extra = `mh${padLeft}`;
       nodes.push({ id: extra, kind: "structureMount", label: "", position: pos(col + 3 + padLeft, row + 1), props: { note: "" } });
-      addJoint([sf, "hinge"], [extra, "mount"], ballPivot("AN4", 60));
+      addJoint([sf, "hinge"], [extra, "mount"], { ...ballPivot("AN4", 60), hingeLoad: 150 });
     }
   });
   return { formatVersion: FORMAT_VERSION, name: `generated ${n}`, system: "pitch", nodes, joints };

@@ -116,11 +116,19 @@ const ROD_END_ONLY = new Set(["Rod-end bearing", "Jam nut & thread engagement"])
  * terminal (the terminal and the turnbuckle are on those parts' own cards) no rod-end or jam-nut section,
  * unless a rod end was recorded there before.
  */
+/** At a surface's hinge, first on the card: the load the check cannot find for itself. */
+export const HINGE_SECTION: SectionSpec = {
+  title: "Hinge load",
+  note: "The surface's own air load on this hinge comes from the designer's data, not from the run. The check adds the control system's load to it; without it this hinge is not checked.",
+  fields: [{ type: "number", path: "hingeLoad", label: "Designer's hinge load (limit)", q: "force", hint: "on this hinge, from the designer's data" }],
+};
+
 export function jointCardSections(joint: Joint, nodes: readonly LinkageNode[]): SectionSpec[] {
   const byId = (id: string) => nodes.find((n) => n.id === id);
   const from = byId(joint.from.node), to = byId(joint.to.node);
   const cableEnd = [from, to].some((n) => n && ROLES[n.kind] === "tension") && !joint.hardware.rodEnd;
   const out: SectionSpec[] = [];
+  if ((from?.kind === "controlSurface" && joint.from.port === "hinge") || (to?.kind === "controlSurface" && joint.to.port === "hinge")) out.push(HINGE_SECTION);
   for (const s of HARDWARE_SECTIONS) {
     if (s === HOLES) {
       out.push(member("from", from ? partName(from) : "the first part"), member("to", to ? partName(to) : "the second part"));

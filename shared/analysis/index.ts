@@ -32,7 +32,7 @@ export { analyzeMotion, sweepGraph, MOTION_NOT_CHECKED, atInput, type MotionRepo
 export { selectSpecialFactor, turnsOnBolt, HINGE_BEARING_FACTOR, CABLE_JOINT_FACTOR, type FactorOptions } from "./joints/factors";
 export { HINGE_MOMENT_FACTOR } from "./design-case";
 
-export const ENGINE_VERSION = "2.3.0"; // 2.3: control sense of pitch runs from the geometry (motion chains carry `sense`). 2.1: starting values (unentered) are not used for margins; pushrod margins may be null. 2.1.1: an unrecorded rod-end hand is not taken as RH; no lever-rule force from a starting grip arm. 2.2: torque maximum with drag, retaining-washer side asked, undriven parts not checked, link ends turn on their bolt, trim cables, swept surface travel against the card, dual-control sweeps keep the full-force case, wheel minimums
+export const ENGINE_VERSION = "2.3.0"; // 2.3: control sense of pitch runs from the geometry (motion chains carry `sense`); a hinge is checked with the designer's hinge load added, not checked without it. 2.1: starting values (unentered) are not used for margins; pushrod margins may be null. 2.1.1: an unrecorded rod-end hand is not taken as RH; no lever-rule force from a starting grip arm. 2.2: torque maximum with drag, retaining-washer side asked, undriven parts not checked, link ends turn on their bolt, trim cables, swept surface travel against the card, dual-control sweeps keep the full-force case, wheel minimums
 
 export const NOTICE =
   "Linkwright's numbers are an aid to the builder's own engineering and the designer's data, not a substitute. " +
@@ -43,7 +43,7 @@ export const ASSUMPTIONS: readonly string[] = [
   "Crank arms are taken perpendicular to their links (F_out = F_in · L_in / L_out); a horn's effective arm is its length × sin(link angle).",
   "A bellcrank pivot carries the vector sum of its two arm loads at the arm angle; idler arms, torque tubes, sticks and pedals are taken with their arms opposite, the largest resultant.",
   "Where a port carries several joints, each is taken to carry the full force; every pivot and hinge joint of a part carries the whole pivot or hinge load.",
-  "Hinge joints are checked for the control system's load only: the surface's own air load at its hinges is the designer's figure and is not included here — check the hinges against the designer's hinge loads.",
+  "A hinge joint carries the designer's limit hinge load entered on its card (the surface's own air load, which only the designer's figures give) plus the control system's load there, added as if in line (conservative); without the designer's figure the hinge is not checked.",
   "Ultimate = limit × ultimate factor; every joint check also × the fitting factor (14 CFR 23.625). Bearing at a hole takes the joint's highest special factor instead (14 CFR 23.619): 3.33 where a part turns on a plain bearing (23.693), 6.67 at hinges without ball or roller bearings (23.657(a)); tear-out, shear and bending take the fitting factor.",
   "A stop reacts the moment of the part it stops over its arm from that part's pivot; a horn's bolts share the link force and carry the hinge moment's couple, added in line (conservative).",
   "Bolt bending: single shear M = P × (spacers + half the ball or member width); double shear with spacers M = P/2 × (gap + cheek/2 + ball/4); allowable Ftu × 1.5 × πD³/32.",

@@ -43,6 +43,11 @@ export const jointExtraFields = {
   spacers: z.number({ error: "spacers must be a number (in)" }).min(0, "spacers cannot be negative").max(10, "spacers over 10 in").optional(),
   /** Which side of the rod end is free (not against the member): the retaining washer goes there. */
   freeSide: z.enum(["head", "nut"]).optional(),
+  /**
+   * At a surface's hinge: the designer's limit load on this hinge from the surface's own air load, lbf. The
+   * check adds the control system's load to it; without it the hinge's checks are not made.
+   */
+  hingeLoad: force("hinge load").optional(),
   /** Rated radial load of a ball or roller bearing (pivot or hinge), lbf, from its maker. */
   bearingRating: force("bearing rating").optional(),
   clevisPin: clevisPinSchema.optional(),

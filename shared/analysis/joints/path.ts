@@ -6,6 +6,9 @@
  *   moment. With n bolts in a row at spacing s, the outermost bolt of the couple M takes
  *   M · r_max / Σr² = 6M / (s · n · (n + 1)) [published: bolt-group statics, any machine-design text]; the
  *   share and the couple are added as if in line (conservative, the row's direction is not drawn).
+ * - A surface's hinge carries the surface's own air load, which only the designer's figures give: the designer's
+ *   limit hinge load entered on the joint's card, plus the control system's load there, added as if in line
+ *   (conservative: the directions are not drawn). Without it the hinge is not checked.
  * A joint whose load cannot be found gets a to-do instead of a number.
  */
 import { ENGINE, type EngineInfo } from "../../linkage/kinds";
@@ -80,6 +83,7 @@ export function pathLoads(ctx: Ctx, loads: Loads, out: Finding[]): PathInfo {
     const role = ctx.roles[j];
     if (role === "stop") stopLoad(ctx, loads, j, loadTodo, out);
     else if (role === "hornMount") hornBolts(ctx, loads, j, loadTodo, out);
+    else if (role === "hinge") hingeLoad(ctx, loads, j, loadTodo);
   }
   if (stops === 0 && inputs > 0 && surfaces > 0)
     out.push(finding("no-stop", "caution", linkageSubject(ctx.graph.name || "linkage"),
@@ -114,6 +118,19 @@ function stopLoad(ctx: Ctx, loads: Loads, j: number, loadTodo: (string | null)[]
         `${nodeLabel(stop)} contacts at ${fmt(Math.abs(stop.props.stopAt), 1)}° ${up ? "up" : "down"}, past the ${fmt(travel, 1)}° ${up ? "up" : "down"} travel of ${nodeLabel(part)}: the surface reaches its limit before the stop does. Set the stop to contact at or before the surface's travel.`,
         STOP_SRC, [num("stop angle", Math.abs(stop.props.stopAt), "°"), num("surface travel", travel, "°")]));
   }
+}
+
+/** What a hinge joint needs before it is checked: the designer's hinge load. */
+export const HINGE_LOAD_TODO = "enter the designer's limit load on this hinge (the surface's air load) on the joint's card";
+
+function hingeLoad(ctx: Ctx, loads: Loads, j: number, loadTodo: (string | null)[]) {
+  const given = ctx.joints[j].hardware?.hingeLoad;
+  if (given === undefined) {
+    loadTodo[j] = HINGE_LOAD_TODO;
+    return;
+  }
+  // common practice, no source: the air load's reaction and the control system's added in line (conservative).
+  loads.jointRadial[j] += given;
 }
 
 function hornBolts(ctx: Ctx, loads: Loads, j: number, loadTodo: (string | null)[], out: Finding[]) {

@@ -5,7 +5,7 @@
  * rudder, floor, fin, stop (on the right pedal, 6 in from its pivot). Numbers are plausible light-aircraft values, invented for the tests.
  */
 import type { LinkageGraph, LinkageNode } from "@/shared/linkage/schema";
-import { goodBallPivot, goodClamp, graph, horn, j, mount, stop, surface } from "./fixtures";
+import { GOOD_HINGE_LOAD, goodBallPivot, goodClamp, graph, horn, j, mount, stop, surface } from "./fixtures";
 
 type Props<K extends LinkageNode["kind"]> = Extract<LinkageNode, { kind: K }>["props"];
 let x = 0;
@@ -52,7 +52,7 @@ export function rudderCircuit(): LinkageGraph {
       j("hornL", ["tbL", "b"], ["horn", "attach"], terminalBolt()),
       j("hornR", ["tbR", "b"], ["horn", "attach"], terminalBolt()),
       j("hornMount", ["horn", "surface"], ["rudder", "horn"], goodClamp()),
-      j("hinge", ["rudder", "hinge"], ["fin", "mount"], goodBallPivot()),
+      j("hinge", ["rudder", "hinge"], ["fin", "mount"], goodBallPivot({ hingeLoad: GOOD_HINGE_LOAD })),
       j("stopR", ["stop", "contact"], ["pedalR", "attach"], goodClamp()),
     ],
     "yaw",
@@ -78,7 +78,7 @@ export function wheelRun(props: Record<string, unknown> = {}): LinkageGraph {
       j("wp", ["wheel", "pivot"], ["m", "mount"], goodBallPivot()),
       j("l1", ["wheel", "attach"], ["l", "a"], goodClamp()), j("r1", ["wheel", "attach"], ["r", "a"], goodClamp()),
       j("l2", ["l", "b"], ["horn", "attach"], goodClamp()), j("r2", ["r", "b"], ["horn", "attach"], goodClamp()),
-      j("hm", ["horn", "surface"], ["ail", "horn"], goodClamp()), j("hinge", ["ail", "hinge"], ["m", "mount"], goodBallPivot()),
+      j("hm", ["horn", "surface"], ["ail", "horn"], goodClamp()), j("hinge", ["ail", "hinge"], ["m", "mount"], goodBallPivot({ hingeLoad: GOOD_HINGE_LOAD })),
     ],
     "roll",
   );

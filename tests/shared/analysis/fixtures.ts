@@ -94,6 +94,9 @@ export function graph(nodes: LinkageNode[], joints: Joint[], system: LinkageGrap
   return { formatVersion: 1, name: "fixture", system, nodes, joints };
 }
 
+/** The designer's limit hinge load on the good run's hinge, lbf (invented test value). */
+export const GOOD_HINGE_LOAD = 100;
+
 /**
  * Stick (grip 20 in, attach 5 in) → pushrod 4130N 1.000 × 0.049 × 24 in → horn 2 in → elevator.
  * Joint ids: "pivot", "rodA" (stick–pushrod a, RH), "rodB" (pushrod b–horn, LH), "horn", "hinge", "stop"
@@ -107,7 +110,7 @@ export function goodRun(): LinkageGraph {
       j("rodA", ["stick", "attach"], ["rod", "a"], goodRodEndJoint({}, { hand: "RH" })),
       j("rodB", ["rod", "b"], ["hornpart", "attach"], goodRodEndJoint({}, { hand: "LH" })),
       j("horn", ["hornpart", "surface"], ["elev", "horn"], goodClamp()),
-      j("hinge", ["elev", "hinge"], ["m2", "mount"], goodBallPivot({ bolt: { size: "AN4", material: "steel", grip: 1.25, stack: 1.25, threadsProtruding: 2 }, torque: 60 })),
+      j("hinge", ["elev", "hinge"], ["m2", "mount"], goodBallPivot({ bolt: { size: "AN4", material: "steel", grip: 1.25, stack: 1.25, threadsProtruding: 2 }, torque: 60, hingeLoad: GOOD_HINGE_LOAD })),
       j("stop", ["stop", "contact"], ["stick", "attach"], goodClamp()),
     ],
   );

@@ -7,7 +7,8 @@ import { describe, expect, it } from "vitest";
 import { analyze, selectSpecialFactor, DEFAULT_SETTINGS, type JointResult } from "@/shared/analysis";
 import type { JointHardware, LinkageGraph } from "@/shared/linkage/schema";
 import { bearingUltimate, PLATE_TABLE, tearOutStrength } from "@/shared/hardware";
-import { goodRun, valid, withHardware } from "./fixtures";
+import { GOOD_HINGE_LOAD, goodRun, valid, withHardware } from "./fixtures";
+import { HINGE_LOAD_TODO } from "@/shared/analysis/joints/path";
 
 const run = (g: LinkageGraph, settings = {}) => analyze(valid(g), settings);
 const joint = (g: LinkageGraph, id: string, settings = {}): JointResult => run(g, settings).joints.find((x) => x.jointId === id)!;
@@ -110,8 +111,22 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(selectSpecialFactor(hw, "pivot", s, { cable: true })).toMatchObject({ value: 2, name: "cable-system joint factor" });
     expect(selectSpecialFactor({ ...hw, bearing: "ballBearing" }, "pivot", s).value).toBe(1.15);
   });
-  it("the report says the hinge joints carry the control system's load only (the air load is the designer's), with and without geometry", () => {
-    expect(run(goodRun()).assumptions.some((a) => a.startsWith("Hinge joints are checked for the control system's load only"))).toBe(true);
+  it("a hinge is checked with the designer's hinge load added to the control system's (668 + 100 lbf), and the report says so", () => {
+    rel(joint(goodRun(), "hinge").radialLimit, 668 + GOOD_HINGE_LOAD); // horn force 668 lbf (167 × 20 / 5) and the designer's load, in line
+    expect(run(goodRun()).assumptions.some((a) => a.startsWith("A hinge joint carries the designer's limit hinge load entered on its card"))).toBe(true);
+    // The air load does not scale with the pilot's force: a second load of 200 lbf adds 100 lbf, not a factor.
+    rel(joint(withHardware(goodRun(), "hinge", (h) => ({ ...h, hingeLoad: 200 })), "hinge").radialLimit, 668 + 200);
+  });
+  it("without the designer's hinge load a hinge is not checked: no margin, the to-do says what to enter, a finding names it", () => {
+    const g = withHardware(goodRun(), "hinge", (h) => ({ ...h, hingeLoad: undefined }));
+    const r = joint(g, "hinge");
+    expect(r.todo).toEqual([HINGE_LOAD_TODO]);
+    expect(r.boltMargin).toBeNull();
+    expect(r.checks.length).toBeGreaterThan(0);
+    expect(r.checks.every((c) => c.status === "notChecked" && c.margin === null)).toBe(true);
+    expect(codes(g, "hinge")).toContain("joint-checks-not-made");
+    // The other joints keep their margins; the pivot is no hinge and needs no such load.
+    expect(joint(g, "pivot").todo).toEqual([]);
   });
   it("bolt bending is listed as not checked, with what decides it, where the shear planes or the gaps in the stack are not entered", () => {
     const noGaps = check(joint(withHardware(goodRun(), "rodA", (h) => ({ ...h, spacers: undefined })), "rodA"), "boltBending");
@@ -147,9 +162,9 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     const g = withHardware(goodRun(), "hinge", (h) => ({ ...h, bearing: "plainBushing" }));
     const r = joint(g, "hinge");
     expect(r.factor).toMatchObject({ value: 6.67, name: "hinge bearing factor" });
-    // The hinge carries 668 lbf limit; bearing at the mount's hole takes 668 × 1.5 × 6.67, the bolt 668 × 1.725.
-    rel(check(r, "bearingTo").required!, 668 * 1.5 * 6.67);
-    rel(check(r, "boltShear").required!, 668 * 1.725);
+    // The hinge carries 668 + 100 lbf limit; bearing at the mount's hole takes that × 1.5 × 6.67, the bolt × 1.725.
+    rel(check(r, "bearingTo").required!, (668 + GOOD_HINGE_LOAD) * 1.5 * 6.67);
+    rel(check(r, "boltShear").required!, (668 + GOOD_HINGE_LOAD) * 1.725);
     expect(joint(goodRun(), "hinge").factor.value).toBe(1.15);
   });
 });

@@ -38,7 +38,7 @@
 import { describe, expect, it } from "vitest";
 import { bellcrankPivotLoad } from "@/shared/linkage/kinds/bellcrank";
 import { analyze } from "@/shared/analysis";
-import { bellcrank, goodBallPivot, goodClamp, goodRodEndJoint, graph, hardware, horn, j, mount, pushrod, stick, stop, surface, valid } from "./fixtures";
+import { GOOD_HINGE_LOAD, bellcrank, goodBallPivot, goodClamp, goodRodEndJoint, graph, hardware, horn, j, mount, pushrod, stick, stop, surface, valid } from "./fixtures";
 
 function elevatorRun() {
   return valid(graph(
@@ -55,7 +55,7 @@ function elevatorRun() {
       j("bc-aft", ["bc", "out"], ["aft", "a"], goodRodEndJoint({}, { hand: "RH" })),
       j("aft-horn", ["aft", "b"], ["horn", "attach"], goodRodEndJoint({}, { hand: "LH" })),
       j("horn-elev", ["horn", "surface"], ["elev", "horn"], goodClamp()),
-      j("hinge", ["elev", "hinge"], ["m-tail", "mount"], goodBallPivot()),
+      j("hinge", ["elev", "hinge"], ["m-tail", "mount"], goodBallPivot({ hingeLoad: GOOD_HINGE_LOAD })),
       j("stop", ["stop", "contact"], ["stick", "attach"], goodClamp()),
     ],
   ));
@@ -92,7 +92,7 @@ describe("end-to-end elevator run (hand-derived loads in the header)", () => {
     rel(jr("bc-pivot").radialUltimate, 1440.375);
     rel(jr("horn-elev").radialLimit, 1085.5); // 501/2 + 6 · 1,252.5/(1.5 · 2 · 3), bolt-group statics
     rel(jr("stop").radialLimit, 334); // 668 · 5 / 10 (14 CFR 23.675)
-    rel(jr("hinge").radialLimit, 501);
+    rel(jr("hinge").radialLimit, 501 + GOOD_HINGE_LOAD); // the horn's 501 lbf and the designer's hinge load, added in line
   });
   it("hinge moment at the elevator", () => {
     rel(r.surfaces[0].hingeMomentLimit, 1252.5); // 501 × 2.5

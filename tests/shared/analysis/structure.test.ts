@@ -2,7 +2,7 @@
 import { describe, expect, it } from "vitest";
 import { analyze } from "@/shared/analysis";
 import type { LinkageGraph } from "@/shared/linkage/schema";
-import { goodBallPivot, goodRodEndJoint, goodRun, hardware, j, mount, pushrod, valid } from "./fixtures";
+import { GOOD_HINGE_LOAD, goodBallPivot, goodRodEndJoint, goodRun, hardware, j, mount, pushrod, valid } from "./fixtures";
 
 const codes = (g: LinkageGraph) => analyze(valid(g)).findings.map((f) => `${f.code}@${f.subject.id}`);
 
@@ -81,7 +81,7 @@ describe("loops", () => {
   });
   it("does not count several parts pivoting on one shared structure mount as a loop", () => {
     const g = goodRun();
-    g.joints = g.joints.map((x) => (x.id === "hinge" ? j("hinge", ["elev", "hinge"], ["m1", "mount"], goodBallPivot()) : x));
+    g.joints = g.joints.map((x) => (x.id === "hinge" ? j("hinge", ["elev", "hinge"], ["m1", "mount"], goodBallPivot({ hingeLoad: GOOD_HINGE_LOAD })) : x));
     g.nodes = g.nodes.filter((n) => n.id !== "m2");
     expect(codes(g)).toEqual([]);
   });
