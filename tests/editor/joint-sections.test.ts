@@ -19,6 +19,15 @@ describe("joint card sections", () => {
     expect(t.some((x) => /first part|second part/.test(x))).toBe(false);
   });
 
+  it("puts the designer's hinge load first on a surface's hinge, and on no other joint", () => {
+    const g = demoPitchLinkage();
+    const hinge = jointCardSections(g.joints.find((x) => x.id === "j-elevator-hinge")!, g.nodes);
+    expect(hinge[0].title).toBe("Hinge load");
+    expect(hinge[0].fields.map((f) => f.path)).toEqual(["hingeLoad"]);
+    for (const id of ["j-fwd-bellcrank", "j-bellcrank-pivot", "j-horn-elevator"])
+      expect(titles(jointCardSections(g.joints.find((x) => x.id === id)!, g.nodes))).not.toContain("Hinge load");
+  });
+
   it("leaves the rod end and jam nut off at a cable's or turnbuckle's terminal", () => {
     const g = rudderCircuit();
     const j = g.joints.find((x) => [x.from.node, x.to.node].some((n) => n === "tbL" || n === "cableL"))!;
