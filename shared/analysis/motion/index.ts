@@ -125,7 +125,7 @@ export function analyzeMotion(ctx: Ctx, settings: AnalysisSettings, steps?: numb
     });
     // Only a pitch run's sense is read from the geometry; every run's is a checklist item on the aircraft.
     if (summaries.at(-1)!.sense === null)
-      notChecked.push(`Control sense of the run from ${nodeLabel(input)}: not read from the geometry${ctx.graph.system === "pitch" && (input.kind === "stick" || input.kind === "controlWheel") ? " (the surface hardly moves over the travel)" : " (only a pitch run's is)"}. Move the control on the aircraft and watch the surface; it is on the checklist.`);
+      notChecked.push(`Control sense of the run from ${nodeLabel(input)}: not read from the geometry${ctx.graph.system === "pitch" && (input.kind === "stick" || input.kind === "controlWheel") ? " (the surface does not go one way with the input forward and the other way with it back)" : " (only a pitch run's from a stick or wheel is)"}. Move the control on the aircraft and watch the surface; it is on the checklist.`);
   }
   return { report: { checked: chains.length > 0, notChecked, chains: summaries, worstLoads }, findings, loads, sweeps, ends: allEnds };
 }

@@ -105,12 +105,18 @@ describe("control sense of a pitch run (14 CFR 23.779 table, from memory: elevat
     const f = sense(barRun({ ...reversed, forward: 0 }));
     expect(f[0].message).toMatch(/pulling "Stick" back moves the trailing edge of "Elevator" 15(\.0)?° down/);
   });
+  it("not read where the surface moves under half a degree each way (common practice, no source): said, not passed", () => {
+    const r = analyze(barRun({ ...reversed, forward: 0.2, back: 0.2 }));
+    expect(r.findings.map((f) => f.code)).not.toContain("control-sense-reversed");
+    expect(r.motion!.chains[0].sense).toBeNull();
+    expect(r.motion!.notChecked.join(" ")).toMatch(/not read from the geometry \(the surface does not go one way with the input forward and the other way with it back\)/);
+  });
   it("not read for a roll run: the run's notes send the builder to the aircraft and the checklist", () => {
     const g = graphSchema.parse({ ...barRun(reversed), system: "roll" });
     const r = analyze(g);
     expect(r.findings.map((f) => f.code)).not.toContain("control-sense-reversed");
     expect(r.motion!.chains[0].sense).toBeNull();
-    expect(r.motion!.notChecked.join(" ")).toMatch(/Control sense of the run from "Stick": not read from the geometry \(only a pitch run's is\)\. Move the control on the aircraft/);
+    expect(r.motion!.notChecked.join(" ")).toMatch(/Control sense of the run from "Stick": not read from the geometry \(only a pitch run's from a stick or wheel is\)\. Move the control on the aircraft/);
   });
 });
 
