@@ -27,6 +27,8 @@ export const SURFACE_TRAVEL_SLACK = 1;
 export const SENSE_MIN_DEFLECTION = 0.5;
 
 type Sense = NonNullable<MotionChainSummary["sense"]>;
+/** The sense and the step it was read at (the forward end where it moves the surface enough, else the back end). */
+export type SenseReading = { sense: Sense; k: number };
 
 /**
  * Control sense of a pitch run from a stick or wheel (SRC.controlSense, from memory: elevator rearward for nose
@@ -36,7 +38,7 @@ type Sense = NonNullable<MotionChainSummary["sense"]>;
  * run from a stick or wheel, or when neither end moves the surface by SENSE_MIN_DEFLECTION or the two ends
  * move it the same way (then the run is not a lever one way and the other, and other findings say why).
  */
-export function controlSense(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: LinkageGeometry): Sense | null {
+export function controlSense(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: LinkageGeometry): SenseReading | null {
   const input = ctx.nodes[sw.chain.input];
   if (ctx.graph.system !== "pitch" || (input.kind !== "stick" && input.kind !== "controlWheel")) return null;
   const f = sw.theta[ends.ef] > 0 ? sw.deflection[ends.ef] : 0;
@@ -46,7 +48,7 @@ export function controlSense(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: LinkageG
   if (fOk && bOk && Math.sign(f) === Math.sign(b)) return null;
   const forward = (fOk ? f > 0 : b < 0) ? "up" : "down";
   const surface = geo.pitchSurface ?? "tail";
-  return { forward, expected: surface === "canard" ? "up" : "down", surface, surfaceRecorded: geo.pitchSurface !== undefined };
+  return { sense: { forward, expected: surface === "canard" ? "up" : "down", surface, surfaceRecorded: geo.pitchSurface !== undefined }, k: fOk ? ends.ef : ends.eb };
 }
 
 /** "12.5° forward", "3.0° back", "neutral". */
@@ -58,7 +60,7 @@ export function atInput(theta: number): string {
 /** Steps eb..ef (inclusive) are the travel the run really has; stopBack/stopForward: a travel stop ends it there. */
 export type Ends = { eb: number; ef: number; stopBack: boolean; stopForward: boolean };
 
-export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: LinkageGeometry, out: Finding[]): void {
+export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: LinkageGeometry, reading: SenseReading | null, out: Finding[]): void {
   const ch = sw.chain;
   const { eb, ef } = ends;
   const input = ctx.nodes[ch.input];
@@ -132,11 +134,9 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
       }
     }
   }
-  const sense = controlSense(ctx, sw, ends, geo);
-  if (sense && sense.forward !== sense.expected) {
+  if (reading && reading.sense.forward !== reading.sense.expected) {
+    const { sense, k } = reading;
     const surf = nodeLabel(ctx.nodes[ch.surface >= 0 ? ch.surface : ch.horn]);
-    // The end the sense was read at: forward where it moves the surface enough, else back.
-    const k = sw.theta[ends.ef] > 0 && Math.abs(sw.deflection[ends.ef]) >= SENSE_MIN_DEFLECTION ? ends.ef : ends.eb;
     const moved = `${k === ends.ef ? "pushing" : "pulling"} ${nodeLabel(input)} ${k === ends.ef ? "forward" : "back"} moves the trailing edge of ${surf} ${fmt(Math.abs(sw.deflection[k]), 1)}° ${sw.deflection[k] > 0 ? "up" : "down"} (at ${atInput(sw.theta[k])})`;
     const must = sense.surface === "tail" ? "On a tail behind the wing, stick forward must take the trailing edge down to lower the nose" : "On a canard ahead of the wing, stick forward must take the trailing edge up to lower the nose";
     out.push(finding("control-sense-reversed", "hazard", nodeSubject(input.id),

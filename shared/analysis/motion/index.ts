@@ -58,7 +58,8 @@ export function analyzeMotion(ctx: Ctx, settings: AnalysisSettings, steps?: numb
     const ends = travelEnds(ctx, sw, findings);
     sweeps.push(sw);
     allEnds.push(ends);
-    chainFindings(ctx, sw, ends, geo, findings);
+    const reading = controlSense(ctx, sw, ends, geo);
+    chainFindings(ctx, sw, ends, geo, reading, findings);
     const { eb, ef } = ends;
     // Worst step of every member within the travel the run has.
     const worst = (series: Float64Array) => {
@@ -121,7 +122,7 @@ export function analyzeMotion(ctx: Ctx, settings: AnalysisSettings, steps?: numb
       inputId: input.id, hornId: ctx.nodes[ch.horn].id, surfaceId: ch.surface >= 0 ? ctx.nodes[ch.surface].id : null, steps: sw.theta.length - 1,
       travelBack: -sw.theta[eb], travelForward: sw.theta[ef], deflectionBack: sw.deflection[eb], deflectionForward: sw.deflection[ef],
       gearingNeutral: sw.gearing[sw.neutral], minTransmission: minT, maxTransmission: maxT, failBack: sw.failBack, failForward: sw.failForward,
-      sense: controlSense(ctx, sw, ends, geo), rods,
+      sense: reading?.sense ?? null, rods,
     });
     // Only a pitch run's sense is read from the geometry; every run's is a checklist item on the aircraft.
     if (summaries.at(-1)!.sense === null)
