@@ -149,7 +149,7 @@ function ImportCsv({ apiBase }: { apiBase: string }) {
       <div className="space-y-3">
         <p className="text-xs text-ink-soft">One part a row, a header row naming the columns: kind, partNumber, description and the spec fields of each kind ({PART_KINDS.map((k) => `${PART_KIND_LABEL[k].toLowerCase()}: ${SPEC_COLUMNS[k].join(", ")}`).join("; ")}). Inches and lbf. Commas, semicolons or tabs. Nothing is imported while any row has an error, unless you skip bad rows.</p>
         <input type="file" accept=".csv,text/csv,text/plain" aria-label="CSV file" className="text-sm" onChange={async (e) => { const f = e.target.files?.[0]; setReport(null); setMessage(null); setCsv(f ? { name: f.name, text: await f.text() } : null); }} />
-        <label className="flex items-center gap-2 text-sm"><input type="checkbox" checked={skip} onChange={(e) => setSkip(e.target.checked)} />Skip bad rows and import the rest</label>
+        <label className="touch-target flex items-center gap-2 text-sm"><input type="checkbox" checked={skip} onChange={(e) => setSkip(e.target.checked)} />Skip bad rows and import the rest</label>
         <div className="flex gap-2">
           <Button type="button" tone="secondary" disabled={!csv || run.isPending} onClick={() => run.mutate(true)}>Check</Button>
           <Button type="button" disabled={!csv || run.isPending} onClick={() => run.mutate(false)}>Import</Button>

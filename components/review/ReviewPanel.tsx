@@ -153,7 +153,7 @@ function HistorySection({ buildId, linkageId }: { buildId: string; linkageId: st
   const diff = useDiff(buildId, linkageId, open ? from : null, open ? to : null);
   return (
     <div className="space-y-1" data-testid="history-section">
-      <button type="button" data-testid="history-toggle" className={`${heading} hover:text-ink`} onClick={() => setOpen((v) => !v)} aria-expanded={open}>
+      <button type="button" data-testid="history-toggle" className={`touch-target ${heading} hover:text-ink`} onClick={() => setOpen((v) => !v)} aria-expanded={open}>
         {open ? "▾" : "▸"} Revision history
       </button>
       {open && (

@@ -137,7 +137,7 @@ export function SummaryStrip({ system, settings }: { system: ControlSystem; sett
       <span data-testid="summary-margin">
         Lowest margin:{" "}
         {lm ? (
-          <button type="button" className={`font-semibold underline-offset-2 hover:underline ${lm.value < 0 ? "text-hazard" : "text-ink"}`} onClick={() => focus(lm.subject)}>
+          <button type="button" className={`touch-target font-semibold underline-offset-2 hover:underline ${lm.value < 0 ? "text-hazard" : "text-ink"}`} onClick={() => focus(lm.subject)}>
             {lm.value >= 10 ? lm.value.toFixed(0) : lm.value.toFixed(2)} at {where} ({lm.what})
           </button>
         ) : (

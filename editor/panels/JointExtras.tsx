@@ -148,7 +148,7 @@ export function SuggestPart({ target, joint }: { target: RecordsTarget; joint: J
         <button
           type="button"
           onClick={() => setOpen((v) => !v)}
-          className="rounded border border-ink/20 px-1.5 py-0.5 text-[11px] font-medium text-ink hover:bg-ink/5"
+          className="touch-target rounded border border-ink/20 px-1.5 py-0.5 text-[11px] font-medium text-ink hover:bg-ink/5"
           aria-expanded={open}
           data-testid="btn-suggest-part"
         >

@@ -198,7 +198,7 @@ export function SchemaForm<S extends z.ZodType>({
               <header className="flex items-center justify-between border-b border-ink/5 px-2 py-1">
                 <h4 className="text-[11px] font-semibold uppercase tracking-wide text-ink-soft">{s.title}</h4>
                 {s.optional && (
-                  <label className="flex items-center gap-1 text-[11px] text-ink-soft">
+                  <label className="touch-target flex items-center gap-1 text-[11px] text-ink-soft">
                     <input type="checkbox" {...register(`on.${keyOf(s.optional)}`)} data-testid={`${testId}-on-${keyOf(s.optional)}`} />
                     present
                   </label>
@@ -216,7 +216,7 @@ export function SchemaForm<S extends z.ZodType>({
                     return (
                       <div key={k} className={wide ? "col-span-2" : f.type === "bool" ? "col-span-2 sm:col-span-1" : ""}>
                         {f.type === "bool" ? (
-                          <label htmlFor={id} className="flex items-center gap-1.5 py-0.5 text-[12px] text-ink">
+                          <label htmlFor={id} className="touch-target flex items-center gap-1.5 py-0.5 text-[12px] text-ink">
                             <input id={id} type="checkbox" data-testid={id} aria-describedby={describedBy} {...register(`v.${k}`)} />
                             {f.label}
                           </label>

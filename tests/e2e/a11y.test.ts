@@ -199,6 +199,46 @@ describe("axe-core and phone width on every page", () => {
     await ctx.close();
   });
 
+  it("on a phone the joint card's fields are a thumb's size with 16 px text (a phone zooms into smaller text on focus); with a mouse they stay dense", async () => {
+    /** The smallest and largest field height and text size on the joint card, and the lowest row of a tick box's label. */
+    const sizes = async (width: number) => {
+      const { ctx, page } = await signedIn(DEMO_USERS[0].email, DEMO_USERS[0].password, width);
+      try {
+        await page.goto(`${APP_URL}/builds/${buildId}/linkages/${linkageId}?select=j-aft-horn`);
+        const card = page.getByTestId("joint-card");
+        await card.waitFor({ timeout: 60_000 });
+        await card.locator("[data-testid^=joint-form-]").first().waitFor();
+        return await card.evaluate((el) => {
+          const shown = (e: Element) => e.getBoundingClientRect().height > 0;
+          const fields = [...el.querySelectorAll("input:not([type=checkbox]):not([type=radio]):not([type=hidden]):not([type=file]), select, textarea")].filter(shown);
+          const name = (f: Element) => f.getAttribute("data-testid") ?? f.getAttribute("aria-label") ?? f.outerHTML.slice(0, 80);
+          const h = fields.map((f) => f.getBoundingClientRect().height);
+          const font = fields.map((f) => parseFloat(getComputedStyle(f).fontSize));
+          const boxes = [...el.querySelectorAll("input[type=checkbox]")].filter(shown);
+          const boxRows = boxes.map((b) => (b.closest("label") ?? b).getBoundingClientRect().height);
+          return {
+            n: fields.length, boxes: boxes.length, maxH: Math.max(...h.filter((_, i) => fields[i].tagName !== "TEXTAREA")), maxFont: Math.max(...font),
+            under44: fields.flatMap((f, i) => (h[i] < 44 ? [`${name(f)} ${h[i]} px`] : [])),
+            under16: fields.flatMap((f, i) => (font[i] < 16 ? [`${name(f)} ${font[i]} px text`] : [])),
+            lowBoxRows: boxes.flatMap((b, i) => (boxRows[i] < 44 ? [`${name(b)} ${boxRows[i]} px`] : [])),
+          };
+        });
+      } finally {
+        await ctx.close();
+      }
+    };
+    const phone = await sizes(390);
+    expect(phone.n).toBeGreaterThan(10);
+    expect(phone.boxes).toBeGreaterThan(3);
+    expect(phone.under44).toEqual([]); // common practice, no source: a 44 px thumb target
+    expect(phone.under16).toEqual([]);
+    expect(phone.lowBoxRows).toEqual([]);
+    const desk = await sizes(1366);
+    expect(desk.n).toBe(phone.n);
+    expect(desk.maxH).toBeLessThan(32); // one-line fields (a text box of two lines is taller)
+    expect(desk.maxFont).toBeLessThan(16);
+  }, 120_000);
+
   it("the skip link takes the keyboard past the header to the page's main content", async () => {
     const { ctx, page } = await signedIn(DEMO_USERS[0].email, DEMO_USERS[0].password, 1366);
     await page.goto(`${APP_URL}/builds/${buildId}/hardware`);

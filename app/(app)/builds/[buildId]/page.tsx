@@ -34,7 +34,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
         <div className="min-w-0 space-y-6 lg:col-span-2">
           <p className="text-ink-soft">{build.model || "Model not set"}{build.registration ? ` · ${build.registration}` : ""}</p>
           <LinkagesPanel buildId={build.id} initial={linkages} canEdit={can(role, "edit")} />
-          <Card title="Recent log entries" actions={<Link href={`/builds/${build.id}/log`} className="text-xs text-advisory hover:underline">Open the build log</Link>}>
+          <Card title="Recent log entries" actions={<Link href={`/builds/${build.id}/log`} className="touch-target inline-flex items-center text-xs text-advisory hover:underline">Open the build log</Link>}>
             {log.length === 0 ? (
               <p className="text-ink-soft">No entries yet. Each shop session gets one: date, hours, what was done, photos.</p>
             ) : (
@@ -71,7 +71,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
               ))}
             </ul>
           </Card>
-          <Card title="Recent activity" actions={<Link href={`/builds/${build.id}/activity`} className="text-xs text-advisory hover:underline">All activity</Link>}>
+          <Card title="Recent activity" actions={<Link href={`/builds/${build.id}/activity`} className="touch-target inline-flex items-center text-xs text-advisory hover:underline">All activity</Link>}>
             {activity.length === 0 ? <p className="text-ink-soft">Nothing yet.</p> : (
               <ul className="space-y-2 text-xs">
                 {activity.map((a) => (

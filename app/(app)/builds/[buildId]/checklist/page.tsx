@@ -32,7 +32,7 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
             <ul className="divide-y divide-ink/10">
               {linkages.map((l) => (
                 <li key={l.id} className="flex items-center justify-between py-2" data-testid="checklist-linkage">
-                  <Link className="font-medium hover:underline" href={`/builds/${build.id}/checklist/${l.id}`}>{l.name}</Link>
+                  <Link className="touch-target inline-flex items-center font-medium hover:underline" href={`/builds/${build.id}/checklist/${l.id}`}>{l.name}</Link>
                   <span className="text-xs text-ink-soft">revision {l.revision} · {n.get(l.id) ?? 0} ticked</span>
                 </li>
               ))}

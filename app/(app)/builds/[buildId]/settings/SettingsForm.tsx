@@ -112,11 +112,11 @@ function DesignCard({ buildId, initial, canManage }: { buildId: string; initial:
           {num("bearingFactor", "Bearing factor", "×", "bearingFactor", e.bearingFactor?.message)}
         </fieldset>
         <label className="flex items-start gap-2">
-          <input type="checkbox" className="mt-0.5" disabled={!canManage} {...f.register("bearingFactorOnRodEnds")} />
+          <input type="checkbox" className="mt-0.5 shrink-0" disabled={!canManage} {...f.register("bearingFactorOnRodEnds")} />
           <span>Apply the bearing factor to spherical rod ends too <span className="block text-xs text-ink-soft">Whether a rod end counts as a ball bearing under 14 CFR 23.693 is a matter of interpretation. Off: a rod end&apos;s rating must not be exceeded at limit × ultimate × fitting factor.</span></span>
         </label>
         <label className="flex items-start gap-2">
-          <input type="checkbox" className="mt-0.5" disabled={!canManage} {...f.register("dualControls")} />
+          <input type="checkbox" className="mt-0.5 shrink-0" disabled={!canManage} {...f.register("dualControls")} />
           <span>Dual controls <span className="block text-xs text-ink-soft">Each side takes 75 % of the pilot force (Part 23 appendix A); both pilots are taken as pushing the same way.</span></span>
         </label>
         {canManage ? (
