@@ -2,7 +2,7 @@
 /**
  * The React Flow canvas, rendered from the editor store; every change goes back through store actions.
  * The store ↔ React Flow adapters are in canvas/adapters.tsx, the viewport (grid, drops, Fit, focus, the
- * opening view) in canvas/viewport.ts.
+ * opening view) in canvas/viewport.ts, the Tab order along the run in canvas/tab-order.ts.
  */
 import { useRef } from "react";
 import { Background, BackgroundVariant, ConnectionMode, ControlButton, Controls, MiniMap, ReactFlow, type AriaLabelConfig } from "@xyflow/react";
@@ -12,6 +12,7 @@ import { edgeTypes, type JointFlowEdge } from "./joints/JointEdge";
 import type { SubjectRef } from "./store";
 import { CANVAS_KEYS_ID, jointNameId, NodesToFlow, useFlowEdges, useFlowHandlers } from "./canvas/adapters";
 import { GRID, SNAP_GRID, useFitAll, useOpeningView } from "./canvas/viewport";
+import { useRunTabOrder } from "./canvas/tab-order";
 
 export { GRID, KIND_MIME, linkageBounds, subjectCentre, useFitAll, useFocusSubject, FIT_ALL } from "./canvas/viewport";
 
@@ -52,9 +53,10 @@ export default function Canvas({ opening }: { opening?: SubjectRef | null }) {
   const wrap = useRef<HTMLDivElement>(null);
   const ready = useOpeningView(wrap, opening);
   const fitAll = useFitAll();
+  const tabOrder = useRunTabOrder(wrap);
 
   return (
-    <div ref={wrap} className="h-full w-full" style={ready ? undefined : { opacity: 0 }} data-view={ready ? "ready" : "opening"} onDragOver={h.onDragOver} onDrop={h.onDrop} data-testid="canvas" onFocus={(e) => markJointFocus(e.target, true)} onBlur={(e) => markJointFocus(e.target, false)}>
+    <div ref={wrap} className="h-full w-full" style={ready ? undefined : { opacity: 0 }} data-view={ready ? "ready" : "opening"} onDragOver={h.onDragOver} onDrop={h.onDrop} data-testid="canvas" onKeyDownCapture={tabOrder.onKeyDownCapture} onFocusCapture={tabOrder.onFocusCapture} onFocus={(e) => markJointFocus(e.target, true)} onBlur={(e) => markJointFocus(e.target, false)}>
       <p id={CANVAS_KEYS_ID} className="sr-only">{KEYS_TEXT}</p>
       <ReactFlow<PartFlowNode, JointFlowEdge>
         edges={edges}

@@ -257,9 +257,10 @@ export function handleKey(e: KeyboardEvent, c: CommandCtx, commands: readonly Co
   }
 }
 
-/** Mouse gestures, for the sheet (React Flow handles them; they are not commands). */
+/** Mouse gestures and where Tab goes, for the sheet (React Flow and canvas/tab-order.ts handle them; they are not commands). */
 export const GESTURES: readonly { keys: string; label: string; edit?: boolean }[] = [
   { keys: "Drag port → port", label: "make a joint", edit: true },
   { keys: "Click / Shift-drag", label: "select / box-select" },
   { keys: "Ctrl/⌘ + click", label: "add to the selection" },
+  { keys: "Tab / Shift+Tab", label: "the next / previous part or joint along the run, brought into view" },
 ];

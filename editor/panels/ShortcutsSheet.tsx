@@ -1,5 +1,5 @@
 "use client";
-/** The keyboard sheet ("?"): the mouse gestures, then every command that has keys (editor/commands.ts). */
+/** The keyboard sheet ("?"): the mouse gestures and where Tab goes, then every command that has keys (editor/commands.ts). */
 import { useEffect, useRef } from "react";
 import { COMMANDS, GESTURES } from "../commands";
 

@@ -11,11 +11,14 @@ import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
 import { openEditor, waitSaved } from "../support/editor-page";
 import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
 import type { LinkageGraph } from "@/shared/linkage/schema";
+import { runOrder } from "@/shared/linkage/order";
+import { demoPitchLinkage } from "@/shared/demo";
 
 let browser: Browser;
 let page: Page;
 let url: string;
 let linkageId: string;
+let buildId: string;
 const errors: string[] = [];
 
 /** What has the focus: a test id, a canvas part or joint, a field's label, or the element's text. */
@@ -52,6 +55,7 @@ beforeAll(async () => {
   const owner = await makeUser("e2e-keyboard");
   const b = await makeBuild({ owner });
   linkageId = b.linkageId;
+  buildId = b.buildId;
   url = `${APP_URL}/builds/${b.buildId}/linkages/${b.linkageId}`;
   page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
   page.on("pageerror", (e) => errors.push(String(e)));
@@ -97,10 +101,11 @@ describe("the editor by keyboard only", () => {
     expect(edgeLabel).toMatch(/^Joint Control horn 1, attach ↔ Pushrod 1 B, (no findings|\d+ findings?|1 \w+)/);
     expect(edgeLabel).not.toMatch(/Edge from/);
 
-    // Escape goes back to the joint on the canvas; Tab to the stick, Enter opens it, Escape back, J joins it.
+    // Escape goes back to the joint on the canvas; Shift+Tab to the stick (the run's input, read first along the run),
+    // Enter opens it, Escape back, J joins it.
     await page.keyboard.press("Escape");
     expect((await focused(page)).kind).toBe("joint");
-    await tabTo(page, (f) => f.kind === "part" && f.id === stick, 20);
+    await tabTo(page, (f) => f.kind === "part" && f.id === stick, 20, true);
     await page.keyboard.press("Enter");
     await page.getByTestId("node-form-panel").waitFor();
     await page.keyboard.press("Escape");
@@ -161,6 +166,40 @@ describe("the editor by keyboard only", () => {
     await page.keyboard.press("Escape");
     await expect.poll(() => page.getByTestId("shortcuts-sheet").count()).toBe(0);
     await expect.poll(() => page.evaluate(() => document.activeElement?.getAttribute("data-testid"))).toBe("btn-shortcuts");
+    expect(errors).toEqual([]);
+  }, 120_000);
+
+  it("Tab on the canvas goes along the run (as the list view reads it), bringing each item into view, then on out of the canvas; Shift+Tab comes back in at the run's end", async () => {
+    const graph = demoPitchLinkage();
+    const [l] = await testDb("linkages").insert({ build_id: buildId, name: "Tab along the run", system: "pitch", current_revision: 1 }).returning("id");
+    await testDb("linkage_revisions").insert({ linkage_id: l.id, revision: 1, graph: JSON.stringify(graph) });
+    await openEditor(page, `${APP_URL}/builds/${buildId}/linkages/${l.id}`);
+    await page.evaluate(() => (document.activeElement as HTMLElement | null)?.blur());
+    const onCanvas = (f: Awaited<ReturnType<typeof focused>>) => f.kind === "part" || f.kind === "joint";
+    const key = (f: Awaited<ReturnType<typeof focused>>) => `${f.kind === "part" ? "node" : "joint"}:${f.id}`;
+    /** Press a key and wait until the focus has moved (an item out of view takes the focus once it is drawn). */
+    const pressAndMove = async (k: string) => {
+      const before = JSON.stringify(await focused(page));
+      await page.keyboard.press(k);
+      await expect.poll(async () => JSON.stringify(await focused(page)), { timeout: 3000 }).not.toBe(before);
+      return focused(page);
+    };
+    await tabTo(page, onCanvas);
+    const want = runOrder(graph).map((it) => `${it.type}:${it.id}`);
+    const seen: string[] = [];
+    let f = await focused(page);
+    while (onCanvas(f) && seen.length <= want.length) {
+      seen.push(key(f));
+      f = await pressAndMove("Tab");
+    }
+    expect(want.length).toBeGreaterThan(15);
+    expect(seen).toEqual(want);
+    // Past the run's end the focus left the canvas's parts and joints for the next Tab stop, and Shift+Tab comes back at the end.
+    expect(onCanvas(f)).toBe(false);
+    f = await pressAndMove("Shift+Tab");
+    expect(key(f)).toBe(want.at(-1));
+    f = await pressAndMove("Shift+Tab");
+    expect(key(f)).toBe(want.at(-2));
     expect(errors).toEqual([]);
   }, 120_000);
 
