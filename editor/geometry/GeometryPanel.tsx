@@ -7,6 +7,7 @@
 import { useEffect, useMemo, useRef, useState } from "react";
 import { DEFAULT_SETTINGS, sweepGraph } from "@/shared/analysis";
 import { mu } from "@/shared/analysis/motion";
+import { senseReversed, type SenseSummary } from "@/shared/analysis/motion/types";
 import { emptyGeometry, geometrySchema, type LinkageGeometry, type PartGeometry } from "@/shared/linkage/geometry";
 import { chainGeometry } from "@/shared/demo-geometry";
 import { indexById, jointName, partName } from "@/shared/linkage/names";
@@ -112,12 +113,12 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
         <label className="col-span-1 flex flex-col text-[10px] text-ink-soft sm:col-span-3">Datum (what x and y are measured from)
           <input value={geo.datum} disabled={readOnly} maxLength={80} data-testid="geometry-datum" className="rounded border border-ink/15 bg-white px-1 py-0.5 text-[12px] text-ink" onChange={(e) => set({ ...geo, datum: e.target.value })} />
         </label>
-        <label className="flex flex-col text-[10px] text-ink-soft">Forward turns
+        <label className="flex flex-col text-[10px] text-ink-soft">{system === "roll" ? "Stick right turns" : system === "yaw" ? "Pedal pushed turns" : "Forward turns"}
           <select value={geo.inputForward} disabled={readOnly} className="rounded border border-ink/15 bg-white px-1 py-0.5 text-[12px] text-ink" onChange={(e) => set({ ...geo, inputForward: e.target.value as "ccw" | "cw" })}>
             <option value="ccw">counter-clockwise</option><option value="cw">clockwise</option>
           </select>
         </label>
-        <label className="flex flex-col text-[10px] text-ink-soft">Surface up turns
+        <label className="flex flex-col text-[10px] text-ink-soft">{system === "yaw" ? "Trailing edge right turns" : "Surface up turns"}
           <select value={geo.surfaceUp} disabled={readOnly} className="rounded border border-ink/15 bg-white px-1 py-0.5 text-[12px] text-ink" onChange={(e) => set({ ...geo, surfaceUp: e.target.value as "ccw" | "cw" })}>
             <option value="ccw">counter-clockwise</option><option value="cw">clockwise</option>
           </select>
@@ -127,6 +128,22 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
             <select value={geo.pitchSurface ?? ""} disabled={readOnly} data-testid="geometry-pitch-surface" className="rounded border border-ink/15 bg-white px-1 py-0.5 text-[12px] text-ink"
               onChange={(e) => set({ ...geo, pitchSurface: e.target.value === "" ? undefined : (e.target.value as "tail" | "canard") })}>
               <option value="">not said (tail taken)</option><option value="tail">tail, behind the wing</option><option value="canard">canard, ahead of the wing</option>
+            </select>
+          </label>
+        )}
+        {system === "roll" && (
+          <label className="flex flex-col text-[10px] text-ink-soft">Aileron on the
+            <select value={geo.rollSide ?? ""} disabled={readOnly} data-testid="geometry-roll-side" className="rounded border border-ink/15 bg-white px-1 py-0.5 text-[12px] text-ink"
+              onChange={(e) => set({ ...geo, rollSide: e.target.value === "" ? undefined : (e.target.value as "left" | "right") })}>
+              <option value="">not said (sense not read)</option><option value="right">right wing</option><option value="left">left wing</option>
+            </select>
+          </label>
+        )}
+        {system === "yaw" && (
+          <label className="flex flex-col text-[10px] text-ink-soft">Pushed pedal
+            <select value={geo.yawPedal ?? ""} disabled={readOnly} data-testid="geometry-yaw-pedal" className="rounded border border-ink/15 bg-white px-1 py-0.5 text-[12px] text-ink"
+              onChange={(e) => set({ ...geo, yawPedal: e.target.value === "" ? undefined : (e.target.value as "left" | "right") })}>
+              <option value="">not said (sense not read)</option><option value="right">right pedal</option><option value="left">left pedal</option>
             </select>
           </label>
         )}
@@ -160,11 +177,8 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
             {worstAt !== null && <> · worst angle at {inputWord(worstAt)} (red mark)</>}
           </p>
           {sense ? (
-            <p className={`mt-1 text-[11px] ${sense.forward === sense.expected ? "" : "font-medium text-hazard"}`} data-testid="geometry-sense">
-              Control sense: {sw && nodes[sw.chain.input]?.kind === "controlWheel" ? "wheel" : "stick"} forward takes the trailing edge <b>{sense.forward}</b>
-              {sense.forward === sense.expected
-                ? <> — the right way for a {sense.surface === "tail" ? "tail behind the wing" : "canard ahead of the wing"}{sense.surfaceRecorded ? "" : " (tail taken: the geometry does not say)"}. Still move the controls on the aircraft.</>
-                : <> — reversed for a {sense.surface === "tail" ? "tail behind the wing" : "canard ahead of the wing"}: see the findings.</>}
+            <p className={`mt-1 text-[11px] ${senseReversed(sense) ? "font-medium text-hazard" : ""}`} data-testid="geometry-sense">
+              <SenseLine sense={sense} wheel={nodes[sw.chain.input]?.kind === "controlWheel"} />
             </p>
           ) : null}
           <MotionCharts sw={sw} at={sw.theta[k]} stops={[sw.theta[ends.eb], sw.theta[ends.ef]]} />
@@ -247,4 +261,19 @@ function Header({ onClose }: { onClose: () => void }) {
       <button type="button" className="text-[11px] underline" onClick={onClose} data-testid="geometry-close">Back to the diagram</button>
     </div>
   );
+}
+
+/** The control sense the sweep read, in its axis's words, and whether it is the right way round. */
+function SenseLine({ sense, wheel }: { sense: SenseSummary; wheel: boolean }) {
+  const ok = !senseReversed(sense);
+  const still = " Still move the controls on the aircraft.";
+  if (sense.axis === "roll") {
+    const wing = `the ${sense.side} wing's aileron`;
+    return <>Control sense: {wheel ? "wheel turned" : "stick"} right takes the trailing edge of {wing} <b>{sense.right}</b>{ok ? <> — the right way.{still}</> : <> — reversed for {wing}: see the findings.</>}</>;
+  }
+  if (sense.axis === "yaw") {
+    return <>Control sense: the {sense.pedal} pedal pushed takes the rudder&apos;s trailing edge <b>{sense.pushed}</b>{ok ? <> — the right way.{still}</> : <> — reversed: see the findings.</>}</>;
+  }
+  const surface = sense.surface === "tail" ? "tail behind the wing" : "canard ahead of the wing";
+  return <>Control sense: {wheel ? "wheel" : "stick"} forward takes the trailing edge <b>{sense.forward}</b>{ok ? <> — the right way for a {surface}{sense.surfaceRecorded ? "" : " (tail taken: the geometry does not say)"}.{still}</> : <> — reversed for a {surface}: see the findings.</>}</>;
 }

@@ -9,6 +9,10 @@
  * tolerance; `inputForward` and `surfaceUp` say which way of turning, in the view, is forward and up.
  * `pitchSurface` says whether a pitch run's surface is a tail behind the wing or a canard ahead of it (which way
  * its trailing edge must go when the stick goes forward); not recorded, a tail is taken and the report says so.
+ * On a roll run `inputForward` is the way the input turns when the stick goes right (the wheel turns right) and
+ * `rollSide` the wing whose aileron the run drives; on a yaw run `inputForward` is the way the input turns when
+ * the `yawPedal` pedal is pushed forward, and `surfaceUp` the way the rudder turns when its trailing edge goes
+ * right. Without `rollSide` or `yawPedal` the run's control sense is not read, and the report says what to enter.
  */
 import { z } from "zod";
 
@@ -50,6 +54,10 @@ export const geometrySchema = z
     designTravel: designTravelSchema.optional(),
     /** A pitch run's surface: a tail behind the wing (stick forward, trailing edge down) or a canard ahead of it (up). */
     pitchSurface: z.enum(["tail", "canard"]).optional(),
+    /** A roll run's aileron: on the right wing (stick right, trailing edge up) or the left (down). */
+    rollSide: z.enum(["left", "right"]).optional(),
+    /** A yaw run: the pedal whose push forward is the input's forward turn (its side is the way the rudder's trailing edge must go). */
+    yawPedal: z.enum(["left", "right"]).optional(),
   })
   .superRefine((g, ctx) => {
     const n = Object.keys(g.parts).length;

@@ -9,6 +9,7 @@ import { APP_URL, launchBrowser, shot, signInPage } from "../support/browser";
 import { makeBuild, makeUser, testDb, TEST_PASSWORD } from "../support/db";
 import { demoPitchLinkage } from "@/shared/demo";
 import { readFile } from "node:fs/promises";
+import { barRun } from "../shared/analysis/motion-fixtures";
 
 let browser: Browser;
 let page: Page;
@@ -124,4 +125,32 @@ describe("geometry and motion", () => {
     expect(graph.nodes.find((n: { id: string }) => n.id === "stick").position).toEqual(demoPitchLinkage().nodes[0].position);
     expect(errors).toEqual([]);
   }, 180_000);
+
+  it("a roll run's sense is read once the geometry names the aileron's wing: a hazard on the right wing, the right way on the left, saved", async () => {
+    // Stick right (the roll view's forward turn) lowers this aileron's trailing edge (tests/shared/analysis/motion-fixtures).
+    const bar = barRun({ a: 3, c: 3, o2: [0, 0], o4: [30, 0], alpha: 90, beta: -90 });
+    const graph = { ...bar, name: "Roll run", system: "roll", nodes: bar.nodes.map((n) => (n.id === "elevator" ? { ...n, label: "Aileron" } : n)) };
+    const [l] = await testDb("linkages").insert({ build_id: buildId, name: "Roll run", system: "roll", current_revision: 1 }).returning("id");
+    await testDb("linkage_revisions").insert({ linkage_id: l.id, revision: 1, graph: JSON.stringify(graph) });
+    await page.goto(`${APP_URL}/builds/${buildId}/linkages/${l.id}`);
+    await page.getByTestId("linkage-editor").waitFor({ timeout: 60_000 });
+    await page.getByTestId("btn-geometry").click();
+    await page.getByTestId("geometry-slider").waitFor();
+    // Not read until the wing is named: no sense line, no finding, and the run's notes ask for it.
+    expect(await page.getByTestId("geometry-sense").count()).toBe(0);
+    const senseFindings = () => page.locator('[data-testid=finding][data-code="control-sense-reversed"]').count();
+    expect(await senseFindings()).toBe(0);
+    await page.getByTestId("geometry-roll-side").selectOption("right");
+    await expect.poll(() => page.getByTestId("geometry-sense").textContent()).toMatch(/^Control sense: stick right takes the trailing edge of the right wing's aileron down — reversed for the right wing's aileron/);
+    await expect.poll(senseFindings, { timeout: 20_000 }).toBeGreaterThan(0);
+    await page.getByTestId("geometry-roll-side").selectOption("left");
+    await expect.poll(() => page.getByTestId("geometry-sense").textContent()).toMatch(/^Control sense: stick right takes the trailing edge of the left wing's aileron down — the right way/);
+    await expect.poll(senseFindings, { timeout: 20_000 }).toBe(0);
+    await shot(page, "geometry-04-roll-sense");
+    await page.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "saved", null, { timeout: 20_000 });
+    const rev = await testDb("linkages").where({ id: l.id }).first();
+    const row = await testDb("linkage_revisions").where({ linkage_id: l.id, revision: rev.current_revision }).first();
+    expect((typeof row.graph === "string" ? JSON.parse(row.graph) : row.graph).geometry.rollSide).toBe("left");
+    expect(errors).toEqual([]);
+  }, 120_000);
 });

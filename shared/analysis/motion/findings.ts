@@ -9,7 +9,7 @@ import { type Ctx, jointLabel, nodeLabel } from "../context";
 import { TRANSMISSION_MAX, TRANSMISSION_MIN } from "../kinematics";
 import { type ChainSweep, mu as muDeg, TOGGLE_SIN } from "./sweep";
 import type { LinkageGeometry } from "../../linkage/geometry";
-import type { MotionChainSummary } from "./types";
+import { senseReversed, type MotionChainSummary } from "./types";
 
 export const MOTION_SRC = {
   closure: { kind: "published", text: "four-bar loop closure (mechanism-design texts)" },
@@ -30,25 +30,62 @@ type Sense = NonNullable<MotionChainSummary["sense"]>;
 /** The sense and the step it was read at (the forward end where it moves the surface enough, else the back end). */
 export type SenseReading = { sense: Sense; k: number };
 
+/** Which axis's control sense a run has in the geometry: pitch or roll from a stick or wheel, yaw from pedals; else null. */
+export function senseAxis(system: string, inputKind: string): "pitch" | "roll" | "yaw" | null {
+  const stickLike = inputKind === "stick" || inputKind === "controlWheel";
+  if (system === "pitch" && stickLike) return "pitch";
+  if (system === "roll" && stickLike) return "roll";
+  if (system === "yaw" && inputKind === "pedal") return "yaw";
+  return null;
+}
+
 /**
- * Control sense of a pitch run from a stick or wheel (SRC.controlSense, from memory: elevator rearward for nose
- * up): which way the surface's trailing edge goes with the input forward, read at the ends of the travel the
- * run has, against the way it must go — down on a tail behind the wing, up on a canard ahead of it (a tail where
- * the geometry does not say). The view's forward and up directions are the geometry's. Null when not a pitch
- * run from a stick or wheel, or when neither end moves the surface by SENSE_MIN_DEFLECTION or the two ends
- * move it the same way (then the run is not a lever one way and the other, and other findings say why).
+ * Control sense of a run (SRC.controlSense, from memory: elevator rearward for nose up, aileron right for right
+ * wing down, right pedal forward for nose right): which way the surface's trailing edge goes with the input's
+ * forward turn (pitch: stick forward; roll: stick right; yaw: the recorded pedal pushed), read at the ends of the
+ * travel the run has, against the way it must go. Pitch: down on a tail behind the wing, up on a canard ahead of
+ * it (a tail where the geometry does not say). Roll: up on the right wing's aileron, down on the left's. Yaw: to
+ * the side of the pushed pedal. Null when the run has no axis here (senseAxis), when a roll run's wing or a yaw
+ * run's pedal is not recorded (the run's notes ask for it), or when neither end moves the surface by
+ * SENSE_MIN_DEFLECTION or the two ends move it the same way (then the run is not a lever one way and the other,
+ * and other findings say why).
  */
 export function controlSense(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: LinkageGeometry): SenseReading | null {
   const input = ctx.nodes[sw.chain.input];
-  if (ctx.graph.system !== "pitch" || (input.kind !== "stick" && input.kind !== "controlWheel")) return null;
+  const axis = senseAxis(ctx.graph.system, input.kind);
+  if (!axis || (axis === "roll" && !geo.rollSide) || (axis === "yaw" && !geo.yawPedal)) return null;
   const f = sw.theta[ends.ef] > 0 ? sw.deflection[ends.ef] : 0;
   const b = sw.theta[ends.eb] < 0 ? sw.deflection[ends.eb] : 0;
   const fOk = Math.abs(f) >= SENSE_MIN_DEFLECTION, bOk = Math.abs(b) >= SENSE_MIN_DEFLECTION;
   if (!fOk && !bOk) return null;
   if (fOk && bOk && Math.sign(f) === Math.sign(b)) return null;
-  const forward = (fOk ? f > 0 : b < 0) ? "up" : "down";
+  // The trailing edge goes the surface's "up" (yaw: right) way with the input's forward turn.
+  const plus = fOk ? f > 0 : b < 0;
+  const k = fOk ? ends.ef : ends.eb;
+  if (axis === "roll") {
+    const side = geo.rollSide!;
+    return { sense: { axis, right: plus ? "up" : "down", expected: side === "right" ? "up" : "down", side }, k };
+  }
+  if (axis === "yaw") {
+    const pedal = geo.yawPedal!;
+    return { sense: { axis, pushed: plus ? "right" : "left", expected: pedal, pedal }, k };
+  }
   const surface = geo.pitchSurface ?? "tail";
-  return { sense: { forward, expected: surface === "canard" ? "up" : "down", surface, surfaceRecorded: geo.pitchSurface !== undefined }, k: fOk ? ends.ef : ends.eb };
+  return { sense: { axis, forward: plus ? "up" : "down", expected: surface === "canard" ? "up" : "down", surface, surfaceRecorded: geo.pitchSurface !== undefined }, k };
+}
+
+/**
+ * Why a run's control sense was not read from the geometry, for its notes: what to enter where that is the
+ * reason, else why the sweep could not read it.
+ */
+export function senseNotReadWhy(system: string, inputKind: string, geo: LinkageGeometry): string {
+  const axis = senseAxis(system, inputKind);
+  if (axis === "roll" && !geo.rollSide) return "set in the geometry which wing's aileron this run drives";
+  if (axis === "yaw" && !geo.yawPedal) return "set in the geometry which pedal, pushed forward, turns the input its forward way";
+  if (axis === "roll") return "the aileron does not go one way with the stick right and the other way with it left";
+  if (axis === "yaw") return "the rudder does not go one way with one pedal pushed and the other way with the other";
+  if (axis === "pitch") return "the surface does not go one way with the input forward and the other way with it back";
+  return "only a pitch or roll run from a stick or wheel, or a yaw run from pedals, is";
 }
 
 /** "12.5° forward", "3.0° back", "neutral". */
@@ -134,15 +171,7 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
       }
     }
   }
-  if (reading && reading.sense.forward !== reading.sense.expected) {
-    const { sense, k } = reading;
-    const surf = nodeLabel(ctx.nodes[ch.surface >= 0 ? ch.surface : ch.horn]);
-    const moved = `${k === ends.ef ? "pushing" : "pulling"} ${nodeLabel(input)} ${k === ends.ef ? "forward" : "back"} moves the trailing edge of ${surf} ${fmt(Math.abs(sw.deflection[k]), 1)}° ${sw.deflection[k] > 0 ? "up" : "down"} (at ${atInput(sw.theta[k])})`;
-    const must = sense.surface === "tail" ? "On a tail behind the wing, stick forward must take the trailing edge down to lower the nose" : "On a canard ahead of the wing, stick forward must take the trailing edge up to lower the nose";
-    out.push(finding("control-sense-reversed", "hazard", nodeSubject(input.id),
-      `In the geometry, ${moved}. ${must}: this run is rigged the wrong way round (reversed pitch control). ${sense.surfaceRecorded ? "" : "The geometry does not say tail or canard, so a tail was taken; if the surface is a canard, set that in the geometry. "}Check which side of each pivot the pushrods attach and the arm angles, and that the geometry's forward and up directions match this view; then move the stick on the aircraft and watch the surface.`,
-      SRC.controlSense, [num("surface deflection", sw.deflection[k], "°"), num("input position", sw.theta[k], "°")]));
-  }
+  if (reading && senseReversed(reading.sense)) out.push(senseFinding(ctx, sw, ends, reading));
   const dt = geo.designTravel;
   if (dt && ch.surface >= 0) {
     const a = sw.deflection[eb], b = sw.deflection[ef];
@@ -155,4 +184,35 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
           MOTION_SRC.designTravel, [num(`${word} travel at the stops`, got, "°"), num(`designer's ${word} travel`, want, "°"), num("tolerance", dt.tolerance, "°")]));
     }
   }
+}
+
+/** The hazard of a run rigged the wrong way round, in its axis's words, read where the sense was read. */
+function senseFinding(ctx: Ctx, sw: ChainSweep, ends: Ends, { sense, k }: SenseReading): Finding {
+  const ch = sw.chain;
+  const input = ctx.nodes[ch.input];
+  const surf = nodeLabel(ctx.nodes[ch.surface >= 0 ? ch.surface : ch.horn]);
+  const atEnd = k === ends.ef;
+  const by = `${fmt(Math.abs(sw.deflection[k]), 1)}°`;
+  const numbers = [num("surface deflection", sw.deflection[k], "°"), num("input position", sw.theta[k], "°")];
+  const check = (dirs: string) => `Check which side of each pivot the pushrods attach and the arm angles, and that the geometry's ${dirs} directions match this view`;
+  if (sense.axis === "roll") {
+    const went = sw.deflection[k] > 0 ? "up" : "down";
+    const moved = `moving ${nodeLabel(input)} ${atEnd ? "right" : "left"} takes the trailing edge of ${surf}, the ${sense.side} wing's aileron, ${by} ${went} (at ${fmt(Math.abs(sw.theta[k]), 1)}° ${atEnd ? "right" : "left"})`;
+    return finding("control-sense-reversed", "hazard", nodeSubject(input.id),
+      `In the geometry, ${moved}. Stick right must raise the right aileron's trailing edge and lower the left one's, to roll right: this run is rigged the wrong way round (reversed roll control). ${check("stick-right and up")} and that the wing named there is this aileron's; then move the stick on the aircraft and watch both ailerons.`,
+      SRC.controlSense, numbers);
+  }
+  if (sense.axis === "yaw") {
+    const pushedPedal = atEnd ? sense.pedal : sense.pedal === "right" ? "left" : "right";
+    const went = sw.deflection[k] > 0 ? "right" : "left";
+    const moved = `pushing the ${pushedPedal} pedal of ${nodeLabel(input)} forward takes the trailing edge of ${surf} ${by} ${went}`;
+    return finding("control-sense-reversed", "hazard", nodeSubject(input.id),
+      `In the geometry, ${moved}. A pedal pushed forward must take the rudder's trailing edge to its own side, to yaw the nose that way: this run is rigged the wrong way round (reversed yaw control). ${check("pedal-pushed and trailing-edge-right")} and that the pedal named there is the one that turns the input that way; then push each pedal on the aircraft and watch the rudder.`,
+      SRC.controlSense, numbers);
+  }
+  const moved = `${atEnd ? "pushing" : "pulling"} ${nodeLabel(input)} ${atEnd ? "forward" : "back"} moves the trailing edge of ${surf} ${by} ${sw.deflection[k] > 0 ? "up" : "down"} (at ${atInput(sw.theta[k])})`;
+  const must = sense.surface === "tail" ? "On a tail behind the wing, stick forward must take the trailing edge down to lower the nose" : "On a canard ahead of the wing, stick forward must take the trailing edge up to lower the nose";
+  return finding("control-sense-reversed", "hazard", nodeSubject(input.id),
+    `In the geometry, ${moved}. ${must}: this run is rigged the wrong way round (reversed pitch control). ${sense.surfaceRecorded ? "" : "The geometry does not say tail or canard, so a tail was taken; if the surface is a canard, set that in the geometry. "}${check("forward and up")}; then move the stick on the aircraft and watch the surface.`,
+    SRC.controlSense, numbers);
 }

@@ -13,7 +13,7 @@ import { buildContext, type Ctx, jointsAt, nodeLabel, otherNode } from "../conte
 import { designForce } from "../loads";
 import { buildChains, type Chain } from "./chain";
 import { type ChainSweep, mu as muDeg, sweepChain } from "./sweep";
-import { chainFindings, controlSense, MOTION_SRC, atInput, type Ends } from "./findings";
+import { chainFindings, controlSense, senseNotReadWhy, MOTION_SRC, atInput, type Ends } from "./findings";
 import { riggingRange } from "./rigging";
 import { enterTodo, unenteredOf } from "../unentered";
 
@@ -124,9 +124,9 @@ export function analyzeMotion(ctx: Ctx, settings: AnalysisSettings, steps?: numb
       gearingNeutral: sw.gearing[sw.neutral], minTransmission: minT, maxTransmission: maxT, failBack: sw.failBack, failForward: sw.failForward,
       sense: reading?.sense ?? null, rods,
     });
-    // Only a pitch run's sense is read from the geometry; every run's is a checklist item on the aircraft.
+    // Pitch, roll and yaw runs' sense is read from the geometry where it can be; every run's is a checklist item on the aircraft.
     if (summaries.at(-1)!.sense === null)
-      notChecked.push(`Control sense of the run from ${nodeLabel(input)}: not read from the geometry${ctx.graph.system === "pitch" && (input.kind === "stick" || input.kind === "controlWheel") ? " (the surface does not go one way with the input forward and the other way with it back)" : " (only a pitch run's from a stick or wheel is)"}. Move the control on the aircraft and watch the surface; it is on the checklist.`);
+      notChecked.push(`Control sense of the run from ${nodeLabel(input)}: not read from the geometry (${senseNotReadWhy(ctx.graph.system, input.kind, geo)}). Move the control on the aircraft and watch the surface; it is on the checklist.`);
   }
   return { report: { checked: chains.length > 0, notChecked, chains: summaries, worstLoads }, findings, loads, sweeps, ends: allEnds };
 }

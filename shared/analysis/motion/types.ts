@@ -31,12 +31,18 @@ export type MotionChainSummary = {
   failBack: number | null;
   failForward: number | null;
   /**
-   * Control sense of a pitch run from a stick or wheel (14 CFR 23.779, from memory): which way the surface's
-   * trailing edge goes when the input goes forward, and which way it must go (down on a tail, up on a canard);
-   * `surfaceRecorded` false: the geometry does not say tail or canard and a tail was taken. Null: not read from
-   * the geometry (not a pitch run, or the surface hardly moves) — the checklist asks for it on the aircraft.
+   * Control sense read from the geometry (14 CFR 23.779, from memory), by axis:
+   *  - pitch, from a stick or wheel: which way the surface's trailing edge goes when the input goes forward, and
+   *    which way it must go (down on a tail, up on a canard); `surfaceRecorded` false: the geometry does not say
+   *    tail or canard and a tail was taken (reports saved before roll and yaw were read carry no `axis`: pitch);
+   *  - roll, from a stick or wheel: which way this aileron's trailing edge goes with the stick right (wheel turned
+   *    right), and which way it must go (up on the right wing's aileron, down on the left's);
+   *  - yaw, from pedals: which way the rudder's trailing edge goes when the recorded pedal is pushed, and which way
+   *    it must go (the same side as the pedal).
+   * Null: not read from the geometry (another kind of run, the side not recorded, or the surface hardly moves) —
+   * the run's notes say why, and the checklist asks for it on the aircraft.
    */
-  sense: { forward: "up" | "down"; expected: "up" | "down"; surface: "tail" | "canard"; surfaceRecorded: boolean } | null;
+  sense: SenseSummary | null;
   /** Per pushrod: the centre-to-centre length the geometry needs, the card's, and the rigging range if known. */
   rods: { rodId: string; needed: number; card: number; shortest: number | null; longest: number | null; misalignment: number | null }[];
 };
@@ -49,3 +55,13 @@ export type MotionReport = {
   chains: MotionChainSummary[];
   worstLoads: WorstLoad[];
 };
+
+export type SenseSummary =
+  | { axis?: "pitch"; forward: "up" | "down"; expected: "up" | "down"; surface: "tail" | "canard"; surfaceRecorded: boolean }
+  | { axis: "roll"; right: "up" | "down"; expected: "up" | "down"; side: "left" | "right" }
+  | { axis: "yaw"; pushed: "left" | "right"; expected: "left" | "right"; pedal: "left" | "right" };
+
+/** Which way the trailing edge went, in the words of the sense's axis. */
+export const senseGot = (s: SenseSummary) => (s.axis === "roll" ? s.right : s.axis === "yaw" ? s.pushed : s.forward);
+/** True where the geometry drives the surface the wrong way round. */
+export const senseReversed = (s: SenseSummary) => senseGot(s) !== s.expected;

@@ -81,14 +81,14 @@ describe("control sense of a pitch run (14 CFR 23.779 table, from memory: elevat
     expect(f[0].message).toMatch(/pushing "Stick" forward moves the trailing edge of "Elevator" 15(\.0)?° up \(at 15(\.0)?° forward\)/);
     expect(f[0].message).toMatch(/a tail was taken/);
     expect(f[0].numbers.find((n) => n.label === "surface deflection")!.value).toBeCloseTo(15, 6); // parallelogram: surface = stick
-    expect(analyze(barRun(reversed)).motion!.chains[0].sense).toEqual({ forward: "up", expected: "down", surface: "tail", surfaceRecorded: false });
+    expect(analyze(barRun(reversed)).motion!.chains[0].sense).toEqual({ axis: "pitch", forward: "up", expected: "down", surface: "tail", surfaceRecorded: false });
   });
   it("does not trip when stick forward lowers a tail's trailing edge, nor on the demo run to scale", () => {
     expect(sense(barRun(right))).toEqual([]);
     expect(analyze(barRun(right)).motion!.chains[0].sense).toMatchObject({ forward: "down", expected: "down" });
     const demo = { ...demoPitchLinkage(), geometry: demoPitchGeometry() };
     expect(sense(demo)).toEqual([]);
-    expect(analyze(demo).motion!.chains[0].sense?.forward).toBe("down");
+    expect(analyze(demo).motion!.chains[0].sense).toMatchObject({ axis: "pitch", forward: "down" });
   });
   it("a canard ahead of the wing wants the opposite: the reversed-for-a-tail run is right, the other trips", () => {
     expect(sense(barRun(reversed, { pitchSurface: "canard" }))).toEqual([]);
@@ -111,12 +111,85 @@ describe("control sense of a pitch run (14 CFR 23.779 table, from memory: elevat
     expect(r.motion!.chains[0].sense).toBeNull();
     expect(r.motion!.notChecked.join(" ")).toMatch(/not read from the geometry \(the surface does not go one way with the input forward and the other way with it back\)/);
   });
-  it("not read for a roll run: the run's notes send the builder to the aircraft and the checklist", () => {
-    const g = graphSchema.parse({ ...barRun(reversed), system: "roll" });
+  it("not read for a flap run: the run's notes send the builder to the aircraft and the checklist", () => {
+    const g = graphSchema.parse({ ...barRun(reversed), system: "flap" });
     const r = analyze(g);
     expect(r.findings.map((f) => f.code)).not.toContain("control-sense-reversed");
     expect(r.motion!.chains[0].sense).toBeNull();
-    expect(r.motion!.notChecked.join(" ")).toMatch(/Control sense of the run from "Stick": not read from the geometry \(only a pitch run's from a stick or wheel is\)\. Move the control on the aircraft/);
+    expect(r.motion!.notChecked.join(" ")).toMatch(/Control sense of the run from "Stick": not read from the geometry \(only a pitch or roll run from a stick or wheel, or a yaw run from pedals, is\)\. Move the control on the aircraft/);
+  });
+});
+
+describe("control sense of a roll run (14 CFR 23.779 table, from memory: stick right for right wing down)", () => {
+  // In this view the stick's forward turn is "stick right" (a roll run's meaning of inputForward); surface up: trailing edge up.
+  const raises: Bar = square; // stick right raises the trailing edge
+  const lowers: Bar = { ...square, beta: -90 }; // stick right lowers it
+  const rollRun = (bar: Bar, extra: Parameters<typeof barRun>[1] = {}) => {
+    const g = barRun(bar, extra);
+    return graphSchema.parse({ ...g, system: "roll", nodes: g.nodes.map((n) => (n.id === "elevator" ? { ...n, label: "Aileron" } : n)) });
+  };
+  const sense = (g: LinkageGraph) => analyze(g).findings.filter((f) => f.code === "control-sense-reversed");
+  it("not read until the geometry says which wing's aileron the run drives: the run's notes ask for it, nothing passes", () => {
+    const r = analyze(rollRun(lowers));
+    expect(r.findings.map((f) => f.code)).not.toContain("control-sense-reversed");
+    expect(r.motion!.chains[0].sense).toBeNull();
+    expect(r.motion!.notChecked.join(" ")).toMatch(/Control sense of the run from "Stick": not read from the geometry \(set in the geometry which wing's aileron this run drives\)/);
+  });
+  it("trips when stick right lowers the right wing's aileron, naming the travel and the wing", () => {
+    const f = sense(rollRun(lowers, { rollSide: "right" }));
+    expect(f).toHaveLength(1);
+    expect(f[0].severity).toBe("hazard");
+    expect(f[0].subject).toEqual({ type: "node", id: "stick" });
+    expect(f[0].message).toMatch(/moving "Stick" right takes the trailing edge of "Aileron", the right wing's aileron, [\d.]+° down \(at 15(\.0)?° right\)/);
+    expect(f[0].message).toMatch(/reversed roll control/);
+    expect(analyze(rollRun(lowers, { rollSide: "right" })).motion!.chains[0].sense).toEqual({ axis: "roll", right: "down", expected: "up", side: "right" });
+  });
+  it("does not trip when stick right raises the right aileron or lowers the left one", () => {
+    expect(sense(rollRun(raises, { rollSide: "right" }))).toEqual([]);
+    expect(sense(rollRun(lowers, { rollSide: "left" }))).toEqual([]);
+    expect(analyze(rollRun(lowers, { rollSide: "left" })).motion!.chains[0].sense).toEqual({ axis: "roll", right: "down", expected: "down", side: "left" });
+  });
+  it("trips on the left wing's aileron when stick right raises it", () => {
+    expect(sense(rollRun(raises, { rollSide: "left" }))).toHaveLength(1);
+  });
+  it("a mirrored view (both directions clockwise) reads the same sense; one direction flipped alone reverses it", () => {
+    expect(sense(rollRun(lowers, { rollSide: "right", inputForward: "cw", surfaceUp: "cw" }))).toHaveLength(1);
+    expect(sense(rollRun(lowers, { rollSide: "right", surfaceUp: "cw" }))).toEqual([]);
+  });
+});
+
+describe("control sense of a yaw run (14 CFR 23.779 table, from memory: right pedal forward for nose right)", () => {
+  // The input's forward turn is the recorded pedal pushed; the surface's "up" turn is its trailing edge going right.
+  const toRight: Bar = square; // the pushed pedal takes the trailing edge right
+  const toLeft: Bar = { ...square, beta: -90 };
+  const yawRun = (bar: Bar, extra: Parameters<typeof barRun>[1] = {}) => {
+    const g = barRun(bar, extra);
+    return graphSchema.parse({
+      ...g, system: "yaw",
+      nodes: g.nodes.map((n) => n.id === "stick" ? { ...n, kind: "pedal", label: "Pedals", props: { pedalArm: 8, attachArm: bar.a, travel: 15 } } : n.id === "elevator" ? { ...n, label: "Rudder" } : n),
+    });
+  };
+  const sense = (g: LinkageGraph) => analyze(g).findings.filter((f) => f.code === "control-sense-reversed");
+  it("not read until the geometry names the pushed pedal: the run's notes ask for it", () => {
+    const r = analyze(yawRun(toLeft));
+    expect(r.motion!.chains[0].sense).toBeNull();
+    expect(r.findings.map((f) => f.code)).not.toContain("control-sense-reversed");
+    expect(r.motion!.notChecked.join(" ")).toMatch(/Control sense of the run from "Pedals": not read from the geometry \(set in the geometry which pedal, pushed forward, turns the input its forward way\)/);
+  });
+  it("trips when the right pedal pushed takes the rudder's trailing edge left", () => {
+    const f = sense(yawRun(toLeft, { yawPedal: "right" }));
+    expect(f).toHaveLength(1);
+    expect(f[0].severity).toBe("hazard");
+    expect(f[0].message).toMatch(/pushing the right pedal of "Pedals" forward takes the trailing edge of "Rudder" [\d.]+° left/);
+    expect(f[0].message).toMatch(/reversed yaw control/);
+  });
+  it("does not trip when the pushed pedal takes the trailing edge to its own side", () => {
+    expect(sense(yawRun(toRight, { yawPedal: "right" }))).toEqual([]);
+    expect(sense(yawRun(toLeft, { yawPedal: "left" }))).toEqual([]);
+    expect(analyze(yawRun(toRight, { yawPedal: "right" })).motion!.chains[0].sense).toEqual({ axis: "yaw", pushed: "right", expected: "right", pedal: "right" });
+  });
+  it("trips when the left pedal pushed takes the trailing edge right", () => {
+    expect(sense(yawRun(toRight, { yawPedal: "left" }))).toHaveLength(1);
   });
 });
 
