@@ -14,7 +14,7 @@ import { indexById, jointName, partName } from "@/shared/linkage/names";
 import { CAUTION_TEXT } from "@/shared/caution";
 import { useEditorStore, useEditorStoreApi } from "../context";
 import { toGraph } from "../store";
-import { inputWord, rodLinks, turningParts } from "./model";
+import { inputWord, inputWords, rodLinks, turningParts } from "./model";
 import { ToScale } from "./ToScale";
 import { NumField } from "./fields";
 import MotionCharts from "./MotionCharts";
@@ -95,6 +95,7 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
   const summary = report?.motion?.chains[0];
   // Read from this sweep, so it follows the geometry as it is edited (the saved report says the same after a save).
   const sense = motion?.report.chains[0]?.sense ?? null;
+  const words = inputWords(system, geo);
   const worstAt = summary ? summary.minTransmission.at : null;
   const pct = (t: number) => (sw ? ((t - sw.theta[0]) / (sw.theta[sw.theta.length - 1] - sw.theta[0] || 1)) * 100 : 0);
   const shown = parts.slice(page * PAGE, page * PAGE + PAGE);
@@ -165,24 +166,24 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
             </button>
             <div className="relative flex-1">
               <input type="range" min={0} max={sw.theta.length - 1} value={k} className="w-full" data-testid="geometry-slider" aria-label="Input position"
-                aria-valuetext={inputWord(sw.theta[k])} onChange={(e) => { setPlaying(false); setK(Number(e.target.value)); }} />
+                aria-valuetext={inputWord(sw.theta[k], words)} onChange={(e) => { setPlaying(false); setK(Number(e.target.value)); }} />
               {worstAt !== null && (
                 <span className="pointer-events-none absolute -top-1 h-4 w-0.5 bg-hazard" style={{ left: `${pct(worstAt)}%` }} title="worst transmission angle" data-testid="worst-mark" />
               )}
             </div>
           </div>
           <p className="mt-1 text-[11px]" data-testid="geometry-readout">
-            Input <b>{inputWord(sw.theta[k])}</b>
+            Input <b>{inputWord(sw.theta[k], words)}</b>
             {sw.ok[k] ? <> · surface <b>{sw.deflection[k].toFixed(1)}°</b> · gearing {sw.gearing[k].toFixed(2)} · transmission {lo.toFixed(0)}°–{hi.toFixed(0)}°</> : <> · <span className="text-hazard">the run cannot close here</span></>}
-            {worstAt !== null && <> · worst angle at {inputWord(worstAt)} (red mark)</>}
+            {worstAt !== null && <> · worst angle at {inputWord(worstAt, words)} (red mark)</>}
           </p>
           {sense ? (
             <p className={`mt-1 text-[11px] ${senseReversed(sense) ? "font-medium text-hazard" : ""}`} data-testid="geometry-sense">
               <SenseLine sense={sense} wheel={nodes[sw.chain.input]?.kind === "controlWheel"} />
             </p>
           ) : null}
-          <MotionCharts sw={sw} at={sw.theta[k]} stops={[sw.theta[ends.eb], sw.theta[ends.ef]]} />
-          <StopsPicture geo={geo} parts={parts} rods={rods} nodes={nodes} sw={sw} steps={[ends.eb, sw.neutral, ends.ef]} title={api.getState().meta.name} />
+          <MotionCharts sw={sw} at={sw.theta[k]} stops={[sw.theta[ends.eb], sw.theta[ends.ef]]} words={words} />
+          <StopsPicture geo={geo} parts={parts} rods={rods} nodes={nodes} sw={sw} words={words} steps={[ends.eb, sw.neutral, ends.ef]} title={api.getState().meta.name} />
         </div>
       ) : null}
 
@@ -204,7 +205,7 @@ export default function GeometryPanel({ onClose }: { onClose: () => void }) {
                 <tr key={i} className="border-t border-ink/5">
                   <td className="max-w-[12rem] truncate" title={name}>{name}</td><td>{w.what}</td>
                   <td className="text-right tabular-nums">{w.limit.toFixed(0)} {w.unit}</td>
-                  <td className="text-right">{inputWord(w.at)}</td>
+                  <td className="text-right">{inputWord(w.at, words)}</td>
                 </tr>
               );
             })}

@@ -7,6 +7,7 @@
 import { CartesianGrid, Line, LineChart, ReferenceArea, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { mu, type ChainSweep } from "@/shared/analysis/motion";
 import { TRANSMISSION_MAX, TRANSMISSION_MIN } from "@/shared/analysis";
+import { PITCH_WORDS, type InputWords } from "./model";
 
 const MAX_POINTS = 240;
 
@@ -26,7 +27,7 @@ export function chartRows(sw: ChainSweep) {
   return { rows, every };
 }
 
-export default function MotionCharts({ sw, at, stops }: { sw: ChainSweep; at: number; stops: [number, number] }) {
+export default function MotionCharts({ sw, at, stops, words = PITCH_WORDS }: { sw: ChainSweep; at: number; stops: [number, number]; words?: InputWords }) {
   const { rows, every } = chartRows(sw);
   const marks = (
     <>
@@ -39,7 +40,7 @@ export default function MotionCharts({ sw, at, stops }: { sw: ChainSweep; at: nu
   return (
     <div className="space-y-2" data-testid="motion-charts">
       <figure>
-        <figcaption className="text-[11px] font-medium">Surface deflection (° up) and gearing (surface ° per input °) against input (° fwd)</figcaption>
+        <figcaption className="text-[11px] font-medium">Surface deflection (° up) and gearing (surface ° per input °) against input (° {words[0]})</figcaption>
         <div className="h-36 w-full">
           <ResponsiveContainer width="100%" height="100%">
             <LineChart data={rows} margin={{ top: 6, right: 4, bottom: 0, left: -18 }}>

@@ -10,7 +10,7 @@ import type { LinkageGeometry } from "@/shared/linkage/geometry";
 import type { LinkageNode } from "@/shared/linkage/schema";
 import { CAUTION_TEXT } from "@/shared/caution";
 import { ToScale } from "./ToScale";
-import { inputWord, type RodLink, type Turning } from "./model";
+import { inputWord, PITCH_WORDS, type InputWords, type RodLink, type Turning } from "./model";
 
 const W = 360, H = 220, SCALE = 2;
 
@@ -18,7 +18,7 @@ function esc(t: string) {
   return t.replace(/[&<>"]/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;" })[c]!);
 }
 
-export function StopsPicture(props: { geo: LinkageGeometry; parts: Turning[]; rods: RodLink[]; nodes: LinkageNode[]; sw: ChainSweep; steps: [number, number, number]; title: string }) {
+export function StopsPicture(props: { geo: LinkageGeometry; parts: Turning[]; rods: RodLink[]; nodes: LinkageNode[]; sw: ChainSweep; steps: [number, number, number]; title: string; words?: InputWords }) {
   const box = useRef<HTMLDivElement>(null);
   const [busy, setBusy] = useState(false);
   const rotAt = (k: number) => {
@@ -30,9 +30,9 @@ export function StopsPicture(props: { geo: LinkageGeometry; parts: Turning[]; ro
     setBusy(true);
     try {
       const svgs = [...box.current!.querySelectorAll("svg")].map((s) => new XMLSerializer().serializeToString(s).replace(/^<svg[^>]*>/, "").replace(/<\/svg>$/, ""));
-      const labels = props.steps.map((k) => `${inputWord(props.sw.theta[k])} · surface ${props.sw.deflection[k].toFixed(1)}°`);
+      const labels = props.steps.map((k) => `${inputWord(props.sw.theta[k], props.words ?? PITCH_WORDS)} · surface ${props.sw.deflection[k].toFixed(1)}°`);
       const total = `<svg xmlns="http://www.w3.org/2000/svg" width="${3 * W * SCALE}" height="${(H + 46) * SCALE}" viewBox="0 0 ${3 * W} ${H + 46}">
-<rect width="100%" height="100%" fill="#fff"/><text x="6" y="12" font-size="10" font-family="sans-serif" font-weight="bold">${esc(props.title)} — to scale at the back stop, neutral and the forward stop</text>
+<rect width="100%" height="100%" fill="#fff"/><text x="6" y="12" font-size="10" font-family="sans-serif" font-weight="bold">${esc(props.title)} — to scale at ${props.words && props.words !== PITCH_WORDS ? `the ${props.words[1]} stop, neutral and the ${props.words[0]} stop` : "the back stop, neutral and the forward stop"}</text>
 ${svgs.map((s, i) => `<g transform="translate(${i * W},18)"><svg width="${W}" height="${H}" viewBox="0 0 ${W} ${H}">${s}</svg><text x="6" y="${H + 10}" font-size="9" font-family="sans-serif">${esc(labels[i])}</text></g>`).join("")}
 <text x="6" y="${H + 42}" font-size="6" font-family="sans-serif" fill="#475569">${esc(CAUTION_TEXT)}</text></svg>`;
       const img = new Image();

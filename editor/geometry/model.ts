@@ -53,8 +53,18 @@ export function armEnd(geo: LinkageGeometry, t: Turning | undefined, port: strin
   return { x: pg.pivot.x + arm.length * Math.cos(a), y: pg.pivot.y + arm.length * Math.sin(a) };
 }
 
-/** "5.0° fwd", "3.2° back", "neutral". */
-export function inputWord(theta: number): string {
+/** The words for the input's two ways in the view: its forward turn and the other (shared/linkage/geometry.ts). */
+export type InputWords = readonly [forward: string, back: string];
+export const PITCH_WORDS: InputWords = ["fwd", "back"];
+/** Pitch and others: fwd / back; roll: the stick right / left; yaw: the recorded pedal pushed / the other one. */
+export function inputWords(system: string, geo: Pick<LinkageGeometry, "yawPedal">): InputWords {
+  if (system === "roll") return ["right", "left"];
+  if (system === "yaw") return geo.yawPedal ? [`${geo.yawPedal} pedal fwd`, `${geo.yawPedal === "right" ? "left" : "right"} pedal fwd`] : ["pushed", "back"];
+  return PITCH_WORDS;
+}
+
+/** "5.0° fwd", "3.2° back", "neutral" (or the run's own words: "5.0° right"). */
+export function inputWord(theta: number, words: InputWords = PITCH_WORDS): string {
   if (Math.abs(theta) < 0.05) return "neutral";
-  return `${Math.abs(theta).toFixed(1)}° ${theta > 0 ? "fwd" : "back"}`;
+  return `${Math.abs(theta).toFixed(1)}° ${theta > 0 ? words[0] : words[1]}`;
 }

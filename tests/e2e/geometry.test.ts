@@ -146,6 +146,12 @@ describe("geometry and motion", () => {
     await page.getByTestId("geometry-roll-side").selectOption("left");
     await expect.poll(() => page.getByTestId("geometry-sense").textContent()).toMatch(/^Control sense: stick right takes the trailing edge of the left wing's aileron down — the right way/);
     await expect.poll(senseFindings, { timeout: 20_000 }).toBe(0);
+    // The view speaks of the stick right and left, not forward and back.
+    await page.getByTestId("geometry-slider").focus();
+    await page.keyboard.press("End");
+    await expect.poll(() => page.getByTestId("geometry-readout").textContent()).toMatch(/^Input 15\.0° right/);
+    await page.keyboard.press("Home");
+    await expect.poll(() => page.getByTestId("geometry-readout").textContent()).toMatch(/^Input 15\.0° left/);
     await shot(page, "geometry-04-roll-sense");
     await page.waitForFunction(() => document.querySelector("[data-testid=save-status]")?.getAttribute("data-status") === "saved", null, { timeout: 20_000 });
     const rev = await testDb("linkages").where({ id: l.id }).first();
