@@ -88,10 +88,20 @@ export function senseNotReadWhy(system: string, inputKind: string, geo: LinkageG
   return "only a pitch or roll run from a stick or wheel, or a yaw run from pedals, is";
 }
 
-/** "12.5° forward", "3.0° back", "neutral". */
-export function atInput(theta: number): string {
+/** The input's two ways in the geometry's words: its forward turn and the other (see shared/linkage/geometry.ts). */
+export type InputWords = readonly [forward: string, back: string];
+const FORWARD_BACK: InputWords = ["forward", "back"];
+/** Pitch and others: forward / back; roll: right / left (the stick); yaw: the recorded pedal forward / the other one. */
+export function inputWordsFor(system: string, geo: Pick<LinkageGeometry, "yawPedal"> | undefined): InputWords {
+  if (system === "roll") return ["right", "left"];
+  if (system === "yaw" && geo?.yawPedal) return [`${geo.yawPedal} pedal forward`, `${geo.yawPedal === "right" ? "left" : "right"} pedal forward`];
+  return FORWARD_BACK;
+}
+
+/** "12.5° forward", "3.0° back", "neutral" (a roll run: "12.5° right"). */
+export function atInput(theta: number, words: InputWords = FORWARD_BACK): string {
   if (Math.abs(theta) < 0.05) return "neutral";
-  return `${fmt(Math.abs(theta), 1)}° ${theta > 0 ? "forward" : "back"}`;
+  return `${fmt(Math.abs(theta), 1)}° ${theta > 0 ? words[0] : words[1]}`;
 }
 
 /** Steps eb..ef (inclusive) are the travel the run really has; stopBack/stopForward: a travel stop ends it there. */
@@ -101,6 +111,7 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
   const ch = sw.chain;
   const { eb, ef } = ends;
   const input = ctx.nodes[ch.input];
+  const words = inputWordsFor(ctx.graph.system, geo);
   for (let s = 0; s < ch.stages.length; s++) {
     const st = ch.stages[s];
     const rod = ctx.nodes[st.rod];
@@ -122,12 +133,12 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
     hi = muDeg(-hi);
     if (toggleAt !== null) {
       out.push(finding("motion-over-centre", "hazard", nodeSubject(rod.id),
-        `At ${atInput(toggleAt)} of ${nodeLabel(input)} the pushrod ${nodeLabel(rod)} falls in line with a crank arm (toggle): there the run can lock, or pass over centre and drive the surface the wrong way. Change the arm angles, the pivot positions or the travel so it stays clear of the line over the whole travel.`,
+        `At ${atInput(toggleAt, words)} of ${nodeLabel(input)} the pushrod ${nodeLabel(rod)} falls in line with a crank arm (toggle): there the run can lock, or pass over centre and drive the surface the wrong way. Change the arm angles, the pivot positions or the travel so it stays clear of the line over the whole travel.`,
         SRC.transmission, [num("input position", toggleAt, "°")]));
     } else if (lo < TRANSMISSION_MIN || hi > TRANSMISSION_MAX) {
       const bad = lo < TRANSMISSION_MIN ? { v: lo, at: loAt } : { v: hi, at: hiAt };
       out.push(finding("motion-transmission-angle", "caution", nodeSubject(rod.id),
-        `Over the travel the angle between ${nodeLabel(rod)} and the arms it joins runs from ${fmt(lo, 1)}° to ${fmt(hi, 1)}° (${fmt(bad.v, 1)}° at ${atInput(bad.at)} of ${nodeLabel(input)}), outside 40°–140°: the rod pushes along the arm more than around the pivot, so loads and free play rise there. Move a pivot or change an arm angle to bring it inside the band.`,
+        `Over the travel the angle between ${nodeLabel(rod)} and the arms it joins runs from ${fmt(lo, 1)}° to ${fmt(hi, 1)}° (${fmt(bad.v, 1)}° at ${atInput(bad.at, words)} of ${nodeLabel(input)}), outside 40°–140°: the rod pushes along the arm more than around the pivot, so loads and free play rise there. Move a pivot or change an arm angle to bring it inside the band.`,
         SRC.transmission, [num("minimum transmission angle", lo, "°"), num("maximum transmission angle", hi, "°"), num("input position", bad.at, "°")]));
     }
     // Rod-end misalignment: the rod's angle to the plane the bolts are square to (constant in planar motion).
@@ -148,7 +159,7 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
     if (dir === "forward" ? ends.stopForward : ends.stopBack) continue;
     const rod = ctx.nodes[ch.stages[stage].rod];
     out.push(finding("motion-cannot-assemble", "hazard", nodeSubject(rod.id),
-      `${nodeLabel(input)} cannot reach its ${dir} stop (${fmt(limit, 1)}°): at ${atInput(fail)} ${nodeLabel(rod)} can no longer join its two arms — a crank runs out of travel and the run jams before the stop. Set the input's stop short of this point, or change the arm lengths or pivot positions so the run reaches its stop.`,
+      `${nodeLabel(input)} cannot reach its ${dir === "forward" ? words[0] : words[1]} stop (${fmt(limit, 1)}°): at ${atInput(fail, words)} ${nodeLabel(rod)} can no longer join its two arms — a crank runs out of travel and the run jams before the stop. Set the input's stop short of this point, or change the arm lengths or pivot positions so the run reaches its stop.`,
       MOTION_SRC.closure, [num("input position", fail, "°"), num("input stop", dir === "forward" ? limit : -limit, "°")]));
   }
   // The surface's own travel on its card: swept past it, the surface would reach its limits before the input
@@ -166,7 +177,7 @@ export function chainFindings(ctx: Ctx, sw: ChainSweep, ends: Ends, geo: Linkage
       for (const [got, at, card, word] of [[up, upAt, surf.props.travelUp, "up"], [down, downAt, surf.props.travelDown, "down"]] as const) {
         if (got > card + SURFACE_TRAVEL_SLACK)
           out.push(finding("motion-surface-past-travel", "caution", nodeSubject(surf.id),
-            `Over the input's travel ${nodeLabel(surf)} swings ${fmt(got, 1)}° ${word} (at ${atInput(at)} of ${nodeLabel(input)}), past the ${fmt(card, 1)}° ${word} travel on its card: it would reach its limit before the input reaches its stop, so the surface or its hinges, not the stops, would end the travel. Set the input's stops (or the arm ratios) so the surface stops at its travel, or correct the travel on its card.`,
+            `Over the input's travel ${nodeLabel(surf)} swings ${fmt(got, 1)}° ${word} (at ${atInput(at, words)} of ${nodeLabel(input)}), past the ${fmt(card, 1)}° ${word} travel on its card: it would reach its limit before the input reaches its stop, so the surface or its hinges, not the stops, would end the travel. Set the input's stops (or the arm ratios) so the surface stops at its travel, or correct the travel on its card.`,
             MOTION_SRC.stops, [num(`${word} travel swept`, got, "°"), num(`${word} travel on the card`, card, "°"), num("input position", at, "°")]));
       }
     }

@@ -13,7 +13,7 @@ import { buildContext, type Ctx, jointsAt, nodeLabel, otherNode } from "../conte
 import { designForce } from "../loads";
 import { buildChains, type Chain } from "./chain";
 import { type ChainSweep, mu as muDeg, sweepChain } from "./sweep";
-import { chainFindings, controlSense, senseNotReadWhy, MOTION_SRC, atInput, type Ends } from "./findings";
+import { chainFindings, controlSense, senseNotReadWhy, inputWordsFor, MOTION_SRC, atInput, type Ends } from "./findings";
 import { riggingRange } from "./rigging";
 import { enterTodo, unenteredOf } from "../unentered";
 
@@ -161,7 +161,7 @@ function travelEnds(ctx: Ctx, sw: ChainSweep, out: Finding[]): Ends {
       const towards = failed && Math.sign(edge) === Math.sign(stopAt);
       out.push(towards
         ? finding("stop-after-runout", "hazard", nodeSubject(stop.id),
-            `${nodeLabel(stop)} is set at ${fmt(stopAt, 1)}° of ${nodeLabel(part)}, but the run jams first (${nodeLabel(part)} gets only to ${fmt(edge, 1)}°, at ${atInput(sw.theta[Math.abs(series[lastOkF]) > Math.abs(series[lastOkB]) ? lastOkF : lastOkB])} of the input): another part runs out of travel before the stop is met and takes the pilot's load. Set the stop inside the travel the run has.`,
+            `${nodeLabel(stop)} is set at ${fmt(stopAt, 1)}° of ${nodeLabel(part)}, but the run jams first (${nodeLabel(part)} gets only to ${fmt(edge, 1)}°, at ${atInput(sw.theta[Math.abs(series[lastOkF]) > Math.abs(series[lastOkB]) ? lastOkF : lastOkB], inputWordsFor(ctx.graph.system, ctx.graph.geometry))} of the input): another part runs out of travel before the stop is met and takes the pilot's load. Set the stop inside the travel the run has.`,
             MOTION_SRC.stops, [num("stop angle", stopAt, "°"), num("travel reached", edge, "°")])
         : finding("stop-never-reached", "caution", nodeSubject(stop.id),
             `${nodeLabel(stop)} is set at ${fmt(stopAt, 1)}° of ${nodeLabel(part)}, which the input's own travel never reaches (${nodeLabel(part)} moves from ${fmt(series[lastOkB], 1)}° to ${fmt(series[lastOkF], 1)}°): the stop does nothing, so whatever limits the input takes the loads. Move the stop inside the travel or check the stop angle.`,

@@ -3,6 +3,7 @@ import fc from "fast-check";
 import { analyze, DEFAULT_SETTINGS, solveFourBar, sweepGraph, MOTION_NOT_CHECKED } from "@/shared/analysis";
 import { mu } from "@/shared/analysis/motion";
 import { barRun, type Bar } from "./motion-fixtures";
+import { graphSchema, type LinkageGraph } from "@/shared/linkage/schema";
 import { demoPitchLinkage } from "@/shared/demo";
 import { demoPitchGeometry } from "@/shared/demo-geometry";
 
@@ -72,6 +73,12 @@ describe("motion: answers that follow from geometry alone", () => {
     // The rod runs at atan(5.74 / 27.0) ≈ 12° (geometry): the 5° arm meets its line about 7° forward.
     expect(f?.numbers[0].value).toBeGreaterThan(5);
     expect(f?.numbers[0].value).toBeLessThan(9);
+  });
+  it("the toggle's place is said in the run's own words: forward on a pitch run, right on a roll run", () => {
+    const g = barRun({ a: 3, c: 3, o2: [0, 0], o4: [30, 3], alpha: 5, beta: 90 });
+    const at = (x: LinkageGraph) => analyze(x).findings.find((f) => f.code === "motion-over-centre")!.message.match(/^At [\d.]+° (\w+)/)![1];
+    expect(at(g)).toBe("forward");
+    expect(at(graphSchema.parse({ ...g, system: "roll" }))).toBe("right");
   });
   it("no toggle when the arm stays square to the rod ± 15°", () => {
     const r = analyze(barRun({ a: 3, c: 3, o2: [0, 0], o4: [30, 0], alpha: 90, beta: 90 }));
