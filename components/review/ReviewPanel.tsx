@@ -2,18 +2,21 @@
 /** The linkage's review panel: sign-off state and form, what still blocks it, revision history and diff, e-mail setting. */
 import { findingTitle } from "@/shared/analysis/finding-title";
 import { useState } from "react";
-import { LoadMore } from "@/components/paged";
 import { ApiFailure } from "@/components/api-client";
 import { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "@/shared/notify";
-import { showValue, type ChangedItem, type GraphDiff } from "@/shared/review/diff";
-import { useAcknowledgements, useDiff, useNotify, useReviewActions, useRevisions, useSignoffs } from "./api";
+import dynamic from "next/dynamic";
+import { useAcknowledgements, useDiff, useNotify, useReviewActions, useSignoffs } from "./api";
 import type { ReviewMe } from "./ReviewThread";
 import { SignoffBadge } from "./SignoffBadge";
 import { ExportButton } from "@/components/records/ExportButton";
+import { heading, when } from "./format";
 
-const when = (iso: string) => new Date(iso).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" });
+// The history and the field-by-field comparison are read when asked for (or when a sign-off is out of date), so they
+// are loaded then, not with every page that shows the review panel.
+const RevisionHistory = dynamic(() => import("./RevisionHistory").then((m) => m.RevisionHistory), { ssr: false, loading: () => <p className="text-[11px] text-ink-soft">Loading the history…</p> });
+const DiffView = dynamic(() => import("./DiffView").then((m) => m.DiffView), { ssr: false, loading: () => <p className="text-[11px] text-ink-soft">Comparing the revisions…</p> });
+
 const box = "w-full rounded border border-ink/20 bg-white px-2 py-1 text-[12px] text-ink focus:border-advisory focus:outline-none";
-const heading = "text-[11px] font-semibold uppercase tracking-wide text-ink-soft";
 
 type Hazard = { code: string; subject: { type: string; id: string }; subjectName: string; message: string; lapsed: boolean };
 
@@ -106,84 +109,14 @@ function SignoffSection({ buildId, linkageId, me }: { buildId: string; linkageId
   );
 }
 
-function Changed({ items, what }: { items: ChangedItem[]; what: string }) {
-  return (
-    <>
-      {items.map((c) => (
-        <li key={`${what}-${c.id}`}>
-          <span className="font-semibold">{what} {c.name}</span> changed:
-          <ul className="pl-3">
-            {c.fields.map((f) => (
-              <li key={f.path} data-testid="diff-field" className="font-mono text-[10px]">
-                {f.path}: <span className="text-hazard">{showValue(f.before)}</span> → <span className="text-ok">{showValue(f.after)}</span>
-              </li>
-            ))}
-          </ul>
-        </li>
-      ))}
-    </>
-  );
-}
-
-function DiffView({ d }: { d: GraphDiff }) {
-  if (d.same) return <p className="text-[11px] text-ink-soft" data-testid="diff-view">No design changes{d.nodes.moved ? ` (${d.nodes.moved} part${d.nodes.moved === 1 ? "" : "s"} moved on the canvas)` : ""}.</p>;
-  return (
-    <ul className="space-y-1 text-[11px]" data-testid="diff-view">
-      {d.linkage.map((f) => (
-        <li key={f.path}>Linkage {f.path}: {showValue(f.before)} → {showValue(f.after)}</li>
-      ))}
-      {d.nodes.added.map((n) => <li key={`na-${n.id}`} className="text-ok">+ part {n.name}</li>)}
-      {d.nodes.removed.map((n) => <li key={`nr-${n.id}`} className="text-hazard">− part {n.name}</li>)}
-      {d.joints.added.map((j) => <li key={`ja-${j.id}`} className="text-ok">+ joint {j.name}</li>)}
-      {d.joints.removed.map((j) => <li key={`jr-${j.id}`} className="text-hazard">− joint {j.name}</li>)}
-      <Changed items={d.nodes.changed} what="part" />
-      <Changed items={d.joints.changed} what="joint" />
-      {d.nodes.moved > 0 && <li className="text-ink-soft">{d.nodes.moved} part{d.nodes.moved === 1 ? "" : "s"} moved on the canvas</li>}
-    </ul>
-  );
-}
-
 function HistorySection({ buildId, linkageId }: { buildId: string; linkageId: string }) {
   const [open, setOpen] = useState(false);
-  const revs = useRevisions(buildId, linkageId, open);
-  const list = revs.revisions;
-  const [pick, setPick] = useState<{ from: number | null; to: number | null }>({ from: null, to: null });
-  const to = pick.to ?? list[0]?.revision ?? null;
-  const from = pick.from ?? (to !== null ? Math.max(1, to - 1) : null);
-  const diff = useDiff(buildId, linkageId, open ? from : null, open ? to : null);
   return (
     <div className="space-y-1" data-testid="history-section">
       <button type="button" data-testid="history-toggle" className={`touch-target ${heading} hover:text-ink`} onClick={() => setOpen((v) => !v)} aria-expanded={open}>
         {open ? "▾" : "▸"} Revision history
       </button>
-      {open && (
-        <>
-          <ul className="max-h-40 space-y-0.5 overflow-y-auto text-[11px]" data-testid="revision-list">
-            {list.map((r) => (
-              <li key={r.revision} data-testid="revision-item" className="flex gap-1">
-                <span className="w-8 font-mono">r{r.revision}</span>
-                <span className="flex-1 truncate">{r.author.name}</span>
-                <span className="text-ink-soft">{when(r.createdAt)}</span>
-                {r.summary && r.summary.hazard > 0 && <span className="text-hazard">{r.summary.hazard}H</span>}
-              </li>
-            ))}
-            <li><LoadMore shown={list.length} total={revs.total} noun="revisions" hasMore={!!revs.hasNextPage} loading={revs.isFetchingNextPage} error={revs.isFetchNextPageError ? revs.error : null} onMore={() => void revs.fetchNextPage()} /></li>
-          </ul>
-          {list.length > 1 && (
-            <div className="flex items-center gap-1 text-[11px]">
-              Changes from
-              <select data-testid="diff-from" className="rounded border border-ink/20 px-1" value={from ?? ""} onChange={(e) => setPick({ to, from: Number(e.target.value) })}>
-                {list.map((r) => <option key={r.revision} value={r.revision}>r{r.revision}</option>)}
-              </select>
-              to
-              <select data-testid="diff-to" className="rounded border border-ink/20 px-1" value={to ?? ""} onChange={(e) => setPick({ from, to: Number(e.target.value) })}>
-                {list.map((r) => <option key={r.revision} value={r.revision}>r{r.revision}</option>)}
-              </select>
-            </div>
-          )}
-          {diff.data && <DiffView d={diff.data.diff} />}
-        </>
-      )}
+      {open && <RevisionHistory buildId={buildId} linkageId={linkageId} />}
     </div>
   );
 }

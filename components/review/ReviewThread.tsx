@@ -12,11 +12,11 @@ import { ApiFailure } from "@/components/api-client";
 import { LinkifiedText } from "./LinkifiedText";
 import { useAcknowledgements, useComments, useReviewActions, type CommentView, type FindingView } from "./api";
 import { ReviewPanel } from "./ReviewPanel";
+import { when } from "./format";
 
 export type ReviewMe = { userId: string; canComment: boolean; canAcknowledge: boolean; canSignOff: boolean };
 type Props = { buildId: string; linkageId: string; subject: Subject; me: ReviewMe };
 
-const when = (iso: string) => new Date(iso).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" });
 const errText = (e: unknown) => (e instanceof ApiFailure ? (e.fields ? Object.values(e.fields).join(" ") : e.message) : e ? String(e) : "");
 const box = "w-full rounded border border-ink/20 bg-white px-2 py-1 text-[12px] text-ink focus:border-advisory focus:outline-none";
 const btn = "min-h-6 rounded px-2 py-0.5 text-[11px] font-medium disabled:opacity-50";
