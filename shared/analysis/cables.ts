@@ -109,7 +109,7 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
     else if (ctx.graph.system === "trim" && d < MIN_PRIMARY_CABLE && !unenteredOf(node, SIZE_KEY).length)
       out.push(finding("trim-cable-small", "advisory", subj,
         `${name} is ${p.size} in, under the 1/8 in of the primary controls. A trim-tab cable may be smaller only where the airplane is safely controllable with the tab in its most adverse position; keep the designer's showing of that with the build records, or use 1/8 in cable.`,
-        CABLE_SRC.smallCable, [num("cable diameter", d, "in"), num("primary-control minimum", MIN_PRIMARY_CABLE, "in")]));
+        CABLE_SRC.tabCable, [num("cable diameter", d, "in"), num("primary-control minimum", MIN_PRIMARY_CABLE, "in")]));
     const r = byId.get(node.id)!;
     if (unenteredOf(node, TENSION_KEYS).length) continue;
     if (r.breakingStrength === null)

@@ -9,7 +9,7 @@
  */
 import { DESIGN_LOAD_SRC, FACTOR_MINIMUMS, PILOT_FORCE_TABLE, SRC } from "../hardware";
 import type { AnalysisSettings, DesignCase, Finding, SurfaceResult } from "./types";
-import type { Ctx } from "./context";
+import { nodeLabel, type Ctx } from "./context";
 import type { Loads } from "./loads";
 import { finding, fmt, linkageSubject, nodeSubject } from "./format";
 import { WHEEL_PITCH_DESIGN, WHEEL_PITCH_MIN, WHEEL_ROLL_DESIGN_PER_IN, WHEEL_ROLL_MIN_PER_IN } from "./cables";
@@ -73,10 +73,10 @@ export function hingeMomentCase(ctx: Ctx, loads: Loads, surfaces: SurfaceResult[
       scale = Math.max(scale, 1);
       if (hm !== undefined && key && tainted)
         out.push(finding("hinge-moment-waits", "advisory", nodeSubject(node.id),
-          `The hinge moment of ${node.label || node.id} is not used yet: the force it would set passes through starting values (see the part that lists them). Loads come from the input's maximum force until they are entered.`, DESIGN_LOAD_SRC.hingeMoments));
+          `The hinge moment of ${nodeLabel(node)} is not used yet: the force it would set passes through starting values (see the part that lists them). Loads come from the input's maximum force until they are entered.`, DESIGN_LOAD_SRC.hingeMoments));
       if (hm !== undefined && !key)
         out.push(finding("hinge-moment-not-used", "advisory", nodeSubject(node.id),
-          `The hinge moment of ${node.label || node.id} is not used: 14 CFR 23.395 bounds it by the stick and pedal forces of 23.397(b), which do not cover a ${system} run. Loads come from the input's force.`, DESIGN_LOAD_SRC.hingeMoments));
+          `The hinge moment of ${nodeLabel(node)} is not used: 14 CFR 23.395 bounds it by the stick and pedal forces of 23.397(b), which do not cover a ${system} run. Loads come from the input's force.`, DESIGN_LOAD_SRC.hingeMoments));
       continue;
     }
     any = true;

@@ -20,8 +20,10 @@ const MIN_D = MIN_BOLT_DIAMETER, MIN_DRAG = MIN_PREVAILING_TORQUE;
 /** No aluminium bolt under 1/4 in. // AC 43.13-1B 7-41 */
 const ALU_MIN_D = 0.25;
 
-function torqueNumbers(v: number, min: number, max: number) {
-  return [num("applied torque", v, "in·lbf"), num("table minimum", min, "in·lbf"), num("table maximum", max, "in·lbf")];
+function torqueNumbers(v: number, min: number, max: number, drag?: number) {
+  // Where the range already holds the nut's measured drag, its figures say so (they are no longer the table's own).
+  const w = drag ? " with drag" : "";
+  return [num("applied torque", v, "in·lbf"), num(`table minimum${w}`, min, "in·lbf"), num(`table maximum${w}`, max, "in·lbf")];
 }
 
 /** Tolerance on grip vs stack, in: a measurement tolerance of 1/64 in. // common practice, no source */
@@ -75,17 +77,25 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
         const required = k * th.majorDiameter;
         const eng = hw.engagement;
         const len = eng?.engagedLength;
-        const verified = re.hasWitnessHole !== false && eng?.witnessHoleVerified === true;
+        const hasHole = re.hasWitnessHole !== false;
+        const verified = hasHole && eng?.witnessHoleVerified === true;
+        // domain.md §4 rule 2: where the rod end has a witness hole, the wire check is the check; a recorded length
+        // judges engagement only where there is no hole. k×D is a rule of thumb for that length (common practice).
+        const thumb = `${k}×D of the ${re.thread} thread in ${internalThread(re, pn)}, a rule of thumb; more where the designer's drawing says so`;
         if (!verified) {
           if (len !== undefined && len < required) {
             out.push(finding("thread-engagement-short", "hazard", jointSubject(jt.id),
-              `The rod end at joint ${jointLabel(ctx, j)} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${internalThread(re, pn)}). Screw it in further and re-adjust the other end.`,
+              `The rod end at joint ${jointLabel(ctx, j)} is screwed in only ${fmt(len, 3)} in; it needs at least ${fmt(required, 3)} in (${thumb}). Screw it in further and re-adjust the other end.`,
               SRC.engagement, [num("engaged length", len, "in"), num("required", required, "in")]));
+          } else if (hasHole) {
+            out.push(finding("thread-engagement-unverified", "caution", jointSubject(jt.id),
+              len === undefined
+                ? `The thread engagement at joint ${jointLabel(ctx, j)} is not verified: check that a wire will not pass through the rod end's witness hole, and record it on the joint's card.`
+                : `Not checked: the rod end at joint ${jointLabel(ctx, j)} has a witness hole, and the check is that a wire will not pass through it; the recorded ${fmt(len, 3)} in of engaged length does not stand in for that. Check the hole with a wire and record it on the joint's card.`,
+              SRC.engagement, len === undefined ? [] : [num("engaged length", len, "in"), num("rule of thumb", required, "in")]));
           } else if (len === undefined) {
             out.push(finding("thread-engagement-unverified", "caution", jointSubject(jt.id),
-              re.hasWitnessHole !== false
-                ? `The thread engagement at joint ${jointLabel(ctx, j)} is not verified: check that a wire will not pass through the witness hole, or record the engaged length (at least ${fmt(required, 3)} in, ${k}×D).`
-                : `The rod end at joint ${jointLabel(ctx, j)} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${k}×D of the ${re.thread} thread in ${internalThread(re, pn)}).`,
+              `The rod end at joint ${jointLabel(ctx, j)} has no witness hole and no engaged length recorded. Measure and record it: at least ${fmt(required, 3)} in (${thumb}).`,
               SRC.engagement, [num("required", required, "in")]));
           }
         }
@@ -282,18 +292,19 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
               SRC.torqueCeiling, [...torqueNumbers(tq, range.min, range.max), num("maximum allowable", top, "in·lbf")]));
           } else if (tq < lo) {
             out.push(finding("torque-low", "caution", jointSubject(jt.id),
-              `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, below the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}. Re-torque it.`, source, torqueNumbers(tq, range.min, range.max)));
+              `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, below the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}. Re-torque it.`, source, torqueNumbers(tq, lo, hi, drag)));
           } else if (tq > hi) {
             if (selfLocking && drag === undefined)
               out.push(finding("torque-check-drag", "caution", jointSubject(jt.id),
                 `Not checked: the nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the table's ${fmt(range.max, 0)} in·lbf for a ${row.thread} ${pat} nut, and its drag torque is not recorded. Measure the nut's drag torque and record it: the torque is within the table only if it is no more than ${fmt(range.max, 0)} in·lbf plus the drag.`, source, torqueNumbers(tq, range.min, range.max)));
             else if (nut.type === "castellatedCotter")
-              // Past the range to line up a cotter-pin slot, within the maximum allowable: accepted practice (from memory).
-              out.push(finding("torque-high", "advisory", jointSubject(jt.id),
-                `The castellated nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(lo, 0)}–${fmt(hi, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut but within the ${fmt(top, 0)} in·lbf maximum allowable. Going past the range to line up the cotter-pin slot is acceptable up to that maximum; if the slot lines up lower, back off and re-torque within the range.`, source, [...torqueNumbers(tq, lo, hi), num("maximum allowable", top, "in·lbf")]));
+              // AC 43.13-1B 7-40f: start lining up the cotter-pin hole at the range's minimum (plus drag), do not exceed
+              // its maximum (plus drag); if the hole and a castellation do not line up, change the washer or the nut.
+              out.push(finding("torque-high", "caution", jointSubject(jt.id),
+                `The castellated nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}, though within the ${fmt(top, 0)} in·lbf maximum allowable. Do not go past the range to line up the cotter-pin slot (AC 43.13-1B 7-40f): back the nut off, change the washer or the nut, and torque it again, starting at the range's minimum.`, SRC.castleAlign, [...torqueNumbers(tq, lo, hi, drag), num("maximum allowable", top, "in·lbf")]));
             else
               out.push(finding("torque-high", "caution", jointSubject(jt.id),
-                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(lo, 0)}–${fmt(hi, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}, though within the ${fmt(top, 0)} in·lbf maximum allowable. Back the nut off and torque it again within the range.`, source, [...torqueNumbers(tq, lo, hi), num("maximum allowable", top, "in·lbf")]));
+                `The nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, above the ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf of table 7-1 for a ${row.thread} ${pat} nut${plusDrag}, though within the ${fmt(top, 0)} in·lbf maximum allowable. Back the nut off and torque it again within the range.`, source, [...torqueNumbers(tq, lo, hi, drag), num("maximum allowable", top, "in·lbf")]));
           } else if (selfLocking && drag === undefined) {
             // Within the bare table range, but the range is the table's plus the nut's drag: a torque here may be low.
             out.push(finding("torque-drag-unrecorded", "advisory", jointSubject(jt.id),

@@ -69,4 +69,4 @@ export const MIN_PREVAILING_TORQUE: Readonly<Record<string, number>> = {
   "7/16-20": 14, // from memory
   "1/2-20": 18, // from memory
 };
-export const PREVAILING_SRC: SourceTag = { kind: "fromMemory", text: "AC 43.13-1B 7-64 (re-used self-locking nuts); minimum drag torques recalled" };
+export const PREVAILING_SRC: SourceTag = { kind: "fromMemory", text: "AC 43.13-1B 7-64 (re-used self-locking nuts); minimum prevailing (drag) torques recalled from the nut specification's table, not checked against it" };

@@ -19,6 +19,7 @@ export const SRC = {
   torqueTable: { kind: "published", text: "AC 43.13-1B table 7-1" },
   torqueCeiling: { kind: "fromMemory", text: "AC 43.13-1B table 7-1, maximum allowable tightening torque column (recalled)" },
   torqueTableMemory: { kind: "fromMemory", text: "AC 43.13-1B table 7-1 (row recalled, not checked against the text)" },
+  castleAlign: { kind: "published", text: "AC 43.13-1B 7-40f (castle nut: line the cotter-pin hole up within the torque range plus drag; if it does not line up, change the washer or the nut)" },
   jamNut: { kind: "published", text: "AC 43.13-1B 7-70 (checknut); common practice" },
   engagement: { kind: "commonPractice", text: "thread engagement: witness hole, or 1×D steel / 2×D aluminium" },
   boltClamped: { kind: "commonPractice", text: "bolt clamped on the inner race; the bearing does the moving" },

@@ -1,6 +1,6 @@
 /**
  * The inspection checklist of a linkage revision: per joint the checks its hardware calls for, then the
- * checks of the whole run (full and free travel; stops contact before the surface limits). Pure.
+ * checks of the whole run (full and free travel; stops contact at the designer's travel). Pure.
  * An item's key is (jointId, code); jointId is "" for items of the whole linkage.
  */
 import { AN_BOLTS_BY_SIZE, SRC, THREADS_BY_NAME, TORQUE_BY_THREAD, type AnBoltSize } from "../hardware";
@@ -65,10 +65,11 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
     const range = !t ? "the bolt maker's torque"
       : nut.pattern === undefined ? `table 7-1: ${t.tension.min}–${t.tension.max} in·lbf for a tension nut, ${t.shear.min}–${t.shear.max} for a shear (thin) nut (pattern not recorded)${drag}`
       : `table 7-1: ${t[nut.pattern].min}–${t[nut.pattern].max} in·lbf for a ${nut.pattern} nut${drag}`;
-    const slot = nut.type === "castellatedCotter" && t && nut.pattern ? `; to line up the cotter-pin slot, no further than the ${t.ceiling[nut.pattern]} in·lbf maximum allowable` : "";
+    // AC 43.13-1B 7-40f: the slot is lined up within the range, never past it; a washer or nut is changed instead.
+    const slot = nut.type === "castellatedCotter" ? "; the cotter-pin slot lined up within that range, starting at its minimum (if it does not line up, a different washer or nut, not more torque)" : "";
     add("torque", hw.torque !== undefined
       ? `${size} nut torqued to ${fmt(hw.torque)} in·lbf — ${range}${slot}.`
-      : `${size} nut torqued within ${range}${slot}, and the torque recorded on the joint card (none is recorded).`, SRC.torqueTable);
+      : `${size} nut torqued within ${range}${slot}, and the torque recorded on the joint card (none is recorded).`, nut.type === "castellatedCotter" ? SRC.castleAlign : SRC.torqueTable);
     add("torque-stripe", "Torque stripe across nut, bolt and washer, applied after the torque, unbroken.", { kind: "commonPractice", text: "torque seal marks a torqued fastener" });
   }
   return items;
@@ -111,7 +112,7 @@ export function linkageItems(g: LinkageGraph): ChecklistItem[] {
   if (surfaces.length || stops.length) {
     items.push({
       jointId: "", subject: "linkage", where, code: "stops-before-limits",
-      text: `The stops${stops.length ? ` (${stops.map((s) => partName(s)).join(", ")})` : ""} contact before the surface reaches its limits${limits ? ` — ${limits}` : ""}; nothing else in the run acts as the stop.`,
+      text: `The stops${stops.length ? ` (${stops.map((s) => partName(s)).join(", ")})` : ""} contact at the designer's travel${limits ? ` — ${limits}, within the drawing's tolerance` : ""}; the surface, its horn and the cockpit control reach nothing else first, and nothing else in the run acts as the stop.`,
       source: { kind: "commonPractice", text: "control-system inspection: stops take the load, not the surface" },
     });
   }

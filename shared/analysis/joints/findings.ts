@@ -9,7 +9,7 @@ import { type Ctx, jointLabel, nodeLabel } from "../context";
 import { finding, fmt, fmtMargin, jointSubject, num } from "../format";
 import { boltDiameter, UNDRIVEN_TODO } from "../allowables";
 import { BOLT_DIAMETER_TODO, fastenerDiameter } from "./checks";
-import { movingRole } from "./factors";
+import { factorTable, movingRole } from "./factors";
 
 const jl = jointLabel, fastenerDia = fastenerDiameter, boltDia = boltDiameter, MIN_ED = MIN_EDGE_RATIO;
 
@@ -42,8 +42,10 @@ const REMEDY: Record<CheckId, string> = {
 const NO_CHECKS: readonly JointCheck[] = [];
 const SIDES = ["from", "to"] as const;
 
+/** The factor a check used, by name: the joint's own special factor, or a rod end's bearing factor at a hinge (3.33, below the hinge's 6.67), or the fitting factor. */
 function factorWords(c: JointCheck, r: JointResult, s: AnalysisSettings): string {
-  const which = c.factor === r.factor.value && c.factor !== s.fittingFactor ? r.factor.name : "fitting factor";
+  const t = factorTable(s);
+  const which = c.factor === s.fittingFactor ? t.fitting.name : c.factor === r.factor.value ? r.factor.name : c.factor === t.bearing.value ? t.bearing.name : "special factor";
   return `limit × ${fmt(s.ultimateFactor, 2)} ultimate × ${fmt(c.factor, 2)} ${which}`;
 }
 
@@ -108,7 +110,7 @@ export function jointFindings(ctx: Ctx, results: JointResult[], s: AnalysisSetti
       const loaded = r.radialLimit > 0 || movingRole(r.role);
       if (ret === "cotterPinOnly" && loaded)
         out.push(finding("clevis-pin-cotter-only", "hazard", subj,
-          `The clevis pin at joint ${jl(ctx, j)} is under load or motion and retained only by a cotter pin. Retain it by more than the cotter pin alone (a castellated nut with a cotter pin, or a bolt with a locked nut).`,
+          `The clevis pin at joint ${jl(ctx, j)} is under load or motion and retained only by a cotter pin. Hold the joint by more than a cotter pin alone: a bolt with a castellated nut and a new cotter pin in its place, or a pin the designer's drawing retains by other means as well.`,
           { kind: "published", text: "14 CFR 23.689(d)" }));
       else if (ret === undefined)
         out.push(finding("clevis-pin-retention-unrecorded", "caution", subj,

@@ -98,7 +98,7 @@ export function analyzeMotion(ctx: Ctx, settings: AnalysisSettings, steps?: numb
         notChecked.push(`Rigging of ${nodeLabel(rodNode)} (the geometry needs ${fmt(st.length, 3)} in centre to centre, the card says ${fmt(card, 3)} in): enter ${rig.toEnter.join("; ")}.`);
       } else if (st.length < rig.shortest - 1e-6 || st.length > rig.longest + 1e-6) {
         findings.push(finding("rigging-out-of-range", "hazard", nodeSubject(rodId),
-          `The geometry needs ${nodeLabel(rodNode)} at ${fmt(st.length, 3)} in centre to centre, but with its rod ends it adjusts only from ${fmt(rig.shortest, 3)} to ${fmt(rig.longest, 3)} in (each end engaged at least ${rig.minEngagement.map((m) => fmt(m, 3)).join(" / ")} in, the witness-hole rule; jam nut thickness not taken off). Cut the tube to a new length or move an attach point; do not rig it with the witness hole open.`,
+          `The geometry needs ${nodeLabel(rodNode)} at ${fmt(st.length, 3)} in centre to centre, but with its rod ends it adjusts only from ${fmt(rig.shortest, 3)} to ${fmt(rig.longest, 3)} in (each end engaged at least ${rig.minEngagement.map((m) => fmt(m, 3)).join(" / ")} in, 1×D in steel or 2×D in aluminium, a rule of thumb — the witness hole decides; jam nut thickness not taken off). Cut the tube to a new length or move an attach point; do not rig it with the witness hole open.`,
           SRC.engagement, [num("length needed", st.length, "in"), num("shortest", rig.shortest, "in"), num("longest", rig.longest, "in")]));
       }
     });

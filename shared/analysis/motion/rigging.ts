@@ -1,6 +1,6 @@
 /**
  * Rigging range of a pushrod: how far its centre-to-centre length can be adjusted with the rod ends it has.
- * Each rod end screws out until only the minimum engagement is left (the witness-hole rule: at least 1×D
+ * Each rod end screws out until only the minimum engagement is left (a rule of thumb standing in for the witness hole: at least 1×D
  * in steel, 2×D in aluminium, D = the thread's major diameter [common practice]) and in until its whole
  * thread is engaged. From the length on the card (as assembled, with each end's recorded engaged length):
  *   shortest = card − Σ (thread length − engaged),   longest = card + Σ (engaged − minimum engagement).

@@ -158,6 +158,17 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(selectSpecialFactor(hw, "hinge", s).value).toBe(1.15);
     expect(selectSpecialFactor(hw, "hinge", { ...s, bearingFactorOnRodEnds: true })).toMatchObject({ value: 6.67, name: "hinge bearing factor" });
   });
+  it("a rod end at a hinge checked against its rating with the bearing factor says 'bearing factor', not 'fitting factor'", () => {
+    // With rod ends treated as plain bearings, the rating takes 3.33 (14 CFR 23.693) while the hinge's holes take 6.67 (23.657(a)).
+    const rodEnd = { ...goodRun().joints[1].hardware.rodEnd!, ratedUltimate: undefined };
+    const g = withHardware(goodRun(), "hinge", (h) => ({ ...h, rodEnd, bearing: undefined }));
+    const plain = { bearingFactorOnRodEnds: true };
+    expect(check(joint(g, "hinge", plain), "rodEndRating").factor).toBeCloseTo(3.33, 9);
+    const msg = (settings: object) => run(g, settings).findings.find((f) => f.subject.id === "hinge" && f.code === "rod-end-rating-missing")!.message;
+    expect(msg(plain)).toContain("× 3.33 bearing factor (plain bearing, angular motion)");
+    expect(msg(plain)).not.toContain("3.33 fitting factor");
+    expect(msg({})).toContain("× 1.15 fitting factor"); // rod ends as rolling bearings: the fitting factor, named so
+  });
   it("6.67 at a hinge that is not a ball or roller bearing (23.657(a)); fitting factor at a ball-bearing hinge", () => {
     const g = withHardware(goodRun(), "hinge", (h) => ({ ...h, bearing: "plainBushing" }));
     const r = joint(g, "hinge");

@@ -216,7 +216,7 @@ describe("stops", () => {
   });
 });
 
-describe("rigging range (thread length and minimum engagement, the witness-hole rule)", () => {
+describe("rigging range (thread length and minimum engagement, a rule of thumb for the witness hole)", () => {
   function rigged(engaged: number, threadLength: number, cardDelta: number): LinkageGraph {
     const g = barRun(square);
     g.nodes = g.nodes.map((n) => (n.kind === "pushrod" ? { ...n, props: { ...n.props, length: n.props.length + cardDelta } } : n));
@@ -236,6 +236,10 @@ describe("rigging range (thread length and minimum engagement, the witness-hole 
   });
   it("out of range: the geometry needs 1 in more than the ends can give", () => {
     expect(codes(rigged(0.6, 1.0, -1))).toContain("rigging-out-of-range");
+    // k×D is a rule of thumb (domain.md §4 rule 2, common practice); the message does not present it as the witness hole's own test.
+    const m = analyze(rigged(0.6, 1.0, -1)).findings.find((f) => f.code === "rigging-out-of-range")!.message;
+    expect(m).toContain("a rule of thumb — the witness hole decides");
+    expect(m).not.toContain("the witness-hole rule");
   });
 });
 

@@ -39,22 +39,34 @@ describe("rule 2: thread engagement", () => {
     expect(codes(g, "rodA")).toEqual(["thread-engagement-unverified"]);
     expect(severityOf(g, "thread-engagement-unverified")).toBe("caution");
   });
+  // domain.md §4 rule 2: the engaged length judges engagement where the rod end has no witness hole.
+  const noHoleLen = (engagedLength: number) => (h: JointHardware) => ({ ...patchRodEnd({ hasWitnessHole: false })(h), engagement: { witnessHoleVerified: false, engagedLength } });
   it("trips when the engaged length is under 1 × D in a steel pushrod", () => {
     // 1/4-28: D = 0.25 in (ASME B1.1); 1×D in steel (common practice) = 0.25 in
-    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, engagement: { witnessHoleVerified: false, engagedLength: 0.2 } }));
+    const g = withHardware(goodRun(), "rodA", noHoleLen(0.2));
     expect(codes(g, "rodA")).toEqual(["thread-engagement-short"]);
     expect(severityOf(g, "thread-engagement-short")).toBe("hazard");
+    expect(analyze(valid(g)).findings.find((f) => f.code === "thread-engagement-short")!.message).toContain("a rule of thumb");
   });
   it("does not trip at exactly 1 × D in steel", () => {
-    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, engagement: { witnessHoleVerified: false, engagedLength: 0.25 } })), "rodA")).toEqual([]);
+    expect(codes(withHardware(goodRun(), "rodA", noHoleLen(0.25)), "rodA")).toEqual([]);
   });
   it("needs 2 × D in an aluminium pushrod", () => {
     // 2×D in aluminium (common practice) = 0.50 in for 1/4-28
     const alu = goodRun();
     const rod = alu.nodes.find((n) => n.id === "rod")!;
     if (rod.kind === "pushrod") rod.props.material = "6061-T6";
-    expect(codes(withHardware(alu, "rodA", (h) => ({ ...h, engagement: { witnessHoleVerified: false, engagedLength: 0.4 } })), "rodA")).toEqual(["thread-engagement-short"]);
-    expect(codes(withHardware(alu, "rodA", (h) => ({ ...h, engagement: { witnessHoleVerified: false, engagedLength: 0.5 } })), "rodA")).toEqual([]);
+    expect(codes(withHardware(alu, "rodA", noHoleLen(0.4)), "rodA")).toEqual(["thread-engagement-short"]);
+    expect(codes(withHardware(alu, "rodA", noHoleLen(0.5)), "rodA")).toEqual([]);
+  });
+  it("a rod end with a witness hole is not passed on its recorded length: the wire check is asked for; a short length is still a hazard", () => {
+    const holeLen = (engagedLength: number) => withHardware(goodRun(), "rodA", (h) => ({ ...h, engagement: { witnessHoleVerified: false, engagedLength } }));
+    const g = holeLen(0.3); // over 1×D of 1/4-28
+    expect(codes(g, "rodA")).toEqual(["thread-engagement-unverified"]);
+    expect(severityOf(g, "thread-engagement-unverified")).toBe("caution");
+    expect(analyze(valid(g)).findings.find((f) => f.code === "thread-engagement-unverified")!.message).toMatch(/^Not checked: .* Check the hole with a wire/);
+    expect(codes(holeLen(0.2), "rodA")).toEqual(["thread-engagement-short"]);
+    expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, engagement: { witnessHoleVerified: true, engagedLength: 0.3 } })), "rodA")).toEqual([]);
   });
   it("a rod end without a witness hole needs its length recorded", () => {
     const noHole = withHardware(goodRun(), "rodA", (h) => ({ ...patchRodEnd({ hasWitnessHole: false })(h), engagement: { witnessHoleVerified: true } }));
@@ -195,14 +207,36 @@ describe("rule 6: torque within AC 43.13-1B table 7-1", () => {
     expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 58 })), "rodA")).toEqual([]); // table 7-1 minimum 50 + 8 drag
     expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 78 })), "rodA")).toEqual([]); // table 7-1 maximum 70 + 8 drag
   });
-  it("above the range but within the maximum: re-torque, never 'replace' (caution); a castellated nut lining up its slot is an advisory", () => {
+  it("above the range but within the maximum: re-torque, never 'replace' (caution)", () => {
     const wired = withHardware(goodRun(), "rodA", (h) => ({ ...h, nut: { type: "plainSafetyWire" as const, pattern: "tension" as const }, torque: 80 }));
     const m = analyze(valid(wired)).findings.find((f) => f.code === "torque-high")!;
     expect(m.severity).toBe("caution");
     expect(m.message).toMatch(/within the 100 in·lbf maximum allowable\. Back the nut off and torque it again/);
     expect(m.message).not.toMatch(/replace/i);
-    const castle = withHardware(goodRun(), "rodA", (h) => ({ ...h, nut: { type: "castellatedCotter" as const, pattern: "tension" as const, cotterPinNew: true }, torque: 80 }));
-    expect(severityOf(castle, "torque-high")).toBe("advisory");
+  });
+  // AC 43.13-1B 7-40f: start lining up the cotter-pin hole at the range's minimum; do not exceed its maximum; if the
+  // hole and castellation do not align, change the washer or the nut.
+  const castleAt = (torque: number) => withHardware(goodRun(), "rodA", (h) => ({ ...h, nut: { type: "castellatedCotter" as const, pattern: "tension" as const, cotterPinNew: true }, torque }));
+  it("a castellated nut past the range to line up its slot is a caution that says change the washer or nut, not an accepted practice", () => {
+    const m = analyze(valid(castleAt(80))).findings.find((f) => f.code === "torque-high")!; // table 7-1: 1/4-28 tension 50–70
+    expect(m.severity).toBe("caution");
+    expect(m.message).toMatch(/Do not go past the range to line up the cotter-pin slot \(AC 43\.13-1B 7-40f\): back the nut off, change the washer or the nut/);
+    expect(m.message).not.toMatch(/acceptable/);
+    expect(m.source.text).toMatch(/7-40f/);
+  });
+  it("a castellated nut within the range lines up its slot without a finding", () => {
+    expect(codes(castleAt(70), "rodA")).toEqual([]);
+    expect(codes(castleAt(50), "rodA")).toEqual([]);
+  });
+  it("a self-locking nut above the range with its drag measured names the drag once: the table's range, then the drag", () => {
+    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 85, nut: { ...h.nut!, dragTorque: 10 } })); // 50–70 + 10 drag
+    const m = analyze(valid(g)).findings.find((f) => f.code === "torque-high")!;
+    expect(m.message).toContain("above the 50–70 in·lbf of table 7-1 for a 1/4-28 tension nut plus the measured 10.0 in·lbf drag");
+    expect(m.message).not.toContain("60–80");
+    expect(m.numbers).toEqual(expect.arrayContaining([expect.objectContaining({ label: "table maximum with drag", value: 80 })]));
+    // Without drag (a safety-wired plain nut) the figures are the table's own.
+    const wired = withHardware(goodRun(), "rodA", (h) => ({ ...h, nut: { type: "plainSafetyWire" as const, pattern: "tension" as const }, torque: 80 }));
+    expect(analyze(valid(wired)).findings.find((f) => f.code === "torque-high")!.numbers).toEqual(expect.arrayContaining([expect.objectContaining({ label: "table maximum", value: 70 })]));
   });
   it("asks for the torque when it is not recorded", () => {
     expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: undefined })), "rodA")).toEqual(["torque-unrecorded"]);

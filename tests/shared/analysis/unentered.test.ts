@@ -224,6 +224,12 @@ describe("found in review: places a starting value still reached a figure", () =
     expect(r.designCase.scale).toBe(1);
     expect(codes(r)).toContain("hinge-moment-waits@elevator");
     expect(codes(entered)).not.toContain("hinge-moment-waits@elevator");
+    // The message names the part as every other message does (its name in quotes, or its kind's name), never its id.
+    expect(r.findings.find((f) => f.code === "hinge-moment-waits")!.message).toContain('The hinge moment of "Elevator" is not used yet');
+    const unnamed = analyze(mark({ ...g, nodes: g.nodes.map((n) => (n.id === "elevator" ? { ...n, label: "" } : n)) }, "horn", ["hornArm"]));
+    const msg = unnamed.findings.find((f) => f.code === "hinge-moment-waits")!.message;
+    expect(msg).toMatch(/^The hinge moment of "[^"]+" is not used yet/);
+    expect(msg).not.toMatch(/^The hinge moment of "?elevator"? /);
   });
 
   it("a pushrod whose length is a starting value is not held against the geometry's length", () => {

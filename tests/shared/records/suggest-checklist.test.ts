@@ -133,6 +133,9 @@ describe("inspection checklist", () => {
     expect(washer.where).toBe("Aft pushrod B ↔ Elevator horn, attach"); // the joint's one name (shared/linkage/names.ts)
     expect(items.find((i) => i.jointId === "j-bellcrank-pivot" && i.code === "torque")!.text).toContain("120 in·lbf"); // demo value
     expect(items.find((i) => i.code === "stops-before-limits")!.text).toContain("Elevator 25° up / 20° down"); // demo travel
+    // The stops set the designed travel; they do not stop the surface short of it.
+    expect(items.find((i) => i.code === "stops-before-limits")!.text).toMatch(/contact at the designer's travel — .*within the drawing's tolerance/);
+    expect(items.find((i) => i.code === "stops-before-limits")!.text).not.toMatch(/before the surface reaches/);
     for (const i of items) expect(i.source.text.length).toBeGreaterThan(0);
   });
   it("asks for the control sense of every run, in the words of its system (14 CFR 23.779 table, from memory)", () => {
@@ -160,7 +163,10 @@ describe("inspection checklist", () => {
     const noTorque = patch("j-stick-fwd", (h) => ({ ...h, torque: undefined, nut: { ...h.nut!, dragTorque: undefined } }));
     expect(at(noTorque, "j-stick-fwd", "torque")).toBe("AN4 nut torqued within table 7-1: 50–70 in·lbf for a tension nut plus the nut's drag torque (measure it and record it), and the torque recorded on the joint card (none is recorded).");
     const castleClamped = patch("j-stick-fwd", (h) => ({ ...h, nut: { type: "castellatedCotter", pattern: "tension", cotterPinNew: true } }));
-    expect(at(castleClamped, "j-stick-fwd", "torque")).toMatch(/to line up the cotter-pin slot, no further than the 100 in·lbf maximum allowable/); // 1/4-28 tension column, from memory
+    // AC 43.13-1B 7-40f: the slot is lined up within the range; a washer or nut is changed rather than going past it.
+    expect(at(castleClamped, "j-stick-fwd", "torque")).toMatch(/50–70 in·lbf for a tension nut; the cotter-pin slot lined up within that range, starting at its minimum \(if it does not line up, a different washer or nut, not more torque\)/);
+    expect(at(castleClamped, "j-stick-fwd", "torque")).not.toMatch(/maximum allowable/);
+    expect(at(g, "j-stick-fwd", "torque")).not.toMatch(/cotter-pin slot/); // a self-locking nut has no slot to line up
     expect(at(g, "j-stick-pivot", "torque")).toBeUndefined(); // castellated on a bushing
     expect(at(g, "j-stick-pivot", "cotter-pin")).toMatch(/snugged so the part still turns freely/);
   });
