@@ -9,7 +9,7 @@ import { buildContext } from "./context";
 import { propagate } from "./loads";
 import { marginOfSafety, pushrodResult, strengthFindings, UNDRIVEN_TODO } from "./allowables";
 import { jointResult } from "./joints/result";
-import type { FactorOptions } from "./joints/factors";
+import { HINGE_BEARING_FACTOR, type FactorOptions } from "./joints/factors";
 import { jointFindings } from "./joints/findings";
 import { pathLoads } from "./joints/path";
 import { hingeMomentCase, maxLoads, settingsCautions } from "./design-case";
@@ -32,11 +32,23 @@ export { analyzeMotion, sweepGraph, MOTION_NOT_CHECKED, atInput, type MotionRepo
 export { selectSpecialFactor, turnsOnBolt, HINGE_BEARING_FACTOR, CABLE_JOINT_FACTOR, type FactorOptions } from "./joints/factors";
 export { HINGE_MOMENT_FACTOR } from "./design-case";
 
-export const ENGINE_VERSION = "2.4.1"; // 2.4.1: a rod end with a witness hole needs the wire check (a recorded length no longer passes it); a castellated nut past the torque range is a caution (AC 43.13-1B 7-40f: change the washer or nut), not an accepted practice; torque figures with drag labelled so; a hinge's rod-end rating names its bearing factor. 2.4: control sense of roll runs (with the aileron's wing recorded) and yaw runs (with the pushed pedal recorded) from the geometry; `sense` carries its axis. 2.3: control sense of pitch runs from the geometry (motion chains carry `sense`); a hinge is checked with the designer's hinge load added, not checked without it. 2.1: starting values (unentered) are not used for margins; pushrod margins may be null. 2.1.1: an unrecorded rod-end hand is not taken as RH; no lever-rule force from a starting grip arm. 2.2: torque maximum with drag, retaining-washer side asked, undriven parts not checked, link ends turn on their bolt, trim cables, swept surface travel against the card, dual-control sweeps keep the full-force case, wheel minimums
+export const ENGINE_VERSION = "2.4.1"; // 2.4.1: a rod end with a witness hole needs the wire check (a recorded length no longer passes it); a castellated nut past the torque range is a caution (AC 43.13-1B 7-40f: change the washer or nut), not an accepted practice; torque figures with drag labelled so; a hinge's rod-end rating names its bearing factor; the assumptions state the factors from the build's settings. 2.4: control sense of roll runs (with the aileron's wing recorded) and yaw runs (with the pushed pedal recorded) from the geometry; `sense` carries its axis. 2.3: control sense of pitch runs from the geometry (motion chains carry `sense`); a hinge is checked with the designer's hinge load added, not checked without it. 2.1: starting values (unentered) are not used for margins; pushrod margins may be null. 2.1.1: an unrecorded rod-end hand is not taken as RH; no lever-rule force from a starting grip arm. 2.2: torque maximum with drag, retaining-washer side asked, undriven parts not checked, link ends turn on their bolt, trim cables, swept surface travel against the card, dual-control sweeps keep the full-force case, wheel minimums
 
 export const NOTICE =
   "Linkwright's numbers are an aid to the builder's own engineering and the designer's data, not a substitute. " +
   "Follow the kit or plans designer's instructions, the applicable airworthiness regulations and the judgement of a qualified inspector; defer to local rules and licensed practice.";
+
+/** Stands in the list for the factor line, which is written from the build's own settings (factorAssumption). */
+const FACTOR_LINE = "\u0000factors";
+
+/** The factors the report used, as the build's settings set them (the published values unless the owner changed them). */
+export function factorAssumption(s: AnalysisSettings): string {
+  const f = (x: number) => String(Number(x.toFixed(2)));
+  return `Ultimate = limit × ${f(s.ultimateFactor)} ultimate factor (14 CFR 23.303); every joint check also × the ${f(s.fittingFactor)} fitting factor (14 CFR 23.625). ` +
+    `Bearing at a hole takes the joint's highest special factor instead (14 CFR 23.619): ${f(s.bearingFactor)} where a part turns on a plain bearing (23.693)` +
+    `${s.bearingFactorOnRodEnds ? ", rod ends included (this build treats them as plain bearings)" : "; rod ends are taken as rolling bearings and rated by their makers"}, ` +
+    `${f(s.cableFactor)} on joints of cable systems (23.693), ${HINGE_BEARING_FACTOR} at hinges without ball or roller bearings (23.657(a)); tear-out, shear and bending take the fitting factor.`;
+}
 
 export const ASSUMPTIONS: readonly string[] = [
   "Loads are limit loads from the design pilot force at the grip or pedal (14 CFR 23.397(b)); where a surface's hinge moment is given, 125 % of it sets them instead, between the minimum and maximum pilot forces (14 CFR 23.395). With several surfaces the largest case is applied to the whole run.",
@@ -44,7 +56,7 @@ export const ASSUMPTIONS: readonly string[] = [
   "A bellcrank pivot carries the vector sum of its two arm loads at the arm angle; idler arms, torque tubes, sticks and pedals are taken with their arms opposite, the largest resultant.",
   "Where a port carries several joints, each is taken to carry the full force; every pivot and hinge joint of a part carries the whole pivot or hinge load.",
   "A hinge joint carries the designer's limit hinge load entered on its card (the surface's own air load, which only the designer's figures give) plus the control system's load there, added as if in line (conservative); without the designer's figure the hinge is not checked.",
-  "Ultimate = limit × ultimate factor; every joint check also × the fitting factor (14 CFR 23.625). Bearing at a hole takes the joint's highest special factor instead (14 CFR 23.619): 3.33 where a part turns on a plain bearing (23.693), 6.67 at hinges without ball or roller bearings (23.657(a)); tear-out, shear and bending take the fitting factor.",
+  FACTOR_LINE,
   "A stop reacts the moment of the part it stops over its arm from that part's pivot; a horn's bolts share the link force and carry the hinge moment's couple, added in line (conservative).",
   "Bolt bending: single shear M = P × (spacers + half the ball or member width); double shear with spacers M = P/2 × (gap + cheek/2 + ball/4); allowable Ftu × 1.5 × πD³/32.",
   "Pushrods are pinned-pinned columns (K = 1), Euler or Johnson; the design force pushes and pulls, so each pushrod is checked both ways at the same load.",
@@ -63,10 +75,12 @@ export const MOTION_ASSUMPTIONS: readonly string[] = [
 ];
 
 /** Every run swept: the perpendicular-arm and no-geometry lines give way to the motion ones; some swept: both. */
-function assumptionsFor(m: MotionReport): string[] {
-  if (!m.checked) return [...ASSUMPTIONS];
-  const allSwept = !m.notChecked.some((s) => s.startsWith("Motion of the run"));
-  return allSwept ? [...ASSUMPTIONS.slice(0, 1), ...ASSUMPTIONS.slice(2, -1), ...MOTION_ASSUMPTIONS] : [...ASSUMPTIONS.slice(0, -1), ...MOTION_ASSUMPTIONS];
+function assumptionsFor(m: MotionReport, settings: AnalysisSettings): string[] {
+  const lines = !m.checked ? [...ASSUMPTIONS]
+    : !m.notChecked.some((s) => s.startsWith("Motion of the run")) ? [...ASSUMPTIONS.slice(0, 1), ...ASSUMPTIONS.slice(2, -1), ...MOTION_ASSUMPTIONS]
+    : [...ASSUMPTIONS.slice(0, -1), ...MOTION_ASSUMPTIONS];
+  const factors = factorAssumption(settings);
+  return lines.map((l) => (l === FACTOR_LINE ? factors : l));
 }
 
 function resolveSettings(settings: Partial<AnalysisSettings> | undefined, out: Finding[]): AnalysisSettings {
@@ -162,7 +176,7 @@ export function analyze(graph: LinkageGraph, settings?: Partial<AnalysisSettings
     settings: s,
     surfaces,
     cables,
-    assumptions: assumptionsFor(motion.report),
+    assumptions: assumptionsFor(motion.report, s),
     motion: motion.report,
     notice: NOTICE,
     designCase,

@@ -158,6 +158,20 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(selectSpecialFactor(hw, "hinge", s).value).toBe(1.15);
     expect(selectSpecialFactor(hw, "hinge", { ...s, bearingFactorOnRodEnds: true })).toMatchObject({ value: 6.67, name: "hinge bearing factor" });
   });
+  it("the assumptions state the factors the report used: the published ones by default, the build's own when it changed them", () => {
+    const line = (settings: object) => run(goodRun(), settings).assumptions.find((a) => a.startsWith("Ultimate = limit"))!;
+    // 14 CFR 23.303 1.5, 23.625 1.15, 23.693 3.33 and 2.0, 23.657(a) 6.67
+    expect(line({})).toContain("× 1.5 ultimate factor");
+    expect(line({})).toContain("× the 1.15 fitting factor");
+    expect(line({})).toContain("3.33 where a part turns on a plain bearing (23.693); rod ends are taken as rolling bearings");
+    expect(line({})).toContain("2 on joints of cable systems");
+    expect(line({})).toContain("6.67 at hinges");
+    const own = line({ fittingFactor: 1.2, bearingFactor: 4, bearingFactorOnRodEnds: true });
+    expect(own).toContain("× the 1.2 fitting factor");
+    expect(own).toContain("4 where a part turns on a plain bearing (23.693), rod ends included");
+    expect(own).not.toContain("3.33");
+    expect(run(goodRun()).assumptions.every((a) => !a.startsWith("\u0000"))).toBe(true);
+  });
   it("a rod end at a hinge checked against its rating with the bearing factor says 'bearing factor', not 'fitting factor'", () => {
     // With rod ends treated as plain bearings, the rating takes 3.33 (14 CFR 23.693) while the hinge's holes take 6.67 (23.657(a)).
     const rodEnd = { ...goodRun().joints[1].hardware.rodEnd!, ratedUltimate: undefined };
