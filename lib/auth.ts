@@ -12,6 +12,7 @@ import { getAccess } from "@/db/access";
 import { checkPassword, checkAgainstNothing } from "./passwords";
 import { clientIp, trustedProxyHops } from "./client-ip";
 import { isDatabaseUnavailable } from "@/db/unavailable";
+import { claimsCache, CLOCK_TOLERANCE_S } from "./session-cache";
 import { DB_UNAVAILABLE_MESSAGE } from "@/shared/unavailable";
 
 const credentials = z.object({ email: z.string().trim().email().max(254), password: z.string().min(1).max(200) });
@@ -102,9 +103,16 @@ function sessionKey(secret: string) {
 /** next-auth's `decode` with the key derived once: decrypts the cookie and checks its expiry (15 s of clock tolerance, as next-auth does). */
 async function decodeSession({ token, secret }: { token?: string; secret: string | Buffer }) {
   if (!token) return null;
-  const { payload } = await jwtDecrypt(token, sessionKey(String(secret)), { clockTolerance: 15 });
+  const key = sessionKey(String(secret));
+  if (decoded.key !== key) decoded = { key, cache: claimsCache() }; // another secret: nothing opened with the old one counts
+  const hit = decoded.cache.get(token);
+  if (hit) return hit;
+  const { payload } = await jwtDecrypt(token, key, { clockTolerance: CLOCK_TOLERANCE_S });
+  decoded.cache.set(token, Object.freeze(payload));
   return payload;
 }
+/** Cookies this process has opened with the current key (lib/session-cache.ts): a signed-in person's every request after the first skips the decryption. */
+let decoded: { key: Uint8Array | null; cache: ReturnType<typeof claimsCache> } = { key: null, cache: claimsCache() };
 
 /**
  * The session cookie's claims: the user's id and the session version the cookie was issued with. Decoded once
