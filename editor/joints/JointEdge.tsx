@@ -34,12 +34,17 @@ export function hardwareChips(h: Joint["hardware"]): Chip[] {
       state: jn?.fitted && jn.tightened ? "solid" : jn?.fitted ? "hollow" : "missing",
       title: jn?.fitted && jn.tightened ? "Jam nut fitted and tightened" : jn?.fitted ? "Jam nut fitted, not confirmed tight" : "No jam nut recorded",
     });
-    const wv = h.engagement?.witnessHoleVerified;
+    // As the engine reads it: with a witness hole the wire check is the check; without one, the recorded length.
+    const hole = h.rodEnd?.hasWitnessHole !== false;
+    const wv = hole && h.engagement?.witnessHoleVerified;
+    const len = h.engagement?.engagedLength;
     chips.push({
       key: "witness",
       glyph: "eye",
-      state: wv ? "solid" : h.engagement?.engagedLength ? "hollow" : "missing",
-      title: wv ? "Thread engagement checked at the witness hole" : h.engagement?.engagedLength ? `Engaged length ${h.engagement.engagedLength} in recorded, witness hole not checked` : "Thread engagement not checked",
+      state: wv || (!hole && len) ? "solid" : len ? "hollow" : "missing",
+      title: wv ? "Thread engagement checked at the witness hole"
+        : !hole ? (len ? `No witness hole: engaged length ${len} in recorded` : "No witness hole and no engaged length recorded")
+        : len ? `Engaged length ${len} in recorded, witness hole not checked` : "Thread engagement not checked",
     });
   }
   if (h.bolt) {
