@@ -38,7 +38,7 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
     if (re.hasWitnessHole !== false) add("witness-hole", "Witness hole blocked: a fine wire does not pass through it (the rod end is screwed in far enough).", SRC.engagement);
     else {
       const d = THREADS_BY_NAME[re.thread]?.majorDiameter;
-      add("engagement-length", `No witness hole: engaged thread length measured and recorded${d ? ` — at least ${fmt(d)} in in steel, ${fmt(2 * d)} in in aluminium` : ""}.`, SRC.engagement);
+      add("engagement-length", `No witness hole: engaged thread length measured and recorded${d ? ` — at least ${fmt(d)} in in steel, ${fmt(2 * d)} in in aluminium (a rule of thumb; the designer's figure where the drawing gives one)` : ""}.`, SRC.engagement);
     }
     // Shear planes not entered: the inspector looks, since a single-shear rod end needs the washer.
     if (hw.shear === "single" || hw.shear === undefined) {
@@ -53,7 +53,7 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
     if (nut.type === "castellatedCotter") add("cotter-pin", `Castellated nut ${turns ? "snugged so the part still turns freely, " : ""}secured with a new cotter pin, legs bent back and trimmed.`, SRC.cotter);
     else if (nut.type === "plainSafetyWire") add("safety-wire", "Nut safety-wired, the wire pulling in the tightening direction.", SRC.nutLocking);
     else if (nut.type === "plain") add("nut-locking", "Plain nut: it is not locked. Replace it with a self-locking nut (where the bolt is clamped and nothing turns on it) or a castellated nut with a new cotter pin, or safety-wire it — not a lock washer, which does not belong in a control run.", SRC.nutLocking);
-    else add("nut-locking", "Self-locking nut: the locking feature grips (it cannot be turned by hand).", SRC.nutLocking);
+    else add("nut-locking", "Self-locking nut: the locking feature grips (it cannot be turned by hand), and the bolt is clamped so nothing turns on it — a self-locking nut is not used on a bolt that turns.", SRC.selfLockingRotation);
     if (hw.bolt) add("thread-protrusion", "At least one full thread of the bolt shows past the nut.", SRC.protrusion);
   }
   if (hw.bolt && nut && nut.type !== "none" && !(nut.type === "castellatedCotter" && turns)) {

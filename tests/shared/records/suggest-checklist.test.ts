@@ -193,6 +193,22 @@ describe("inspection checklist", () => {
     const plain = checklistFor(g).find((i) => i.code === "nut-locking")!;
     expect(plain.text).toContain("not a lock washer"); // AC 43.13-1B: no lock washers on primary or secondary structure
   });
+  it("a self-locking nut's item asks that nothing turns on its bolt (AC 43.13-1B 7-64a); a safety-wired nut's does not", () => {
+    const g = demoPitchLinkage();
+    const self = checklistFor(g).find((i) => i.jointId === "j-stick-fwd" && i.code === "nut-locking")!;
+    expect(self.text).toMatch(/the bolt is clamped so nothing turns on it/);
+    expect(self.source.text).toMatch(/7-64a/);
+    const wired = { ...g, joints: g.joints.map((j) => (j.id === "j-stick-fwd" ? { ...j, hardware: { ...j.hardware, nut: { type: "plainSafetyWire" as const, pattern: "tension" as const } } } : j)) };
+    expect(checklistFor(wired).filter((i) => i.jointId === "j-stick-fwd").map((i) => i.text).join(" ")).not.toMatch(/nothing turns on it/);
+  });
+  it("a rod end without a witness hole is checked by its measured length, k×D given as a rule of thumb (domain.md §4 rule 2)", () => {
+    const g = demoPitchLinkage();
+    const id = g.joints.find((j) => j.hardware.rodEnd)!.id;
+    const noHole = { ...g, joints: g.joints.map((j) => (j.id === id ? { ...j, hardware: { ...j.hardware, rodEnd: { ...j.hardware.rodEnd!, hasWitnessHole: false } } } : j)) };
+    const items = checklistFor(noHole).filter((i) => i.jointId === id);
+    expect(items.map((i) => i.code)).not.toContain("witness-hole");
+    expect(items.find((i) => i.code === "engagement-length")!.text).toMatch(/at least 0\.25 in in steel, 0\.5 in in aluminium \(a rule of thumb/); // 1/4-28 demo rod end
+  });
 });
 
 describe("hardware list", () => {
