@@ -62,11 +62,13 @@ export const BENDING_SRC: SourceTag = { kind: "fromMemory", text: "bolt bending 
  * breakaway torques recalled for fine-thread self-locking nuts; the AC's own table was not at hand]
  */
 export const MIN_PREVAILING_TORQUE: Readonly<Record<string, number>> = {
-  "10-32": 2, // from memory
-  "1/4-28": 3.5, // from memory
-  "5/16-24": 6.5, // from memory
-  "3/8-24": 9.5, // from memory
-  "7/16-20": 14, // from memory
-  "1/2-20": 18, // from memory
+  // Minimum breakaway torque of a used self-locking nut, in·lbf: the locknut table of U.S. Army maintenance manuals
+  // (TM 10-5430-237-12&P table 2, TM 1-1500-204-23-6 table 2-8); first recalled, every figure agrees.
+  "10-32": 2,
+  "1/4-28": 3.5,
+  "5/16-24": 6.5,
+  "3/8-24": 9.5,
+  "7/16-20": 14,
+  "1/2-20": 18,
 };
-export const PREVAILING_SRC: SourceTag = { kind: "fromMemory", text: "AC 43.13-1B 7-64 (re-used self-locking nuts); minimum prevailing (drag) torques recalled from the nut specification's table, not checked against it" };
+export const PREVAILING_SRC: SourceTag = { kind: "published", text: "AC 43.13-1B 7-64 (re-used self-locking nuts); minimum breakaway torques from the locknut table of TM 10-5430-237-12&P (table 2) and TM 1-1500-204-23-6 (table 2-8): a used nut under its minimum is not to be used" };

@@ -17,8 +17,10 @@ export const SRC = {
   rodEndRating: { kind: "published", text: "rod-end makers' engineering notes (rating = lowest of race, eye, shank)" },
   statics: { kind: "fromMemory", text: "statics: F_out = F_in · L_in / L_out" },
   torqueTable: { kind: "published", text: "AC 43.13-1B table 7-1" },
-  torqueCeiling: { kind: "fromMemory", text: "AC 43.13-1B table 7-1, maximum allowable tightening torque column (recalled)" },
-  torqueTableMemory: { kind: "fromMemory", text: "AC 43.13-1B table 7-1 (row recalled, not checked against the text)" },
+  // The maximum-allowable column and the 7/16-20 and 1/2-20 rows were recalled; checked since against the same table
+  // as a U.S. Army technical manual reproduces it (TM 9-6150-228-13&P, table H-1): every figure agrees.
+  torqueCeiling: { kind: "published", text: "AC 43.13-1B table 7-1, maximum allowable tightening torque column (as reproduced in TM 9-6150-228-13&P table H-1)" },
+  torqueTableReproduced: { kind: "published", text: "AC 43.13-1B table 7-1 (row as reproduced in TM 9-6150-228-13&P table H-1)" },
   castleAlign: { kind: "published", text: "AC 43.13-1B 7-40f (castle nut: line the cotter-pin hole up within the torque range plus drag; if it does not line up, change the washer or the nut)" },
   jamNut: { kind: "published", text: "AC 43.13-1B 7-70 (checknut); common practice" },
   engagement: { kind: "commonPractice", text: "thread engagement: witness hole, or 1×D steel / 2×D aluminium" },

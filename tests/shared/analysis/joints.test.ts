@@ -246,14 +246,14 @@ describe("nuts, bolts and torque", () => {
     const tq = (torque: number, dragTorque?: number) => withHardware(goodRun(), "rodA", (h) => ({ ...h, torque, nut: { ...h.nut!, dragTorque } }));
     expect(codes(tq(75, 10), "rodA")).toEqual([]); // 1/4-28 tension 50–70 + 10 drag
     expect(codes(tq(85, 10), "rodA")).toEqual(["torque-high"]);
-    // The maximum allowable takes the drag as the range does: the 100 in·lbf column (from memory) + 10 drag.
+    // The maximum allowable takes the drag as the range does: the 100 in·lbf column (AC 43.13-1B table 7-1 as in TM 9-6150-228-13&P table H-1) + 10 drag.
     expect(codes(tq(105, 10), "rodA")).toEqual(["torque-high"]);
     expect(codes(tq(111, 10), "rodA")).toEqual(["torque-over-maximum"]);
     expect(run(tq(111, 10)).findings.find((f) => f.code === "torque-over-maximum")!.severity).toBe("hazard");
   });
   it("drag below the minimum for a re-used self-locking nut is a caution", () => {
     const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 60, nut: { ...h.nut!, dragTorque: 2, reused: true } }));
-    expect(codes(g, "rodA")).toEqual(["nut-drag-low"]); // 1/4-28 minimum 3.5 in·lbf (from memory)
+    expect(codes(g, "rodA")).toEqual(["nut-drag-low"]); // 1/4-28 minimum breakaway 3.5 in·lbf (TM 10-5430-237-12&P table 2)
     expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 63, nut: { ...h.nut!, dragTorque: 4, reused: true } })), "rodA")).toEqual([]);
   });
   it("aluminium bolts under 1/4 in (AC 43.13-1B 7-41) in a run of any system, flaps too; not an AN4", () => {

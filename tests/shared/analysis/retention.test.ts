@@ -181,7 +181,7 @@ describe("rule 6: torque within AC 43.13-1B table 7-1", () => {
     expect(analyze(valid(g)).findings.find((f) => f.code === "torque-drag-unrecorded")!.message).toMatch(/^Not checked against the nut's drag/);
   });
   it("the maximum allowable takes the measured drag too: a 10-32 shear nut with 12 in·lbf drag at 26 in·lbf is in its 24–27 range, not over 25", () => {
-    // AC 43.13-1B table 7-1: 10-32 shear 12–15 in·lbf; maximum allowable 25 (domain.md, from memory)
+    // AC 43.13-1B table 7-1: 10-32 shear 12–15 in·lbf; maximum allowable 25 (as in TM 9-6150-228-13&P table H-1)
     const clamp10 = (torque: number) => (h: JointHardware) => ({ ...h, nut: { type: "selfLockingMetal" as const, pattern: "shear" as const, dragTorque: 12 }, torque });
     expect(codes(withHardware(goodRun(), "horn", clamp10(26)), "horn")).toEqual([]);
     const over = withHardware(goodRun(), "horn", clamp10(38)); // over 25 + 12

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { MIN_PREVAILING_TORQUE, PREVAILING_SRC } from "@/shared/hardware/plates";
 import { AN_BOLT_TABLE, AN_BOLTS_BY_SIZE, THREAD_TABLE, TORQUE_TABLE, TUBE_MATERIALS_BY_NAME, boltShearStrength, tensileStressArea, torqueRange, STEEL_BOLT_FSU } from "@/shared/hardware";
 import { DEFAULT_SETTINGS, settingsSchema } from "@/shared/analysis";
 
@@ -96,7 +97,26 @@ describe("torque table (AC 43.13-1B table 7-1)", () => {
     expect(torqueRange(thread, "shear")).toMatchObject({ min: smin, max: smax });
     expect(torqueRange(thread, "tension")!.source).toEqual({ kind: "published", text: "AC 43.13-1B table 7-1" });
   });
-  it("tags the rows that are not in domain.md as from memory", () => {
-    for (const r of TORQUE_TABLE.filter((r) => r.thread === "7/16-20" || r.thread === "1/2-20")) expect(r.source.kind).toBe("fromMemory");
+  // The rows not in domain.md and the maximum-allowable column, against the table as TM 9-6150-228-13&P (table H-1)
+  // reproduces it: tension range, shear range, maximum allowable for a tension nut and a shear nut.
+  it.each([
+    ["10-32", 20, 25, 12, 15, 40, 25],
+    ["1/4-28", 50, 70, 30, 40, 100, 60],
+    ["5/16-24", 100, 140, 60, 85, 225, 140],
+    ["3/8-24", 160, 190, 95, 110, 390, 240],
+    ["7/16-20", 450, 500, 270, 300, 840, 500],
+    ["1/2-20", 480, 690, 290, 410, 1100, 660],
+  ] as const)("%s as reproduced: tension %s–%s, shear %s–%s, maximum %s / %s in·lbf", (thread, tmin, tmax, smin, smax, ct, cs) => {
+    const r = TORQUE_TABLE.find((x) => x.thread === thread)!;
+    expect(r).toMatchObject({ tension: { min: tmin, max: tmax }, shear: { min: smin, max: smax }, ceiling: { tension: ct, shear: cs } });
+    expect(r.source.kind).toBe("published");
   });
+});
+
+describe("minimum breakaway torque of a used self-locking nut", () => {
+  // TM 10-5430-237-12&P table 2 and TM 1-1500-204-23-6 table 2-8 (locknut breakaway torque values), in·lbf
+  it.each([["10-32", 2], ["1/4-28", 3.5], ["5/16-24", 6.5], ["3/8-24", 9.5], ["7/16-20", 14], ["1/2-20", 18]] as const)("%s: %s in·lbf", (thread, min) => {
+    expect(MIN_PREVAILING_TORQUE[thread]).toBe(min);
+  });
+  it("names its table as published", () => expect(PREVAILING_SRC).toMatchObject({ kind: "published", text: expect.stringContaining("TM 10-5430-237-12&P") }));
 });
