@@ -26,8 +26,8 @@ export const CABLE_SRC = {
   recalled1x19: { kind: "fromMemory", text: "1×19 nonflexible strand breaking strengths (MIL-DTL-87161), recalled, not checked against the text" },
   terminals: { kind: "fromMemory", text: "terminal efficiency: swaged and nicopress sleeve about 100 % when made right, thimble and bushing about 80 %" },
   smallCable: { kind: "published", text: "14 CFR 23.689(a)(1): no cable under 1/8 in in the primary controls" },
-  // Paragraph recalled, not in domain.md: (f) is the tab-cable exception to (a)(1).
-  tabCable: { kind: "fromMemory", text: "14 CFR 23.689(f): tab control cables may be under 1/8 in in airplanes safely controllable with the tabs in the most adverse positions (recalled)" },
+  // Not in domain.md: (f) is the tab-cable exception to (a)(1) (read in a reprint of the pre-2017 text).
+  tabCable: { kind: "published", text: "14 CFR 23.689(f): tab control cables may be under 1/8 in in airplanes safely controllable with the tabs in the most adverse positions" },
   pulleyFit: { kind: "published", text: "14 CFR 23.689(b): pulleys correspond to the cable, closely fitted guards" },
   fairlead: { kind: "published", text: "14 CFR 23.689(c): a fairlead changes the cable direction by at most 3°" },
   turnbuckleBind: { kind: "published", text: "14 CFR 23.689(e): turnbuckles cannot bind over the range of travel" },

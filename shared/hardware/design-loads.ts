@@ -7,7 +7,7 @@ import type { SourceTag } from "../analysis/types";
 export const DESIGN_LOAD_SRC = {
   pilotForces: { kind: "published", text: "14 CFR 23.397(b) (text before amendment 23-64)" },
   hingeMoments: { kind: "published", text: "14 CFR 23.395" },
-  lever: { kind: "fromMemory", text: "secondary-control lever, crank or wheel: (1 + R)/3 × 50 lbf, 50–150 lbf (14 CFR 25.405 table, recalled)" },
+  lever: { kind: "published", text: "14 CFR 25.405 table: crank, wheel or lever of radius R in, (1 + R)/3 × 50 lbf, 50–150 lbf, within 20° of the control's plane (flap, tab, stabilizer, spoiler and landing-gear controls)" },
   factors: { kind: "published", text: "14 CFR 23.303, 23.625, 23.693" },
 } as const satisfies Record<string, SourceTag>;
 
@@ -27,7 +27,8 @@ export const FACTOR_MINIMUMS = {
 
 /**
  * Force a pilot is taken to put on a secondary-control lever, crank or wheel of radius R in:
- * (1 + R)/3 × 50 lbf, not less than 50 nor more than 150 lbf [from memory: the 14 CFR 25.405 table].
+ * (1 + R)/3 × 50 lbf, not less than 50 nor more than 150 lbf [published: the 14 CFR 25.405 table, for a force within 20° of the
+ * control's plane on flap, tab, stabilizer, spoiler and landing-gear controls].
  */
 export function leverRuleForce(radius: number): number {
   const f = ((1 + radius) / 3) * 50;

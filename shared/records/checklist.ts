@@ -76,7 +76,7 @@ export function jointItems(j: Joint, where: string): ChecklistItem[] {
 }
 
 /**
- * What the controls of a run must do, by its system (SRC.controlSense, from memory): the pilot's motion and
+ * What the controls of a run must do, by its system (SRC.controlSense: the 14 CFR 23.779 table): the pilot's motion and
  * the surface's answer, checked on the aircraft with the controls moved by hand.
  */
 export function controlSenseText(g: LinkageGraph): string {

@@ -69,7 +69,7 @@ describe("geometry and motion", () => {
     expect(await transmissionFindings()).toBe(0);
     expect(chartScripts.length).toBeGreaterThan(0); // loaded with the geometry view
     await expect.poll(() => page.getByTestId("motion-status").textContent()).toBe("Motion checked");
-    // Control sense (14 CFR 23.779 table, from memory): the demo's stick forward takes the elevator down, right for a tail.
+    // Control sense (14 CFR 23.779 table): the demo's stick forward takes the elevator down, right for a tail.
     expect(await page.getByTestId("geometry-sense").textContent()).toMatch(/^Control sense: stick forward takes the trailing edge down — the right way for a tail behind the wing \(tail taken: the geometry does not say\)/);
     const senseFindings = () => page.locator('[data-testid=finding][data-code="control-sense-reversed"]').count();
     expect(await senseFindings()).toBe(0);

@@ -40,7 +40,7 @@ export function senseAxis(system: string, inputKind: string): "pitch" | "roll" |
 }
 
 /**
- * Control sense of a run (SRC.controlSense, from memory: elevator rearward for nose up, aileron right for right
+ * Control sense of a run (SRC.controlSense, the 14 CFR 23.779 table: elevator rearward for nose up, aileron right for right
  * wing down, right pedal forward for nose right): which way the surface's trailing edge goes with the input's
  * forward turn (pitch: stick forward; roll: stick right; yaw: the recorded pedal pushed), read at the ends of the
  * travel the run has, against the way it must go. Pitch: down on a tail behind the wing, up on a canard ahead of

@@ -31,7 +31,7 @@ export type MotionChainSummary = {
   failBack: number | null;
   failForward: number | null;
   /**
-   * Control sense read from the geometry (14 CFR 23.779, from memory), by axis:
+   * Control sense read from the geometry (14 CFR 23.779 table), by axis:
    *  - pitch, from a stick or wheel: which way the surface's trailing edge goes when the input goes forward, and
    *    which way it must go (down on a tail, up on a canard); `surfaceRecorded` false: the geometry does not say
    *    tail or canard and a tail was taken (reports saved before roll and yaw were read carry no `axis`: pitch);

@@ -115,11 +115,11 @@ describe("cable size in a primary system (14 CFR 23.689(a)(1))", () => {
   it("trips for 3/32 in in the rudder", () => expect(codes(small())).toContain("cable-too-small@cableR"));
   it("does not trip for 1/8 in", () => expect(has(rudderCircuit(), "cable-too-small")).toBe(false));
   it("does not trip in a trim system", () => expect(has({ ...small(), system: "trim" }, "cable-too-small")).toBe(false));
-  it("in a trim system a cable under 1/8 in is an advisory: only where the airplane is safely controllable with the tab at its worst (23.689(f), recalled)", () => {
+  it("in a trim system a cable under 1/8 in is an advisory: only where the airplane is safely controllable with the tab at its worst (23.689(f))", () => {
     const f = run({ ...small(), system: "trim" }).findings.find((x) => x.code === "trim-cable-small")!;
     expect(f.severity).toBe("advisory");
     expect(f.message).toMatch(/safely controllable with the tab in its most adverse position/);
-    expect(f.source).toMatchObject({ kind: "fromMemory", text: expect.stringMatching(/^14 CFR 23\.689\(f\)/) }); // the tab exception, not (a)(1)
+    expect(f.source).toMatchObject({ kind: "published", text: expect.stringMatching(/^14 CFR 23\.689\(f\)/) }); // the tab exception, not (a)(1)
     expect(has({ ...rudderCircuit(), system: "trim" }, "trim-cable-small")).toBe(false); // 1/8 in
     expect(has(small(), "trim-cable-small")).toBe(false); // the rudder: the hazard above instead
   });

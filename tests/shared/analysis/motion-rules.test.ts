@@ -67,7 +67,7 @@ describe("surface travel swept vs the surface's own travel on its card (14 CFR 2
   });
 });
 
-describe("control sense of a pitch run (14 CFR 23.779 table, from memory: elevator rearward for nose up)", () => {
+describe("control sense of a pitch run (14 CFR 23.779 table: elevator rearward for nose up)", () => {
   // Both arms up: stick forward (ccw in this view) pulls the horn's tip forward, so the elevator goes up — reversed.
   const reversed = square;
   // Stick arm up, horn arm down: the same push turns the horn the other way, so the elevator goes down — right.
@@ -120,7 +120,7 @@ describe("control sense of a pitch run (14 CFR 23.779 table, from memory: elevat
   });
 });
 
-describe("control sense of a roll run (14 CFR 23.779 table, from memory: stick right for right wing down)", () => {
+describe("control sense of a roll run (14 CFR 23.779 table: stick right for right wing down)", () => {
   // In this view the stick's forward turn is "stick right" (a roll run's meaning of inputForward); surface up: trailing edge up.
   const raises: Bar = square; // stick right raises the trailing edge
   const lowers: Bar = { ...square, beta: -90 }; // stick right lowers it
@@ -158,7 +158,7 @@ describe("control sense of a roll run (14 CFR 23.779 table, from memory: stick r
   });
 });
 
-describe("control sense of a yaw run (14 CFR 23.779 table, from memory: right pedal forward for nose right)", () => {
+describe("control sense of a yaw run (14 CFR 23.779 table: right pedal forward for nose right)", () => {
   // The input's forward turn is the recorded pedal pushed; the surface's "up" turn is its trailing edge going right.
   const toRight: Bar = square; // the pushed pedal takes the trailing edge right
   const toLeft: Bar = { ...square, beta: -90 };

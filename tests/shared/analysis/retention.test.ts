@@ -309,7 +309,7 @@ describe("rule 10: misalignment rating present", () => {
   });
 });
 
-describe("nut present and locked (14 CFR 23.607, beyond the ten rules)", () => {
+describe("nut present and locked (common practice, cf. 14 CFR 23.607; beyond the ten rules)", () => {
   it("trips on a plain nut, a missing nut, an unrecorded nut", () => {
     expect(codes(withHardware(goodRun(), "horn", (h) => ({ ...h, nut: { type: "plain", pattern: "tension" } })), "horn")).toEqual(["nut-not-locked"]);
     expect(codes(withHardware(goodRun(), "horn", (h) => ({ ...h, nut: { type: "none", pattern: "tension" } })), "horn")).toEqual(["nut-missing"]);

@@ -138,14 +138,14 @@ describe("inspection checklist", () => {
     expect(items.find((i) => i.code === "stops-before-limits")!.text).not.toMatch(/before the surface reaches/);
     for (const i of items) expect(i.source.text.length).toBeGreaterThan(0);
   });
-  it("asks for the control sense of every run, in the words of its system (14 CFR 23.779 table, from memory)", () => {
+  it("asks for the control sense of every run, in the words of its system (14 CFR 23.779 table)", () => {
     const g = demoPitchLinkage();
     const sense = (graph: typeof g) => checklistFor(graph).filter((i) => i.code === "control-sense");
     const pitch = sense(g);
     expect(pitch).toHaveLength(1);
     expect(pitch[0].jointId).toBe("");
     expect(pitch[0].text).toMatch(/^Control sense: stick back raises the nose — the elevator's trailing edge goes up \(on a canard, down\)/);
-    expect(pitch[0].source.kind).toBe("fromMemory");
+    expect(pitch[0].source).toMatchObject({ kind: "published", text: expect.stringContaining("aileron right (clockwise) for right wing down") });
     expect(sense({ ...g, system: "roll" })[0].text).toMatch(/stick to the right — right aileron's trailing edge up, left aileron's down/);
     expect(sense({ ...g, system: "yaw" })[0].text).toMatch(/right pedal forward — rudder's trailing edge to the right/);
     expect(sense({ ...g, system: "trim" })[0].text).toMatch(/trailing edge up to trim nose down/);
