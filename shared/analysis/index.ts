@@ -51,7 +51,7 @@ export function factorAssumption(s: AnalysisSettings): string {
 }
 
 export const ASSUMPTIONS: readonly string[] = [
-  "Loads are limit loads from the design pilot force at the grip or pedal (14 CFR 23.397(b)); where a surface's hinge moment is given, 125 % of it sets them instead, between the minimum and maximum pilot forces (14 CFR 23.395). With several surfaces the largest case is applied to the whole run.",
+  "Loads are limit loads from the design pilot force at the grip or pedal (14 CFR 23.397(b), the maximum column for a design weight up to 5,000 lb — a heavier airplane takes more; a wheel's unsymmetrical 100 lb at one handgrip is not applied); where a surface's hinge moment is given, 125 % of it sets them instead, between the minimum and maximum pilot forces (14 CFR 23.395). With several surfaces the largest case is applied to the whole run.",
   "Crank arms are taken perpendicular to their links (F_out = F_in · L_in / L_out); a horn's effective arm is its length × sin(link angle).",
   "A bellcrank pivot carries the vector sum of its two arm loads at the arm angle; idler arms, torque tubes, sticks and pedals are taken with their arms opposite, the largest resultant.",
   "Where a port carries several joints, each is taken to carry the full force; every pivot and hinge joint of a part carries the whole pivot or hinge load.",

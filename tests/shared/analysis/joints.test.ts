@@ -171,6 +171,8 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     expect(own).toContain("4 where a part turns on a plain bearing (23.693), rod ends included");
     expect(own).not.toContain("3.33");
     expect(run(goodRun()).assumptions.every((a) => !a.startsWith("\u0000"))).toBe(true);
+    // 14 CFR 23.397(b): the maximum column is for a design weight of 5,000 lb or less.
+    expect(run(goodRun()).assumptions[0]).toContain("design weight up to 5,000 lb");
   });
   it("a rod end at a hinge checked against its rating with the bearing factor says 'bearing factor', not 'fitting factor'", () => {
     // With rod ends treated as plain bearings, the rating takes 3.33 (14 CFR 23.693) while the hinge's holes take 6.67 (23.657(a)).
