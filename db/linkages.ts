@@ -52,7 +52,8 @@ export async function getLinkage(buildId: string, linkageId: string) {
 export async function createLinkage(
   buildId: string,
   userId: string,
-  l: { name: string; system: ControlSystem; graph?: LinkageGraph; analysis?: Report | null },
+  /** `analysisJson`: the engine's report of `graph` as JSON text (lib/engine/work.ts). */
+  l: { name: string; system: ControlSystem; graph?: LinkageGraph; analysisJson?: string | null; summaryJson?: string | null },
 ) {
   return db.transaction(async (trx) => {
     const [row] = await trx<LinkageRow>("linkages")
@@ -63,7 +64,8 @@ export async function createLinkage(
       linkage_id: row.id,
       revision: 1,
       graph: JSON.stringify(graph),
-      analysis: l.analysis ? JSON.stringify(l.analysis) : null,
+      analysis: l.analysisJson ?? null,
+      summary: l.summaryJson ?? null,
       author_id: userId,
     });
     await trx("builds").where({ id: buildId }).update({ updated_at: trx.fn.now() });
@@ -154,8 +156,8 @@ const SAVE_SQL = `with moved as (
     where id = :linkageId and build_id = :buildId and current_revision = :baseRevision
     returning id, current_revision
   ), saved as (
-    insert into linkage_revisions (linkage_id, revision, graph, analysis, author_id)
-    select id, current_revision, cast(:graph as json), cast(:analysis as json), :userId from moved
+    insert into linkage_revisions (linkage_id, revision, graph, analysis, summary, author_id)
+    select id, current_revision, cast(:graph as json), cast(:analysis as json), cast(:summary as jsonb), :userId from moved
     returning revision, created_at
   ), touched as (
     update builds set updated_at = now() where id = :buildId and exists (select 1 from moved)
@@ -173,13 +175,14 @@ export async function saveRevision(
   buildId: string,
   linkageId: string,
   baseRevision: number,
-  graph: LinkageGraph,
-  /** The engine's report as JSON text (the route sends the same text back: serialised once). */
+  /** The graph as JSON text, checked against the graph schema (lib/engine/work.ts). */
+  graphJson: string,
+  /** The engine's report as JSON text (the route sends the same text back: serialised once) and its summary's. */
   analysisJson: string,
+  summaryJson: string,
   userId: string,
 ): Promise<{ revision: number; createdAt: string; staleSignoffs: StaleSignoff[] } | "stale" | "missing"> {
-  const graphJson = JSON.stringify(graph);
-  const { rows } = await db.raw(SAVE_SQL, { linkageId, buildId, baseRevision, graph: graphJson, analysis: analysisJson, userId }).options({ name: "lw_save_revision" });
+  const { rows } = await db.raw(SAVE_SQL, { linkageId, buildId, baseRevision, graph: graphJson, analysis: analysisJson, summary: summaryJson, userId }).options({ name: "lw_save_revision" });
   const rev = rows[0] as { revision: number; created_at: Date; stale: string } | undefined;
   // Not put in the revision cache: text kept from every save would pass through the old generation of the heap and
   // cost each save about 1 ms of garbage collection (bench:load, 2026-12-04); the first read after a save reads it.
@@ -225,7 +228,8 @@ export async function refreshCurrentAnalyses(buildId: string, run: (graph: Linka
     .where("l.build_id", buildId)
     .select("r.id", "r.graph");
   for (const r of rows as { id: string; graph: LinkageGraph }[]) {
-    await trx("linkage_revisions").where({ id: r.id }).update({ analysis: JSON.stringify(run(r.graph)) });
+    const report = run(r.graph);
+    await trx("linkage_revisions").where({ id: r.id }).update({ analysis: JSON.stringify(report), summary: JSON.stringify(report.summary) });
   }
   return rows.length;
 }

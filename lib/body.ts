@@ -46,14 +46,18 @@ export async function readBodyCapped(req: Request, max: number, tooLarge: () => 
 
 const utf8 = new TextDecoder("utf-8", { fatal: true });
 
-/** The body as text (UTF-8, nothing else), capped. */
-export async function readTextCapped(req: Request, max = MAX_BODY_BYTES): Promise<string> {
-  const bytes = await readBodyCapped(req, max);
+/** A body's bytes as text: UTF-8, nothing else. */
+export function decodeBody(bytes: Uint8Array): string {
   try {
     return utf8.decode(bytes);
   } catch {
     throw new ApiError("invalid_json", "The request body is not valid UTF-8 text.");
   }
+}
+
+/** The body as text (UTF-8, nothing else), capped. */
+export async function readTextCapped(req: Request, max = MAX_BODY_BYTES): Promise<string> {
+  return decodeBody(await readBodyCapped(req, max));
 }
 
 /** Whether brackets nest deeper than `max` anywhere in a JSON text (strings skipped), in one pass. */

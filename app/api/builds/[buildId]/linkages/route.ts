@@ -1,14 +1,14 @@
-import { withBuild, parseBody, json } from "@/lib/http";
-import { linkageCreate } from "@/shared/schemas/linkages";
+import { withBuild, json } from "@/lib/http";
+import { readBodyCapped, MAX_BODY_BYTES } from "@/lib/body";
+import { engineCreate } from "@/lib/engine/threads";
 import { createLinkage, listLinkages } from "@/db/linkages";
-import { analyze } from "@/shared/analysis";
 
 export const GET = withBuild("read", async ({ build }) => json({ linkages: await listLinkages(build.id) }));
 
 /** Create a linkage, empty or from an imported linkage file. */
 export const POST = withBuild("edit", async ({ req, user, build }) => {
-  const body = await parseBody(req, linkageCreate);
-  const analysis = body.graph ? analyze(body.graph, build.analysisSettings) : null;
-  const linkage = await createLinkage(build.id, user.id, { ...body, analysis });
+  // Checked against shared/schemas/linkages.ts linkageCreate, and an imported graph analysed, in an engine thread.
+  const { input, analysisJson, summaryJson } = await engineCreate(await readBodyCapped(req, MAX_BODY_BYTES), build.analysisSettings);
+  const linkage = await createLinkage(build.id, user.id, { ...input, analysisJson, summaryJson });
   return json({ linkage }, 201);
 });

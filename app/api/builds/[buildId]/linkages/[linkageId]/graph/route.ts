@@ -1,9 +1,9 @@
-import { withLinkage, parseBody, jsonText } from "@/lib/http";
+import { withLinkage, jsonText } from "@/lib/http";
+import { readBodyCapped, MAX_BODY_BYTES } from "@/lib/body";
+import { engineSave } from "@/lib/engine/threads";
 import { notFound, staleRevision } from "@/lib/errors";
-import { graphPut } from "@/shared/schemas/graph";
 import { PREFER_MINIMAL, prefersMinimal } from "@/shared/prefer";
 import { getRevision, revisionJson, saveRevision } from "@/db/linkages";
-import { analyze } from "@/shared/analysis";
 import { afterRevisionSaved } from "@/lib/review";
 
 /** The current revision of the graph (or `?revision=N`), with the analysis stored beside it (sent on as stored). */
@@ -12,11 +12,10 @@ export const GET = withLinkage("read", { revision: "requested" }, async ({ revis
 /** Save the next revision, only if `baseRevision` is still the current one (409 otherwise). */
 export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => {
   const { id } = linkage;
-  const { baseRevision, graph } = await parseBody(req, graphPut);
-  // The report is serialised once: stored with the revision and sent back as the same text.
-  const report = analyze(graph, build.analysisSettings);
-  const analysisJson = JSON.stringify(report);
-  const saved = await saveRevision(build.id, id, baseRevision, graph, analysisJson, user.id);
+  // Parsed, checked (shared/schemas/graph.ts graphPut), analysed and serialised in an engine thread: the report's
+  // text is stored with the revision and sent back as the same text.
+  const { baseRevision, graphJson, analysisJson, summaryJson } = await engineSave(await readBodyCapped(req, MAX_BODY_BYTES), build.analysisSettings);
+  const saved = await saveRevision(build.id, id, baseRevision, graphJson, analysisJson, summaryJson, user.id);
   if (saved === "missing") throw notFound("linkage"); // deleted while this request ran
   if (saved === "stale") {
     const current = await getRevision(id);
@@ -25,7 +24,7 @@ export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => 
   await afterRevisionSaved(build, user, linkage, saved.revision, saved.staleSignoffs); // earlier sign-offs are now stale
   const head = `{"revision":${saved.revision},"createdAt":${JSON.stringify(saved.createdAt)}`;
   if (prefersMinimal(req.headers.get("prefer"))) {
-    const res = jsonText(`${head},"summary":${JSON.stringify(report.summary)}}`);
+    const res = jsonText(`${head},"summary":${summaryJson}}`);
     res.headers.set("Preference-Applied", PREFER_MINIMAL);
     return res;
   }
