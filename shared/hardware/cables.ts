@@ -22,7 +22,9 @@ export const CABLE_DIAMETER: Record<CableSize, number> = {
 
 export const CABLE_SRC = {
   table73: { kind: "published", text: "AC 43.13-1B table 7-3 (MIL-W-83420 comp A / comp B)" },
+  // Not found in a text we could read (2026-12-05), but 3/16 in 7×7 = 3,700 lbf agrees with a maker's catalogue.
   recalled7x7: { kind: "fromMemory", text: "7×7 breaking strengths from 1/8 in up (MIL-W-83420), recalled, not checked against the text" },
+  // Not found in a text we could read (2026-12-05), but 1/16 in 1×19 = 500 lbf agrees with a maker's catalogue.
   recalled1x19: { kind: "fromMemory", text: "1×19 nonflexible strand breaking strengths (MIL-DTL-87161), recalled, not checked against the text" },
   terminals: { kind: "fromMemory", text: "terminal efficiency: swaged and nicopress sleeve about 100 % when made right, thimble and bushing about 80 %" },
   smallCable: { kind: "published", text: "14 CFR 23.689(a)(1): no cable under 1/8 in in the primary controls" },
@@ -33,8 +35,10 @@ export const CABLE_SRC = {
   turnbuckleBind: { kind: "published", text: "14 CFR 23.689(e): turnbuckles cannot bind over the range of travel" },
   turnbuckleThreads: { kind: "published", text: "AC 43.13-1B 7-166, 7-179: no more than three threads exposed at either end of the barrel" },
   turnbuckleSafety: { kind: "published", text: "AC 43.13-1B 7-179 to 7-184: every turnbuckle safetied, by wire or a locking clip" },
-  pulleyRatio7x19: { kind: "fromMemory", text: "pulley at least 20 × the cable diameter for 7×19 (cable-endurance ratio cited in builders' references; not checked against the study)" },
-  pulleyRatio7x7: { kind: "fromMemory", text: "wire-rope makers' recommended tread diameters: about 42 × the rope diameter for 7×7" },
+  // Compared on 2026-12-05 with one wire-rope maker's sheave table (a maker's figures, not a regulation): for 7×19 it
+  // gives 24 × the rope diameter as desirable and 18 × as the least; for 7×7, 42 × desirable and 28 × the least.
+  pulleyRatio7x19: { kind: "commonPractice", text: "pulley at least 20 × the cable diameter for 7×19: a builders' convention, between a wire-rope maker's least (18 ×) and desirable (24 ×) sheave diameters" },
+  pulleyRatio7x7: { kind: "commonPractice", text: "pulley at least 42 × the cable diameter for 7×7: a wire-rope maker's desirable sheave diameter (its least is 28 ×)" },
   nonflexible: { kind: "published", text: "MIL-DTL-87161 1.1: 1×19 strand is for uses other than over sheaves" },
   cableFactor: { kind: "published", text: "14 CFR 23.693: special factor 2.0 on joints in cable systems" },
   tensionOnly: { kind: "commonPractice", text: "a cable carries tension only; a reversible control needs a closed circuit" },
@@ -97,8 +101,8 @@ export const MAX_TURNBUCKLE_THREADS = 3;
 
 /** Minimum pulley diameter as a multiple of the cable diameter, by construction (null: not for pulleys). */
 export const PULLEY_RATIO: Record<CableConstruction, { ratio: number; source: SourceTag } | null> = {
-  "7x19": { ratio: 20, source: CABLE_SRC.pulleyRatio7x19 }, // from memory: 20:1 cable-endurance ratio
-  "7x7": { ratio: 42, source: CABLE_SRC.pulleyRatio7x7 }, // from memory: makers' tables, 5-1/4 in for 1/8 in 7×7
+  "7x19": { ratio: 20, source: CABLE_SRC.pulleyRatio7x19 }, // common practice: builders' 20:1, inside a maker's 18–24 ×
+  "7x7": { ratio: 42, source: CABLE_SRC.pulleyRatio7x7 }, // common practice: a maker's desirable 42 ×, 5-1/4 in for 1/8 in 7×7
   "1x19": null, // MIL-DTL-87161 1.1: nonflexible strand is not run over sheaves
 };
 

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { MIN_PREVAILING_TORQUE, PREVAILING_SRC } from "@/shared/hardware/plates";
 import { AN_BOLT_TABLE, AN_BOLTS_BY_SIZE, THREAD_TABLE, TORQUE_TABLE, TUBE_MATERIALS_BY_NAME, boltShearStrength, tensileStressArea, torqueRange, STEEL_BOLT_FSU } from "@/shared/hardware";
 import { DEFAULT_SETTINGS, settingsSchema } from "@/shared/analysis";
+import { breakingStrength, CABLE_SIZES, minPulleyDiameter, PULLEY_RATIO } from "@/shared/hardware/cables";
 
 describe("design pilot forces and factors (domain.md §1)", () => {
   it("defaults to the maximum forces of the published table", () => {
@@ -119,4 +120,35 @@ describe("minimum breakaway torque of a used self-locking nut", () => {
     expect(MIN_PREVAILING_TORQUE[thread]).toBe(min);
   });
   it("names its table as published", () => expect(PREVAILING_SRC).toMatchObject({ kind: "published", text: expect.stringContaining("TM 10-5430-237-12&P") }));
+});
+
+describe("control cable breaking strengths (AC 43.13-1B table 7-3)", () => {
+  const lbf = (size: (typeof CABLE_SIZES)[number], c: "7x19" | "7x7" | "1x19", m: "carbon" | "stainless") => breakingStrength(size, c, m);
+  it("7×19 carbon (MIL-W-83420 comp A), every row of the table", () => {
+    const want = { "1/16": 480, "3/32": 1000, "1/8": 2000, "5/32": 2800, "3/16": 4200, "7/32": 5600, "1/4": 7000 }; // AC 43.13-1B table 7-3
+    for (const size of CABLE_SIZES) expect(lbf(size, "7x19", "carbon"), size).toEqual({ lbf: want[size], source: expect.objectContaining({ kind: "published" }) });
+  });
+  it("7×19 corrosion-resisting (comp B), every row of the table", () => {
+    const want = { "1/16": 480, "3/32": 920, "1/8": 1760, "5/32": 2400, "3/16": 3700, "7/32": 5000, "1/4": 6400 }; // AC 43.13-1B table 7-3
+    for (const size of CABLE_SIZES) expect(lbf(size, "7x19", "stainless"), size).toEqual({ lbf: want[size], source: expect.objectContaining({ kind: "published" }) });
+  });
+  it("7×7: the table's two rows published, the larger recalled and said so, none past 3/16 in", () => {
+    expect(lbf("1/16", "7x7", "carbon")).toEqual({ lbf: 480, source: expect.objectContaining({ kind: "published" }) }); // AC 43.13-1B table 7-3
+    expect(lbf("3/32", "7x7", "stainless")).toEqual({ lbf: 920, source: expect.objectContaining({ kind: "published" }) }); // AC 43.13-1B table 7-3
+    expect(lbf("1/8", "7x7", "carbon")).toEqual({ lbf: 1700, source: expect.objectContaining({ kind: "fromMemory" }) }); // from memory
+    expect(lbf("7/32", "7x7", "carbon")).toBeNull();
+  });
+  it("1×19 strand: recalled only", () => {
+    expect(lbf("1/16", "1x19", "carbon")).toEqual({ lbf: 500, source: expect.objectContaining({ kind: "fromMemory" }) }); // from memory
+    expect(lbf("1/4", "1x19", "carbon")).toBeNull();
+  });
+});
+
+describe("least pulley diameter", () => {
+  it("20 × the cable for 7×19 and 42 × for 7×7, both common practice; none for 1×19 strand", () => {
+    expect(minPulleyDiameter("1/8", "7x19")).toEqual({ inches: 2.5, source: expect.objectContaining({ kind: "commonPractice" }) }); // common practice, no source
+    expect(minPulleyDiameter("1/8", "7x7")).toEqual({ inches: 5.25, source: expect.objectContaining({ kind: "commonPractice" }) }); // common practice, no source
+    expect(PULLEY_RATIO["1x19"]).toBeNull(); // MIL-DTL-87161 1.1: not for use over sheaves
+    expect(minPulleyDiameter("1/8", "1x19")).toBeNull();
+  });
 });
