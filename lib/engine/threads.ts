@@ -70,6 +70,7 @@ function start(p: Pool, slot: number): Thread {
     t.waiting.clear();
   };
   worker.on("error", lost);
+  worker.on("messageerror", lost); // an answer that could not be read: the jobs would otherwise wait for ever
   worker.on("exit", (code) => lost(new Error(`engine thread exited with code ${code}`)));
   p.threads[slot] = t;
   return t;
@@ -99,7 +100,12 @@ function send(job: EngineJob): Promise<EngineAnswer> {
     // Node shares one buffer among small ones only).
     const b = job.body;
     const own = b.byteOffset === 0 && b.byteLength === b.buffer.byteLength;
-    t.worker.postMessage({ id, job }, own ? [b.buffer as ArrayBuffer] : []);
+    try {
+      t.worker.postMessage({ id, job }, own ? [b.buffer as ArrayBuffer] : []);
+    } catch (e) {
+      t.waiting.delete(id);
+      reject(e);
+    }
   });
 }
 
@@ -111,7 +117,7 @@ async function answer<T>(job: EngineJob): Promise<T> {
     console.error(e);
     throw serverError();
   }
-  if (!a.ok) throw new ApiError(a.refusal.code, a.refusal.message, a.refusal.fields);
+  if (!a.ok) throw new ApiError(a.refusal.code, a.refusal.message, a.refusal.fields, a.refusal.extra);
   return a.value as T;
 }
 

@@ -27,7 +27,7 @@ export type SaveOutcome = { baseRevision: number; graphJson: string; analysisJso
 export type CreateOutcome = { input: z.infer<typeof linkageCreate>; analysisJson: string | null; summaryJson: string | null };
 /** The answer's JSON as UTF-8 bytes, `{"report": …}` (handed over, not copied, from an engine thread). */
 export type AnalyzeOutcome = { answer: Uint8Array };
-export type Refusal = { code: ErrorCode; message: string; fields?: Fields };
+export type Refusal = { code: ErrorCode; message: string; fields?: Fields; extra?: Record<string, unknown> };
 
 export type EngineAnswer =
   | { ok: true; value: SaveOutcome | CreateOutcome | AnalyzeOutcome }
@@ -64,7 +64,7 @@ export function runEngineJob(job: EngineJob): EngineAnswer {
   try {
     return { ok: true, value: run(job) };
   } catch (e) {
-    if (e instanceof ApiError) return { ok: false, refusal: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}) } };
+    if (e instanceof ApiError) return { ok: false, refusal: { code: e.code, message: e.message, ...(e.fields ? { fields: e.fields } : {}), ...(e.extra ? { extra: e.extra } : {}) } };
     throw e;
   }
 }
