@@ -63,6 +63,8 @@ describe("the checklist without network", () => {
     await aft.locator('[data-code="retaining-washer"]').getByRole("button", { name: "Add a note" }).click();
     await aft.locator('[data-code="retaining-washer"]').getByRole("textbox").fill("Washer still 0.438 in: order AN970");
     await aft.locator('[data-code="retaining-washer"]').getByRole("button", { name: "Save note" }).click();
+    // Counted once it is written to the device's store: reloading before then would test nothing but the race.
+    await expect.poll(() => page.getByTestId("offline-waiting").textContent(), { timeout: 10_000 }).toMatch(/4 changes waiting/);
     await page.reload(); // what was kept survives a reload without network
     await expect.poll(() => page.getByTestId("item-pending").count(), { timeout: 10_000 }).toBe(3);
     await shot(page, "offline-01-kept");
