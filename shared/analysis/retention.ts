@@ -310,10 +310,12 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
             out.push(finding("torque-drag-unrecorded", "advisory", jointSubject(jt.id),
               `Not checked against the nut's drag: the self-locking nut at joint ${jointLabel(ctx, j)} is torqued to ${fmt(tq, 0)} in·lbf, and the range is ${fmt(range.min, 0)}–${fmt(range.max, 0)} in·lbf for a ${row.thread} ${pat} nut plus its drag torque, which is not recorded. Measure the drag (the torque to turn the nut before it seats) and record it on the joint's card.`, source, torqueNumbers(tq, range.min, range.max)));
           }
-          // A re-used self-locking nut whose drag has fallen below the minimum no longer locks.
+          // A re-used self-locking nut whose drag has fallen below the minimum breakaway torque no longer locks: a
+          // hazard, as a plain nut without a locking device is (nut-not-locked), now that the minimums are read from
+          // published tables (PREVAILING_SRC), not recalled.
           const minDrag = MIN_DRAG[row.thread];
           if (selfLocking && drag !== undefined && minDrag !== undefined && drag < minDrag) {
-            out.push(finding("nut-drag-low", "caution", jointSubject(jt.id),
+            out.push(finding("nut-drag-low", "hazard", jointSubject(jt.id),
               `The self-locking nut at joint ${jointLabel(ctx, j)}${nut.reused ? ", re-used," : ""} has a drag torque of ${fmt(drag, 1)} in·lbf, below the ${fmt(minDrag, 1)} in·lbf minimum for a ${row.thread} nut: its locking feature is worn. Replace the nut.`,
               PREVAILING_SRC, [num("drag torque", drag, "in·lbf"), num("minimum", minDrag, "in·lbf")]));
           }

@@ -253,9 +253,10 @@ describe("nuts, bolts and torque", () => {
     expect(codes(tq(111, 10), "rodA")).toEqual(["torque-over-maximum"]);
     expect(run(tq(111, 10)).findings.find((f) => f.code === "torque-over-maximum")!.severity).toBe("hazard");
   });
-  it("drag below the minimum for a re-used self-locking nut is a caution", () => {
+  it("drag below the minimum for a re-used self-locking nut is a hazard: it no longer locks, as a plain nut does not", () => {
     const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 60, nut: { ...h.nut!, dragTorque: 2, reused: true } }));
     expect(codes(g, "rodA")).toEqual(["nut-drag-low"]); // 1/4-28 minimum breakaway 3.5 in·lbf (TM 10-5430-237-12&P table 2)
+    expect(run(g).findings.find((f) => f.code === "nut-drag-low")!.severity).toBe("hazard");
     expect(codes(withHardware(goodRun(), "rodA", (h) => ({ ...h, torque: 63, nut: { ...h.nut!, dragTorque: 4, reused: true } })), "rodA")).toEqual([]);
   });
   it("aluminium bolts under 1/4 in (AC 43.13-1B 7-41) in a run of any system, flaps too; not an AN4", () => {
