@@ -6,7 +6,8 @@
  *    walked without recursion for characters Postgres cannot store (NUL, a lone UTF-16 surrogate).
  * Nothing here recurses, and each step is linear in the body's size.
  */
-import { ApiError, fieldError } from "./errors";
+import type { z } from "zod";
+import { ApiError, fieldError, invalid } from "./errors";
 
 export const MAX_BODY_BYTES = 5 * 1024 * 1024;
 /** Deeper JSON than this is refused before it is parsed; no request of ours nests past about 8. */
@@ -141,6 +142,13 @@ export function parseJsonText(text: string): unknown {
     if (bad) throw fieldError(bad.path, bad.message);
   }
   return json;
+}
+
+/** JSON text → a value of `schema` (parseJsonText's refusals, then a 400 naming the fields that do not fit). */
+export function parseJsonWith<S extends z.ZodTypeAny>(text: string, schema: S): z.infer<S> {
+  const r = schema.safeParse(parseJsonText(text));
+  if (!r.success) throw invalid(r.error);
+  return r.data;
 }
 
 /**

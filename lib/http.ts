@@ -1,9 +1,9 @@
 import "server-only";
 import { NextResponse, type NextRequest } from "next/server";
 import type { z } from "zod";
-import { ApiError, invalid, notFound, serverError, unauthorized, forbidden, unavailable } from "./errors";
+import { ApiError, notFound, serverError, unauthorized, forbidden, unavailable } from "./errors";
 import { isDatabaseUnavailable } from "@/db/unavailable";
-import { MAX_BODY_BYTES, parseJsonText, readTextCapped } from "./body";
+import { MAX_BODY_BYTES, parseJsonWith, readTextCapped } from "./body";
 import { checkQueryEncoding } from "./url-encoding";
 import { getSessionAccess, getSessionUser, type SessionUser } from "./auth";
 import type { Build } from "@/db/builds";
@@ -20,10 +20,7 @@ export const UUID_RE = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f
  * with a zod schema: 400 with field errors when it does not fit.
  */
 export async function parseBody<S extends z.ZodTypeAny>(req: Request, schema: S): Promise<z.infer<S>> {
-  const json = parseJsonText(await readTextCapped(req, MAX_BODY_BYTES));
-  const r = schema.safeParse(json);
-  if (!r.success) throw invalid(r.error);
-  return r.data;
+  return parseJsonWith(await readTextCapped(req, MAX_BODY_BYTES), schema);
 }
 
 export function parseParams<S extends z.ZodTypeAny>(params: unknown, schema: S): z.infer<S> {

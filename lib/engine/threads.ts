@@ -3,6 +3,7 @@ import os from "node:os";
 import path from "node:path";
 import { Worker } from "node:worker_threads";
 import { ApiError, serverError } from "../errors";
+import { MAX_BODY_BYTES, readBodyCapped } from "../body";
 import type { AnalysisSettings } from "@/shared/analysis/types";
 import { runEngineJob, type AnalyzeOutcome, type CreateOutcome, type EngineAnswer, type EngineJob, type SaveOutcome } from "./work";
 
@@ -36,17 +37,20 @@ type Pool = { threads: (Thread | null)[]; nextId: number; inlineMax: number };
 
 const g = globalThis as unknown as { __lwEngineThreads?: Pool };
 
+/** A whole number 0 or more from the environment, or null when it is unset or not one. */
+function wholeSetting(name: string): number | null {
+  const raw = process.env[name];
+  const n = Number(raw);
+  return raw && Number.isInteger(n) && n >= 0 ? n : null;
+}
+
 export function engineThreadCount(): number {
-  const asked = Number(process.env.LW_ENGINE_THREADS);
-  if (process.env.LW_ENGINE_THREADS && Number.isInteger(asked) && asked >= 0) return Math.min(asked, 16);
-  return Math.max(1, Math.min(4, os.availableParallelism() - 1));
+  const asked = wholeSetting("LW_ENGINE_THREADS");
+  return asked !== null ? Math.min(asked, 16) : Math.max(1, Math.min(4, os.availableParallelism() - 1));
 }
 
 /** Bodies shorter than this (bytes) are done in the request's own thread. */
-export function engineInlineMax(): number {
-  const asked = Number(process.env.LW_ENGINE_INLINE_MAX);
-  return process.env.LW_ENGINE_INLINE_MAX && Number.isInteger(asked) && asked >= 0 ? asked : 256 * 1024;
-}
+export const engineInlineMax = (): number => wholeSetting("LW_ENGINE_INLINE_MAX") ?? 256 * 1024;
 
 function pool(): Pool {
   return (g.__lwEngineThreads ??= { threads: Array.from({ length: engineThreadCount() }, () => null), nextId: 1, inlineMax: engineInlineMax() });
@@ -121,9 +125,12 @@ async function answer<T>(job: EngineJob): Promise<T> {
   return a.value as T;
 }
 
-/** A save's body (PUT graph) checked and analysed: the texts to store and answer. */
-export const engineSave = (body: Uint8Array, settings: Partial<AnalysisSettings> | undefined) => answer<SaveOutcome>({ kind: "save", body, settings });
-/** A new linkage's body checked, and its imported graph analysed. */
-export const engineCreate = (body: Uint8Array, settings: Partial<AnalysisSettings> | undefined) => answer<CreateOutcome>({ kind: "create", body, settings });
-/** POST /api/analyze's body checked and analysed: the answer's bytes. */
-export const engineAnalyze = (body: Uint8Array) => answer<AnalyzeOutcome>({ kind: "analyze", body });
+/** The request's body, capped as every JSON body is (lib/body.ts), as bytes for the engine. */
+const bodyOf = (req: Request) => readBodyCapped(req, MAX_BODY_BYTES);
+
+/** A save's body (PUT graph) read, checked and analysed: the texts to store and answer. */
+export const engineSave = async (req: Request, settings: Partial<AnalysisSettings> | undefined) => answer<SaveOutcome>({ kind: "save", body: await bodyOf(req), settings });
+/** A new linkage's body read and checked, and its imported graph analysed. */
+export const engineCreate = async (req: Request, settings: Partial<AnalysisSettings> | undefined) => answer<CreateOutcome>({ kind: "create", body: await bodyOf(req), settings });
+/** POST /api/analyze's body read, checked and analysed: the answer's bytes. */
+export const engineAnalyze = async (req: Request) => answer<AnalyzeOutcome>({ kind: "analyze", body: await bodyOf(req) });

@@ -6,8 +6,8 @@
  * between the threads. Pure: no database, no request; tested directly.
  */
 import type { z } from "zod";
-import { decodeBody, parseJsonText } from "../body";
-import { ApiError, invalid, type ErrorCode, type Fields } from "../errors";
+import { decodeBody, parseJsonWith } from "../body";
+import { ApiError, type ErrorCode, type Fields } from "../errors";
 import { analyzeInput, graphPut } from "../../shared/schemas/graph";
 import { linkageCreate } from "../../shared/schemas/linkages";
 import { analyze } from "../../shared/analysis";
@@ -33,11 +33,8 @@ export type EngineAnswer =
   | { ok: true; value: SaveOutcome | CreateOutcome | AnalyzeOutcome }
   | { ok: false; refusal: Refusal };
 
-function parse<S extends z.ZodTypeAny>(body: Uint8Array, schema: S): z.infer<S> {
-  const r = schema.safeParse(parseJsonText(decodeBody(body)));
-  if (!r.success) throw invalid(r.error);
-  return r.data;
-}
+const parse = <S extends z.ZodTypeAny>(body: Uint8Array, schema: S): z.infer<S> => parseJsonWith(decodeBody(body), schema);
+const utf8 = new TextEncoder();
 
 function run(job: EngineJob): SaveOutcome | CreateOutcome | AnalyzeOutcome {
   switch (job.kind) {
@@ -54,7 +51,7 @@ function run(job: EngineJob): SaveOutcome | CreateOutcome | AnalyzeOutcome {
     }
     case "analyze": {
       const { graph, settings } = parse(job.body, analyzeInput);
-      return { answer: new TextEncoder().encode(`{"report":${JSON.stringify(analyze(graph, settings))}}`) };
+      return { answer: utf8.encode(`{"report":${JSON.stringify(analyze(graph, settings))}}`) };
     }
   }
 }

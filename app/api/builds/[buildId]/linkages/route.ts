@@ -1,5 +1,4 @@
 import { withBuild, json } from "@/lib/http";
-import { readBodyCapped, MAX_BODY_BYTES } from "@/lib/body";
 import { engineCreate } from "@/lib/engine/threads";
 import { createLinkage, listLinkages } from "@/db/linkages";
 
@@ -8,7 +7,7 @@ export const GET = withBuild("read", async ({ build }) => json({ linkages: await
 /** Create a linkage, empty or from an imported linkage file. */
 export const POST = withBuild("edit", async ({ req, user, build }) => {
   // Checked against shared/schemas/linkages.ts linkageCreate, and an imported graph analysed, in an engine thread.
-  const { input, analysisJson, summaryJson } = await engineCreate(await readBodyCapped(req, MAX_BODY_BYTES), build.analysisSettings);
+  const { input, analysisJson, summaryJson } = await engineCreate(req, build.analysisSettings);
   const linkage = await createLinkage(build.id, user.id, { ...input, analysisJson, summaryJson });
   return json({ linkage }, 201);
 });

@@ -1,5 +1,4 @@
 import { withLinkage, jsonText } from "@/lib/http";
-import { readBodyCapped, MAX_BODY_BYTES } from "@/lib/body";
 import { engineSave } from "@/lib/engine/threads";
 import { notFound, staleRevision } from "@/lib/errors";
 import { PREFER_MINIMAL, prefersMinimal } from "@/shared/prefer";
@@ -14,7 +13,7 @@ export const PUT = withLinkage("edit", async ({ req, user, build, linkage }) => 
   const { id } = linkage;
   // Parsed, checked (shared/schemas/graph.ts graphPut), analysed and serialised in an engine thread: the report's
   // text is stored with the revision and sent back as the same text.
-  const { baseRevision, graphJson, analysisJson, summaryJson } = await engineSave(await readBodyCapped(req, MAX_BODY_BYTES), build.analysisSettings);
+  const { baseRevision, graphJson, analysisJson, summaryJson } = await engineSave(req, build.analysisSettings);
   const saved = await saveRevision(build.id, id, baseRevision, graphJson, analysisJson, summaryJson, user.id);
   if (saved === "missing") throw notFound("linkage"); // deleted while this request ran
   if (saved === "stale") {
