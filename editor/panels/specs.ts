@@ -104,6 +104,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
       { type: "enum", path: "bearing", label: "Turns on", options: [["rodEnd", "rod end"], ["ballBearing", "ball bearing"], ["plainBushing", "plain bushing"], ["clevisPin", "clevis pin"], ["none", "nothing (fixed)"]] },
       { type: "number", path: "torque", label: "Applied torque", q: "torque", hint: "including the nut's drag" },
       { type: "bool", path: "torqueStripe", label: "Torque stripe applied" },
+      { type: "bool", path: "lockWasher", label: "Split or tooth lock washer in the stack", hint: "none belongs in a control run" },
       { type: "text", path: "note", label: "Note", multiline: true },
     ],
   },

@@ -162,7 +162,7 @@ function pulleyFindings(ctx: Ctx, n: number, node: Extract<LinkageNode, { kind: 
         `${name} is rated ${fmt(p.ratedLoad)} lbf but must carry ${fmt(req)} lbf ultimate (${fmt(r)} lbf limit from the cable turned ${fmt(p.wrapAngle, 0)}°, limit × ${fmt(s.ultimateFactor, 2)} × ${fmt(s.cableFactor, 2)} cable-system factor) — margin ${fmtMargin(ms)}. Use a stronger pulley or a smaller wrap.`,
         CABLE_SRC.cableFactor, [num("required ultimate", req, "lbf"), num("rating", p.ratedLoad, "lbf"), num("margin", ms, "")]));
   } else if (r > 0 && p.ratedLoad === undefined) {
-    out.push(finding("pulley-rating-missing", "advisory", subj,
+    out.push(finding("pulley-rating-missing", "caution", subj,
       `${name}: its load is not checked — it carries ${fmt(r)} lbf limit; enter the maker's rated load.`, CABLE_SRC.pulleyLoad, [num("limit load", r, "lbf")]));
   }
 }

@@ -51,8 +51,9 @@ export function cableResults(ctx: Ctx, cc: CableCtx, loads: Loads, s: AnalysisSe
         r.breakingStrength = mbs.lbf;
         r.allowable = mbs.lbf * eff;
         const m = marginOfSafety(r.allowable, req);
-        // A circuit without its rigging tension: only a failure at the force alone is certain.
-        r.margin = loads.nodeFrom[n] || (r.inCircuit && r.pretension === null && m >= 0) ? null : m;
+        // A circuit without its rigging tension: only a failure at the force alone is certain. A cable no input
+        // drives, or one with no tension, has no known load: not checked (null), never the capped margin of a zero load.
+        r.margin = !r.driven || !(t > 0) || loads.nodeFrom[n] || (r.inCircuit && r.pretension === null && m >= 0) ? null : m;
       }
     }
     out.push(r);
@@ -118,7 +119,7 @@ export function cableFindings(ctx: Ctx, cc: CableCtx, loads: Loads, results: Cab
         CABLE_SRC.table73));
     else if (r.margin !== null && r.margin < 0)
       out.push(finding("cable-strength-weak", "hazard", subj,
-        `${name} is too weak: it must carry ${fmt(r.ultimateRequired)} lbf ultimate (${fmt(r.limitTension)} lbf limit tension, ${factors}) but its breaking strength of ${fmt(r.breakingStrength)} lbf × ${fmt(r.terminalEfficiency! * 100, 0)} % for the ${TERMINAL_NAMES[worstTerminal(p)]} is ${fmt(r.allowable!)} lbf — margin ${fmtMargin(r.margin)}. Use a larger cable, better terminals or a longer arm at the input.`,
+        `${name} is too weak: it must carry ${fmt(r.ultimateRequired)} lbf ultimate (${fmt(r.limitTension)} lbf limit tension, ${factors}) but its breaking strength of ${fmt(r.breakingStrength)} lbf × ${fmt(r.terminalEfficiency! * 100, 0)} % for the ${TERMINAL_NAMES[worstTerminal(p)]} is ${fmt(r.allowable!)} lbf — margin ${fmtMargin(r.margin)}. Use a larger cable or stronger terminals; change the arms at the input or the surface only as the designer allows, since they set the gearing and the travel.`,
         breakingStrength(p.size, p.construction, p.material)!.source,
         [num("required ultimate", r.ultimateRequired, "lbf"), num("allowable", r.allowable!, "lbf"), num("margin", r.margin, "")]));
     else if (r.inCircuit && r.pretension === null && r.limitTension > 0 && !loads.nodeFrom[n])

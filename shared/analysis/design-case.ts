@@ -4,13 +4,15 @@
  *   is always checked too; every load keeps the larger of the two.
  * - Hinge moments: where the designer gives a surface's hinge moment, the control system's limit loads are
  *   125 % of it (14 CFR 23.395), not below the minimum pilot forces and need not exceed the maximum ones of
- *   14 CFR 23.397(b). The run's loads scale linearly with the pilot force, so the case is a factor on them.
+ *   14 CFR 23.397(b). The run's loads scale linearly with the pilot force, so the case is a factor on them —
+ *   except in a rigged cable circuit, whose pulling cable carries max(F, P + F/2) (P the rigging tension): there
+ *   the cable system's loads are made again from the scaled pilot force (riggedCorrection).
  * - Settings below the published forces or factors give a caution that goes with every result.
  */
 import { DESIGN_LOAD_SRC, FACTOR_MINIMUMS, PILOT_FORCE_TABLE, SRC } from "../hardware";
 import type { AnalysisSettings, DesignCase, Finding, SurfaceResult } from "./types";
 import { nodeLabel, type Ctx } from "./context";
-import type { Loads } from "./loads";
+import { propagate, type Loads } from "./loads";
 import { finding, fmt, linkageSubject, nodeSubject } from "./format";
 import { WHEEL_PITCH_DESIGN, WHEEL_PITCH_MIN, WHEEL_ROLL_DESIGN_PER_IN, WHEEL_ROLL_MIN_PER_IN } from "./cables";
 import { CABLE_JOINT_FACTOR } from "./joints/factors";
@@ -94,7 +96,12 @@ export function hingeMomentCase(ctx: Ctx, loads: Loads, surfaces: SurfaceResult[
   if (!any || scale <= 0) scale = 1;
   if (scale < 1) {
     const k = scale;
+    const fix = riggedCorrection(ctx, loads, s, k); // before the loads are scaled: it is made from the full-force case
     for (const a of [loads.pushrodAxial, loads.jointRadial, loads.surfaceMoment]) for (let i = 0; i < a.length; i++) a[i] *= k;
+    if (fix) {
+      for (let i = 0; i < fix.axial.length; i++) loads.pushrodAxial[i] += fix.axial[i];
+      for (let i = 0; i < fix.joint.length; i++) loads.jointRadial[i] += fix.joint[i];
+    }
     for (const sr of surfaces) sr.hingeMomentLimit *= k;
     for (const inp of loads.inputs) { inp.gripForce *= k; inp.linkForce *= k; }
   } else governing = "maximumPilotForce";
@@ -106,6 +113,36 @@ export function hingeMomentCase(ctx: Ctx, loads: Loads, surfaces: SurfaceResult[
         ? `125 % of the given hinge moment needs less than the minimum pilot force, so the minimum governs: loads are ${fmt(scale * 100, 0)} % of the maximum-force case (14 CFR 23.395, 23.397(b)).`
         : `125 % of the given hinge moment governs: loads are ${fmt(scale * 100, 0)} % of the maximum-force case (14 CFR 23.395).`;
   return { governing, scale, text: singlePilotChecked ? `${text} Dual controls: the single-pilot full-force case was checked too, and the larger load kept.` : text, singlePilotChecked };
+}
+
+/**
+ * What a factor k on the loads misses in a rigged cable circuit. The pulling cable of a circuit rigged at P carries
+ * max(F, P + F/2) (shared/hardware/cables.ts), which is not k times itself when F is scaled; its joints, pulleys,
+ * fairleads and their mountings carry that tension. The loads are made again with k on every input's force (the
+ * dual-control and single-pilot cases as in the run, 14 CFR 23.399) and the difference from k × the full-force
+ * loads is returned, per node (axial) and per joint: 0 on every member whose load is linear in the force, so
+ * the swept runs' loads (pushrods, cranks, hinges; never cables) keep the factor alone. Null when no driven
+ * tension member has a rigging tension (then every load is linear in the force).
+ */
+function riggedCorrection(ctx: Ctx, loads: Loads, s: AnalysisSettings, k: number): { axial: Float64Array; joint: Float64Array } | null {
+  const p = loads.pretension;
+  if (!p || !p.some((v, n) => v > 0 && loads.driven[n] === 1)) return null; // NaN (none recorded) is not > 0
+  const at = (f: number) => {
+    const l = propagate(ctx, s, p, f);
+    if (s.dualControls) maxLoads(l, propagate(ctx, { ...s, dualControls: false }, p, f));
+    return l;
+  };
+  const scaled = at(k), full = at(1);
+  const diff = (a: Float64Array, b: Float64Array) => {
+    const d = new Float64Array(a.length);
+    for (let i = 0; i < a.length; i++) {
+      const v = a[i] - k * b[i];
+      // Rounding in a load that is linear in the force is not a correction (relative 1e-9, common practice, no source).
+      if (Math.abs(v) > 1e-9 * Math.max(1, a[i])) d[i] = v;
+    }
+    return d;
+  };
+  return { axial: diff(scaled.pushrodAxial, full.pushrodAxial), joint: diff(scaled.jointRadial, full.jointRadial) };
 }
 
 /** Settings below the published forces or factors: one caution with every result. */

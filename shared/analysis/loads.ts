@@ -46,6 +46,8 @@ export type Loads = {
   jointFrom: Int32Array;
   nodeFrom: Int32Array;
   inputs: InputLoad[];
+  /** The per-node rigging tensions the loads were made with (see propagate), so a case at another force can make them again. */
+  pretension?: Float64Array;
 };
 
 export const DUAL_CONTROL_SHARE = 0.75; // 14 CFR 23.399: each pilot at 75 % (the two acting together; from memory for the paragraph)
@@ -78,8 +80,10 @@ function arms(n: LinkageNode): [number, number] {
 /**
  * `pretension`, per node: the rigging tension of the cable circuit a tension member is in (NaN when unknown,
  * then the pulling cable is taken at the force alone). From shared/analysis/cable-circuits.ts.
+ * `forceScale`: a factor on every input's design force (the hinge-moment case of 14 CFR 23.395, design-case.ts);
+ * it is put on the pilot's force, so a cable's tension max(F, P + F/2) is made from the scaled force, not scaled after.
  */
-export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Float64Array): Loads {
+export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Float64Array, forceScale = 1): Loads {
   const { nodes, joints } = ctx;
   const N = nodes.length;
   const J = joints.length;
@@ -155,7 +159,7 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
     const inp = nodes[i];
     if (ctx.nodeRole[i] !== "input") continue;
     stamp++;
-    const fg = designForce(inp, ctx.graph, settings);
+    const fg = designForce(inp, ctx.graph, settings) * forceScale;
     const [grip, attach] = arms(inp);
     const fp = fg * ratio(grip, attach);
     let reaches = false;
@@ -272,7 +276,7 @@ export function propagate(ctx: Ctx, settings: AnalysisSettings, pretension?: Flo
     touchedJ.length = 0;
     touchedN.length = 0;
   }
-  return { pushrodAxial, jointRadial, surfaceMoment, driven, inputs, jointFrom, nodeFrom };
+  return { pushrodAxial, jointRadial, surfaceMoment, driven, inputs, jointFrom, nodeFrom, pretension };
 
   function forwardSamePort(via: number, n: number, port: string, f: number, t: number) {
     const list = jointsAt(ctx, n, port);

@@ -15,7 +15,7 @@ export function summarize(findings: Finding[], pushrods: PushrodResult[], joints
   for (const p of pushrods) {
     if (p.limitAxial <= 0) continue;
     consider(p.marginCompression, "node", p.nodeId, `compression, ${p.columnMode === "euler" ? "Euler" : "Johnson"} column`);
-    consider(p.marginTension, "node", p.nodeId, "tension");
+    consider(p.marginTension, "node", p.nodeId, "tension, tube section (end fittings not checked)");
   }
   for (const j of joints) {
     if (j.radialLimit <= 0) continue;

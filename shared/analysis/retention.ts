@@ -186,6 +186,12 @@ export function retentionFindings(ctx: Ctx, out: Finding[]) {
       }
     }
 
+    // Rule 4 (domain.md §4): no lock washers in a control run.
+    if (hw.lockWasher === true)
+      out.push(finding("lock-washer-in-run", "hazard", jointSubject(jt.id),
+        `Joint ${jointLabel(ctx, j)} has a split or tooth lock washer in its stack. Lock washers are not used where a fastener's failure could endanger the aircraft, on primary or secondary structure: remove it, fit a plain washer, and lock the nut by a self-locking nut, a castellated nut with a new cotter pin, or safety wire.`,
+        SRC.lockWashers));
+
     const bolt = hw.bolt;
     if (!bolt) continue;
     const d = boltDiameter(bolt);

@@ -133,7 +133,7 @@ export type CableResult = {
   terminalEfficiency: number | null;
   /** Breaking strength × terminal efficiency, lbf. */
   allowable: number | null;
-  /** Null when not checked (no table row, or a circuit without a rigging tension). */
+  /** Null when not checked: no table row, a circuit without a rigging tension, or a cable not driven or with no tension. */
   margin: number | null;
   driven: boolean;
 };
@@ -177,13 +177,13 @@ export const settingsSchema = z.object({
       rollStick: z.number().positive().default(67), // 14 CFR 23.397(b)
       yawPedal: z.number().positive().default(200), // 14 CFR 23.397(b)
       /** Used for flap, trim and other inputs. */
-      other: z.number().positive().default(100),
+      other: z.number().positive().default(100), // common practice, no source: 23.397(b) gives no force for flap, trim or other inputs; enter the designer's
       /** Wheel, pitch (symmetric), lbf: 200 maximum, 100 minimum. */
       pitchWheel: z.number().positive().default(200), // 14 CFR 23.397(b); below 100 is a finding (shared/analysis/cables.ts)
       /** Wheel, roll: the couple is this × the wheel diameter D, in·lbf per in: 50·D maximum, 40·D minimum. */
       rollWheel: z.number().positive().default(50), // 14 CFR 23.397(b); below 40 is a finding (shared/analysis/cables.ts)
     })
-    .default({ pitchStick: 167, rollStick: 67, yawPedal: 200, other: 100, pitchWheel: 200, rollWheel: 50 }),
+    .default({ pitchStick: 167, rollStick: 67, yawPedal: 200, other: 100, pitchWheel: 200, rollWheel: 50 }), // the same values, sources above
   ultimateFactor: z.number().min(1).max(5).default(1.5), // 14 CFR 23.303
   fittingFactor: z.number().min(1).max(5).default(1.15), // 14 CFR 23.625
   /** Special factor on plain bearings in push-pull joints with angular motion. */

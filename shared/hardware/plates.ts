@@ -58,8 +58,8 @@ export const ALUMINIUM_BOLT_FTU = 62_000;
 export const BENDING_SRC: SourceTag = { kind: "fromMemory", text: "bolt bending M ≤ Ftu · k · πD³/32, round-bar shape factor k = 1.5 (1.5–1.7)" };
 
 /**
- * Minimum prevailing (drag) torque of a re-used self-locking nut, in·lbf. [from memory: the minimum
- * breakaway torques recalled for fine-thread self-locking nuts; the AC's own table was not at hand]
+ * Minimum prevailing (drag) torque of a re-used self-locking nut, in·lbf: first recalled, then read from the
+ * published locknut tables named below (PREVAILING_SRC); every figure agreed.
  */
 export const MIN_PREVAILING_TORQUE: Readonly<Record<string, number>> = {
   // Minimum breakaway torque of a used self-locking nut, in·lbf: the locknut table of U.S. Army maintenance manuals

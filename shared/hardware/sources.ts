@@ -33,6 +33,7 @@ export const SRC = {
   grip: { kind: "fromMemory", text: "grip length matches the stack (no threads in bearing)" },
   cotter: { kind: "published", text: "AC 43.13-1B 7-38" },
   minBolt: { kind: "published", text: "AC 43.13-1B 7-41" },
+  lockWashers: { kind: "published", text: "AC 43.13-1B chapter 7, lock washers: not with fasteners to primary or secondary structure, nor where failure might endanger the aircraft (paragraph number from memory)" },
   nutLocking: { kind: "commonPractice", text: "every nut in a control run is locked (self-locking, cotter-pinned or safety-wired); cf. 14 CFR 23.607 on removable fasteners, its text not read here" },
   handedEnds: { kind: "commonPractice", text: "one RH and one LH end (cf. AC 43.13-1B 7-165, turnbuckles)" },
   misalignment: { kind: "fromMemory", text: "rod-end rated misalignment, typically ±6° to ±14°" },

@@ -107,6 +107,8 @@ export const hardwareSchema = z.object({
   nut: nutSchema.optional(),
   washerUnderHead: washer.optional(),
   washerUnderNut: washer.optional(),
+  /** A split or tooth lock washer in the stack (not used in a control run: shared/analysis/retention.ts). */
+  lockWasher: z.boolean().optional(),
   /** Bolt clamped tight on the inner race, or set loose so it can turn: no default — unentered at a rod end, the check says so. */
   fit: z.enum(["clamped", "freeToRotate"]).optional(),
   /** One shear plane or two: no default — unentered, the fastener's shear reads "not checked". */

@@ -57,9 +57,17 @@ const BOTH_SIDES: readonly Side[] = ["from", "to"], FROM_SIDE: readonly Side[] =
 
 /** Which sides of the joint are members with a bolt hole (not the rod end's eye, not a ball bearing's housing). */
 function holeSides(c: CheckInput, hw: JointHardware): readonly Side[] {
-  if (c.role === "stop" || !(hw.bolt || hw.clevisPin)) return NO_SIDE;
+  // Stops too: a stop bolt takes the system's load at its contact (14 CFR 23.675), in the holes it passes through.
+  if (!(hw.bolt || hw.clevisPin)) return NO_SIDE;
   const from = hasHole(c, hw, "from"), to = hasHole(c, hw, "to");
   return from ? (to ? BOTH_SIDES : FROM_SIDE) : to ? TO_SIDE : NO_SIDE;
+}
+
+/** A joint where a cable meets a part (a pulley's groove, a fairlead, a terminal in a turnbuckle): no bolt there. */
+function cableContact({ ctx, j }: CheckInput): boolean {
+  const f = ctx.jFrom[j], t = ctx.jTo[j];
+  const k = (n: number) => (n >= 0 ? ctx.nodes[n].kind : null);
+  return k(f) === "cable" || k(t) === "cable" || k(f) === "fairlead" || k(t) === "fairlead";
 }
 
 function hasHole({ ctx, j }: CheckInput, hw: JointHardware, side: Side): boolean {
@@ -167,6 +175,8 @@ function addCheck(a: Acc, id: CheckId, label: string, factor: number, allowable:
 const BOLT_MATERIAL_TODO = "enter the bolt's material (steel or aluminium)";
 /** The to-do of a bolt with no shank diameter (a custom bolt): joints/findings.ts words it as its own finding. */
 export const BOLT_DIAMETER_TODO = "enter the bolt's shank diameter";
+/** The to-do of a joint that must turn on or be held by a fastener and has none recorded (joints/findings.ts). */
+export const NO_FASTENER_TODO = "record the bolt or clevis pin that holds this joint";
 
 export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardware["bolt"]>) => number | null): JointCheck[] {
   const { ctx, j, settings, special } = c;
@@ -181,7 +191,9 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
   // Rod-end rating (rated ultimate radial static load).
   const re = hw.rodEnd;
   if (re) {
-    const f = settings.bearingFactorOnRodEnds ? Math.max(ff, settings.bearingFactor) : ff;
+    // With the setting that treats rod ends as plain bearings, the bearing factor (14 CFR 23.693), and at a hinge the
+    // hinge factor the joint already carries (6.67, 14 CFR 23.657(a): a hinge that is not a ball or roller bearing).
+    const f = settings.bearingFactorOnRodEnds ? Math.max(ff, settings.bearingFactor, c.role === "hinge" ? special.value : 0) : ff;
     addCheck(acc, "rodEndRating", LABEL.rodEndRating, f, re.ratedUltimate ?? null, re.ratedUltimate === undefined ? "enter the rod end's rated ultimate radial load from its maker" : null, "the maker's rated ultimate radial load", RATING_SRC);
   }
 
@@ -204,6 +216,10 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
       mat === null ? `Fsu of the bolt's material × πD²/4 × ${planes ?? "?"}`
         : `${alu ? "aluminium" : "steel"} ${Math.round((alu ? FSU_ALU : FSU_STEEL) / 1000)} ksi${hw.bolt.material === undefined ? " (an AN bolt, taken as steel: material not recorded)" : ""} × πD²/4 × ${planes ?? "?"}`,
       alu ? SRC.aluminiumBolts : SRC.anBolts);
+  } else if (re || ((c.role === "link" || c.role === "pivot" || c.role === "hinge") && !cableContact(c))) {
+    // A rod end, or parts that turn on each other, with no bolt or pin recorded: the fastener's checks are listed
+    // as not made (joints/findings.ts words it as its own finding), never left out as if there were none to make.
+    addCheck(acc, "boltShear", "bolt or pin shear", ff, null, NO_FASTENER_TODO, "no bolt or pin recorded", SRC.anBolts);
   }
 
   const sides = holeSides(c, hw);
@@ -211,7 +227,8 @@ export function jointChecks(c: CheckInput, boltDia: (b: NonNullable<JointHardwar
 
   // Bolt bending: single shear, or double shear with spacers (gaps) in the stack.
   const gaps = hw.spacers;
-  if ((hw.bolt || pin) && (hw.shear === "single" || (gaps !== undefined && gaps > 0))) {
+  // Only a recorded shear case picks a formula: unrecorded, single shear's bending (the larger) is not assumed away.
+  if ((hw.bolt || pin) && (hw.shear === "single" || (hw.shear === "double" && gaps !== undefined && gaps > 0))) {
     const members = sides.map((sd) => (sd === "from" ? mFrom : mTo));
     const ftu = pin ? (pin.shearStrength !== undefined ? pin.shearStrength / 0.6 : null) // Fsu ≈ 0.6 Ftu, from memory
       : boltMaterialOf(hw.bolt!) === null ? null : boltMaterialOf(hw.bolt!) === "aluminium" ? FTU_ALU : FTU_STEEL;

@@ -8,7 +8,7 @@ import type { AnalysisSettings, CheckId, Finding, JointCheck, JointResult } from
 import { type Ctx, jointLabel, nodeLabel } from "../context";
 import { finding, fmt, fmtMargin, jointSubject, num } from "../format";
 import { boltDiameter, UNDRIVEN_TODO } from "../allowables";
-import { BOLT_DIAMETER_TODO, fastenerDiameter } from "./checks";
+import { BOLT_DIAMETER_TODO, NO_FASTENER_TODO, fastenerDiameter } from "./checks";
 import { factorTable, movingRole } from "./factors";
 
 const jl = jointLabel, fastenerDia = fastenerDiameter, boltDia = boltDiameter, MIN_ED = MIN_EDGE_RATIO;
@@ -42,7 +42,7 @@ const REMEDY: Record<CheckId, string> = {
 const NO_CHECKS: readonly JointCheck[] = [];
 const SIDES = ["from", "to"] as const;
 
-/** The factor a check used, by name: the joint's own special factor, or a rod end's bearing factor at a hinge (3.33, below the hinge's 6.67), or the fitting factor. */
+/** The factor a check used, by name: the joint's own special factor (a rod end's rating at a hinge takes the hinge's 6.67), the bearing factor, or the fitting factor. */
 function factorWords(c: JointCheck, r: JointResult, s: AnalysisSettings): string {
   const t = factorTable(s);
   const which = c.factor === s.fittingFactor ? t.fitting.name : c.factor === r.factor.value ? r.factor.name : c.factor === t.bearing.value ? t.bearing.name : "special factor";
@@ -84,6 +84,10 @@ export function jointFindings(ctx: Ctx, results: JointResult[], s: AnalysisSetti
       else if (own && c.id === "boltShear" && c.todo === BOLT_DIAMETER_TODO)
         out.push(finding("bolt-diameter-unknown", "caution", subj,
           `Not checked: the custom bolt at joint ${jl(ctx, j)} has no diameter recorded, so its shear, bending and the bearing at its holes cannot be checked. Enter the shank diameter.`, SRC.anBolts));
+      else if (c.id === "boltShear" && c.todo?.endsWith(NO_FASTENER_TODO))
+        out.push(finding("fastener-not-recorded", "caution", subj,
+          `Not checked: no bolt or clevis pin is recorded at joint ${jl(ctx, j)}, so its shear and bending, the bearing at the holes, and its nut, safetying and retention are not checked. Record the bolt (or pin), its washers and nut, and how the nut is locked.`,
+          SRC.anBolts));
       else rest.push(c);
     }
     // A joint nothing drives is told once per part (part-not-driven), not again per joint; its card says "not checked".

@@ -1,5 +1,7 @@
 import { describe, expect, it } from "vitest";
-import { columnAllowable, eulerLoad, johnsonLoad, marginOfSafety, transitionSlenderness, tubeSection, MARGIN_CAP } from "@/shared/analysis";
+import { analyze, columnAllowable, eulerLoad, johnsonLoad, marginOfSafety, transitionSlenderness, tubeSection, MARGIN_CAP } from "@/shared/analysis";
+import type { LinkageGraph } from "@/shared/linkage/schema";
+import { goodRun, valid } from "./fixtures";
 import { fromSI, toSI } from "@/shared/units";
 
 describe("Euler column: the textbook case (domain.md §3)", () => {
@@ -67,5 +69,23 @@ describe("margin of safety", () => {
   it("caps an unloaded part's margin instead of returning Infinity", () => {
     expect(marginOfSafety(1000, 0)).toBe(MARGIN_CAP);
     expect(Number.isFinite(marginOfSafety(1e30, 1e-30))).toBe(true);
+  });
+});
+
+describe("pushrod-wall-too-thick: a wall of half the diameter or more leaves no bore", () => {
+  const withWall = (wall: number): LinkageGraph => {
+    const g = goodRun();
+    const rod = g.nodes.find((n) => n.id === "rod")!;
+    rod.props = { ...rod.props, wall } as never;
+    return g;
+  };
+  const codes = (g: LinkageGraph) => analyze(valid(g)).findings.map((f) => `${f.code}@${f.subject.id}`);
+  it("trips for a 0.5 in wall on the fixture's 1 in tube, and the check takes it as a solid rod", () => {
+    expect(codes(withWall(0.5))).toContain("pushrod-wall-too-thick@rod");
+    expect(tubeSection(1, 0.5)).toMatchObject({ solid: true, insideDiameter: 0 });
+  });
+  it("does not trip for the fixture's 0.049 in wall, nor for 0.499 in (a bore of 0.002 in is left)", () => {
+    expect(codes(goodRun()).filter((c) => c.startsWith("pushrod-wall-too-thick"))).toEqual([]);
+    expect(codes(withWall(0.499)).filter((c) => c.startsWith("pushrod-wall-too-thick"))).toEqual([]);
   });
 });

@@ -133,11 +133,37 @@ describe("cable strength × terminal efficiency against limit × 1.5 × 2.0", ()
     // The words say the 2.0 is the check's own choice on the cable: 14 CFR 23.693 sets it for the joints.
     expect(run(g).findings.find((x) => x.code === "cable-strength-weak")!.message).toContain("which 14 CFR 23.693 sets for the joints and this check puts on the cable as well");
   });
+  it("advises a larger cable or stronger terminals, and arm changes only as the designer allows (they set gearing and travel)", () => {
+    const msg = run(withProps(rudderCircuit(), "cableL", { terminalB: "thimble" })).findings.find((x) => x.code === "cable-strength-weak")!.message;
+    expect(msg).toContain("Use a larger cable or stronger terminals");
+    expect(msg).toContain("only as the designer allows");
+    expect(msg).not.toContain("longer arm");
+    // The facts stay: required ultimate, limit tension, strength × terminal efficiency, allowable, margin.
+    expect(msg).toMatch(/1,800 lbf ultimate \(600 lbf limit tension.*2,000 lbf × 80 % for the .* is 1,600 lbf — margin −0\.11/);
+  });
   it("trips in stainless: 1,760 lbf (AC 43.13-1B table 7-3, comp B) < 1,800", () => {
     expect(codes(withProps(rudderCircuit(), "cableL", { material: "stainless" }))).toContain("cable-strength-weak@cableL");
   });
   it("does not trip in 5/32 in stainless: 2,400 lbf (table 7-3)", () => {
     expect(has(withProps(rudderCircuit(), "cableL", { material: "stainless", size: "5/32" }), "cable-strength-weak")).toBe(false);
+  });
+  it("a cable no input drives is not checked: no margin (never the capped margin of a zero load) and no lowest margin", () => {
+    // The right cable with its pedal and turnbuckle joints removed: it hangs in its fairlead only, no force reaches it.
+    const g = rudderCircuit();
+    g.joints = g.joints.filter((x) => x.id !== "pedR" && x.id !== "tbRa");
+    const r = run(g);
+    const cr = r.cables.find((c) => c.nodeId === "cableR")!;
+    expect(cr.driven).toBe(false);
+    expect(cr.limitTension).toBe(0);
+    expect(cr.margin).toBeNull();
+    expect(r.summary.lowestMargin?.subject.id).not.toBe("cableR");
+  });
+  it("a driven cable in the same run keeps its computed margin", () => {
+    const g = rudderCircuit();
+    g.joints = g.joints.filter((x) => x.id !== "pedR" && x.id !== "tbRa");
+    const cl = run(g).cables.find((c) => c.nodeId === "cableL")!;
+    expect(cl.driven).toBe(true);
+    expect(cl.margin).toBeCloseTo(2000 / 1800 - 1, 9); // 2,000 lbf (AC 43.13-1B table 7-3) / (600 × 1.5 × 2.0) − 1
   });
   it("is not checked (never a margin) in a circuit with no rigging tension recorded", () => {
     const g = withProps(rudderCircuit(), "cableL", { riggingTension: undefined });
@@ -256,7 +282,8 @@ describe("what a cable run needs recorded or joined before it can be checked", (
     expect(codes(withProps(rudderCircuit(), "pulley", { grooveFor: undefined }))).toContain("pulley-groove-unrecorded@pulley");
     expect(codes(withProps(rudderCircuit(), "pulley", { guards: undefined }))).toContain("pulley-guards-unrecorded@pulley");
     const unrated = run(withProps(rudderCircuit(), "pulley", { ratedLoad: undefined })).findings.find((f) => f.code === "pulley-rating-missing")!;
-    expect(unrated.severity).toBe("advisory");
+    expect(unrated.severity).toBe("caution"); // as rod-end-rating-missing and bearing-rating-missing: a load not checked
+    expect(has(rudderCircuit(), "pulley-rating-missing")).toBe(false); // rated 1,200 lbf in the base circuit
     // The 310.6 lbf resultant of the hand-worked case above, limit.
     expect(unrated.numbers[0].value).toBeCloseTo(2 * 600 * Math.sin((15 * Math.PI) / 180), 6);
   });

@@ -10,7 +10,7 @@ import { describe, expect, it } from "vitest";
 import { analyze } from "@/shared/analysis";
 import { graphSchema, type LinkageGraph } from "@/shared/linkage/schema";
 import { goodClamp, goodRun, j, stick, mount, goodBallPivot, valid } from "./fixtures";
-import { wheelRun } from "./cable-fixtures";
+import { rudderCircuit, wheelRun, withProps } from "./cable-fixtures";
 
 const run = (g: LinkageGraph, settings = {}) => analyze(valid(g), settings);
 const jr = (g: LinkageGraph, id: string, settings = {}) => run(g, settings).joints.find((x) => x.jointId === id)!;
@@ -108,6 +108,57 @@ describe("hinge moments (14 CFR 23.395): 125 % of the hinge moment, within the 2
   it("without a hinge moment the maximum pilot force governs, and says so", () => {
     expect(run(goodRun()).designCase).toMatchObject({ governing: "maximumPilotForce", scale: 1 });
     expect(run(goodRun()).designCase.text).toMatch(/no hinge moment/);
+  });
+});
+
+describe("hinge-moment-not-used: 14 CFR 23.395 bounds a hinge moment by the 23.397(b) stick and pedal forces only", () => {
+  it("trips for a hinge moment given in a flap run", () => {
+    expect(codes({ ...setProps(goodRun(), "elev", { hingeMoment: 800 }), system: "flap" })).toContain("hinge-moment-not-used");
+  });
+  it("does not trip for the same hinge moment in a pitch run (it sets the loads there), nor in a flap run without one", () => {
+    expect(codes(setProps(goodRun(), "elev", { hingeMoment: 800 }))).not.toContain("hinge-moment-not-used");
+    expect(codes({ ...goodRun(), system: "flap" })).not.toContain("hinge-moment-not-used");
+  });
+});
+
+describe("the hinge-moment case in a rigged cable circuit: the cable's tension is made from the scaled pilot force", () => {
+  // Rudder circuit (cable-fixtures.ts): pedal 200 lbf (14 CFR 23.397(b)) × 9 in / 3 in = 600 lbf at the cable; 3 in horn
+  // → 1,800 in·lbf. Hinge moment 1,080 in·lbf (invented): 125 % (14 CFR 23.395) = 1,350 = 0.75 × 1,800, which is also
+  // the pedal's 150/200 lbf minimum (23.397(b)): factor 0.75. Rigged at 400 lbf (invented), the pulling cable carries
+  // T = max(F, P + F/2) (from memory: statics) = max(450, 400 + 225) = 625 lbf at F = 0.75 × 600 = 450 lbf —
+  // not 0.75 × max(600, 400 + 300) = 525 lbf.
+  const rigged = (over: Record<string, unknown> = {}) =>
+    setProps(withProps(rudderCircuit(), "cableL", { riggingTension: 400, tensionMax: 450, ...over }), "rudder", { hingeMoment: 1080 });
+  const sin = (deg: number) => Math.sin((deg * Math.PI) / 180);
+  it("cable 625 lbf (not 525), its joints and the pulley and fairlead from 625 lbf", () => {
+    const r = run(rigged());
+    rel(r.designCase.scale, 0.75);
+    const cl = r.cables.find((c) => c.nodeId === "cableL")!;
+    rel(cl.limitTension, 625);
+    rel(cl.ultimateRequired, 625 * 1.5 * 2.0); // 14 CFR 23.303 × the cable-system factor of 23.693
+    rel(cl.margin!, 2000 / 1875 - 1); // 1/8 in 7×19 carbon, 2,000 lbf (AC 43.13-1B table 7-3), swaged 100 %
+    rel(r.cables.find((c) => c.nodeId === "cableR")!.limitTension, 625); // the same circuit, the same rigging tension
+    const jt = (id: string) => r.joints.find((x) => x.jointId === id)!.radialLimit;
+    rel(jt("hornL"), 625);
+    rel(jt("overP"), 2 * 625 * sin(15)); // 30° over the pulley: 2·T·sin(θ/2) = 323.5 lbf (statics)
+    rel(jt("pulleyAxle"), 2 * 625 * sin(15));
+    rel(jt("fairMount"), 2 * 625 * sin(1)); // 2° through the fairlead
+    // Loads linear in the force keep the factor alone: pedal pivot 0.75 × (200 + 600) = 600 lbf, rudder 0.75 × 1,800.
+    rel(jt("pivL"), 600);
+    rel(r.surfaces[0].hingeMomentLimit, 1350);
+  });
+  it("a pulley rated 950 lbf trips at 323.5 × 1.5 × 2.0 = 970.6 lbf, and one rated 1,000 lbf does not", () => {
+    const pulley = (rating: number) => setProps(rigged(), "pulley", { ratedLoad: rating });
+    expect(codes(pulley(950))).toContain("pulley-overloaded");
+    expect(codes(pulley(1000))).not.toContain("pulley-overloaded");
+  });
+  it("without a rigging tension every load is the factor on the force: 0.75 × 600 = 450 lbf", () => {
+    rel(run(rigged({ riggingTension: undefined })).cables.find((c) => c.nodeId === "cableL")!.limitTension, 450);
+  });
+  it("without the hinge moment the full force governs: max(600, 400 + 300) = 700 lbf", () => {
+    const g = rigged();
+    delete (g.nodes.find((n) => n.id === "rudder")!.props as Record<string, unknown>).hingeMoment;
+    rel(run(g).cables.find((c) => c.nodeId === "cableL")!.limitTension, 700);
   });
 });
 

@@ -174,15 +174,15 @@ describe("special factor: only the highest applies (14 CFR 23.619), on bearing",
     // 14 CFR 23.397(b): the maximum column is for a design weight of 5,000 lb or less.
     expect(run(goodRun()).assumptions[0]).toContain("design weight up to 5,000 lb");
   });
-  it("a rod end at a hinge checked against its rating with the bearing factor says 'bearing factor', not 'fitting factor'", () => {
-    // With rod ends treated as plain bearings, the rating takes 3.33 (14 CFR 23.693) while the hinge's holes take 6.67 (23.657(a)).
+  it("a rod end at a hinge, treated as a plain bearing, is rated against the hinge's 6.67 (23.657(a)); at a link end against 3.33 (23.693)", () => {
     const rodEnd = { ...goodRun().joints[1].hardware.rodEnd!, ratedUltimate: undefined };
     const g = withHardware(goodRun(), "hinge", (h) => ({ ...h, rodEnd, bearing: undefined }));
     const plain = { bearingFactorOnRodEnds: true };
-    expect(check(joint(g, "hinge", plain), "rodEndRating").factor).toBeCloseTo(3.33, 9);
+    expect(check(joint(g, "hinge", plain), "rodEndRating").factor).toBeCloseTo(6.67, 9);
+    expect(check(joint(goodRun(), "rodA", plain), "rodEndRating").factor).toBeCloseTo(3.33, 9);
     const msg = (settings: object) => run(g, settings).findings.find((f) => f.subject.id === "hinge" && f.code === "rod-end-rating-missing")!.message;
-    expect(msg(plain)).toContain("× 3.33 bearing factor (plain bearing, angular motion)");
-    expect(msg(plain)).not.toContain("3.33 fitting factor");
+    expect(msg(plain)).toContain("× 6.67 hinge bearing factor");
+    expect(msg(plain)).not.toContain("fitting factor");
     expect(msg({})).toContain("× 1.15 fitting factor"); // rod ends as rolling bearings: the fitting factor, named so
   });
   it("6.67 at a hinge that is not a ball or roller bearing (23.657(a)); fitting factor at a ball-bearing hinge", () => {
@@ -342,5 +342,49 @@ describe("a custom bolt with its diameter but no material", () => {
     // Without its diameter the own message is still given.
     const g2 = withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: { ...h.bolt!, size: "custom", diameter: undefined, material: "steel" } }));
     expect(run(g2).findings.map((x) => `${x.code}@${x.subject.id}`)).toContain("bolt-diameter-unknown@rodA");
+  });
+});
+
+describe("checks that need a recorded input are not made without it (inspector's review, engine 2.5)", () => {
+  it("bolt bending: spacers in the stack but no shear case recorded is not checked (single shear's bending is not assumed away); a recorded case is", () => {
+    const g = (shear: "single" | "double" | undefined) => withHardware(goodRun(), "rodA", (h) => ({ ...h, shear, spacers: 0.1 }));
+    expect(check(joint(g(undefined), "rodA"), "boltBending")).toMatchObject({ status: "notChecked", margin: null, todo: "choose single or double shear on the joint's card" });
+    const single = check(joint(g("single"), "rodA"), "boltBending"), double = check(joint(g("double"), "rodA"), "boltBending");
+    expect(single.status).toBe("computed");
+    expect(double.status).toBe("computed");
+    // Single shear: M = P · (gaps + w/2); double with gaps: M = P/2 · (gaps + t/2 + w/4) — single is the larger moment.
+    expect(single.required!).toBeGreaterThan(double.required!);
+  });
+  it("a rod end with no bolt or pin recorded: its fastener is listed as not checked and told as a caution; with its bolt, not", () => {
+    const g = withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: undefined }));
+    expect(check(joint(g, "rodA"), "boltShear")).toMatchObject({ status: "notChecked", margin: null, allowable: null });
+    expect(joint(g, "rodA").governing?.check).not.toBe("boltShear");
+    const f = run(g).findings.find((x) => x.subject.id === "rodA" && x.code === "fastener-not-recorded");
+    expect(f?.severity).toBe("caution");
+    expect(f?.message).toContain("no bolt or clevis pin is recorded");
+    expect(codes(goodRun(), "rodA")).not.toContain("fastener-not-recorded");
+  });
+  it("a stop's bolt is checked for bearing and tear-out at its holes (14 CFR 23.675: the stop takes the system's load)", () => {
+    const r = joint(goodRun(), "stop");
+    expect(check(r, "bearingFrom")?.status).toBe("computed");
+    expect(check(r, "tearOutTo")?.status).toBe("computed");
+    // Without the members recorded, listed as not checked with what to enter — not left out.
+    const bare = joint(withHardware(goodRun(), "stop", (h) => ({ ...h, holes: undefined })), "stop");
+    expect(check(bare, "bearingFrom")).toMatchObject({ status: "notChecked", margin: null });
+  });
+  it("hole-bearing-weak trips on a thin member at the hole and not on the fixture's", () => {
+    const thin = withHardware(goodRun(), "pivot", (h) => ({ ...h, bearing: "plainBushing", holes: { ...h.holes, to: { material: "6061-T6", thickness: 0.02, edgeDistance: 0.5 } } }));
+    expect(codes(thin, "pivot")).toContain("hole-bearing-weak");
+    expect(codes(goodRun(), "pivot")).not.toContain("hole-bearing-weak");
+  });
+  it("pin-shear-weak trips on a weak clevis pin and not on a strong one (Fsu · πD²/4 per plane)", () => {
+    const pin = (shearStrength: number, diameter = 0.25) => withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: undefined, clevisPin: { diameter, shearStrength, retention: "nutAndCotterPin" as const } }));
+    expect(codes(pin(2_000, 0.0625), "rodA")).toContain("pin-shear-weak");
+    expect(codes(pin(60_000), "rodA")).not.toContain("pin-shear-weak");
+  });
+  it("clevis-pin-retention-unrecorded: a clevis pin with no retention recorded is a caution; recorded, it is not", () => {
+    const pin = (retention?: "nutAndCotterPin") => withHardware(goodRun(), "rodA", (h) => ({ ...h, bolt: undefined, clevisPin: { diameter: 0.25, shearStrength: 60_000, ...(retention ? { retention } : {}) } }));
+    expect(codes(pin(), "rodA")).toContain("clevis-pin-retention-unrecorded");
+    expect(codes(pin("nutAndCotterPin"), "rodA")).not.toContain("clevis-pin-retention-unrecorded");
   });
 });

@@ -361,3 +361,13 @@ describe("strength findings", () => {
     expect(codes(g, "rod")).toContain("pushrod-tension-weak");
   });
 });
+
+describe("rule 4: no lock washers in a control run (AC 43.13-1B chapter 7, lock washers)", () => {
+  it("a split or tooth lock washer recorded at a joint is a hazard; none recorded, or recorded as absent, is not", () => {
+    const withWasher = (lockWasher?: boolean) => withHardware(goodRun(), "rodB", (h) => ({ ...h, ...(lockWasher === undefined ? {} : { lockWasher }) }));
+    const f = analyze(valid(withWasher(true))).findings.find((x) => x.code === "lock-washer-in-run");
+    expect(f).toMatchObject({ severity: "hazard", subject: { type: "joint", id: "rodB" } });
+    expect(f!.message).toContain("remove it");
+    for (const g of [withWasher(false), withWasher(undefined)]) expect(analyze(valid(g)).findings.map((x) => x.code)).not.toContain("lock-washer-in-run");
+  });
+});

@@ -53,6 +53,19 @@ describe("pushrod without two ends", () => {
   it("does not trip when both ends are joined", () => expect(codes(goodRun()).filter((c) => c.startsWith("pushrod-end-open"))).toEqual([]));
 });
 
+describe("a joint from a part to itself", () => {
+  // The schema refuses it (shared/linkage/schema.ts); the engine still meets it in a graph that skipped the schema.
+  it("trips for a pushrod joined end to end to itself, left out of the check, and the run is still checked", () => {
+    const g = goodRun();
+    g.joints.push(j("self", ["rod", "a"], ["rod", "b"], goodRodEndJoint({}, { hand: "RH" })));
+    const r = analyze(g);
+    expect(r.findings.map((f) => `${f.code}@${f.subject.id}`)).toContain("joint-to-itself@self");
+    expect(r.findings.find((f) => f.code === "joint-to-itself")!.severity).toBe("caution");
+    expect(r.pushrods.find((p) => p.nodeId === "rod")!.limitAxial).toBeCloseTo(668, 9); // 167 lbf (14 CFR 23.397(b)) × 20/5
+  });
+  it("does not trip for joints between two parts", () => expect(codes(goodRun()).filter((c) => c.startsWith("joint-to-itself"))).toEqual([]));
+});
+
 describe("crank or stick without a pivot to a structure mount", () => {
   it("trips with no pivot joint", () => {
     const g = goodRun();
