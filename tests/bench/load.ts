@@ -24,6 +24,7 @@
  */
 import { spawn, spawnSync } from "node:child_process";
 import { existsSync, mkdirSync, openSync, readFileSync, readdirSync, writeFileSync } from "node:fs";
+import os from "node:os";
 import path from "node:path";
 import autocannon from "autocannon";
 import knex from "knex";
@@ -59,7 +60,7 @@ const pct = (xs: number[], p: number) => { const s = [...xs].sort((a, b) => a - 
 const signIn = (email: string, password: string) => signInAt(APP, email, password);
 
 type Route = { name: string; method: "GET" | "PUT"; requests: autocannon.Request[] };
-type Result = { name: string; requests: number; rps: number; cpuMsPerRequest: number; sysMsPerRequest: number; pgMsPerRequest: number; loadGenMsPerRequest: number; p50: number; p95: number; p99: number; non2xx: number; errors: number; timeouts: number; statuses: Record<string, number> };
+type Result = { name: string; requests: number; rps: number; cpuMsPerRequest: number; sysMsPerRequest: number; pgMsPerRequest: number; loadGenMsPerRequest: number; machineMsPerRequest: number; stealMsPerRequest: number; machineBusy: number; jsThreadBusy: number; p50: number; p95: number; p99: number; non2xx: number; errors: number; timeouts: number; statuses: Record<string, number> };
 
 /**
  * CPU time the server process has used (user + system, ms) from /proc: divided by the requests of a run it is
@@ -88,11 +89,26 @@ function pgCpuMs() {
   }
   return t;
 }
+/**
+ * The whole machine's CPU time (ms, all cores) from /proc/stat: busy is everything but idle and I/O wait, with
+ * the kernel's interrupt work and steal (time the host gave to other guests while this one wanted to run).
+ */
+function machineMs() {
+  const [user, nice, system, , , irq, softirq, steal] = readFileSync("/proc/stat", "utf8").split("\n")[0].trim().split(/\s+/).slice(1).map(Number);
+  return { busy: ((user + nice + system + irq + softirq + steal) * 1000) / CLK_TCK, steal: (steal * 1000) / CLK_TCK };
+}
+/** CPU time (ms) of the server's main thread alone, the one JavaScript runs on (GC helper threads excluded). */
+function mainThreadMs(pid: number) {
+  const f = readFileSync(`/proc/${pid}/task/${pid}/stat`, "utf8").split(") ")[1].split(" ");
+  return ((Number(f[11]) + Number(f[12])) * 1000) / CLK_TCK;
+}
+const CORES = os.availableParallelism();
 const CLK_TCK = Number(spawnSync("getconf", ["CLK_TCK"], { encoding: "utf8" }).stdout.trim()) || 100;
 
 /** One autocannon run of `seconds` on a route; latencies of every answer are kept (bounded by the duration). */
 async function load(route: Route, seconds: number, cookie: string, serverPid: number): Promise<Result> {
   const cpu0 = cpuMs(serverPid); const sys0 = sysMs(serverPid); const pg0 = pgCpuMs(); const me0 = process.cpuUsage();
+  const m0 = machineMs(); const js0 = mainThreadMs(serverPid); const t0 = performance.now();
   const latencies: number[] = [];
   const statuses: Record<string, number> = {};
   let instance!: autocannon.Instance;
@@ -111,6 +127,7 @@ async function load(route: Route, seconds: number, cookie: string, serverPid: nu
   const cpu = cpuMs(serverPid) - cpu0;
   const n = Math.max(1, r.requests.total);
   const me = process.cpuUsage(me0);
+  const m1 = machineMs(); const wall = performance.now() - t0;
   return {
     name: route.name,
     requests: r.requests.total,
@@ -119,6 +136,10 @@ async function load(route: Route, seconds: number, cookie: string, serverPid: nu
     sysMsPerRequest: (sysMs(serverPid) - sys0) / n,
     pgMsPerRequest: (pgCpuMs() - pg0) / n,
     loadGenMsPerRequest: (me.user + me.system) / 1000 / n,
+    machineMsPerRequest: (m1.busy - m0.busy) / n,
+    stealMsPerRequest: (m1.steal - m0.steal) / n,
+    machineBusy: (m1.busy - m0.busy) / (wall * CORES),
+    jsThreadBusy: (mainThreadMs(serverPid) - js0) / wall,
     p50: pct(latencies, 0.5),
     p95: pct(latencies, 0.95),
     p99: pct(latencies, 0.99),
@@ -215,7 +236,7 @@ export async function run() {
       if (route.method === "PUT") await refreshTargets();
       const r = await load(route, SECONDS, cookie, server.pid!);
       if (route.method === "PUT") await refreshTargets();
-      console.log(`  ${r.name}: ${r.rps.toFixed(0)} requests/s, server CPU ${r.cpuMsPerRequest.toFixed(2)} ms a request (kernel ${r.sysMsPerRequest.toFixed(2)}), PostgreSQL ${r.pgMsPerRequest.toFixed(2)} ms, load generator ${r.loadGenMsPerRequest.toFixed(2)} ms, p95 ${r.p95.toFixed(0)} ms, answers ${JSON.stringify(r.statuses)}${r.errors ? `, ${r.errors} errors` : ""}`);
+      console.log(`  ${r.name}: ${r.rps.toFixed(0)} requests/s, server CPU ${r.cpuMsPerRequest.toFixed(2)} ms a request (kernel ${r.sysMsPerRequest.toFixed(2)}), PostgreSQL ${r.pgMsPerRequest.toFixed(2)} ms, load generator ${r.loadGenMsPerRequest.toFixed(2)} ms, whole machine ${r.machineMsPerRequest.toFixed(2)} ms (steal ${r.stealMsPerRequest.toFixed(2)}; cores ${(r.machineBusy * 100).toFixed(0)} % busy, server's JavaScript thread ${(r.jsThreadBusy * 100).toFixed(0)} %), p95 ${r.p95.toFixed(0)} ms, answers ${JSON.stringify(r.statuses)}${r.errors ? `, ${r.errors} errors` : ""}`);
       return r;
     };
     const bares: Result[] = [await run1(bareRoute, true)];
@@ -234,6 +255,8 @@ export async function run() {
       target: "reported",
       "server CPU ms/request": bares.map((b) => b.cpuMsPerRequest.toFixed(2)).join(" / "),
       "PostgreSQL CPU ms": bares.map((b) => b.pgMsPerRequest.toFixed(2)).join(" / "),
+      "machine CPU ms": bares.map((b) => b.machineMsPerRequest.toFixed(2)).join(" / "),
+      "cores / JS thread busy": bares.map((b) => `${(b.machineBusy * 100).toFixed(0)}/${(b.jsThreadBusy * 100).toFixed(0)} %`).join(" · "),
       "p50 ms": bares.map((b) => b.p50.toFixed(1)).join(" / "),
       "p95 ms": bares.map((b) => b.p95.toFixed(1)).join(" / "),
       holds: ok ? "" : "NO (non-2xx or errors)",
@@ -250,6 +273,8 @@ export async function run() {
         target: t === undefined ? "reported" : `≥ ${(t * 100).toFixed(0)} %`,
         "server CPU ms/request": r.cpuMsPerRequest.toFixed(2),
         "PostgreSQL CPU ms": r.pgMsPerRequest.toFixed(2),
+        "machine CPU ms": r.machineMsPerRequest.toFixed(2),
+        "cores / JS thread busy": `${(r.machineBusy * 100).toFixed(0)}/${(r.jsThreadBusy * 100).toFixed(0)} %`,
         "p50 ms": r.p50.toFixed(1),
         "p95 ms": r.p95.toFixed(1),
         holds: !clean ? "NO (non-2xx or errors)" : t === undefined ? "" : holds ? "yes" : "NO",
@@ -257,7 +282,7 @@ export async function run() {
     })];
     console.table(rows);
     const saved = await db("linkage_revisions").whereIn("linkage_id", all.map((t) => t.id)).count<{ n: string }[]>("* as n");
-    console.log(`(${CONNECTIONS} connections, ${SECONDS} s a route after ${WARM_S} s of warm-up; the bare route before and after each other route, each ratio to the mean of those two; ${Number(saved[0].n) - SAVE_TARGETS} saves stored across ${SAVE_TARGETS} linkages; load generator and server share this machine's ${(await import("node:os")).cpus().length} cores)`);
+    console.log(`(${CONNECTIONS} connections, ${SECONDS} s a route after ${WARM_S} s of warm-up; the bare route before and after each other route, each ratio to the mean of those two; ${Number(saved[0].n) - SAVE_TARGETS} saves stored across ${SAVE_TARGETS} linkages; load generator and server share this machine's ${CORES} cores)`);
     mkdirSync(path.dirname(OUT), { recursive: true });
     writeFileSync(OUT, JSON.stringify({ at: new Date().toISOString(), connections: CONNECTIONS, seconds: SECONDS, targets: T, bare: bares, results: results.map((r) => ({ ...r, ratioToBare: r.rps / r.bareRps })), ok }, null, 2));
     console.log(`Figures written to ${path.relative(ROOT, OUT)}`);
