@@ -63,11 +63,16 @@ function holeSides(c: CheckInput, hw: JointHardware): readonly Side[] {
   return from ? (to ? BOTH_SIDES : FROM_SIDE) : to ? TO_SIDE : NO_SIDE;
 }
 
-/** A joint where a cable meets a part (a pulley's groove, a fairlead, a terminal in a turnbuckle): no bolt there. */
+/**
+ * A joint where a cable runs over a pulley's groove or through a fairlead, or its terminal screws into a
+ * turnbuckle's barrel: no bolt there. A cable's terminal on a horn, crank or pedal is bolted, and is checked so.
+ */
+const NO_BOLT_WITH_CABLE = new Set(["pulley", "fairlead", "turnbuckle"]);
 function cableContact({ ctx, j }: CheckInput): boolean {
   const f = ctx.jFrom[j], t = ctx.jTo[j];
-  const k = (n: number) => (n >= 0 ? ctx.nodes[n].kind : null);
-  return k(f) === "cable" || k(t) === "cable" || k(f) === "fairlead" || k(t) === "fairlead";
+  if (f < 0 || t < 0) return false;
+  const a = ctx.nodes[f].kind, b = ctx.nodes[t].kind;
+  return (a === "cable" && NO_BOLT_WITH_CABLE.has(b)) || (b === "cable" && NO_BOLT_WITH_CABLE.has(a));
 }
 
 function hasHole({ ctx, j }: CheckInput, hw: JointHardware, side: Side): boolean {

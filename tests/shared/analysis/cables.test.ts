@@ -317,3 +317,14 @@ describe("a cable's terminal asks for no rod end", () => {
     expect(text).not.toMatch(/rod end|jam nut|witness/i);
   });
 });
+
+describe("a cable's bolted terminal needs its bolt; where a cable runs over a pulley, through a fairlead or screws into a turnbuckle, none", () => {
+  const noBolt = (id: string) => { const g = rudderCircuit(); return { ...g, joints: g.joints.map((x) => (x.id === id ? { ...x, hardware: { ...x.hardware, bolt: undefined } } : x)) }; };
+  it("a terminal on a pedal with no bolt recorded lists its fastener as not checked", () => {
+    expect(codes(noBolt("pedL"))).toContain("fastener-not-recorded@pedL");
+  });
+  it("the pass-through and screwed joints of the base circuit are not asked for a bolt", () => {
+    const c = codes(rudderCircuit());
+    for (const id of ["overP", "thruF", "tbLa", "tbRa"]) expect(c).not.toContain(`fastener-not-recorded@${id}`);
+  });
+});
