@@ -1,5 +1,4 @@
 import Link from "next/link";
-import { TabScroller } from "./TabScroller";
 
 /** Tabs of a build. */
 export const BUILD_SECTIONS: { href: string; label: string }[] = [
@@ -13,29 +12,34 @@ export const BUILD_SECTIONS: { href: string; label: string }[] = [
   { href: "/settings", label: "Settings" },
 ];
 
+/**
+ * The build's name and its tabs. The tabs wrap onto a second row when the screen is narrow (a phone, a tablet), so
+ * every tab shows its whole name and none hides off the edge. `extra` (the role badge, a link) sits beside the
+ * build's name, where it has room at any width.
+ */
 export function BuildNav({ buildId, buildName, current, extra }: { buildId: string; buildName: string; current: string; extra?: React.ReactNode }) {
   return (
     <div className="no-print border-b border-ink/10 bg-white px-4 sm:px-6">
-      <div className="mx-auto flex max-w-6xl flex-wrap items-end justify-between gap-x-4 pt-3">
-        {/* min-w-0: the tabs scroll inside their own bar instead of widening the page on a phone */}
-        <div className="min-w-0 max-w-full flex-1">
-          <Link href="/builds" className="text-xs text-ink-soft hover:underline">Builds</Link>
-          <p className="text-lg font-semibold leading-tight">{buildName}</p>
-          <nav id="build-tabs" aria-label="Build sections" className="tab-scroll -mx-1 mt-2 flex gap-1 overflow-x-auto px-1">
-            {BUILD_SECTIONS.map((s) => (
-              <Link
-                key={s.href}
-                href={`/builds/${buildId}${s.href}`}
-                aria-current={current === s.href ? "page" : undefined}
-                className={`flex min-h-11 shrink-0 items-center whitespace-nowrap border-b-2 px-3 ${current === s.href ? "border-ink font-semibold" : "border-transparent text-ink-soft hover:text-ink"}`}
-              >
-                {s.label}
-              </Link>
-            ))}
-          </nav>
-          <TabScroller navId="build-tabs" />
+      <div className="mx-auto max-w-6xl pt-3">
+        <div className="flex flex-wrap items-end justify-between gap-x-4 gap-y-1">
+          <div className="min-w-0">
+            <Link href="/builds" className="text-xs text-ink-soft hover:underline">Builds</Link>
+            <p className="break-words text-lg font-semibold leading-tight">{buildName}</p>
+          </div>
+          {extra ? <div className="shrink-0">{extra}</div> : null}
         </div>
-        <div className="pb-2">{extra}</div>
+        <nav aria-label="Build sections" className="-mx-2 mt-2 flex flex-wrap sm:-mx-1 sm:gap-x-1">
+          {BUILD_SECTIONS.map((s) => (
+            <Link
+              key={s.href}
+              href={`/builds/${buildId}${s.href}`}
+              aria-current={current === s.href ? "page" : undefined}
+              className={`flex min-h-11 items-center whitespace-nowrap border-b-2 px-2 text-sm sm:px-3 sm:text-base ${current === s.href ? "border-ink font-semibold" : "border-transparent text-ink-soft hover:text-ink"}`}
+            >
+              {s.label}
+            </Link>
+          ))}
+        </nav>
       </div>
     </div>
   );

@@ -3,6 +3,7 @@ import { keepPreviousData, useInfiniteQuery, type QueryKey } from "@tanstack/rea
 import { useEffect, useRef } from "react";
 import { api } from "@/components/api-client";
 import { Button } from "@/components/ui";
+import { pagedItems } from "@/components/paged-items";
 
 /**
  * A list read a page at a time (newest first) through react-query's infinite query. `url` may carry
@@ -19,7 +20,8 @@ export function usePagedList<T, F extends object = object>(o: { key: QueryKey; u
     placeholderData: keepPreviousData,
   });
   const pages = q.data?.pages ?? [];
-  const items = pages.flatMap((p) => (p[o.name] as T[]) ?? []);
+  // The same array while the pages are the same (a table given a new array each render re-renders forever).
+  const items = pagedItems<T>(q.data?.pages, o.name);
   const first = pages[0] as (F & { total: number }) | undefined;
   return { ...q, items, total: first?.total ?? 0, first };
 }

@@ -25,6 +25,9 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
   const [sorting, setSorting] = useState<SortingState>([]);
   const [error, setError] = useState<string | null>(null);
   const del = useMutation({ mutationFn: (id: string) => api(`${apiBase}/${id}`, { method: "DELETE" }), onSuccess: () => qc.invalidateQueries({ queryKey: key }), onError: (e) => setError(String(e instanceof Error ? e.message : e)) });
+  // `del` is a new object every render but its `mutate` is not: the columns depend on that alone, so they stay the
+  // same objects and the cells (rendered as components) are not mounted afresh, which would drop the keyboard's focus.
+  const remove = del.mutate;
 
   const columns = useMemo(() => [
     col.accessor("kind", { header: "Kind", cell: (c) => PART_KIND_LABEL[c.getValue()] }),
@@ -32,10 +35,11 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
     col.accessor((p) => describeSpec(p), { id: "spec", header: "Spec (in, lbf)" }),
     col.accessor((p) => (p.kind === "rodEnd" ? (p.spec as { ratedUltimate: number }).ratedUltimate : null), { id: "rating", header: "Rated ult. (lbf)", cell: (c) => (c.getValue() ?? "—"), sortUndefined: "last" }),
     col.accessor("description", { header: "Description" }),
-    ...(canEdit ? [col.display({ id: "actions", header: () => <span className="sr-only">Actions</span>, cell: (c) => <Button size="sm" tone="ghost" aria-label={`Delete ${c.row.original.partNumber}`} onClick={() => { if (confirm(`Delete ${c.row.original.partNumber}?`)) del.mutate(c.row.original.id); }}>Delete</Button> })] : []),
-  ], [canEdit, del]);
+    ...(canEdit ? [col.display({ id: "actions", header: () => <span className="sr-only">Actions</span>, cell: (c) => <Button size="sm" tone="ghost" aria-label={`Delete ${c.row.original.partNumber}`} onClick={() => { if (confirm(`Delete ${c.row.original.partNumber}?`)) remove(c.row.original.id); }}>Delete</Button> })] : []),
+  ], [canEdit, remove]);
   const table = useReactTable({
-    data: parts.items, columns, state: { sorting }, onSortingChange: setSorting,
+    // The same array while the loaded pages are the same (see pagedItems); the table only reads it.
+    data: parts.items as Part[], columns, state: { sorting }, onSortingChange: setSorting,
     getCoreRowModel: getCoreRowModel(), getSortedRowModel: getSortedRowModel(),
   });
   const all = !parts.hasNextPage;
