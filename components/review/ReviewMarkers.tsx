@@ -36,7 +36,8 @@ export function ReviewMarkers({ buildId, linkageId }: { buildId: string; linkage
       const sig = JSON.stringify(out);
       if (sig !== last) {
         last = sig;
-        setMarks(out);
+        // The same markers as shown keep the same state (no render), also on the first tick of a new effect.
+        setMarks((prev) => (JSON.stringify(prev) === sig ? prev : out));
       }
     };
     tick();

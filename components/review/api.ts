@@ -39,11 +39,14 @@ export function useComments(buildId: string, linkageId: string, subject: Subject
 }
 
 /** Open threads per subject key ("joint:j1" → 2), for markers on the canvas and the review bar (counted over every thread). */
+/** One object for "no counts yet": a fresh `{}` on every render would change the markers' effect each time and loop. */
+const NO_COUNTS: Record<string, number> = Object.freeze({}) as Record<string, number>;
+
 export function useUnresolvedCounts(buildId: string, linkageId: string): Record<string, number> {
   return useQuery({
     queryKey: [...commentKeys.list(linkageId), "open"],
     queryFn: () => api<CommentPage>(`${base(buildId, linkageId)}/comments?limit=1`).then((r) => r.unresolved),
-  }).data ?? {};
+  }).data ?? NO_COUNTS;
 }
 
 export function useAcknowledgements(buildId: string, linkageId: string) {
