@@ -6,12 +6,13 @@ import type { Finding, Severity } from "@/shared/analysis/types";
 import type { Joint, LinkageNode } from "@/shared/linkage/schema";
 import { KIND_NAMES } from "@/shared/linkage/kinds";
 import { jointName, partName, type PartLookup } from "@/shared/linkage/names";
+import { SEVERITY_WORDS, severityCount } from "./presentation";
 
 export type BadgeLike = { worst: Severity; count: number } | undefined;
-const SEV_WORD: Record<Severity, [string, string]> = { hazard: ["hazard", "hazards"], caution: ["caution", "cautions"], advisory: ["advisory", "advisories"] };
+const SEV_WORD = SEVERITY_WORDS;
 const ORDER: Severity[] = ["hazard", "caution", "advisory"];
 
-const plural = (n: number, s: Severity) => `${n} ${SEV_WORD[s][n === 1 ? 0 : 1]}`;
+const plural = severityCount;
 /** "1 finding, worst a hazard" / "no findings". */
 function findingsPhrase(b: BadgeLike): string {
   if (!b) return "no findings";
@@ -29,9 +30,13 @@ export function partAccessibleName(node: Pick<LinkageNode, "kind" | "label">, ba
   return `${name === kind ? kind : `${kind}, ${name}`}, ${findingsPhrase(badge)}${enter}`;
 }
 
-/** "Joint Aft pushrod B ↔ Elevator horn, attach, 3 findings, worst a hazard". */
-export function jointAccessibleName(joint: Pick<Joint, "from" | "to">, parts: PartLookup, badge: BadgeLike): string {
-  return `Joint ${jointName(joint, parts)}, ${findingsPhrase(badge)}`;
+/**
+ * "Joint Aft pushrod B ↔ Elevator horn, attach, 3 findings, worst a hazard". Without findings, `coverage`
+ * (joints/coverage.ts, its `short`) says what that means: "no findings, not checked", "no findings, nothing to check".
+ */
+export function jointAccessibleName(joint: Pick<Joint, "from" | "to">, parts: PartLookup, badge: BadgeLike, coverage?: string): string {
+  const what = !badge && coverage && coverage !== "no findings" ? `, ${coverage}` : "";
+  return `Joint ${jointName(joint, parts)}, ${findingsPhrase(badge)}${what}`;
 }
 
 const key = (f: Finding) => `${f.code}|${f.subject.type}:${f.subject.id}`;

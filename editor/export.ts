@@ -10,6 +10,7 @@ import type { Severity, Summary } from "@/shared/analysis/types";
 import type { Joint, LinkageNode } from "@/shared/linkage/schema";
 import { cardSize, PORT_SIDES } from "./nodes";
 import { hardwareChips } from "./joints/JointEdge";
+import { emptyJointChip } from "./joints/coverage";
 import { SEVERITY_HEX } from "./presentation";
 import { partName } from "@/shared/linkage/names";
 
@@ -201,8 +202,9 @@ function drawScene(ctx: CanvasRenderingContext2D, nodes: Node[], scene: VectorSc
       ctx.fill();
     }
   }
+  const parts = [...boxes.values()].map((b) => b.n);
   for (const { x, y, j } of labels) {
-    const chips = hardwareChips(j.hardware);
+    const chips = hardwareChips(j.hardware, emptyJointChip(j, parts));
     const w = scene.worstByJoint[j.id];
     ctx.font = "bold 9px Inter, system-ui, sans-serif";
     const widths = chips.map((c) => (c.glyph === "text" ? ctx.measureText(c.text ?? "").width + 4 : 13));
@@ -215,7 +217,7 @@ function drawScene(ctx: CanvasRenderingContext2D, nodes: Node[], scene: VectorSc
     ctx.stroke();
     let cx = x - total / 2 + 4;
     chips.forEach((c, i) => {
-      const colour = c.state === "missing" ? "#b54708" : INK;
+      const colour = c.state === "missing" ? "#b54708" : c.quiet ? "#4b5563" : INK;
       ctx.strokeStyle = colour;
       ctx.fillStyle = colour;
       ctx.lineWidth = 1.2;

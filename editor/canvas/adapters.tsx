@@ -10,6 +10,7 @@ import { useReactFlow, useStoreApi, type Connection, type EdgeChange, type IsVal
 import type { NodeKind } from "@/shared/linkage/schema";
 import { useEditorConfig, useEditorStore, useEditorStoreApi, useEditorValue } from "../context";
 import { jointAccessibleName } from "../a11y";
+import { jointCoverage, jointResult } from "../joints/coverage";
 import { cardSize, layoutHandles, type PartFlowNode } from "../nodes";
 import type { JointFlowEdge } from "../joints/JointEdge";
 import { SEVERITY_HEX } from "../presentation";
@@ -86,7 +87,7 @@ export function NodesToFlow({ readOnly }: { readOnly: boolean }) {
 export function useFlowEdges(): JointFlowEdge[] {
   const { joints, selected } = useEditorStore((s) => ({ joints: s.joints, selected: s.selection.joints }));
   // Every joint's spoken name, one string (a drag frame that renames nothing re-renders nothing).
-  const spoken = useEditorValue((s) => s.joints.map((j) => jointAccessibleName(j, s.nodes, s.badgeBySubject[`joint:${j.id}`])).join("\n"));
+  const spoken = useEditorValue((s) => s.joints.map((j) => jointAccessibleName(j, s.nodes, s.badgeBySubject[`joint:${j.id}`], jointCoverage(j, s.nodes, jointResult(s.report, j.id), !!s.report).short)).join("\n"));
   const cache = useRef(new Map<string, EdgeCacheEntry>());
   return useMemo(() => {
     const sel = new Set(selected);

@@ -11,6 +11,7 @@ import { useEditorStoreApi, useEditorValue } from "../context";
 import { SEVERITY_HEX } from "../presentation";
 import { jointAccessibleName } from "../a11y";
 import { jointNameId } from "../canvas/adapters";
+import { emptyJointChip, jointCoverage, jointResult } from "./coverage";
 
 export type JointEdgeData = { joint: Joint };
 export type JointFlowEdge = Edge<JointEdgeData, "joint">;
@@ -19,10 +20,13 @@ const INK = "#1f2a37";
 const MUTED = "#9aa3ad";
 
 type ChipState = "solid" | "hollow" | "missing";
-export type Chip = { key: string; title: string; state: ChipState; glyph: "ring" | "hex" | "eye" | "washer" | "text"; text?: string };
+export type Chip = { key: string; title: string; state: ChipState; glyph: "ring" | "hex" | "eye" | "washer" | "text"; text?: string; /** Words for what the joint is, not a state of its hardware. */ quiet?: boolean };
 
-/** What the badge shows for a joint's hardware (exported for tests and the export title block). */
-export function hardwareChips(h: Joint["hardware"]): Chip[] {
+/**
+ * What the badge shows for a joint's hardware (exported for tests and the export title block). `empty`: the
+ * words for a joint with none (joints/coverage.ts, emptyJointChip): a cable over a pulley is not "no hardware".
+ */
+export function hardwareChips(h: Joint["hardware"], empty?: { text: string; title: string; quiet: boolean }): Chip[] {
   const chips: Chip[] = [];
   if (h.rodEnd) {
     const rated = h.rodEnd.ratedUltimate !== undefined;
@@ -52,7 +56,10 @@ export function hardwareChips(h: Joint["hardware"]): Chip[] {
     const w = h.washerUnderHead;
     chips.push({ key: "washer", glyph: "washer", state: w ? "solid" : "missing", title: w ? `Washer under the head, ${w.outsideDiameter} in OD` : "No washer under the bolt head recorded" });
   }
-  if (chips.length === 0) chips.push({ key: "empty", glyph: "text", text: "no hardware", state: "hollow", title: "No hardware recorded for this joint yet" });
+  if (chips.length === 0)
+    chips.push(empty
+      ? { key: "empty", glyph: "text", text: empty.text, state: "hollow", title: empty.title, quiet: empty.quiet }
+      : { key: "empty", glyph: "text", text: "no hardware", state: "hollow", title: "No hardware recorded for this joint yet" });
   return chips;
 }
 
@@ -61,7 +68,7 @@ function ChipGlyph({ chip }: { chip: Chip }) {
   const fill = chip.state === "solid" ? c : "none";
   const dash = chip.state === "missing" ? "2 1.5" : undefined;
   if (chip.glyph === "text")
-    return <span className={`px-0.5 text-[9px] font-bold leading-3 ${chip.state === "missing" ? "text-caution" : "text-ink"}`}>{chip.text}</span>;
+    return <span className={`px-0.5 text-[9px] leading-3 ${chip.quiet ? "font-medium text-ink-soft" : chip.state === "missing" ? "font-bold text-caution" : "font-bold text-ink"}`}>{chip.text}</span>;
   return (
     <svg viewBox="0 0 12 12" className="h-3 w-3" aria-hidden="true">
       {chip.glyph === "ring" && (
@@ -96,9 +103,10 @@ export const JointEdge = memo(function JointEdge(props: EdgeProps<JointFlowEdge>
   const count = badge?.count ?? 0;
   const [path, lx, ly] = getBezierPath({ sourceX, sourceY, targetX, targetY, sourcePosition, targetPosition });
   const tone = worst ? SEVERITY_HEX[worst] : selected ? INK : MUTED;
-  const chips = data ? hardwareChips(data.joint.hardware) : [];
-  // A string: recomputed on store changes but re-renders only when a name or the findings change.
-  const spoken = useEditorValue((s) => (data ? jointAccessibleName(data.joint, s.nodes, badge) : ""));
+  // Strings: recomputed on store changes but re-render only when a name, the findings or what is checked change.
+  const emptyChip = useEditorValue((s) => (data ? JSON.stringify(emptyJointChip(data.joint, s.nodes)) : ""));
+  const chips = data ? hardwareChips(data.joint.hardware, emptyChip ? JSON.parse(emptyChip) : undefined) : [];
+  const spoken = useEditorValue((s) => (data ? jointAccessibleName(data.joint, s.nodes, badge, jointCoverage(data.joint, s.nodes, jointResult(s.report, data.joint.id), !!s.report).short) : ""));
   return (
     <>
       <BaseEdge id={id} path={path} interactionWidth={16} style={{ stroke: tone, strokeWidth: selected ? 3 : 2 }} />

@@ -9,7 +9,7 @@ import { z } from "zod";
 import { hardwareSchema, nodeSchema, type NodeKind } from "@/shared/linkage/schema";
 import { AN_BOLTS_BY_SIZE } from "@/shared/hardware";
 import { useEditorConfig, useEditorStore, useEditorStoreApi, useEditorValue } from "../context";
-import { KIND_NAMES, ROLES } from "@/shared/linkage/kinds";
+import { KIND_NAMES } from "@/shared/linkage/kinds";
 import { jointName, partName } from "@/shared/linkage/names";
 import { inputText } from "../units";
 import { KindGlyph } from "../nodes/glyphs";
@@ -21,6 +21,7 @@ import { JointChecks } from "./JointChecks";
 import { ReturnCableOffer } from "./ReturnCableOffer";
 import { CableEndFields } from "./CableEndFields";
 import { CARD_TITLE_ID } from "./card-title";
+import { jointCoverage, jointResult, jointSort, type Coverage, type JointSort } from "../joints/coverage";
 
 const formSchemas = new Map<NodeKind, z.ZodType>();
 function nodeFormSchema(kind: NodeKind) {
@@ -33,14 +34,23 @@ function nodeFormSchema(kind: NodeKind) {
   return s;
 }
 
-function SubjectFindings({ subjectKey }: { subjectKey: string }) {
+function SubjectFindings({ subjectKey, coverage }: { subjectKey: string; coverage?: Coverage }) {
   const findings = useEditorStore((s) => s.findingsBySubject[subjectKey] ?? []);
-  if (findings.length === 0)
+  if (findings.length === 0) {
+    // A joint says what "no findings" means there: all checked (the only green line), partly, not checked yet,
+    // or nothing of its own to check. Never a green all-clear where nothing was checked.
+    if (coverage)
+      return (
+        <p data-testid="subject-findings-none" data-coverage={coverage.state} className={`rounded px-2 py-1 text-[11px] ${COVERAGE_TONE[coverage.state]}`}>
+          {coverage.text}
+        </p>
+      );
     return (
       <p data-testid="subject-findings-none" className="rounded bg-ok/10 px-2 py-1 text-[11px] text-ok">
         No findings here from the live check.
       </p>
     );
+  }
   return (
     <ul data-testid="subject-findings" className="space-y-1">
       {findings.map((f, i) => (
@@ -49,6 +59,14 @@ function SubjectFindings({ subjectKey }: { subjectKey: string }) {
     </ul>
   );
 }
+
+const COVERAGE_TONE: Record<Coverage["state"], string> = {
+  checked: "bg-ok/10 text-ok",
+  partly: "border border-caution/30 bg-caution/5 text-ink",
+  notChecked: "border border-caution/30 bg-caution/10 text-caution",
+  nothingHere: "border border-ink/10 bg-paper text-ink-soft",
+  pending: "border border-ink/10 bg-paper text-ink-soft",
+};
 
 /**
  * The part's values still at the starting values it was placed with (the check uses none of them), in one
@@ -161,10 +179,12 @@ export function JointInspector({ id, records }: { id: string; records?: RecordsT
     return j ? jointCardSections(j, s.nodes) : [];
     // eslint-disable-next-line react-hooks/exhaustive-deps
   }, [api, id, ends]);
-  const cableEnd = useEditorStore((s) => {
+  // What the live check covers here (a string, so the card re-renders only when that changes).
+  const coverageJson = useEditorStore((s) => {
     const j = s.joints.find((x) => x.id === id);
-    return !!j && [j.from.node, j.to.node].some((n) => { const k = s.nodes.find((x) => x.id === n)?.kind; return !!k && ROLES[k] === "tension"; });
+    return j ? JSON.stringify([jointCoverage(j, s.nodes, jointResult(s.report, id), !!s.report), jointSort(j, s.nodes).sort]) : "";
   });
+  const [coverage, sort] = useMemo(() => (coverageJson ? (JSON.parse(coverageJson) as [Coverage, JointSort["sort"]]) : [undefined, "other" as const]), [coverageJson]);
   const onValid = useCallback((v: unknown) => api.getState().updateJointHardware(id, v, { coalesce: `joint:${id}` }), [api, id]);
   // eslint-disable-next-line react-hooks/exhaustive-deps
   const value = useMemo(() => joint?.hardware ?? null, [id, epoch, unitSystem]);
@@ -184,13 +204,13 @@ export function JointInspector({ id, records }: { id: string; records?: RecordsT
         Joint card
         <span className="block text-[11px] font-normal text-ink-soft">{name}</span>
       </h3>
-      <SubjectFindings subjectKey={`joint:${id}`} />
+      <SubjectFindings subjectKey={`joint:${id}`} coverage={coverage} />
       <ReturnCableOffer />
-      <JointChecks jointId={id} cableEnd={cableEnd} />
+      <JointChecks jointId={id} coverage={coverage} />
       {records && joint.hardware.rodEnd && <SuggestPart target={records} joint={joint} />}
-      {cableEnd && (
+      {sort === "terminal" && (
         <p className="rounded border border-ink/10 bg-paper px-2 py-1 text-[11px] text-ink-soft" data-testid="cable-terminal-note">
-          A cable&apos;s terminal: its end of the cable or turnbuckle is below (kept on that part&apos;s card too). Then record the bolt or clevis pin, nut and washers that hold the terminal.
+          A cable&apos;s terminal: its end of the cable or turnbuckle is below (kept on that part&apos;s card too), then the bolt or clevis pin, nut and washers that hold the terminal.
         </p>
       )}
       <CableEndFields jointId={id} />

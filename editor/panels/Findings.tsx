@@ -8,7 +8,7 @@ import { useEditorConfig, useEditorStore } from "../context";
 import { useFocusSubject } from "../canvas/viewport";
 import { subjectName } from "@/shared/linkage/names";
 import { fmt, fmtUnit } from "../units";
-import { SEVERITY_BG, SEVERITY_NAMES, SEVERITY_TEXT, SOURCE_NAMES } from "../presentation";
+import { SEVERITY_BG, SEVERITY_NAMES, SEVERITY_TEXT, SOURCE_NAMES, severityCount } from "../presentation";
 
 export const CAUTION =
   "Linkwright's numbers aid your own engineering and the designer's data — they do not replace them. Follow the kit or plans designer's instructions, the airworthiness regulations and a qualified inspector; defer to local rules and licensed practice.";
@@ -148,7 +148,7 @@ export function SummaryStrip({ system, settings }: { system: ControlSystem; sett
         {SEVERITIES.map((sev) => (
           <span key={sev} className={`flex items-center gap-1 ${summary && summary[sev] > 0 ? SEVERITY_TEXT[sev] : ""}`} data-testid={`count-${sev}`} data-count={summary?.[sev] ?? 0}>
             <span className={`h-2 w-2 rounded-sm ${SEVERITY_BG[sev]}`} aria-hidden="true" />
-            {summary?.[sev] ?? 0} {SEVERITY_NAMES[sev].toLowerCase()}
+            {severityCount(summary?.[sev] ?? 0, sev)}
           </span>
         ))}
       </span>

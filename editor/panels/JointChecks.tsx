@@ -5,16 +5,21 @@
  */
 import type { JointCheck } from "@/shared/analysis/types";
 import { useEditorStore } from "../context";
+import type { Coverage } from "../joints/coverage";
 
 function marginText(c: JointCheck) {
   if (c.margin === null) return "—";
   return c.margin >= 999 ? "no load" : `${c.margin >= 0 ? "+" : ""}${c.margin.toFixed(2)}`;
 }
 
-/** `cableEnd`: the joint holds a cable's or turnbuckle's terminal, which has no rod end. */
-export function JointChecks({ jointId, cableEnd }: { jointId: string; cableEnd?: boolean }) {
+/**
+ * `coverage`: what the check covers at this joint (joints/coverage.ts). A joint with nothing of its own to
+ * check (a cable over a pulley, a terminal in a turnbuckle's barrel) has no Checks box: its card says why.
+ */
+export function JointChecks({ jointId, coverage }: { jointId: string; coverage?: Coverage }) {
   const r = useEditorStore((s) => s.report?.joints.find((j) => j.jointId === jointId));
   if (!r || !r.checks) return null;
+  if (r.checks.length === 0 && coverage?.state === "nothingHere") return null;
   const done = r.checks.filter((c) => c.status === "computed");
   return (
     <section className="rounded border border-ink/10 bg-white" data-testid="joint-checks" aria-label="Checks at this joint">
@@ -49,7 +54,11 @@ export function JointChecks({ jointId, cableEnd }: { jointId: string; cableEnd?:
           </tbody>
         </table>
       ) : (
-        r.checks.length === 0 && <p className="px-2 py-1 text-[11px] text-ink-soft" data-testid="joint-checks-empty">{cableEnd ? "Add the bolt or clevis pin and nut holding the terminal to have this joint checked." : "Add a bolt, rod end or bearing to this joint to have it checked."}</p>
+        r.checks.length === 0 && (
+          <p className="px-2 py-1 text-[11px] text-caution" data-testid="joint-checks-empty">
+            <span className="font-semibold">Not checked yet:</span> {coverage?.todo ?? "add a bolt, rod end or bearing to this joint to have it checked"}.
+          </p>
+        )
       )}
     </section>
   );

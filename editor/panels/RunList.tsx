@@ -12,10 +12,15 @@ import { useEditorStore, useEditorValue } from "../context";
 import { SEVERITY_BG } from "../presentation";
 import type { SubjectRef } from "../store";
 import type { Badge } from "../store/types";
+import { jointCoverage, jointHardwareLine, jointResult, type Coverage, type CoverageState } from "../joints/coverage";
 
 const PAGE = 300;
 
-function Count({ badge }: { badge: Badge | undefined }) {
+/** Without findings, a joint's row says what that means (joints/coverage.ts): only a checked joint reads "no findings". */
+const COVERAGE_TONE: Partial<Record<CoverageState, string>> = { partly: "text-caution", notChecked: "font-semibold text-caution", pending: "text-ink-soft" };
+
+function Count({ badge, coverage }: { badge: Badge | undefined; coverage?: Coverage }) {
+  if (!badge && coverage) return <span className={`shrink-0 text-right text-[11px] ${COVERAGE_TONE[coverage.state] ?? "text-ink-soft"}`} data-coverage={coverage.state}>{coverage.short}</span>;
   if (!badge) return <span className="text-[11px] text-ink-soft">no findings</span>;
   return (
     <span className={`rounded px-1.5 text-[11px] font-bold text-white ${SEVERITY_BG[badge.worst]}`}>
@@ -25,7 +30,7 @@ function Count({ badge }: { badge: Badge | undefined }) {
 }
 
 /** One row of the list: a part, or a joint indented under the part before it. */
-function RunRow(p: { itemKey: string; selected: boolean; badge: Badge | undefined; joint?: boolean; onClick: () => void; children: React.ReactNode }) {
+function RunRow(p: { itemKey: string; selected: boolean; badge: Badge | undefined; coverage?: Coverage; joint?: boolean; onClick: () => void; children: React.ReactNode }) {
   return (
     <li>
       <button
@@ -37,7 +42,7 @@ function RunRow(p: { itemKey: string; selected: boolean; badge: Badge | undefine
       >
         {p.joint ? <span aria-hidden="true" className="text-ink-soft">↳</span> : null}
         <span className="min-w-0 flex-1">{p.children}</span>
-        <Count badge={p.badge} />
+        <Count badge={p.badge} coverage={p.coverage} />
       </button>
     </li>
   );
@@ -46,6 +51,7 @@ function RunRow(p: { itemKey: string; selected: boolean; badge: Badge | undefine
 export function RunList({ onOpen }: { onOpen: (s: SubjectRef) => void }) {
   const { nodes, joints } = useEditorStore((s) => ({ nodes: s.nodes, joints: s.joints }));
   const badges = useEditorValue((s) => s.badgeBySubject);
+  const report = useEditorValue((s) => s.report);
   const sel = useEditorStore((s) => s.selection);
   const order = useMemo(() => runOrder({ nodes, joints }), [nodes, joints]);
   const nodeById = useMemo(() => new Map(nodes.map((n) => [n.id, n])), [nodes]);
@@ -84,9 +90,9 @@ export function RunList({ onOpen }: { onOpen: (s: SubjectRef) => void }) {
           const j = jointById.get(it.id);
           if (!j) return null;
           return (
-            <RunRow key={key} itemKey={key} selected={isSel} badge={badge} joint onClick={() => onOpen({ type: "joint", id: it.id })}>
+            <RunRow key={key} itemKey={key} selected={isSel} badge={badge} coverage={jointCoverage(j, nodes, jointResult(report, j.id), !!report)} joint onClick={() => onOpen({ type: "joint", id: it.id })}>
               <span className="block text-[12px]">Joint {jointName(j, nodeById)}</span>
-              <span className="block text-[11px] text-ink-soft">{j.hardware.rodEnd ? "rod end" : j.hardware.bolt ? "bolt" : "no hardware recorded yet"}</span>
+              <span className="block text-[11px] text-ink-soft">{jointHardwareLine(j, nodes)}</span>
             </RunRow>
           );
         })}
