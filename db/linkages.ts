@@ -19,7 +19,7 @@ export type LinkageRow = {
   updated_at: Date;
 };
 
-export const toLinkage = (r: LinkageRow & { author_name?: string | null; summary?: Report["summary"] | null }): Linkage => ({
+export const toLinkage = (r: LinkageRow & { author_name?: string | null; summary?: Report["summary"] | null; part_count?: number | null }): Linkage => ({
   id: r.id,
   buildId: r.build_id,
   name: r.name,
@@ -29,9 +29,16 @@ export const toLinkage = (r: LinkageRow & { author_name?: string | null; summary
   updatedAt: r.updated_at.toISOString(),
   lastAuthor: r.author_name ?? null,
   summary: r.summary ?? null,
+  parts: r.part_count ?? null,
 });
 export type { Linkage, Revision };
 
+/**
+ * The build's linkages with their current revision's author, findings counts and number of parts, in one query
+ * (one row per linkage, each joined to its one current revision). The part count reads the length of the graph's
+ * `nodes` array (the graph is read once per linkage, as the list is drawn): a list tells "nothing drawn yet"
+ * from "checked, nothing open" by it, since an empty drawing's report counts no findings either.
+ */
 export async function listLinkages(buildId: string) {
   const rows = await db("linkages as l")
     .leftJoin("linkage_revisions as r", function () {
@@ -39,9 +46,15 @@ export async function listLinkages(buildId: string) {
     })
     .leftJoin("users as u", "u.id", "r.author_id")
     .where("l.build_id", buildId)
-    .select("l.*", "u.name as author_name", "r.summary")
+    .select("l.*", "u.name as author_name", "r.summary", db.raw("json_array_length(r.graph -> 'nodes') as part_count"))
     .orderByRaw("array_position(array['pitch','roll','yaw','flap','trim','other']::text[], l.system::text), l.name");
   return rows.map(toLinkage);
+}
+
+/** The build's linkages by name only (id and name, in the list's order): for links, without reading any revision. */
+export async function linkageNames(buildId: string): Promise<{ id: string; name: string }[]> {
+  return db("linkages").where({ build_id: buildId }).select("id", "name")
+    .orderByRaw("array_position(array['pitch','roll','yaw','flap','trim','other']::text[], system::text), name");
 }
 
 export async function getLinkage(buildId: string, linkageId: string) {
@@ -70,7 +83,7 @@ export async function createLinkage(
     });
     await trx("builds").where({ id: buildId }).update({ updated_at: trx.fn.now() });
     await audit({ buildId, userId, action: "linkage.create", detail: { linkageId: row.id, name: l.name } }, trx);
-    return toLinkage(row);
+    return toLinkage({ ...row, part_count: graph.nodes.length });
   });
 }
 

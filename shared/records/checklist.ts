@@ -98,12 +98,21 @@ export function controlSenseText(g: LinkageGraph): string {
   }
 }
 
+/**
+ * A surface's travel in the words of the axis it moves about, by its run's system: a rudder (yaw) swings left and
+ * right — its card's "up" travel is the trailing edge to the right, as the motion check reads it (shared/linkage/geometry.ts,
+ * `surfaceUp`) — and elevators, ailerons, flaps and tabs go up and down.
+ */
+export function travelText(system: LinkageGraph["system"], up: number, down: number): string {
+  return system === "yaw" ? `${down}° left / ${up}° right` : `${up}° up / ${down}° down`;
+}
+
 export function linkageItems(g: LinkageGraph): ChecklistItem[] {
   const where = "Whole linkage";
   const surfaces = g.nodes.filter((n) => n.kind === "controlSurface");
   const stops = g.nodes.filter((n) => n.kind === "travelStop");
   const limits = surfaces
-    .map((s) => (s.kind === "controlSurface" ? `${partName(s)} ${s.props.travelUp}° up / ${s.props.travelDown}° down` : ""))
+    .map((s) => (s.kind === "controlSurface" ? `${partName(s)} ${travelText(g.system, s.props.travelUp, s.props.travelDown)}` : ""))
     .join("; ");
   const items: ChecklistItem[] = [
     { jointId: "", subject: "linkage", where, code: "control-sense", text: controlSenseText(g), source: SRC.controlSense },

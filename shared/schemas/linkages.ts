@@ -19,6 +19,8 @@ export const linkage = z.object({
   lastAuthor: z.string().nullable(),
   /** Findings of the current revision (in lists only). */
   summary: z.custom<Report["summary"]>().nullable(),
+  /** Parts drawn in the current revision (in lists and on creation; null where not read): 0 is an empty drawing, which has no findings to count. */
+  parts: z.number().int().nullable(),
 });
 export type Linkage = z.infer<typeof linkage>;
 export const linkagesResponse = z.object({ linkages: z.array(linkage) });

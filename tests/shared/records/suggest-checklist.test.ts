@@ -1,10 +1,11 @@
 /** "Suggest a part" ordering on a known library, and the checklist of the demo pitch linkage. Pure. */
 import { describe, expect, it } from "vitest";
 import { demoPitchLinkage, DEMO_WRONG_JOINT } from "@/shared/demo";
+import { demoRudderLinkage } from "@/shared/demo-rudder";
 import { analyze } from "@/shared/analysis";
 import type { JointResult } from "@/shared/analysis/types";
 import { suggestParts } from "@/shared/records/suggest";
-import { checklistFor } from "@/shared/records/checklist";
+import { checklistFor, travelText } from "@/shared/records/checklist";
 import { hardwareList } from "@/shared/records/hardware";
 import type { Part } from "@/shared/records/parts";
 
@@ -137,6 +138,22 @@ describe("inspection checklist", () => {
     expect(items.find((i) => i.code === "stops-before-limits")!.text).toMatch(/contact at the designer's travel — .*within the drawing's tolerance/);
     expect(items.find((i) => i.code === "stops-before-limits")!.text).not.toMatch(/before the surface reaches/);
     for (const i of items) expect(i.source.text.length).toBeGreaterThan(0);
+  });
+  it("words a surface's travel by the axis it moves about: a rudder left and right, elevators and ailerons up and down", () => {
+    const stops = (graph: ReturnType<typeof demoPitchLinkage>) => checklistFor(graph).find((i) => i.code === "stops-before-limits")!.text;
+    // The demo rudder: 25° each way (shared/demo-rudder.ts, invented figures).
+    const yaw = stops(demoRudderLinkage());
+    expect(yaw).toContain("Rudder 25° left / 25° right");
+    expect(yaw).not.toMatch(/° up|° down/);
+    // A rudder's card "up" is its trailing edge to the right (shared/linkage/geometry.ts surfaceUp), "down" to the left.
+    const lopsided = demoRudderLinkage();
+    lopsided.nodes = lopsided.nodes.map((n) => (n.kind === "controlSurface" ? { ...n, props: { ...n.props, travelUp: 30, travelDown: 20 } } : n));
+    expect(stops(lopsided)).toContain("Rudder 20° left / 30° right");
+    expect(travelText("yaw", 30, 20)).toBe("20° left / 30° right");
+    // Pitch, roll, flaps and trim move up and down.
+    expect(stops(demoPitchLinkage())).toContain("Elevator 25° up / 20° down");
+    expect(stops({ ...demoPitchLinkage(), system: "roll" })).toContain("25° up / 20° down");
+    for (const system of ["pitch", "roll", "flap", "trim", "other"] as const) expect(travelText(system, 25, 20)).toBe("25° up / 20° down");
   });
   it("asks for the control sense of every run, in the words of its system (14 CFR 23.779 table)", () => {
     const g = demoPitchLinkage();

@@ -11,6 +11,7 @@ import { useRouter } from "next/navigation";
 
 import { linkageKeys } from "@/components/query-keys";
 import type { Linkage } from "@/shared/schemas/linkages";
+import { CHECK_STATE_TEXT, checkState, type CheckState } from "@/shared/check-state";
 
 export const SYSTEM_LABEL: Record<ControlSystem, string> = { pitch: "Pitch", roll: "Roll", yaw: "Yaw", flap: "Flaps", trim: "Trim", other: "Other" };
 
@@ -138,14 +139,14 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
                     )}
                   </td>
                   <td>{SYSTEM_LABEL[l.system]}</td>
-                  <td className="space-x-1 whitespace-nowrap">
-                    {l.summary ? (
+                  <td className="space-x-1 whitespace-nowrap" data-testid="linkage-findings" data-state={checkState(l)}>
+                    {checkState(l) === "checked" && l.summary ? (
                       <>
                         {l.summary.hazard ? <Badge tone="hazard">{l.summary.hazard} hazard{l.summary.hazard > 1 ? "s" : ""}</Badge> : null}
                         {l.summary.caution ? <Badge tone="caution">{l.summary.caution} caution{l.summary.caution > 1 ? "s" : ""}</Badge> : null}
                         {!l.summary.hazard && !l.summary.caution ? <Badge tone="ok">none open</Badge> : null}
                       </>
-                    ) : <span className="text-xs text-ink-soft">not checked</span>}
+                    ) : <Badge>{CHECK_STATE_TEXT[checkState(l) as Exclude<CheckState, "checked">]}</Badge>}
                   </td>
                   <td className="text-xs text-ink-soft">rev {l.revision} · {new Date(l.updatedAt).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" })}{l.lastAuthor ? ` · ${l.lastAuthor}` : ""}</td>
                   <td className="whitespace-nowrap text-right">

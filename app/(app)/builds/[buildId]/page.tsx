@@ -12,6 +12,7 @@ import Link from "next/link";
 import { reviewSummaryForBuild } from "@/db/signoffs";
 import { OverviewReview } from "@/components/review/OverviewReview";
 import { ACTION_TEXT } from "@/shared/activity";
+import { openFindingTotals, uncheckedText } from "@/shared/check-state";
 
 export const metadata: Metadata = { title: "Build overview" };
 
@@ -26,13 +27,18 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
     reviewSummaryForBuild(build.id),
     recentEntries(build.id, 5),
   ]);
-  const open = linkages.reduce((acc, l) => ({ hazard: acc.hazard + (l.summary?.hazard ?? 0), caution: acc.caution + (l.summary?.caution ?? 0) }), { hazard: 0, caution: 0 });
+  // Counted over the checked linkages only; the others are named, never added as zeros (shared/check-state.ts).
+  const open = openFindingTotals(linkages);
+  const unchecked = uncheckedText(open);
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="" extra={<Badge>{ROLE_LABEL[role]}</Badge>} />
       <Main className="mx-auto grid max-w-6xl gap-6 p-6 lg:grid-cols-3">
         <div className="min-w-0 space-y-6 lg:col-span-2">
-          <p className="text-ink-soft">{build.model || "Model not set"}{build.registration ? ` · ${build.registration}` : ""}</p>
+          <div>
+            <h1 className="text-xl font-semibold">Overview</h1>
+            <p className="text-ink-soft">{build.model || "Model not set"}{build.registration ? ` · ${build.registration}` : ""}</p>
+          </div>
           <LinkagesPanel buildId={build.id} initial={linkages} canEdit={can(role, "edit")} />
           <Card title="Recent log entries" actions={<Link href={`/builds/${build.id}/log`} className="touch-target inline-flex items-center text-xs text-advisory hover:underline">Open the build log</Link>}>
             {log.length === 0 ? (
@@ -54,11 +60,22 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
           <Card title="Open findings">
             {linkages.length === 0 ? (
               <p className="text-ink-soft">Findings appear here once a linkage has parts and joints.</p>
+            ) : open.checked === 0 ? (
+              <p className="text-ink-soft" data-testid="open-findings-unchecked">
+                No findings to count yet: {unchecked}. Draw each run and fill in its joints&apos; hardware in the editor; the check runs as it saves.
+              </p>
             ) : (
-              <div className="flex gap-4" data-testid="open-findings">
-                <div><p className="text-2xl font-semibold text-hazard">{open.hazard}</p><p className="text-xs text-ink-soft">hazards</p></div>
-                <div><p className="text-2xl font-semibold text-caution">{open.caution}</p><p className="text-xs text-ink-soft">cautions</p></div>
-              </div>
+              <>
+                <div className="flex gap-4" data-testid="open-findings">
+                  <div><p className="text-2xl font-semibold text-hazard">{open.hazard}</p><p className="text-xs text-ink-soft">hazard{open.hazard === 1 ? "" : "s"}</p></div>
+                  <div><p className="text-2xl font-semibold text-caution">{open.caution}</p><p className="text-xs text-ink-soft">caution{open.caution === 1 ? "" : "s"}</p></div>
+                </div>
+                {unchecked ? (
+                  <p className="mt-2 text-xs text-ink-soft" data-testid="open-findings-unchecked">
+                    In {open.checked} checked linkage{open.checked === 1 ? "" : "s"}; not counted: {unchecked}.
+                  </p>
+                ) : null}
+              </>
             )}
           </Card>
           <Card title="Review and sign-off">

@@ -5,6 +5,7 @@ import { listLinkages } from "@/db/linkages";
 import { BuildNav } from "@/components/BuildNav";
 import { Card, EmptyState, Main } from "@/components/ui";
 import { db } from "@/db/index";
+import { CHECK_STATE_TEXT, checkState, type CheckState } from "@/shared/check-state";
 
 export const metadata: Metadata = { title: "Checklist" };
 
@@ -31,9 +32,13 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
           <Card>
             <ul className="divide-y divide-ink/10">
               {linkages.map((l) => (
-                <li key={l.id} className="flex items-center justify-between py-2" data-testid="checklist-linkage">
+                <li key={l.id} className="flex flex-wrap items-center justify-between gap-x-3 py-2" data-testid="checklist-linkage">
                   <Link className="touch-target inline-flex items-center font-medium hover:underline" href={`/builds/${build.id}/checklist/${l.id}`}>{l.name}</Link>
-                  <span className="text-xs text-ink-soft">revision {l.revision} · {n.get(l.id) ?? 0} ticked</span>
+                  <span className="text-xs text-ink-soft">
+                    revision {l.revision} · {n.get(l.id) ?? 0} ticked
+                    {checkState(l) !== "checked" ? <> · {CHECK_STATE_TEXT[checkState(l) as Exclude<CheckState, "checked">]}</>
+                      : l.summary?.hazard ? <> · <span className="font-semibold text-hazard" data-testid="checklist-linkage-hazards">{l.summary.hazard} hazard{l.summary.hazard === 1 ? "" : "s"} in its check</span></> : null}
+                  </span>
                 </li>
               ))}
             </ul>

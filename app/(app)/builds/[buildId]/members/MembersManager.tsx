@@ -47,32 +47,30 @@ export function MembersManager(p: { buildId: string; me: string; canManage: bool
   return (
     <div className="space-y-6">
       {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
-      <Card title="Members">
-        <div className="table-box">
-          <table className="w-full text-left">
-            <thead className="text-xs uppercase tracking-wide text-ink-soft"><tr><th className="py-1">Name</th><th>E-mail</th><th>Role</th><th className="sr-only">Actions</th></tr></thead>
-            <tbody>
-              {members.data.map((m) => (
-                <tr key={m.userId} className="border-t border-ink/10" data-testid="member-row">
-                  <td className="py-2 font-medium">{m.name}{m.userId === p.me ? <span className="text-ink-soft"> (you)</span> : null}</td>
-                  <td className="text-ink-soft">{m.email}</td>
-                  <td>
-                    {p.canManage ? (
-                      <Select aria-label={`Role of ${m.name}`} value={m.role} onChange={(e) => setRole.mutate({ userId: m.userId, role: e.target.value as Role })} className="w-32">
-                        {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
-                      </Select>
-                    ) : ROLE_LABEL[m.role]}
-                  </td>
-                  <td className="text-right">
-                    {p.canManage && m.userId !== p.me ? (
-                      <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Remove ${m.name} from this build?`)) remove.mutate(m.userId); }}>Remove</Button>
-                    ) : null}
-                  </td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+      <Card title="People on this build">
+        {/* A list, not a table: on a phone each person is a row of their own (name and e-mail, then role and Remove). */}
+        <ul className="divide-y divide-ink/10">
+          {members.data.map((m) => (
+            <li key={m.userId} className="grid grid-cols-[minmax(0,1fr)_auto] items-center gap-x-3 gap-y-1 py-2 sm:grid-cols-[minmax(0,1fr)_10rem_5.5rem]" data-testid="member-row">
+              <div className="col-span-2 min-w-0 sm:col-span-1">
+                <p className="font-medium">{m.name}{m.userId === p.me ? <span className="font-normal text-ink-soft"> (you)</span> : null}</p>
+                <p className="text-xs text-ink-soft [overflow-wrap:anywhere]">{m.email}</p>
+              </div>
+              <div className="min-w-0">
+                {p.canManage ? (
+                  <Select aria-label={`Role of ${m.name}`} value={m.role} onChange={(e) => setRole.mutate({ userId: m.userId, role: e.target.value as Role })} className="max-w-[12rem] sm:max-w-none">
+                    {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
+                  </Select>
+                ) : <span className="text-sm"><span className="sr-only">Role: </span>{ROLE_LABEL[m.role]}</span>}
+              </div>
+              <div className="text-right">
+                {p.canManage && m.userId !== p.me ? (
+                  <Button size="sm" tone="ghost" className="touch-target text-hazard" onClick={() => { if (window.confirm(`Remove ${m.name} from this build?`)) remove.mutate(m.userId); }}>Remove</Button>
+                ) : null}
+              </div>
+            </li>
+          ))}
+        </ul>
       </Card>
       {p.canManage ? (
         <Card title="Add someone">
@@ -100,8 +98,8 @@ export function MembersManager(p: { buildId: string; me: string; canManage: bool
         <Card title="Invitations">
           <ul className="divide-y divide-ink/10">
             {invitations.data.map((i) => (
-              <li key={i.id} className="flex items-center justify-between py-2">
-                <span>{i.email} · {ROLE_LABEL[i.role]}</span>
+              <li key={i.id} className="flex flex-wrap items-center justify-between gap-x-3 py-2">
+                <span className="min-w-0 [overflow-wrap:anywhere]">{i.email} · {ROLE_LABEL[i.role]}</span>
                 <span className="flex items-center gap-2 text-xs text-ink-soft">
                   {i.acceptedAt ? `accepted ${new Date(i.acceptedAt).toLocaleDateString("en-CA")}` : `open until ${new Date(i.expiresAt).toLocaleDateString("en-CA")}`}
                   {!i.acceptedAt ? <Button size="sm" tone="ghost" onClick={() => revoke.mutate(i.id)}>Withdraw</Button> : null}

@@ -16,7 +16,11 @@ export default async function MembersPage({ params }: { params: Promise<{ buildI
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/members" />
-      <Main className="mx-auto max-w-4xl p-6">
+      <Main className="mx-auto max-w-4xl space-y-4 p-6">
+        <div>
+          <h1 className="text-xl font-semibold">Members</h1>
+          <p className="text-ink-soft">Who works on this build and what each may do.{manage ? "" : " Only the build's owner adds people or changes their roles."}</p>
+        </div>
         <MembersManager buildId={build.id} me={user.id} canManage={manage} initialMembers={members} initialInvitations={invitations} />
       </Main>
     </>

@@ -22,6 +22,17 @@ const SOURCE: Record<string, string> = {
   bearingFactor: "14 CFR 23.693: 3.33 on plain bearings with angular motion",
 };
 
+/** A setting shown to a member who cannot change it: its value as text, not a field that looks editable. */
+function ReadOnlyValue({ label, value, hint }: { label: string; value: React.ReactNode; hint?: string }) {
+  return (
+    <div className="space-y-0.5">
+      <dt className="text-xs font-semibold uppercase tracking-wide text-ink-soft">{label}</dt>
+      <dd className="text-sm font-medium">{value}</dd>
+      {hint ? <dd className="text-xs text-ink-soft">{hint}</dd> : null}
+    </div>
+  );
+}
+
 function DetailsCard({ buildId, initial, canManage }: { buildId: string; initial: Details; canManage: boolean }) {
   const router = useRouter();
   const [saved, setSaved] = useState(false);
@@ -36,19 +47,28 @@ function DetailsCard({ buildId, initial, canManage }: { buildId: string; initial
       f.setError("root", { message: e instanceof Error ? e.message : String(e) });
     }
   });
+  if (!canManage) {
+    return (
+      <Card title="Build details">
+        <dl className="grid gap-3 sm:grid-cols-3" data-testid="details-read-only">
+          <ReadOnlyValue label="Build name" value={initial.name} />
+          <ReadOnlyValue label="Model or kit" value={initial.model || "Not set"} />
+          <ReadOnlyValue label="Registration" value={initial.registration || "Not set"} />
+        </dl>
+      </Card>
+    );
+  }
   return (
     <Card title="Build details">
       <form onSubmit={submit} className="grid gap-3 sm:grid-cols-3" noValidate onChange={() => setSaved(false)}>
-        <Field label="Build name" htmlFor="s-name" error={f.formState.errors.name?.message}><Input id="s-name" disabled={!canManage} {...f.register("name")} /></Field>
-        <Field label="Model or kit" htmlFor="s-model" error={f.formState.errors.model?.message}><Input id="s-model" disabled={!canManage} {...f.register("model")} /></Field>
-        <Field label="Registration" htmlFor="s-reg" error={f.formState.errors.registration?.message}><Input id="s-reg" disabled={!canManage} {...f.register("registration")} /></Field>
-        {canManage ? (
-          <div className="flex items-center gap-3 sm:col-span-3">
-            <Button type="submit" disabled={f.formState.isSubmitting}>Save details</Button>
-            {saved ? <span className="text-xs text-ok">Saved.</span> : null}
-            {f.formState.errors.root ? <span role="alert" className="text-xs text-hazard">{f.formState.errors.root.message}</span> : null}
-          </div>
-        ) : null}
+        <Field label="Build name" htmlFor="s-name" error={f.formState.errors.name?.message}><Input id="s-name" {...f.register("name")} /></Field>
+        <Field label="Model or kit" htmlFor="s-model" error={f.formState.errors.model?.message}><Input id="s-model" {...f.register("model")} /></Field>
+        <Field label="Registration" htmlFor="s-reg" error={f.formState.errors.registration?.message}><Input id="s-reg" {...f.register("registration")} /></Field>
+        <div className="flex items-center gap-3 sm:col-span-3">
+          <Button type="submit" disabled={f.formState.isSubmitting}>Save details</Button>
+          {saved ? <span className="text-xs text-ok">Saved.</span> : null}
+          {f.formState.errors.root ? <span role="alert" className="text-xs text-hazard">{f.formState.errors.root.message}</span> : null}
+        </div>
       </form>
     </Card>
   );
@@ -88,15 +108,50 @@ function DesignCard({ buildId, initial, canManage }: { buildId: string; initial:
   });
   const num = (name: "ultimateFactor" | "fittingFactor" | "bearingFactor" | `pilotForce.${"pitchStick" | "rollStick" | "yawPedal" | "other"}`, label: string, unit: string, key: string, error?: string) => (
     <Field label={`${label} (${unit})`} htmlFor={`d-${key}`} error={error} hint={SOURCE[key]}>
-      <Input id={`d-${key}`} inputMode="decimal" disabled={!canManage} aria-invalid={!!error} {...f.register(name)} />
+      <Input id={`d-${key}`} inputMode="decimal" aria-invalid={!!error} {...f.register(name)} />
     </Field>
   );
+  const intro = (
+    <p className="mb-3 text-xs text-ink-soft">
+      The load-path check starts from these limit pilot forces and multiplies by these factors. The defaults are the published
+      figures; change them only where the designer&apos;s data or your regulator says otherwise. Every result shows the values in use.
+    </p>
+  );
+  if (!canManage) {
+    const v = (label: string, value: number, unit: string, key: string) => <ReadOnlyValue label={`${label} (${unit})`} value={String(value)} hint={SOURCE[key]} />;
+    const legend = "mb-2 border-b border-ink/10 pb-1 text-sm font-semibold";
+    return (
+      <Card title="Design loads and factors">
+        {intro}
+        <div className="space-y-4" data-testid="design-read-only">
+          <section>
+            <h3 className={legend}>Design pilot forces, limit</h3>
+            <dl className="grid gap-3 sm:grid-cols-2">
+              {v("Stick, pitch", initial.pilotForce.pitchStick, "lbf", "pitchStick")}
+              {v("Stick, roll", initial.pilotForce.rollStick, "lbf", "rollStick")}
+              {v("Pedal, yaw", initial.pilotForce.yawPedal, "lbf", "yawPedal")}
+              {v("Other inputs", initial.pilotForce.other, "lbf", "other")}
+            </dl>
+          </section>
+          <section>
+            <h3 className={legend}>Factors</h3>
+            <dl className="grid gap-3 sm:grid-cols-3">
+              {v("Ultimate factor", initial.ultimateFactor, "×", "ultimateFactor")}
+              {v("Fitting factor", initial.fittingFactor, "×", "fittingFactor")}
+              {v("Bearing factor", initial.bearingFactor, "×", "bearingFactor")}
+            </dl>
+          </section>
+          <dl className="grid gap-3 sm:grid-cols-2">
+            <ReadOnlyValue label="Bearing factor on spherical rod ends" value={initial.bearingFactorOnRodEnds ? "Applied" : "Not applied"} />
+            <ReadOnlyValue label="Dual controls" value={initial.dualControls ? "Yes: each side takes 75 % of the pilot force" : "No"} />
+          </dl>
+        </div>
+      </Card>
+    );
+  }
   return (
     <Card title="Design loads and factors">
-      <p className="mb-3 text-xs text-ink-soft">
-        The load-path check starts from these limit pilot forces and multiplies by these factors. The defaults are the published
-        figures; change them only where the designer&apos;s data or your regulator says otherwise. Every result shows the values in use.
-      </p>
+      {intro}
       <form onSubmit={submit} noValidate className="space-y-4">
         <fieldset className="grid gap-3 sm:grid-cols-2">
           <legend className="mb-2 text-xs font-semibold uppercase tracking-wide text-ink-soft">Design pilot forces, limit</legend>
@@ -112,20 +167,18 @@ function DesignCard({ buildId, initial, canManage }: { buildId: string; initial:
           {num("bearingFactor", "Bearing factor", "×", "bearingFactor", e.bearingFactor?.message)}
         </fieldset>
         <label className="flex items-start gap-2">
-          <input type="checkbox" className="mt-0.5 shrink-0" disabled={!canManage} {...f.register("bearingFactorOnRodEnds")} />
+          <input type="checkbox" className="mt-0.5 shrink-0" {...f.register("bearingFactorOnRodEnds")} />
           <span>Apply the bearing factor to spherical rod ends too <span className="block text-xs text-ink-soft">Whether a rod end counts as a ball bearing under 14 CFR 23.693 is a matter of interpretation. Off: a rod end&apos;s rating must not be exceeded at limit × ultimate × fitting factor.</span></span>
         </label>
         <label className="flex items-start gap-2">
-          <input type="checkbox" className="mt-0.5 shrink-0" disabled={!canManage} {...f.register("dualControls")} />
+          <input type="checkbox" className="mt-0.5 shrink-0" {...f.register("dualControls")} />
           <span>Dual controls <span className="block text-xs text-ink-soft">Each side takes 75 % of the pilot force (Part 23 appendix A); both pilots are taken as pushing the same way.</span></span>
         </label>
-        {canManage ? (
-          <div className="flex flex-wrap items-center gap-3">
-            <Button type="submit" disabled={f.formState.isSubmitting} data-testid="save-design-settings">Save and re-check</Button>
-            <Button type="button" tone="secondary" onClick={() => f.reset(DEFAULT_SETTINGS)}>Put back the published defaults</Button>
-            {status ? <span role="status" className="text-xs text-ink-soft">{status}</span> : null}
-          </div>
-        ) : <p className="text-xs text-ink-soft">Only the build&apos;s owner can change these.</p>}
+        <div className="flex flex-wrap items-center gap-3">
+          <Button type="submit" disabled={f.formState.isSubmitting} data-testid="save-design-settings">Save and re-check</Button>
+          <Button type="button" tone="secondary" onClick={() => f.reset(DEFAULT_SETTINGS)}>Put back the published defaults</Button>
+          {status ? <span role="status" className="text-xs text-ink-soft">{status}</span> : null}
+        </div>
       </form>
     </Card>
   );

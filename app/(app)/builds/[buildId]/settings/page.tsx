@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { requirePageBuild } from "@/lib/page-access";
 import { BuildNav } from "@/components/BuildNav";
-import { can } from "@/shared/roles";
+import { can, ROLE_LABEL } from "@/shared/roles";
 import { settingsSchema } from "@/shared/analysis/types";
 import { SettingsForm } from "./SettingsForm";
 import { Card, Main } from "@/components/ui";
@@ -16,6 +16,15 @@ export default async function SettingsPage({ params }: { params: Promise<{ build
     <>
       <BuildNav buildId={build.id} buildName={build.name} current="/settings" />
       <Main className="mx-auto max-w-4xl space-y-6 p-6">
+        <div>
+          <h1 className="text-xl font-semibold">Build settings</h1>
+          <p className="text-ink-soft">The build&apos;s details, and the design loads and factors every linkage is checked with.</p>
+          {can(role, "manage") ? null : (
+            <p role="note" className="mt-3 rounded border border-ink/15 bg-white px-3 py-2 text-sm" data-testid="settings-read-only">
+              <strong className="font-semibold">Read only.</strong> Only the build&apos;s owner can change these settings; as a {ROLE_LABEL[role].toLowerCase()} you see the values in use.
+            </p>
+          )}
+        </div>
         {can(role, "manage") ? (
           <Card title="Keep a copy of the whole build">
             <p className="mb-2 text-ink-soft">

@@ -12,10 +12,11 @@ import { ExportButton } from "@/components/records/ExportButton";
 
 import { checklistKeys } from "@/components/query-keys";
 import type { checklistResponse, ChecklistItemView as Item } from "@/shared/schemas/checklist";
+import { checklistStatus, hazardsByItem, itemKeyOf, type ChecklistFindings } from "@/shared/records/checklist-findings";
 
 type Data = z.infer<typeof checklistResponse>;
 
-export function ChecklistScreen(p: { buildId: string; linkageId: string; linkageName: string; revision?: number; canTick: boolean; canEdit: boolean }) {
+export function ChecklistScreen(p: { buildId: string; linkageId: string; linkageName: string; revision?: number; canTick: boolean; canEdit: boolean; findings: ChecklistFindings }) {
   const url = `/api/builds/${p.buildId}/linkages/${p.linkageId}/checklist`;
   const key = checklistKeys.one(p.linkageId, p.revision);
   const qc = useQueryClient();
@@ -42,7 +43,17 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
     },
     onError: (e) => { setError(e instanceof Error ? e.message : String(e)); void qc.invalidateQueries({ queryKey: key }); },
   });
-  if (q.isLoading) return <p className="text-ink-soft">Loading the checklist…</p>;
+  // The current revision's open hazards come with the page (read on the server): they show while the list loads.
+  if (q.isLoading) {
+    return (
+      <div className="space-y-4">
+        <h1 className="text-xl font-semibold">Checklist — {p.linkageName}</h1>
+        <FindingsPanel buildId={p.buildId} linkageId={p.linkageId} f={p.findings} viewed={p.revision ?? p.findings.revision} />
+        <p className="text-ink-soft">Loading the checklist…</p>
+        <Caution />
+      </div>
+    );
+  }
   if (q.error || !q.data) return <p role="alert" className="text-hazard">{String(q.error instanceof Error ? q.error.message : "The checklist could not be loaded.")}</p>;
   // What this device changed without network shows over the server's state until it is sent.
   const mine = queued.filter((x): x is QueuedTick => x.kind === "tick" && x.url === url && x.revision === q.data!.revision);
@@ -57,13 +68,18 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
     else groups.push({ jointId: i.jointId, subject: i.subject, where: i.where, items: [i] });
   }
   const done = d.items.filter((i) => i.tickedAt).length;
+  // The open hazards stand beside this list's items only when it is the list of the revision they were found in.
+  const here = d.revision === p.findings.revision;
+  const hazards = here ? hazardsByItem(p.findings) : new Map<string, string[]>();
+  const status = here ? checklistStatus(done, d.items.length, p.findings) : null;
   return (
     <div className="space-y-4">
       <div className="flex flex-wrap items-end justify-between gap-3">
         <div>
           <Link href={`/builds/${p.buildId}/checklist`} className="no-print text-xs text-ink-soft hover:underline">All checklists</Link>
           <h1 className="text-xl font-semibold">Checklist — {p.linkageName}</h1>
-          <p className="text-ink-soft">Revision {d.revision}{d.revision !== d.currentRevision ? ` (the linkage is now at revision ${d.currentRevision})` : ""} · <span data-testid="checklist-progress">{done} of {d.items.length} ticked</span></p>
+          <p className="text-ink-soft">Revision {d.revision}{d.revision !== d.currentRevision ? ` (the linkage is now at revision ${d.currentRevision})` : ""} · <span data-testid="checklist-progress">{done} of {d.items.length} ticked</span>
+            {status ? <StatusText s={status} /> : null}</p>
         </div>
         <div className="no-print flex gap-2">
           <Button tone="secondary" onClick={() => window.print()}>Print</Button>
@@ -71,6 +87,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
         </div>
       </div>
       {error ? <p role="alert" className="rounded bg-hazard/10 px-3 py-2 text-xs text-hazard">{error}</p> : null}
+      <FindingsPanel buildId={p.buildId} linkageId={p.linkageId} f={p.findings} viewed={d.revision} />
       <OfflineBanner ticks={mine} photos={queued.filter((x) => x.kind === "photo" && x.url.startsWith(`/api/builds/${p.buildId}/linkages/${p.linkageId}/`)).length} />
       {d.items.length <= 2 ? <p className="rounded border border-dashed border-ink/25 p-4 text-ink-soft">This revision has no joints yet, so only the travel checks show. Add joints with their hardware in the editor and each one brings its own checks.</p> : null}
       {groups.map((g) => (
@@ -80,7 +97,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
             {g.jointId ? <Link className="no-print touch-target inline-flex items-center text-xs text-advisory hover:underline" href={`/builds/${p.buildId}/linkages/${p.linkageId}?select=${encodeURIComponent(g.jointId)}`}>Open in the editor</Link> : null}
           </header>
           <ul className="divide-y divide-ink/5">
-            {g.items.map((i) => <ItemRow key={i.code} i={i} canTick={p.canTick} onChange={(v) => tick.mutate({ jointId: i.jointId, code: i.code, ...v })} />)}
+            {g.items.map((i) => <ItemRow key={i.code} i={i} hazards={hazards.get(i.jointId)} canTick={p.canTick} onChange={(v) => tick.mutate({ jointId: i.jointId, code: i.code, ...v })} />)}
           </ul>
           {g.subject === "joint" ? <div className="border-t border-ink/10 px-4 py-2"><JointPhotos buildId={p.buildId} linkageId={p.linkageId} jointId={g.jointId} jointName={g.where} canEdit={p.canEdit} /></div> : null}
         </section>
@@ -90,7 +107,9 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
   );
 }
 
-function ItemRow({ i, canTick, onChange }: { i: Item & { pending?: QueuedTick }; canTick: boolean; onChange: (v: { ticked: boolean; note?: string }) => void }) {
+const ON: Record<Item["subject"], string> = { joint: "this joint", part: "this part", linkage: "the whole linkage" };
+
+function ItemRow({ i, hazards, canTick, onChange }: { i: Item & { pending?: QueuedTick }; hazards?: string[]; canTick: boolean; onChange: (v: { ticked: boolean; note?: string }) => void }) {
   const id = `ck-${i.jointId}-${i.code}`;
   const [note, setNote] = useState(i.note);
   const [editing, setEditing] = useState(false);
@@ -102,6 +121,11 @@ function ItemRow({ i, canTick, onChange }: { i: Item & { pending?: QueuedTick };
       <input id={id} type="checkbox" className="mt-1 h-5 w-5 shrink-0" checked={checked} disabled={!canTick} onChange={(e) => { setChecked(e.target.checked); onChange({ ticked: e.target.checked }); }} />
       <div className="flex-1">
         <label htmlFor={id} className="text-sm">{i.text}</label>
+        {hazards?.length ? (
+          <p className="text-xs font-medium text-hazard" data-testid="item-hazard">
+            Open hazard{hazards.length === 1 ? "" : "s"} on {ON[i.subject]}: {hazards.join("; ")}.
+          </p>
+        ) : null}
         <p className="text-xs text-ink-soft">
           {i.tickedAt ? <>Ticked by {i.tickedBy} · {new Date(i.tickedAt).toLocaleString("en-CA")}</> : "Not ticked"} · source: {i.source.text}
         </p>
@@ -160,5 +184,76 @@ function Conflict({ q }: { q: QueuedTick }) {
         <Button size="sm" tone="secondary" onClick={() => void choose("theirs")} data-testid="conflict-keep-theirs">Keep theirs</Button>
       </div>
     </div>
+  );
+}
+
+/** Whether the list may be called complete (shared/records/checklist-findings.ts): never while a hazard is open. */
+function StatusText({ s }: { s: ReturnType<typeof checklistStatus> }) {
+  if (s.complete) return <> · <span className="font-semibold text-ok" data-testid="checklist-status">Complete</span></>;
+  if (s.why === "hazards") return <> · <span className="font-semibold text-hazard" data-testid="checklist-status">Not complete: {s.hazards} hazard{s.hazards === 1 ? "" : "s"} open</span></>;
+  if (s.why === "nothing-drawn") return <> · <span className="font-semibold text-ink" data-testid="checklist-status">Not complete: nothing is drawn yet</span></>;
+  if (s.why === "not-checked") return <> · <span className="font-semibold text-ink" data-testid="checklist-status">Not complete: this revision&apos;s check is not stored</span></>;
+  return null;
+}
+
+const SEVERITY_WORD = { hazard: "Hazard", caution: "Caution" } as const;
+
+/** The open hazards and cautions of the current revision's stored check, with links to them in the editor. */
+function FindingsPanel({ buildId, linkageId, f, viewed }: { buildId: string; linkageId: string; f: ChecklistFindings; viewed: number }) {
+  const editor = `/builds/${buildId}/linkages/${linkageId}`;
+  const hazards = f.open.filter((o) => o.severity === "hazard");
+  const cautions = f.open.filter((o) => o.severity === "caution");
+  const which = viewed === f.revision ? `revision ${f.revision}` : `the current revision (${f.revision})`;
+  const openLink = <Link className="no-print touch-target inline-flex items-center text-xs font-medium text-advisory hover:underline" href={editor}>Open the linkage in the editor</Link>;
+  if (!f.drawn) {
+    return (
+      <section className="rounded-lg border border-ink/20 bg-white p-4" aria-labelledby="ck-findings" data-testid="checklist-findings" data-hazards="unknown">
+        <h2 id="ck-findings" className="text-sm font-semibold">Nothing is drawn in {which} yet</h2>
+        <p className="text-sm text-ink-soft">With no parts there is nothing for the load-path check to check, so this list is not complete. Draw the run in the editor; its joints bring their own items here.</p>
+        {openLink}
+      </section>
+    );
+  }
+  if (!f.checked) {
+    return (
+      <section className="rounded-lg border border-ink/20 bg-white p-4" aria-labelledby="ck-findings" data-testid="checklist-findings" data-hazards="unknown">
+        <h2 id="ck-findings" className="text-sm font-semibold">The check of {which} is not stored</h2>
+        <p className="text-sm text-ink-soft">It was saved without the load-path check, so its hazards are not known here, and this list is not complete until they are. Open it in the editor to see its findings; the next save stores them.</p>
+        {openLink}
+      </section>
+    );
+  }
+  if (f.open.length === 0) {
+    return (
+      <section className="rounded-lg border border-ink/10 bg-white p-4" aria-labelledby="ck-findings" data-testid="checklist-findings" data-hazards="0">
+        <h2 id="ck-findings" className="text-sm font-semibold">No open hazards or cautions in the check of {which}</h2>
+        {f.acknowledged ? <p className="text-xs text-ink-soft">{f.acknowledged} finding{f.acknowledged === 1 ? " was" : "s were"} acknowledged, with a reason, for this hardware.</p> : null}
+      </section>
+    );
+  }
+  const counts = [hazards.length ? `${hazards.length} open hazard${hazards.length === 1 ? "" : "s"}` : "", cautions.length ? `${cautions.length} caution${cautions.length === 1 ? "" : "s"}` : ""].filter(Boolean).join(" and ");
+  return (
+    <section className={`rounded-lg border bg-white p-4 ${hazards.length ? "border-hazard/40" : "border-caution/40"}`} aria-labelledby="ck-findings" data-testid="checklist-findings" data-hazards={hazards.length} data-cautions={cautions.length}>
+      <div className="flex flex-wrap items-baseline justify-between gap-x-3">
+        <h2 id="ck-findings" className={`text-sm font-semibold ${hazards.length ? "text-hazard" : "text-caution"}`}>{counts} in the check of {which}</h2>
+        {openLink}
+      </div>
+      <p className="text-sm text-ink-soft">
+        {hazards.length
+          ? "Ticking the items below records what was inspected; it does not clear a hazard, and the list is not complete while one is open. Fix the hardware in the editor and save, or have the finding acknowledged with a reason by a reviewer or the owner."
+          : "Cautions are checks not made or points to confirm: see each one in the editor."}
+        {f.acknowledged ? ` ${f.acknowledged} other finding${f.acknowledged === 1 ? " was" : "s were"} acknowledged.` : ""}
+      </p>
+      <ul className="mt-2 space-y-1 text-sm">
+        {f.open.map((o, n) => (
+          <li key={n} data-testid="checklist-finding" data-severity={o.severity}>
+            <span className={`font-semibold ${o.severity === "hazard" ? "text-hazard" : "text-caution"}`}>{SEVERITY_WORD[o.severity]}: {o.title}</span>
+            {" — "}{o.where}
+            {itemKeyOf(o.subject) ? <>{" "}<Link className="no-print text-xs text-advisory underline" href={`${editor}?select=${encodeURIComponent(o.subject.id)}`}>show in the editor</Link></> : null}
+            {o.severity === "hazard" ? <span className="block text-xs text-ink-soft">{o.message}</span> : null}
+          </li>
+        ))}
+      </ul>
+    </section>
   );
 }

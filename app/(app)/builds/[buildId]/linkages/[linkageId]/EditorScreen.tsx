@@ -20,7 +20,13 @@ const ReviewThread = dynamic(() => import("@/components/review/ReviewThread").th
 type Props = ComponentProps<typeof LinkageEditorType> & { review?: Omit<ReviewMe, "canComment">; stored?: Stored };
 
 export function EditorScreen({ review, stored, ...props }: Props) {
-  return <StoredFindingsContext.Provider value={stored ?? null}><Screen review={review} {...props} /></StoredFindingsContext.Provider>;
+  return (
+    <StoredFindingsContext.Provider value={stored ?? null}>
+      {/* The page's one heading, for screen readers' heading lists: the editor's toolbar (editor/toolbar) shows the same name on screen. */}
+      <h1 className="sr-only">{props.linkageName}: linkage editor</h1>
+      <Screen review={review} {...props} />
+    </StoredFindingsContext.Provider>
+  );
 }
 
 function Screen({ review, ...props }: Omit<Props, "stored">) {
