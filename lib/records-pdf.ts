@@ -16,6 +16,7 @@ import { findingTitle } from "@/shared/analysis/finding-title";
 import { groupFingerprint } from "./record-fingerprint";
 import { getObject } from "./storage";
 import { printable } from "./pdf-wrap";
+import type { ChecklistFindings } from "@/shared/records/checklist-findings";
 import { Doc, embedStored, HAZARD, INK, isJpeg, M, own, PAGE, pool, reencoded, SOFT } from "./pdf-doc";
 
 export { printable };
@@ -166,11 +167,22 @@ function drawChecklist(doc: Doc, items: ChecklistItem[], ticks: Tick[]) {
   }
 }
 
-export async function checklistPdf(build: Build, linkage: Linkage, revision: number, items: ChecklistItem[], ticks: Tick[]) {
+/**
+ * `check`: the open hazards and cautions of the printed revision's stored check (shared/records/checklist-findings.ts):
+ * printed first, every one of them, so a list with every box ticked is never read as complete while they stand.
+ */
+export async function checklistPdf(build: Build, linkage: Linkage, revision: number, items: ChecklistItem[], ticks: Tick[], check: ChecklistFindings) {
   const doc = await new Doc(`${build.name} — ${linkage.name} checklist`).init();
   doc.text(`Inspection checklist — ${linkage.name}`, { size: 18, bold: true, gap: 4 });
   doc.text(`${build.name}${build.registration ? ` (${build.registration})` : ""} · revision ${revision}${revision !== linkage.revision ? ` (current is ${linkage.revision})` : ""} · printed ${new Date().toISOString().slice(0, 10)}`, { color: SOFT, gap: 6 });
   doc.rule();
+  const hazards = check.open.filter((f) => f.severity === "hazard").length, cautions = check.open.length - hazards;
+  if (!check.drawn) doc.text("Not complete: nothing is drawn in this revision, so nothing was checked.", { size: 10, bold: true, color: HAZARD, gap: 4 });
+  else if (!check.checked) doc.text("Not complete: this revision was saved without its check; open it in the editor and save to check it.", { size: 10, bold: true, color: HAZARD, gap: 4 });
+  else if (check.open.length) {
+    doc.text(`Not complete while these stand: ${hazards} open hazard${hazards === 1 ? "" : "s"} and ${cautions} open caution${cautions === 1 ? "" : "s"} in this revision's check${check.acknowledged ? ` (${check.acknowledged} acknowledged by a reviewer, not listed)` : ""}.`, { size: 10, bold: true, color: hazards ? HAZARD : INK, gap: 3 });
+    for (const f of check.open) doc.text(`• ${f.severity === "hazard" ? "Hazard" : "Caution"} — ${f.title} — ${f.where}: ${f.message}`, { size: 8, x: M + 8, color: f.severity === "hazard" ? HAZARD : INK, gap: 1 });
+  } else doc.text(`This revision's check has no open hazard or caution${check.acknowledged ? ` (${check.acknowledged} acknowledged by a reviewer)` : ""}.`, { size: 9, gap: 4 });
   drawChecklist(doc, items, ticks);
   return doc.finish();
 }

@@ -69,7 +69,11 @@ export const KINDS: { [K in ExportKind]: Kind<K> } = {
       const rev = await getRevision(linkage.id, p.revision);
       if (!rev) throw new ExportFailure(`Revision ${p.revision} of ${linkage.name} no longer exists.`);
       await progress(0.2, "Reading the ticks");
-      const bytes = await checklistPdf(build, linkage, rev.revision, checklistFor(rev.graph, analyze(rev.graph, build.analysisSettings)), await listTicks(linkage.id, rev.revision));
+      // The revision's open findings from the report stored with it (as the checklist page shows them), not computed again.
+      const [{ listAcknowledgements }, { findingStates }, { checklistFindings }] = await Promise.all([import("@/db/acknowledgements"), import("@/shared/review/hazards"), import("@/shared/records/checklist-findings")]);
+      const stored = rev.analysis;
+      const check = checklistFindings(rev.revision, rev.graph.nodes.length, stored ? findingStates(stored, rev.graph, await listAcknowledgements(linkage.id)) : null);
+      const bytes = await checklistPdf(build, linkage, rev.revision, checklistFor(rev.graph, stored ?? analyze(rev.graph, build.analysisSettings)), await listTicks(linkage.id, rev.revision), check);
       return { body: Buffer.from(bytes), contentType: "application/pdf", filename: `${slug(build.name)}-${slug(linkage.name)}-rev${rev.revision}-checklist.pdf` };
     },
   },

@@ -340,6 +340,9 @@ describe("hardware list and checklist", () => {
     renderPdf(pdf.bytes, "checklist");
     const text = pdfText(pdf.bytes);
     expect(text).toContain(`1 of ${count} items ticked`);
+    // The stored check's open findings come first: the list is not complete while they stand (demo: 2 hazards, 1 caution).
+    expect(squash(text)).toContain(squash("Not complete while these stand: 2 open hazards and 1 open caution"));
+    expect(squash(text)).toContain(squash("Hazard — Jam nut missing"));
     expect(text).toContain("Ticked by Test rec-reviewer");
     expect(squash(text)).toContain(squash(CAUTION_TEXT));
   });

@@ -58,7 +58,7 @@ describe("drawing a cable circuit", () => {
     await offer.waitFor();
     expect(await offer.getAttribute("data-cable")).toBe(cable);
     // A terminal's card asks for what holds it, not for a rod end.
-    await expect(page.getByTestId("joint-checks-empty").textContent()).resolves.toContain("clevis pin and nut holding the terminal");
+    await expect.poll(() => page.getByTestId("joint-card").getByTestId("joint-todo").textContent(), { timeout: 10_000 }).toMatch(/bolt or clevis pin that holds this joint/i);
     await shot(page, "cables-01-return-offered");
     await page.keyboard.press("r");
     await expect.poll(() => page.locator("[data-kind=cable]").count()).toBe(2);
