@@ -15,6 +15,10 @@ import { CHECK_STATE_TEXT, checkState, type CheckState } from "@/shared/check-st
 
 export const SYSTEM_LABEL: Record<ControlSystem, string> = { pitch: "Pitch", roll: "Roll", yaw: "Yaw", flap: "Flaps", trim: "Trim", other: "Other" };
 
+/** "rev 3 · 5 Dec 2026, 12:55 · Dana": the linkage's current revision, when, and by whom. */
+const lastChange = (l: { revision: number; updatedAt: string; lastAuthor: string | null }) =>
+  `rev ${l.revision} · ${new Date(l.updatedAt).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" })}${l.lastAuthor ? ` · ${l.lastAuthor}` : ""}`;
+
 export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; initial: Linkage[]; canEdit: boolean }) {
   const qc = useQueryClient();
   const key = linkageKeys.list(buildId);
@@ -59,6 +63,13 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
     onSuccess: () => invalidate(),
     onError,
   });
+  /** Rename and Delete of one linkage: in their own column, or under the name on a phone. */
+  const actions = (l: Linkage) => (canEdit && renaming !== l.id ? (
+    <span className="space-x-1">
+      <Button size="sm" tone="ghost" onClick={() => setRenaming(l.id)}>Rename</Button>
+      <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Delete "${l.name}" and all its revisions? This cannot be undone.`)) remove.mutate(l.id); }}>Delete</Button>
+    </span>
+  ) : null);
 
   return (
     <Card
@@ -122,7 +133,7 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
         <div className="table-box">
           <table className="w-full text-left">
             <thead className="text-xs uppercase tracking-wide text-ink-soft">
-              <tr className="[&>th]:pr-3"><th className="py-1">Name</th><th>System</th><th>Findings</th><th>Last change</th><th className="sr-only">Actions</th></tr>
+              <tr className="[&>th]:pr-3"><th className="py-1">Name</th><th>System</th><th>Findings</th><th className="hidden sm:table-cell">Last change</th><th className="sr-only hidden sm:table-cell">Actions</th></tr>
             </thead>
             <tbody>
               {linkages.map((l) => (
@@ -137,9 +148,12 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
                     ) : (
                       <Link href={`/builds/${buildId}/linkages/${l.id}`} className="font-medium text-advisory hover:underline">{l.name}</Link>
                     )}
+                    {/* On a phone the last change sits under the name: a fifth column would not fit. */}
+                    <div className="text-xs text-ink-soft sm:hidden">{lastChange(l)}</div>
+                    <div className="-ml-2 sm:hidden">{actions(l)}</div>
                   </td>
                   <td>{SYSTEM_LABEL[l.system]}</td>
-                  <td className="space-x-1 whitespace-nowrap" data-testid="linkage-findings" data-state={checkState(l)}>
+                  <td className="space-x-1 sm:whitespace-nowrap" data-testid="linkage-findings" data-state={checkState(l)}>
                     {checkState(l) === "checked" && l.summary ? (
                       <>
                         {l.summary.hazard ? <Badge tone="hazard">{l.summary.hazard} hazard{l.summary.hazard > 1 ? "s" : ""}</Badge> : null}
@@ -148,15 +162,8 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
                       </>
                     ) : <Badge>{CHECK_STATE_TEXT[checkState(l) as Exclude<CheckState, "checked">]}</Badge>}
                   </td>
-                  <td className="text-xs text-ink-soft">rev {l.revision} · {new Date(l.updatedAt).toLocaleString("en-CA", { dateStyle: "medium", timeStyle: "short" })}{l.lastAuthor ? ` · ${l.lastAuthor}` : ""}</td>
-                  <td className="whitespace-nowrap text-right">
-                    {canEdit && renaming !== l.id ? (
-                      <span className="space-x-1">
-                        <Button size="sm" tone="ghost" onClick={() => setRenaming(l.id)}>Rename</Button>
-                        <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Delete "${l.name}" and all its revisions? This cannot be undone.`)) remove.mutate(l.id); }}>Delete</Button>
-                      </span>
-                    ) : null}
-                  </td>
+                  <td className="hidden text-xs text-ink-soft sm:table-cell">{lastChange(l)}</td>
+                  <td className="hidden whitespace-nowrap text-right sm:table-cell">{actions(l)}</td>
                 </tr>
               ))}
             </tbody>
