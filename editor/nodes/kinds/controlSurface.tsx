@@ -10,8 +10,8 @@ export const controlSurface = defineEditorKind({
   ),
   lines: (p) => [`up ${p.travelUp}° · down ${p.travelDown}°`],
   fields: [
-    { type: "number", path: "props.travelUp", label: "Up travel", q: "angle" },
-    { type: "number", path: "props.travelDown", label: "Down travel", q: "angle" },
+    { type: "number", path: "props.travelUp", label: "Up travel", q: "angle", hint: "on a rudder: travel to the right, as the checklist words it" },
+    { type: "number", path: "props.travelDown", label: "Down travel", q: "angle", hint: "on a rudder: travel to the left" },
     { type: "number", path: "props.hingeMoment", label: "Hinge moment", q: "torque", hint: "if the designer gives one" },
   ],
 });
