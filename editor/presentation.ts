@@ -5,12 +5,7 @@
 import type { Severity, SourceTag } from "@/shared/analysis/types";
 
 export const SEVERITY_NAMES: Record<Severity, string> = { hazard: "Hazard", caution: "Caution", advisory: "Advisory" };
-/** The lower-case word for one finding of a severity and for several. */
-export const SEVERITY_WORDS: Record<Severity, readonly [one: string, many: string]> = { hazard: ["hazard", "hazards"], caution: ["caution", "cautions"], advisory: ["advisory", "advisories"] };
-/** "1 hazard", "2 hazards", "0 advisories". */
-export function severityCount(n: number, s: Severity): string {
-  return `${n} ${SEVERITY_WORDS[s][n === 1 ? 0 : 1]}`;
-}
+export { SEVERITY_WORDS, severityCount } from "@/shared/analysis/finding-title";
 const SEVERITY_RANK: Record<Severity, number> = { hazard: 3, caution: 2, advisory: 1 };
 export const SEVERITY_BORDER: Record<Severity, string> = { hazard: "border-hazard", caution: "border-caution", advisory: "border-advisory" };
 export const SEVERITY_BG: Record<Severity, string> = { hazard: "bg-hazard", caution: "bg-caution", advisory: "bg-advisory" };

@@ -42,3 +42,9 @@ export function uncheckedText(t: { notChecked: number; nothingDrawn: number }) {
   if (t.nothingDrawn) parts.push(`${t.nothingDrawn}${t.notChecked ? "" : ` linkage${t.nothingDrawn === 1 ? "" : "s"}`} with nothing drawn yet`);
   return parts.join(" and ");
 }
+
+/** The words of a linkage whose counts are not a check's result, or null when they are (checked). */
+export function notCheckedWords(l: Counted): string | null {
+  const s = checkState(l);
+  return s === "checked" ? null : CHECK_STATE_TEXT[s];
+}

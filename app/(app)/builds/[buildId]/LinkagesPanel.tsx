@@ -11,7 +11,8 @@ import { useRouter } from "next/navigation";
 
 import { linkageKeys } from "@/components/query-keys";
 import type { Linkage } from "@/shared/schemas/linkages";
-import { CHECK_STATE_TEXT, checkState, type CheckState } from "@/shared/check-state";
+import { checkState, notCheckedWords } from "@/shared/check-state";
+import { severityCount } from "@/shared/analysis/finding-title";
 
 export const SYSTEM_LABEL: Record<ControlSystem, string> = { pitch: "Pitch", roll: "Roll", yaw: "Yaw", flap: "Flaps", trim: "Trim", other: "Other" };
 
@@ -156,11 +157,11 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
                   <td className="space-x-1 sm:whitespace-nowrap" data-testid="linkage-findings" data-state={checkState(l)}>
                     {checkState(l) === "checked" && l.summary ? (
                       <>
-                        {l.summary.hazard ? <Badge tone="hazard">{l.summary.hazard} hazard{l.summary.hazard > 1 ? "s" : ""}</Badge> : null}
-                        {l.summary.caution ? <Badge tone="caution">{l.summary.caution} caution{l.summary.caution > 1 ? "s" : ""}</Badge> : null}
+                        {l.summary.hazard ? <Badge tone="hazard">{severityCount(l.summary.hazard, "hazard")}</Badge> : null}
+                        {l.summary.caution ? <Badge tone="caution">{severityCount(l.summary.caution, "caution")}</Badge> : null}
                         {!l.summary.hazard && !l.summary.caution ? <Badge tone="ok">none open</Badge> : null}
                       </>
-                    ) : <Badge>{CHECK_STATE_TEXT[checkState(l) as Exclude<CheckState, "checked">]}</Badge>}
+                    ) : <Badge>{notCheckedWords(l)}</Badge>}
                   </td>
                   <td className="hidden text-xs text-ink-soft sm:table-cell">{lastChange(l)}</td>
                   <td className="hidden whitespace-nowrap text-right sm:table-cell">{actions(l)}</td>

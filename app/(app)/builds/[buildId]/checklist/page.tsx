@@ -5,7 +5,8 @@ import { listLinkages } from "@/db/linkages";
 import { BuildNav } from "@/components/BuildNav";
 import { Card, EmptyState, Main } from "@/components/ui";
 import { db } from "@/db/index";
-import { CHECK_STATE_TEXT, checkState, type CheckState } from "@/shared/check-state";
+import { notCheckedWords } from "@/shared/check-state";
+import { severityCount } from "@/shared/analysis/finding-title";
 
 export const metadata: Metadata = { title: "Checklist" };
 
@@ -36,8 +37,8 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
                   <Link className="touch-target inline-flex items-center font-medium hover:underline" href={`/builds/${build.id}/checklist/${l.id}`}>{l.name}</Link>
                   <span className="text-xs text-ink-soft">
                     revision {l.revision} · {n.get(l.id) ?? 0} ticked
-                    {checkState(l) !== "checked" ? <> · {CHECK_STATE_TEXT[checkState(l) as Exclude<CheckState, "checked">]}</>
-                      : l.summary?.hazard ? <> · <span className="font-semibold text-hazard" data-testid="checklist-linkage-hazards">{l.summary.hazard} hazard{l.summary.hazard === 1 ? "" : "s"} in its check</span></> : null}
+                    {notCheckedWords(l) ? <> · {notCheckedWords(l)}</>
+                      : l.summary?.hazard ? <> · <span className="font-semibold text-hazard" data-testid="checklist-linkage-hazards">{severityCount(l.summary.hazard, "hazard")} in its check</span></> : null}
                   </span>
                 </li>
               ))}
