@@ -87,3 +87,28 @@ describe("a revision read with the request's access (one query)", () => {
     }
   });
 });
+
+describe("the build's changed time, moved by saves", () => {
+  const url = () => `/api/builds/${ids.buildId}/linkages/${ids.linkageId}/graph`;
+  const changed = async () => (await testDb("builds").where({ id: ids.buildId }).first("updated_at")).updated_at as Date;
+  const save = async () => {
+    const cur = await owner.request("GET", url());
+    const r = await owner.request("PUT", url(), { baseRevision: cur.body.revision, graph: emptyGraph("changed time", "pitch") });
+    expect(r.status).toBe(200);
+  };
+
+  it("a save moves a build's changed time that is older than a minute", async () => {
+    await testDb("builds").where({ id: ids.buildId }).update({ updated_at: testDb.raw("now() - interval '2 minutes'") });
+    const before = await changed();
+    await save();
+    expect((await changed()).getTime()).toBeGreaterThan(before.getTime() + 60_000);
+  });
+
+  it("saves within a minute of it leave it (one write to the build's row a minute, however many members save)", async () => {
+    await testDb("builds").where({ id: ids.buildId }).update({ updated_at: testDb.raw("now() - interval '20 seconds'") });
+    const before = await changed();
+    await save();
+    await save();
+    expect((await changed()).getTime()).toBe(before.getTime());
+  });
+});
