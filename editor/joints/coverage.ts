@@ -6,12 +6,13 @@
  *   notChecked   nothing at the joint could be checked yet (no bolt, pin, rod end or bearing recorded…);
  *   nothingHere  a joint with nothing of its own to check: a cable over a pulley or through a fairlead, or a
  *                cable's terminal screwed into a turnbuckle's barrel — those parts are checked on their cards
- *                (the same joints the engine asks no hardware of, shared/analysis/structure.ts);
+ *                (the same joints the engine asks no bolt of: shared/linkage/contacts.ts);
  *   pending      the live check has not run yet.
  * Pure (no React), so it is unit-tested without a browser.
  */
 import type { JointResult, Report } from "@/shared/analysis/types";
 import { ROLES } from "@/shared/linkage/kinds";
+import { boltlessContact, guideEnd } from "@/shared/linkage/contacts";
 import { indexById, partName } from "@/shared/linkage/names";
 import type { Joint, LinkageNode } from "@/shared/linkage/schema";
 
@@ -21,8 +22,8 @@ type Part = Pick<LinkageNode, "id" | "kind" | "label">;
 export type JointSort =
   /** A cable's run over a pulley or through a fairlead: nothing is bolted at the joint. */
   | { sort: "passThrough"; cable: Part | undefined; guide: Part }
-  /** Two cable-run parts end to end (a terminal screwed into a turnbuckle's barrel): no bolt of its own. */
-  | { sort: "screwedEnds"; a: Part; b: Part }
+  /** A cable's terminal screwed into a turnbuckle's barrel: no bolt of its own. */
+  | { sort: "screwedEnds"; cable: Part; turnbuckle: Part }
   /** A cable's or turnbuckle's terminal on another part: a bolt or clevis pin holds it. */
   | { sort: "terminal"; end: Part }
   | { sort: "other" };
@@ -33,12 +34,17 @@ export function jointSort(joint: Pick<Joint, "from" | "to">, parts: readonly Par
   const byId = indexById(parts);
   const from = byId.get(joint.from.node), to = byId.get(joint.to.node);
   if (!from || !to) return { sort: "other" };
-  const rf = roleOf(from), rt = roleOf(to);
-  if (rf === "guide" && joint.from.port === "cable") return { sort: "passThrough", guide: from, cable: to.kind === "cable" ? to : undefined };
-  if (rt === "guide" && joint.to.port === "cable") return { sort: "passThrough", guide: to, cable: from.kind === "cable" ? from : undefined };
-  if (rf === "tension" && rt === "tension") return { sort: "screwedEnds", a: from, b: to };
-  if (rf === "tension") return { sort: "terminal", end: from };
-  if (rt === "tension") return { sort: "terminal", end: to };
+  const ends = [{ kind: from.kind, port: joint.from.port, part: from }, { kind: to.kind, port: joint.to.port, part: to }] as const;
+  // The same joints the engine asks no bolt of (shared/linkage/contacts.ts).
+  const contact = boltlessContact(ends[0], ends[1]);
+  if (contact === "passThrough") {
+    const guide = guideEnd(ends[0], ends[1])!.part;
+    const other = guide === from ? to : from;
+    return { sort: "passThrough", guide, cable: other.kind === "cable" ? other : undefined };
+  }
+  if (contact === "screwedEnds") return from.kind === "cable" ? { sort: "screwedEnds", cable: from, turnbuckle: to } : { sort: "screwedEnds", cable: to, turnbuckle: from };
+  if (roleOf(from) === "tension") return { sort: "terminal", end: from };
+  if (roleOf(to) === "tension") return { sort: "terminal", end: to };
   return { sort: "other" };
 }
 
@@ -68,11 +74,7 @@ function nothingHereText(k: Extract<JointSort, { sort: "passThrough" | "screwedE
     const how = what === "pulley" ? "runs over" : what === "fairlead" ? "runs through" : "is guided by";
     return `Nothing to check here: ${k.cable ? partName(k.cable) : "the cable"} ${how} ${partName(k.guide)}, and nothing is bolted at this joint. The cable and the ${what} are checked on their own cards, the ${what}'s bolt at its mounting joint.`;
   }
-  const tb = [k.a, k.b].find((p) => p.kind === "turnbuckle");
-  const cable = [k.a, k.b].find((p) => p.kind === "cable");
-  if (tb && cable)
-    return `Nothing to check here: the terminal of ${partName(cable)} screws into the barrel of ${partName(tb)}, with no bolt. The terminal, and the turnbuckle's threads and safetying, are checked on those parts' cards (and shown below).`;
-  return `Nothing to check here: ${partName(k.a)} and ${partName(k.b)} join end to end, with no bolt. Each is checked on its own card (and shown below).`;
+  return `Nothing to check here: the terminal of ${partName(k.cable)} screws into the barrel of ${partName(k.turnbuckle)}, with no bolt. The terminal, and the turnbuckle's threads and safetying, are checked on those parts' cards (and shown below).`;
 }
 
 /**
@@ -123,7 +125,7 @@ export function jointHardwareLine(joint: Pick<Joint, "from" | "to" | "hardware">
   if (k.sort === "passThrough")
     return k.guide.kind === "pulley" ? "cable over the pulley — nothing bolted here" : k.guide.kind === "fairlead" ? "cable through the fairlead — nothing bolted here" : "cable guided here — nothing bolted here";
   if (k.sort === "screwedEnds")
-    return [k.a, k.b].some((p) => p.kind === "turnbuckle") && [k.a, k.b].some((p) => p.kind === "cable") ? "terminal screwed into the turnbuckle — no bolt" : "ends joined directly — no bolt";
+    return "terminal screwed into the turnbuckle — no bolt";
   if (h.bearing && BEARING_WORDS[h.bearing]) return `${BEARING_WORDS[h.bearing]}, no bolt or pin recorded yet`;
   return k.sort === "terminal" ? "no bolt or clevis pin recorded yet" : "no hardware recorded yet";
 }

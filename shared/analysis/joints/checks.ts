@@ -6,6 +6,7 @@
  * factor × the fitting factor (14 CFR 23.625); bearing at a hole takes the joint's special factor instead
  * when a higher one applies (shared/analysis/joints/factors.ts, 14 CFR 23.619).
  */
+import { boltlessContact } from "../../linkage/contacts";
 import { ALUMINIUM_BOLT_FSU, STEEL_BOLT_FSU, STEEL_BOLT_FTU, boltShearStrength } from "../../hardware/bolts";
 import {
   ALUMINIUM_BOLT_FTU, BEARING_SRC, BENDING_SRC, BUSHING_TABLE, MIN_EDGE_RATIO, PLATE_TABLE, ROD_END_BODY_FTU,
@@ -63,16 +64,12 @@ function holeSides(c: CheckInput, hw: JointHardware): readonly Side[] {
   return from ? (to ? BOTH_SIDES : FROM_SIDE) : to ? TO_SIDE : NO_SIDE;
 }
 
-/**
- * A joint where a cable runs over a pulley's groove or through a fairlead, or its terminal screws into a
- * turnbuckle's barrel: no bolt there. A cable's terminal on a horn, crank or pedal is bolted, and is checked so.
- */
-const NO_BOLT_WITH_CABLE = new Set(["pulley", "fairlead", "turnbuckle"]);
+/** A joint where nothing is bolted: a cable over a pulley or through a fairlead, a terminal screwed into a turnbuckle (shared/linkage/contacts.ts). */
 function cableContact({ ctx, j }: CheckInput): boolean {
   const f = ctx.jFrom[j], t = ctx.jTo[j];
   if (f < 0 || t < 0) return false;
-  const a = ctx.nodes[f].kind, b = ctx.nodes[t].kind;
-  return (a === "cable" && NO_BOLT_WITH_CABLE.has(b)) || (b === "cable" && NO_BOLT_WITH_CABLE.has(a));
+  const joint = ctx.joints[j];
+  return boltlessContact({ kind: ctx.nodes[f].kind, port: joint.from.port }, { kind: ctx.nodes[t].kind, port: joint.to.port }) !== null;
 }
 
 function hasHole({ ctx, j }: CheckInput, hw: JointHardware, side: Side): boolean {
