@@ -5,7 +5,7 @@
  * With nothing selected it shows the linkage's review panel: sign-off, history and diff.
  */
 import { findingTitle } from "@/shared/analysis/finding-title";
-import { useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { LoadMore } from "@/components/paged";
 import type { Subject } from "@/shared/analysis/types";
 import { ApiFailure } from "@/components/api-client";
@@ -135,9 +135,30 @@ function Thread({ root, replies, me, actions }: { root: CommentView; replies: Co
   );
 }
 
+/**
+ * The findings of the selection and their acknowledgements. Focus, for the keyboard: "Acknowledge…" opens the
+ * finding's reason box with the focus in it; Escape in the box closes it (not the card around it) with the focus
+ * back on that button; once recorded, the focus goes to the finding's Withdraw button.
+ */
 function SubjectFindingsReview({ findings, me, actions }: { findings: FindingView[]; me: ReviewMe; actions: ReturnType<typeof useReviewActions> }) {
   const [open, setOpen] = useState<string | null>(null);
   const [reason, setReason] = useState("");
+  const openers = useRef(new Map<string, HTMLButtonElement>());
+  const withdrawers = useRef(new Map<string, HTMLButtonElement>());
+  /** The finding whose acknowledgement was just recorded: its Withdraw button takes the focus when it appears. */
+  const [recorded, setRecorded] = useState<string | null>(null);
+  useEffect(() => {
+    if (!recorded) return;
+    const b = withdrawers.current.get(recorded);
+    if (b) {
+      b.focus();
+      setRecorded(null);
+    }
+  });
+  const close = (key: string) => {
+    setOpen(null);
+    openers.current.get(key)?.focus();
+  };
   if (findings.length === 0) return null;
   return (
     <ul className="space-y-1" data-testid="review-findings">
@@ -150,12 +171,25 @@ function SubjectFindingsReview({ findings, me, actions }: { findings: FindingVie
               <span className={`font-semibold ${f.severity === "hazard" ? "text-hazard" : f.severity === "caution" ? "text-caution" : "text-advisory"}`}>{f.severity}</span>
               <span className="font-semibold text-ink-soft" data-code={f.code}>{findingTitle(f.code)}</span>
               {me.canAcknowledge && !ack && (
-                <button type="button" data-testid={`ack-open-${f.code}`} className="ml-auto min-h-6 text-advisory hover:underline" onClick={() => { setOpen(open === key ? null : key); setReason(""); }}>
+                <button
+                  type="button"
+                  data-testid={`ack-open-${f.code}`}
+                  aria-expanded={open === key}
+                  ref={(b) => { if (b) openers.current.set(key, b); else openers.current.delete(key); }}
+                  className="ml-auto min-h-6 text-advisory hover:underline"
+                  onClick={() => { setOpen(open === key ? null : key); setReason(""); }}
+                >
                   Acknowledge…
                 </button>
               )}
               {me.canAcknowledge && ack && (
-                <button type="button" className="ml-auto min-h-6 text-ink-soft hover:underline" onClick={() => actions.withdraw.mutate(ack.id)}>
+                <button
+                  type="button"
+                  data-testid={`ack-withdraw-${f.code}`}
+                  ref={(b) => { if (b) withdrawers.current.set(key, b); else withdrawers.current.delete(key); }}
+                  className="ml-auto min-h-6 text-ink-soft hover:underline"
+                  onClick={() => actions.withdraw.mutate(ack.id)}
+                >
                   Withdraw
                 </button>
               )}
@@ -178,10 +212,27 @@ function SubjectFindingsReview({ findings, me, actions }: { findings: FindingVie
                   try {
                     await actions.acknowledge.mutateAsync({ code: f.code, subject: f.subject, reason });
                     setOpen(null);
+                    setRecorded(key);
                   } catch {}
                 }}
               >
-                <textarea data-testid={`ack-reason-${f.code}`} className={box} rows={2} value={reason} placeholder="Why this is acceptable (e.g. the part's tested rating, the designer's note)" onChange={(e) => setReason(e.target.value)} />
+                <textarea
+                  data-testid={`ack-reason-${f.code}`}
+                  aria-label={`Why the ${findingTitle(f.code)} finding is acceptable`}
+                  className={box}
+                  rows={2}
+                  value={reason}
+                  placeholder="Why this is acceptable (e.g. the part's tested rating, the designer's note)"
+                  autoFocus
+                  onChange={(e) => setReason(e.target.value)}
+                  onKeyDown={(e) => {
+                    if (e.key !== "Escape") return;
+                    // The box's own Escape: it closes, not the card it sits in.
+                    e.stopPropagation();
+                    e.preventDefault();
+                    close(key);
+                  }}
+                />
                 {actions.acknowledge.error && <p role="alert" className="text-hazard">{errText(actions.acknowledge.error)}</p>}
                 <button type="submit" data-testid={`ack-submit-${f.code}`} disabled={!reason.trim() || actions.acknowledge.isPending} className={`${btn} bg-ink text-white`}>
                   Record acknowledgement

@@ -68,66 +68,6 @@ function BackToLinkage() {
   );
 }
 
-/** Run `f` on the next frames until it returns true. */
-function onFrames(f: () => boolean, frames: number) {
-  const step = (n: number) => requestAnimationFrame(() => { if (!f() && n > 0) step(n - 1); });
-  step(frames);
-}
-const ACK_OPEN = "ack-open-", ACK_REASON = "ack-reason-";
-const testIdOf = (t: EventTarget | null, prefix: string, tag: string): [HTMLElement, string] | null => {
-  const el = t instanceof Element ? t.closest<HTMLElement>(`${tag}[data-testid^="${prefix}"]`) : null;
-  return el ? [el, el.dataset.testid!.slice(prefix.length)] : null;
-};
-
-/**
- * The focus in the review thread under the card (components/review): "Acknowledge…" opens a finding's reason
- * box and the focus goes into it; Escape in the box (or the button again) closes it with the focus back on
- * the button; once the acknowledgement is recorded the focus goes to that finding's Withdraw button.
- */
-function reviewSlotFocus() {
-  const find = (root: ParentNode, id: string) => root.querySelector<HTMLElement>(`[data-testid="${CSS.escape(id)}"]`);
-  return {
-    onClick(e: React.MouseEvent<HTMLElement>) {
-      const hit = testIdOf(e.target, ACK_OPEN, "button");
-      if (!hit) return;
-      const slot = e.currentTarget;
-      const [button, code] = hit;
-      if (find(slot, ACK_REASON + code)) return; // it was open: it closes, the focus stays on the button
-      onFrames(() => {
-        const box = find(slot, ACK_REASON + code);
-        if (!box || !button.isConnected) return !button.isConnected;
-        box.focus();
-        return true;
-      }, 30);
-    },
-    onKeyDown(e: React.KeyboardEvent<HTMLElement>) {
-      if (e.key !== "Escape") return;
-      const hit = testIdOf(e.target, ACK_REASON, "textarea");
-      if (!hit) return;
-      // The box's own Escape: close it (not the card) and go back to the button that opened it.
-      e.stopPropagation();
-      e.preventDefault();
-      const button = find(e.currentTarget, ACK_OPEN + hit[1]);
-      button?.click();
-      button?.focus();
-    },
-    onSubmit(e: React.FormEvent<HTMLElement>) {
-      const form = e.target as HTMLElement;
-      const box = form.querySelector?.<HTMLElement>(`textarea[data-testid^="${ACK_REASON}"]`);
-      const item = form.closest<HTMLElement>("li");
-      if (!box || !item) return;
-      // Recorded, the box goes away: the focus goes to the finding's Withdraw button rather than to the page.
-      onFrames(() => {
-        if (form.isConnected) return false;
-        if (document.activeElement && document.activeElement !== document.body) return true;
-        const next = item.isConnected ? item.querySelector<HTMLElement>("button") : null;
-        next?.focus();
-        return true;
-      }, 600);
-    },
-  };
-}
-const SLOT_FOCUS = reviewSlotFocus();
 
 export default function Inspector({
   buildId,
@@ -156,7 +96,7 @@ export default function Inspector({
       {single?.type === "joint" && <JointInspector id={single.id} records={buildId ? { buildId, linkageId } : undefined} />}
       {!single && <LinkageOverview linkageName={linkageName} />}
       {reviewSlot && (
-        <div data-testid="review-slot" className="border-t border-ink/10 pt-2" onClick={SLOT_FOCUS.onClick} onKeyDown={SLOT_FOCUS.onKeyDown} onSubmit={SLOT_FOCUS.onSubmit}>
+        <div data-testid="review-slot" className="border-t border-ink/10 pt-2">
           {reviewSlot(subject)}
         </div>
       )}

@@ -132,6 +132,33 @@ describe("the reviewer in the editor", () => {
     await expect.poll(() => samPage.getByTestId("notice").textContent()).toMatch(/part no-such-part, which is not in revision/);
   });
 
+  it("acknowledging by keyboard: the reason box takes the focus, Escape closes it (not the card) back to its button, and once recorded the focus is on Withdraw", async () => {
+    await open(samPage, editorUrl(demoLinkageId, `?focus=joint:${DEMO_WRONG_JOINT}`));
+    await samPage.getByTestId("joint-card").waitFor();
+    const opener = samPage.locator("[data-testid^=ack-open-]").first();
+    await opener.waitFor();
+    const code = (await opener.getAttribute("data-testid"))!.slice("ack-open-".length);
+    const focused = () => samPage.evaluate(() => document.activeElement?.getAttribute("data-testid") ?? null);
+    await opener.focus();
+    await samPage.keyboard.press("Enter");
+    await expect.poll(focused).toBe(`ack-reason-${code}`);
+    expect(await opener.getAttribute("aria-expanded")).toBe("true");
+    await samPage.keyboard.press("Escape");
+    await expect.poll(focused).toBe(`ack-open-${code}`);
+    expect(await samPage.getByTestId(`ack-reason-${code}`).count()).toBe(0);
+    expect(await samPage.getByTestId("joint-card").count()).toBe(1); // the card stays open
+    await samPage.keyboard.press("Enter");
+    await expect.poll(focused).toBe(`ack-reason-${code}`);
+    await samPage.keyboard.type("Checked against the part's tested rating (keyboard test)");
+    await samPage.keyboard.press("Tab");
+    expect(await focused()).toBe(`ack-submit-${code}`);
+    await samPage.keyboard.press("Enter");
+    await expect.poll(focused).toBe(`ack-withdraw-${code}`);
+    // Withdrawn again, so the demo's review state is as it was.
+    await samPage.keyboard.press("Enter");
+    await samPage.getByTestId(`ack-open-${code}`).waitFor();
+  });
+
   it("on a 390 px phone (the run as a list) a ?select= and a ?focus= link open that joint's card in view; a tap goes back to the whole linkage", async () => {
     const phone = await (await browser.newContext({ viewport: { width: 390, height: 844 }, hasTouch: true, isMobile: true })).newPage();
     phone.on("pageerror", (e) => errors.push(String(e)));
