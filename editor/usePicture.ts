@@ -74,7 +74,7 @@ export function usePicture(o: Opts) {
           lowestMarginText: lm ? `${lm.value.toFixed(2)} at ${subjectName(s, lm.subject)} (${lm.what})` : undefined,
           caution: CAUTION,
         },
-        scene: { joints: s.joints, worstByNode: s.worstByNode, worstByJoint: s.worstByJoint, lines: (n) => nodeLines(n, unitSystem) },
+        scene: { joints: s.joints, worstByNode: s.worstByNode, worstByJoint: s.worstByJoint, lines: (n) => nodeLines(n, unitSystem, s.meta.system) },
       });
       return { blob, revision: s.revision };
     },

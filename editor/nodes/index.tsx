@@ -5,7 +5,7 @@
  */
 import { memo } from "react";
 import { Handle, Position, type Node, type NodeHandle, type NodeProps } from "@xyflow/react";
-import type { LinkageNode, NodeKind } from "@/shared/linkage/schema";
+import type { ControlSystem, LinkageNode, NodeKind } from "@/shared/linkage/schema";
 import { SEVERITY_BG, SEVERITY_BORDER } from "../presentation";
 import { useEditorConfig, useEditorValue } from "../context";
 import { partName } from "@/shared/linkage/names";
@@ -108,8 +108,8 @@ function PartFrame({ id, kind, label, lines, selected, toEnter }: { id: string; 
 }
 
 /** The key-number lines a part's card shows (also drawn by the picture export). */
-export function nodeLines(node: LinkageNode, u: UnitSystem): string[] {
-  return EDITOR_KINDS[node.kind]?.lines(node.props as never, u) ?? [];
+export function nodeLines(node: LinkageNode, u: UnitSystem, system: ControlSystem = "other"): string[] {
+  return EDITOR_KINDS[node.kind]?.lines(node.props as never, u, system) ?? [];
 }
 
 /** A part card's size as laid out (editor/nodes/geometry.ts); the line count does not depend on units. */
@@ -123,11 +123,12 @@ export function layoutHandles(kind: NodeKind, size: { width: number; height: num
 }
 
 function makeNode(kind: NodeKind) {
-  const lines = EDITOR_KINDS[kind].lines as (props: LinkageNode["props"], u: UnitSystem) => string[];
+  const lines = EDITOR_KINDS[kind].lines as (props: LinkageNode["props"], u: UnitSystem, system: ControlSystem) => string[];
   const C = memo(function PartNode({ id, data, selected }: NodeProps<PartFlowNode>) {
     const { unitSystem } = useEditorConfig();
+    const system = useEditorValue((s) => s.meta.system);
     const node = data.node;
-    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props, unitSystem)} selected={!!selected} toEnter={node.unentered?.length ?? 0} />;
+    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props, unitSystem, system)} selected={!!selected} toEnter={node.unentered?.length ?? 0} />;
   });
   C.displayName = `${kind}Node`;
   return C;

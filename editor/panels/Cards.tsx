@@ -122,7 +122,8 @@ export function NodeInspector({ id }: { id: string }) {
     const node = api.getState().nodes.find((n) => n.id === id);
     return node ? { label: node.label, props: node.props } : null;
   }, [id, epoch, unitSystem]);
-  const sections = useMemo(() => (kind ? nodeSections(kind) : []), [kind]);
+  const system = useEditorValue((s) => s.meta.system);
+  const sections = useMemo(() => (kind ? nodeSections(kind, system) : []), [kind, system]);
   // Read live (a string, so moves do not re-render the form): an edit or the button below unmarks a value.
   const unentered = useEditorValue((s) => s.nodes.find((n) => n.id === id)?.unentered?.join(" ") ?? "");
   const starting = useMemo(() => new Set(unentered ? unentered.split(" ").map((k) => `props.${k}`) : []), [unentered]);

@@ -1,17 +1,18 @@
 /** The fields of the node properties form (each kind's own, editor/nodes/kinds/) and the joint card, section by section. */
 import { AN_BOLTS, NUT_TYPES, THREADS, type NodeKind } from "@/shared/linkage/schema";
 import { EDITOR_KINDS } from "../nodes/kinds";
+import { kindFields } from "../nodes/kinds/types";
 import { opts } from "../nodes/kinds/format";
 import type { SectionSpec } from "./SchemaForm";
 import { JOINT_EXTRA_SECTIONS, NUT_EXTRA_FIELDS, ROD_END_EXTRA_FIELDS, member } from "./joint-sections";
 import { ROLES } from "@/shared/linkage/kinds";
 import { partName } from "@/shared/linkage/names";
-import type { Joint, LinkageNode } from "@/shared/linkage/schema";
+import type { ControlSystem, Joint, LinkageNode } from "@/shared/linkage/schema";
 
-export function nodeSections(kind: NodeKind): SectionSpec[] {
+export function nodeSections(kind: NodeKind, system: ControlSystem): SectionSpec[] {
   return [
     { title: "Name", fields: [{ type: "text", path: "label", label: "Label", placeholder: "e.g. aft pushrod" }] },
-    { title: "Dimensions", fields: EDITOR_KINDS[kind].fields },
+    { title: "Dimensions", fields: kindFields(EDITOR_KINDS[kind] as never, system) },
   ];
 }
 

@@ -15,7 +15,7 @@ import { describe, expect, it } from "vitest";
 import { z } from "zod";
 import { defaultProps, KIND_LIST, NODE_KINDS, PORT_SIDES, PORTS, ROLE_PORTS } from "@/shared/linkage/kinds";
 import { KIND_SCHEMAS } from "@/shared/linkage/kinds/schemas";
-import { graphSchema, nodeSchema } from "@/shared/linkage/schema";
+import { graphSchema, nodeSchema, SYSTEMS } from "@/shared/linkage/schema";
 import { EDITOR_KIND_LIST, EDITOR_KINDS } from "@/editor/nodes/kinds";
 import { KindGlyph } from "@/editor/nodes/glyphs";
 import { nodeLines, nodeTypes } from "@/editor/nodes";
@@ -87,10 +87,13 @@ describe("the part-kind registry", () => {
         expect(us.length).toBeGreaterThan(0);
         for (const l of us) expect(l.trim()).not.toBe("");
         expect(nodeLines(node, "SI").length).toBe(us.length); // the card's height does not depend on units
-        const fieldPaths = nodeSections(def.kind).flatMap((s) => s.fields.map((f) => f.path));
-        expect(fieldPaths).toContain("label");
-        const props = Object.keys((KIND_SCHEMAS[def.kind] as z.ZodObject).shape).map((k) => `props.${k}`);
-        expect(fieldPaths.filter((p) => p.startsWith("props.")).sort()).toEqual(props.sort());
+        for (const system of SYSTEMS) {
+          expect(nodeLines(node, "US", system).length).toBe(us.length); // nor on the run's system
+          const fieldPaths = nodeSections(def.kind, system).flatMap((s) => s.fields.map((f) => f.path));
+          expect(fieldPaths).toContain("label");
+          const props = Object.keys((KIND_SCHEMAS[def.kind] as z.ZodObject).shape).map((k) => `props.${k}`);
+          expect(fieldPaths.filter((p) => p.startsWith("props.")).sort()).toEqual(props.sort());
+        }
       });
 
       it("renders as a card in the editor with its name and key numbers", () => {
@@ -111,4 +114,19 @@ describe("the part-kind registry", () => {
       });
     });
   }
+});
+
+describe("a control surface's travel in its run's words", () => {
+  const surface = { id: "s", kind: "controlSurface", label: "", position: { x: 0, y: 0 }, props: { travelUp: 30, travelDown: 25 } } as never;
+  const labels = (system: (typeof SYSTEMS)[number]) => nodeSections("controlSurface", system)[1].fields.map((f) => `${f.path} ${f.label}`);
+  it("a rudder (yaw run) reads left and right, the up travel being the trailing edge to the right", () => {
+    expect(nodeLines(surface, "US", "yaw")).toEqual(["left 25° · right 30°"]);
+    expect(labels("yaw").slice(0, 2)).toEqual(["props.travelDown Left travel", "props.travelUp Right travel"]);
+  });
+  it("an elevator, aileron, flap or tab reads up and down", () => {
+    for (const system of ["pitch", "roll", "flap", "trim", "other"] as const) {
+      expect(nodeLines(surface, "US", system)).toEqual(["up 30° · down 25°"]);
+      expect(labels(system).slice(0, 2)).toEqual(["props.travelUp Up travel", "props.travelDown Down travel"]);
+    }
+  });
 });

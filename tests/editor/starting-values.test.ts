@@ -134,7 +134,7 @@ describe("the part on the canvas", () => {
 
 describe("a number box left as it was", () => {
   it("keeps its value exactly in SI, while a box typed in is converted", () => {
-    const sections = nodeSections("bellcrank");
+    const sections = nodeSections("bellcrank", "pitch");
     const base = { label: "Bellcrank 1", props: { inputArm: 3, outputArm: 3, armAngle: 90 } };
     const box = (v: number) => inputText(v, "length", "SI");
     expect(box(3)).toBe("76.2"); // and 76.2 / 25.4 is 3.0000000000000004
@@ -152,7 +152,7 @@ describe("a number box left as it was", () => {
     const n = store.getState().nodes[0];
     const p = n.props as Record<string, number>;
     const v = { label: "Bellcrank under the seat", props__inputArm: inputText(p.inputArm, "length", "SI"), props__outputArm: inputText(p.outputArm, "length", "SI"), props__armAngle: inputText(p.armAngle, "angle", "SI") };
-    const { out } = toCanonical({ v, on: {} }, nodeSections("bellcrank"), "SI", { label: n.label, props: n.props });
+    const { out } = toCanonical({ v, on: {} }, nodeSections("bellcrank", "pitch"), "SI", { label: n.label, props: n.props });
     expect(store.getState().updateNode(id, out as never).ok).toBe(true);
     expect(store.getState().nodes[0].label).toBe("Bellcrank under the seat");
     expect(store.getState().nodes[0].props).toEqual({ inputArm: 3, outputArm: 3, armAngle: 90 });
