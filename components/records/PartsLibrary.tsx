@@ -64,7 +64,7 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
           )}
         </EmptyState>
       ) : (
-        <Card title={`${parts.total.toLocaleString("en-US")} part${parts.total === 1 ? "" : "s"}${search ? " match" : ""}`} actions={<Input aria-label="Search parts" placeholder="Search part number or description" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-56" />}>
+        <Card title={`${parts.total.toLocaleString("en-US")} part${parts.total === 1 ? "" : "s"}${search ? " match" : ""}`} actions={<Input aria-label="Search parts" placeholder="Part number or description" value={filter} onChange={(e) => setFilter(e.target.value)} className="w-56" />}>
           {sorting.length && !all ? <p className="mb-2 text-xs text-caution">Sorted among the {parts.items.length} parts loaded so far; load the rest to sort the whole library.</p> : null}
           <DataTable table={table} testId="parts-table" rowTestId="part-row" />
           <LoadMore shown={parts.items.length} total={parts.total} noun="parts" hasMore={!!parts.hasNextPage} loading={parts.isFetchingNextPage} error={parts.isFetchNextPageError ? parts.error : null} onMore={() => void parts.fetchNextPage()} />
