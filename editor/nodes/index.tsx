@@ -92,10 +92,11 @@ function PartFrame({ id, kind, label, lines, selected, toEnter }: { id: string; 
               className={[
                 "pointer-events-none absolute hidden whitespace-nowrap rounded bg-white/90 px-0.5 text-[9px] font-medium uppercase tracking-wide text-ink-soft group-hover:block",
                 selected ? "!block" : "",
-                side === "left" ? "left-3.5 top-1/2 -translate-y-1/2" : "",
-                side === "right" ? "right-3.5 top-1/2 -translate-y-1/2" : "",
-                side === "top" ? "left-1/2 top-3 -translate-x-1/2" : "",
-                side === "bottom" ? "bottom-3 left-1/2 -translate-x-1/2" : "",
+                // Outside the card, beyond its port: inside, a selected card's labels covered its key numbers.
+                side === "left" ? "right-3.5 top-1/2 -translate-y-1/2" : "",
+                side === "right" ? "left-3.5 top-1/2 -translate-y-1/2" : "",
+                side === "top" ? "bottom-3 left-1/2 -translate-x-1/2" : "",
+                side === "bottom" ? "left-1/2 top-3 -translate-x-1/2" : "",
               ].join(" ")}
             >
               {port}
