@@ -63,3 +63,44 @@ export function formatNumber(v: number, digits?: number): string {
   const grouped = int.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
   return (v < 0 && Number(s) !== 0 ? "−" : "") + grouped + (frac ? `.${frac}` : "");
 }
+
+/** The units a finding's prose may carry a number in (the engine writes US), longest first so "in·lbf" is not read as "in". */
+const PROSE_UNITS: { us: string; kind: QuantityKind | "ksi" | "fahrenheit" }[] = [
+  { us: "in·lbf", kind: "torque" },
+  { us: "in²", kind: "area" },
+  { us: "lbf", kind: "force" },
+  { us: "ksi", kind: "ksi" },
+  { us: "psi", kind: "stress" },
+  { us: "°F", kind: "fahrenheit" },
+  { us: "in", kind: "length" },
+];
+const NUM = "[−-]?\\d[\\d,]*(?:\\.\\d+)?";
+const PROSE_RE = new RegExp(
+  `(${NUM})(?:(\\s*(?:–|-|to)\\s*)(${NUM}))?\\s(${PROSE_UNITS.map((u) => u.us).join("|")})(?![\\p{L}\\d²·])`,
+  "gu",
+);
+const parseNum = (s: string) => Number(s.replace(/,/g, "").replace("−", "-"));
+
+/**
+ * A sentence the engine wrote in US units, with each "number unit" (and "a–b unit" range) in `system`:
+ * "0.438 in across" → "11.1 mm across", "20–25 in·lbf" → "2.26–2.82 N·m", "125 ksi" → "861.8 MPa", "−20 °F" →
+ * "−28.9 °C". Text in quotes (a part's own name) is left as it is. US text comes back unchanged.
+ */
+export function measuresInText(text: string, system: UnitSystem): string {
+  if (system === "US") return text;
+  // Quoted names are kept: split on them and convert only the text between.
+  return text
+    .split(/("[^"]*"|“[^”]*”)/)
+    .map((part, i) => (i % 2 === 1 ? part : part.replace(PROSE_RE, (_m, a: string, sep: string | undefined, b: string | undefined, unit: string) => {
+      const u = PROSE_UNITS.find((x) => x.us === unit)!;
+      const one = (s: string): string => {
+        const v = parseNum(s);
+        if (u.kind === "fahrenheit") return formatNumber(((v - 32) * 5) / 9, 1);
+        if (u.kind === "ksi") return formatNumber(convert(v * 1000, "stress", "US", "SI"));
+        return formatNumber(convert(v, u.kind, "US", "SI"));
+      };
+      const label = u.kind === "fahrenheit" ? "°C" : u.kind === "ksi" ? "MPa" : unitLabel(u.kind, "SI");
+      return `${one(a)}${sep && b !== undefined ? `${sep}${one(b)}` : ""} ${label}`;
+    })))
+    .join("");
+}
