@@ -22,12 +22,16 @@ function findingsPhrase(b: BadgeLike): string {
 /**
  * "Bellcrank, Bellcrank under the seat, 1 hazard" (the kind once when the part has no label of its own), and
  * ", 2 values to enter" when `toEnter` of its values are still the starting values it was placed with.
+ * Without findings, `coverage` (nodes/coverage.ts, its `short`) says what that means, as for a joint:
+ * "no findings, checked at its joints", "no findings, not checked".
  */
-export function partAccessibleName(node: Pick<LinkageNode, "kind" | "label">, badge: BadgeLike, toEnter = 0): string {
+export function partAccessibleName(node: Pick<LinkageNode, "kind" | "label">, badge: BadgeLike, toEnter = 0, coverage?: string): string {
   const kind = (KIND_NAMES as Record<string, string>)[node.kind] ?? "Part";
   const name = partName(node);
   const enter = toEnter > 0 ? `, ${toEnter} ${toEnter === 1 ? "value" : "values"} to enter` : "";
-  return `${name === kind ? kind : `${kind}, ${name}`}, ${findingsPhrase(badge)}${enter}`;
+  // "values to enter" is said by the count that follows.
+  const what = !badge && coverage && coverage !== "no findings" && !(toEnter > 0 && coverage === "values to enter") ? `, ${coverage}` : "";
+  return `${name === kind ? kind : `${kind}, ${name}`}, ${findingsPhrase(badge)}${what}${enter}`;
 }
 
 /**

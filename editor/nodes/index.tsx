@@ -10,6 +10,7 @@ import { SEVERITY_BG, SEVERITY_BORDER } from "../presentation";
 import { useEditorConfig, useEditorValue } from "../context";
 import { partName } from "@/shared/linkage/names";
 import { partAccessibleName } from "../a11y";
+import { partCoverage } from "./coverage";
 import { partNameId } from "../canvas/adapters";
 import type { UnitSystem } from "../units";
 import { KindGlyph } from "./glyphs";
@@ -28,7 +29,7 @@ const POS: Record<Side, Position> = { left: Position.Left, right: Position.Right
  * the card's top edge says so in words (outside the card's box, so the card's size and ports stay put); a
  * screen reader hears it in the part's name.
  */
-function PartFrame({ id, kind, label, lines, selected, toEnter }: { id: string; kind: NodeKind; label: string; lines: string[]; selected: boolean; toEnter: number }) {
+function PartFrame({ id, kind, label, lines, selected, toEnter, coverage }: { id: string; kind: NodeKind; label: string; lines: string[]; selected: boolean; toEnter: number; coverage: string }) {
   const { readOnly } = useEditorConfig();
   const key = `node:${id}`;
   const badge = useEditorValue((s) => s.badgeBySubject[key]);
@@ -46,7 +47,7 @@ function PartFrame({ id, kind, label, lines, selected, toEnter }: { id: string; 
         selected ? "ring-2 ring-ink ring-offset-1" : "",
       ].join(" ")}
     >
-      <span id={partNameId(id)} className="sr-only">{partAccessibleName({ kind, label }, badge, toEnter)}</span>
+      <span id={partNameId(id)} className="sr-only">{partAccessibleName({ kind, label }, badge, toEnter, coverage)}</span>
       {toEnter > 0 && (
         <span
           aria-hidden="true"
@@ -129,7 +130,9 @@ function makeNode(kind: NodeKind) {
     const { unitSystem } = useEditorConfig();
     const system = useEditorValue((s) => s.meta.system);
     const node = data.node;
-    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props, unitSystem, system)} selected={!!selected} toEnter={node.unentered?.length ?? 0} />;
+    // What "no findings" means for this part (a string: the index behind it is built once per report).
+    const coverage = useEditorValue((s) => partCoverage(node, s.joints, s.nodes, s.report).short);
+    return <PartFrame id={id} kind={kind} label={node.label} lines={lines(node.props, unitSystem, system)} selected={!!selected} toEnter={node.unentered?.length ?? 0} coverage={coverage} />;
   });
   C.displayName = `${kind}Node`;
   return C;

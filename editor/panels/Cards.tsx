@@ -22,6 +22,7 @@ import { ReturnCableOffer } from "./ReturnCableOffer";
 import { CableEndFields } from "./CableEndFields";
 import { CARD_TITLE_ID } from "./card-title";
 import { jointCoverage, jointResult, jointSort, type Coverage, type JointSort } from "../joints/coverage";
+import { partCoverage, type PartCoverage } from "../nodes/coverage";
 
 const formSchemas = new Map<NodeKind, z.ZodType>();
 function nodeFormSchema(kind: NodeKind) {
@@ -34,20 +35,16 @@ function nodeFormSchema(kind: NodeKind) {
   return s;
 }
 
-function SubjectFindings({ subjectKey, coverage }: { subjectKey: string; coverage?: Coverage }) {
+function SubjectFindings({ subjectKey, coverage }: { subjectKey: string; coverage: Coverage | PartCoverage | undefined }) {
   const findings = useEditorStore((s) => s.findingsBySubject[subjectKey] ?? []);
   if (findings.length === 0) {
-    // A joint says what "no findings" means there: all checked (the only green line), partly, not checked yet,
-    // or nothing of its own to check. Never a green all-clear where nothing was checked.
-    if (coverage)
-      return (
-        <p data-testid="subject-findings-none" data-coverage={coverage.state} className={`rounded px-2 py-1 text-[11px] ${COVERAGE_TONE[coverage.state]}`}>
-          {coverage.text}
-        </p>
-      );
+    // A joint or part says what "no findings" means there: all checked (the only green line), partly, checked at
+    // its joints, values to enter, not checked yet, or nothing of its own to check. Never a green all-clear where
+    // nothing was checked.
+    if (!coverage) return null;
     return (
-      <p data-testid="subject-findings-none" className="rounded bg-ok/10 px-2 py-1 text-[11px] text-ok">
-        No findings here from the live check.
+      <p data-testid="subject-findings-none" data-coverage={coverage.state} className={`rounded px-2 py-1 text-[11px] ${COVERAGE_TONE[coverage.state]}`}>
+        {coverage.text}
       </p>
     );
   }
@@ -60,8 +57,10 @@ function SubjectFindings({ subjectKey, coverage }: { subjectKey: string; coverag
   );
 }
 
-const COVERAGE_TONE: Record<Coverage["state"], string> = {
+const COVERAGE_TONE: Record<Coverage["state"] | PartCoverage["state"], string> = {
   checked: "bg-ok/10 text-ok",
+  atJoints: "border border-ink/10 bg-paper text-ink-soft",
+  toEnter: "border border-caution/30 bg-caution/5 text-ink",
   partly: "border border-caution/30 bg-caution/5 text-ink",
   notChecked: "border border-caution/30 bg-caution/10 text-caution",
   nothingHere: "border border-ink/10 bg-paper text-ink-soft",
@@ -131,6 +130,12 @@ export function NodeInspector({ id }: { id: string }) {
     const n = s.nodes.find((x) => x.id === id);
     return n ? partName(n) : "";
   });
+  // What the live check covers here (a string, so the card re-renders only when that changes).
+  const coverageJson = useEditorValue((s) => {
+    const n = s.nodes.find((x) => x.id === id);
+    return n ? JSON.stringify(partCoverage(n, s.joints, s.nodes, s.report)) : "";
+  });
+  const coverage = useMemo(() => (coverageJson ? (JSON.parse(coverageJson) as PartCoverage) : undefined), [coverageJson]);
   if (!kind || !value) return null;
   return (
     <div className="space-y-2" data-testid="node-form-panel">
@@ -138,7 +143,7 @@ export function NodeInspector({ id }: { id: string }) {
         <KindGlyph kind={kind} /> {KIND_NAMES[kind]}
         <span className="ml-auto min-w-0 truncate text-[11px] font-normal text-ink-soft" data-part-id={id}>{label}</span>
       </h3>
-      <SubjectFindings subjectKey={`node:${id}`} />
+      <SubjectFindings subjectKey={`node:${id}`} coverage={coverage} />
       <ReturnCableOffer />
       <StartingValues id={id} count={starting.size} />
       <SchemaForm

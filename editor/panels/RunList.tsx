@@ -12,16 +12,20 @@ import { useEditorStore, useEditorValue } from "../context";
 import { SEVERITY_BG } from "../presentation";
 import type { SubjectRef } from "../store";
 import type { Badge } from "../store/types";
-import { jointCoverage, jointHardwareLine, jointResult, type Coverage, type CoverageState } from "../joints/coverage";
+import { jointCoverage, jointHardwareLine, jointResult, type CoverageState } from "../joints/coverage";
+import { partCoverage, type PartCoverageState } from "../nodes/coverage";
 
 const PAGE = 300;
 
-/** Without findings, a joint's row says what that means (joints/coverage.ts): only a checked joint reads "no findings". */
-const COVERAGE_TONE: Partial<Record<CoverageState, string>> = { partly: "text-caution", notChecked: "font-semibold text-caution", pending: "text-ink-soft" };
+/**
+ * Without findings, a row says what that means (joints/coverage.ts, nodes/coverage.ts): only a joint or part
+ * whose checks were made reads "no findings".
+ */
+type RowCoverage = { state: CoverageState | PartCoverageState; short: string };
+const COVERAGE_TONE: Partial<Record<RowCoverage["state"], string>> = { partly: "text-caution", toEnter: "text-caution", notChecked: "font-semibold text-caution", pending: "text-ink-soft" };
 
-function Count({ badge, coverage }: { badge: Badge | undefined; coverage?: Coverage }) {
-  if (!badge && coverage) return <span className={`shrink-0 text-right text-[11px] ${COVERAGE_TONE[coverage.state] ?? "text-ink-soft"}`} data-coverage={coverage.state}>{coverage.short}</span>;
-  if (!badge) return <span className="text-[11px] text-ink-soft">no findings</span>;
+function Count({ badge, coverage }: { badge: Badge | undefined; coverage: RowCoverage }) {
+  if (!badge) return <span className={`shrink-0 text-right text-[11px] ${COVERAGE_TONE[coverage.state] ?? "text-ink-soft"}`} data-coverage={coverage.state}>{coverage.short}</span>;
   return (
     <span className={`rounded px-1.5 text-[11px] font-bold text-white ${SEVERITY_BG[badge.worst]}`}>
       {badge.count} {badge.count === 1 ? badge.worst : `· worst ${badge.worst}`}
@@ -30,7 +34,7 @@ function Count({ badge, coverage }: { badge: Badge | undefined; coverage?: Cover
 }
 
 /** One row of the list: a part, or a joint indented under the part before it. */
-function RunRow(p: { itemKey: string; selected: boolean; badge: Badge | undefined; coverage?: Coverage; joint?: boolean; onClick: () => void; children: React.ReactNode }) {
+function RunRow(p: { itemKey: string; selected: boolean; badge: Badge | undefined; coverage: RowCoverage; joint?: boolean; onClick: () => void; children: React.ReactNode }) {
   return (
     <li>
       <button
@@ -81,7 +85,7 @@ export function RunList({ onOpen }: { onOpen: (s: SubjectRef) => void }) {
             const n = nodeById.get(it.id);
             if (!n) return null;
             return (
-              <RunRow key={key} itemKey={key} selected={isSel} badge={badge} onClick={() => onOpen({ type: "node", id: it.id })}>
+              <RunRow key={key} itemKey={key} selected={isSel} badge={badge} coverage={partCoverage(n, joints, nodes, report)} onClick={() => onOpen({ type: "node", id: it.id })}>
                 <span className="block truncate text-[13px] font-semibold">{partName(n)}</span>
                 <span className="block text-[11px] text-ink-soft">{KIND_NAMES[n.kind]}</span>
               </RunRow>

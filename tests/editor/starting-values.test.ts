@@ -116,14 +116,15 @@ describe("the part on the canvas", () => {
     const { store, id } = opened();
     const html = render(store, id);
     expect(html).toMatch(new RegExp(`data-testid="to-enter-${id}"[^>]*>4 to enter<`));
-    expect(html).toContain("Pushrod, Pushrod 1, no findings, 4 values to enter");
+    // Before the live check has run, the name says so (nodes/coverage.ts).
+    expect(html).toContain("Pushrod, Pushrod 1, no findings, not checked yet, 4 values to enter");
   });
 
   it("carries none when every value is entered", () => {
     const { store, id } = opened((s, id) => s.getState().confirmValues(id));
     const html = render(store, id);
     expect(html).not.toContain(`to-enter-${id}`);
-    expect(html).toContain("Pushrod, Pushrod 1, no findings<");
+    expect(html).toContain("Pushrod, Pushrod 1, no findings, not checked yet<");
   });
 
   it("names one value in the singular", () => {
