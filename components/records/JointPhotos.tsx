@@ -64,13 +64,12 @@ export function JointPhotos({ buildId, linkageId, jointId, jointName, canEdit, c
       ))}
       {list.length === 0 && queued.length === 0 && !photos.isLoading ? <span className="text-xs text-ink-soft">No photo yet — a close-up of the witness hole, jam nut and washer is the evidence an inspector asks for.</span> : null}
       {canEdit ? (
-        <>
-          <input ref={input} type="file" accept={ACCEPT_PHOTOS} multiple className="sr-only" id={`photo-${linkageId}-${jointId}`} aria-label={`Add a photo of the joint ${jointName}`}
+        // The input sits inside its label, so the label draws the ring when Tab reaches the (visually hidden) input.
+        <label className="touch-target relative inline-flex min-h-6 cursor-pointer items-center rounded border border-dashed border-ink/30 px-2 py-1 text-xs text-ink-soft hover:border-ink hover:text-ink focus-within:outline focus-within:outline-2 focus-within:outline-offset-2 focus-within:outline-advisory">
+          <input ref={input} type="file" accept={ACCEPT_PHOTOS} multiple className="sr-only" aria-label={`Add a photo of the joint ${jointName}`}
             onChange={(e) => { const files = [...(e.target.files ?? [])]; e.target.value = ""; if (files.length) add.mutate(files); }} />
-          <label htmlFor={`photo-${linkageId}-${jointId}`} className="touch-target inline-flex cursor-pointer items-center rounded border border-dashed border-ink/30 px-2 py-1 text-xs text-ink-soft hover:border-ink hover:text-ink focus-within:outline">
-            {add.isPending ? "Uploading…" : "+ Photo"}
-          </label>
-        </>
+          {add.isPending ? "Uploading…" : "+ Photo"}
+        </label>
       ) : null}
       {error ? <span role="alert" className="text-xs text-hazard">{error}</span> : null}
     </div>
