@@ -1,6 +1,6 @@
 "use client";
 import { useMutation, useQuery } from "@tanstack/react-query";
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { api } from "@/components/api-client";
 import { Button } from "@/components/ui";
 import type { ExportJobView, ExportKind } from "@/shared/schemas/exports";
@@ -20,6 +20,9 @@ export function ExportButton(p: { buildId: string; kind: ExportKind; params: obj
   const memo = `lw-export:${p.buildId}:${p.kind}:${JSON.stringify(p.params)}`;
   const [jobId, setJobId] = useState<string | null>(null);
   const [asking, setAsking] = useState(false);
+  const opener = useRef<HTMLButtonElement>(null);
+  /** Closes the estimate and gives the focus back to the button that opened it. */
+  const closeAsking = () => { setAsking(false); opener.current?.focus(); };
   useEffect(() => setJobId(window.localStorage.getItem(memo)), [memo]);
   const remember = (id: string) => { window.localStorage.setItem(memo, id); setJobId(id); };
 
@@ -37,7 +40,9 @@ export function ExportButton(p: { buildId: string; kind: ExportKind; params: obj
   });
   const start = useMutation({
     mutationFn: () => api<{ job: ExportJobView }>(base, { body: { kind: p.kind, params: p.params } }),
-    onSuccess: (r) => { setAsking(false); remember(r.job.id); },
+    // The panel's own button goes away with the estimate: the focus goes back to the opener, which stays
+    // focusable (aria-disabled) while the job runs; the progress below it is a live region.
+    onSuccess: (r) => { remember(r.job.id); if (asking) closeAsking(); },
   });
   const retry = useMutation({
     mutationFn: () => api<{ job: ExportJobView }>(`${base}/${jobId}/retry`, { method: "POST" }),
@@ -47,9 +52,11 @@ export function ExportButton(p: { buildId: string; kind: ExportKind; params: obj
   const busy = j && (j.status === "queued" || j.status === "running");
 
   return (
-    <div className="relative">
-      <Button tone="secondary" data-testid={p.testId} disabled={!!busy || start.isPending} aria-expanded={asking}
-        onClick={() => (p.estimateUrl ? setAsking((a) => !a) : start.mutate())}>
+    <div className="relative" onKeyDown={(e) => { if (e.key === "Escape" && asking) { e.stopPropagation(); closeAsking(); } }}>
+      {/* aria-disabled, not disabled: a disabled button would drop the keyboard's focus to the page. */}
+      <Button ref={opener} tone="secondary" data-testid={p.testId} aria-disabled={!!busy || start.isPending} aria-expanded={p.estimateUrl ? asking : undefined}
+        className="aria-disabled:cursor-not-allowed aria-disabled:opacity-50"
+        onClick={() => { if (busy || start.isPending) return; if (p.estimateUrl) setAsking((a) => !a); else start.mutate(); }}>
         {p.children}
       </Button>
       {asking || j || start.error ? (
@@ -64,8 +71,8 @@ export function ExportButton(p: { buildId: string; kind: ExportKind; params: obj
                   </p>
                   {estimate.data.large ? <p className="text-xs text-caution">A large file: it is made in the background and the link is e-mailed to you as well, so you may leave this page.</p> : null}
                   <div className="flex gap-2">
-                    <Button size="sm" onClick={() => start.mutate()} disabled={start.isPending}>{start.isPending ? "Starting…" : "Make the PDF"}</Button>
-                    <Button size="sm" tone="ghost" onClick={() => setAsking(false)}>Cancel</Button>
+                    <Button size="sm" onClick={() => { if (!start.isPending) start.mutate(); }} aria-disabled={start.isPending}>{start.isPending ? "Starting…" : "Make the PDF"}</Button>
+                    <Button size="sm" tone="ghost" onClick={closeAsking}>Cancel</Button>
                   </div>
                 </div>
               ) : null
