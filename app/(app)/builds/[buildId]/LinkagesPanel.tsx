@@ -1,7 +1,7 @@
 "use client";
 import Link from "next/link";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { api, ApiFailure } from "@/components/api-client";
 import { Badge, Button, Card, EmptyState, Input, Select } from "@/components/ui";
 import { SYSTEMS, type ControlSystem, type LinkageGraph } from "@/shared/linkage/schema";
@@ -27,6 +27,18 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
   const [adding, setAdding] = useState(false);
   const [renaming, setRenaming] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
+  // Where the focus goes once a form closes: the button that opened it (a CSS selector; it renders again after
+  // the form is gone, so it is looked up after that render, and the visible one of a phone/desktop pair is taken).
+  const refocus = useRef<string | null>(null);
+  useEffect(() => {
+    if (!refocus.current) return;
+    const el = [...document.querySelectorAll<HTMLElement>(refocus.current)].find((e) => e.offsetParent !== null);
+    refocus.current = null;
+    el?.focus();
+  });
+  const closeAdding = () => { refocus.current = '[data-testid="new-linkage"], [data-testid="start-from-nothing"]'; setAdding(false); };
+  const closeRenaming = (id: string) => { refocus.current = `[data-rename="${id}"]`; setRenaming(null); };
+  const escapeCloses = (close: () => void) => (e: React.KeyboardEvent) => { if (e.key === "Escape") { e.preventDefault(); e.stopPropagation(); close(); } };
   const invalidate = () => qc.invalidateQueries({ queryKey: key });
   const onError = (e: unknown) => setError(e instanceof ApiFailure ? Object.values(e.fields ?? {})[0] ?? e.message : String(e));
 
@@ -44,7 +56,7 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
 
   const create = useMutation({
     mutationFn: (v: { name: string; system: ControlSystem; graph?: LinkageGraph }) => api<{ linkage: Linkage }>(`/api/builds/${buildId}/linkages`, { body: v }),
-    onSuccess: () => { setAdding(false); setError(null); invalidate(); },
+    onSuccess: () => { closeAdding(); setError(null); invalidate(); },
     onError,
   });
   // A newcomer's starting run (shared/starter.ts), opened in the editor at once.
@@ -56,7 +68,7 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
   });
   const rename = useMutation({
     mutationFn: (v: { id: string; name: string }) => api(`/api/builds/${buildId}/linkages/${v.id}`, { method: "PATCH", body: { name: v.name } }),
-    onSuccess: () => { setRenaming(null); setError(null); invalidate(); },
+    onSuccess: (_r, v) => { closeRenaming(v.id); setError(null); invalidate(); },
     onError,
   });
   const remove = useMutation({
@@ -67,7 +79,7 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
   /** Rename and Delete of one linkage: in their own column, or under the name on a phone. */
   const actions = (l: Linkage) => (canEdit && renaming !== l.id ? (
     <span className="space-x-1">
-      <Button size="sm" tone="ghost" onClick={() => setRenaming(l.id)}>Rename</Button>
+      <Button size="sm" tone="ghost" onClick={() => setRenaming(l.id)} data-rename={l.id}>Rename</Button>
       <Button size="sm" tone="ghost" className="text-hazard" onClick={() => { if (window.confirm(`Delete "${l.name}" and all its revisions? This cannot be undone.`)) remove.mutate(l.id); }}>Delete</Button>
     </span>
   ) : null);
@@ -98,6 +110,7 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
       {adding ? (
         <form
           className="mb-4 flex flex-wrap items-end gap-2"
+          onKeyDown={escapeCloses(closeAdding)}
           onSubmit={(e) => {
             e.preventDefault();
             const f = new FormData(e.currentTarget);
@@ -109,7 +122,7 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
             <Select name="system" defaultValue="pitch" data-testid="linkage-system">{SYSTEMS.map((s) => <option key={s} value={s}>{SYSTEM_LABEL[s]}</option>)}</Select>
           </label>
           <Button type="submit" disabled={create.isPending} data-testid="create-linkage">{create.isPending ? "Creating…" : "Create"}</Button>
-          <Button type="button" tone="ghost" onClick={() => setAdding(false)}>Cancel</Button>
+          <Button type="button" tone="ghost" onClick={closeAdding}>Cancel</Button>
         </form>
       ) : null}
       {error ? <p role="alert" className="mb-3 text-xs text-hazard">{error}</p> : null}
@@ -141,10 +154,10 @@ export function LinkagesPanel({ buildId, initial, canEdit }: { buildId: string; 
                 <tr key={l.id} className="border-t border-ink/10 [&>td]:pr-3" data-testid="linkage-row">
                   <td className="py-2">
                     {renaming === l.id ? (
-                      <form className="flex gap-1" onSubmit={(e) => { e.preventDefault(); rename.mutate({ id: l.id, name: String(new FormData(e.currentTarget).get("name")) }); }}>
+                      <form className="flex gap-1" onKeyDown={escapeCloses(() => closeRenaming(l.id))} onSubmit={(e) => { e.preventDefault(); rename.mutate({ id: l.id, name: String(new FormData(e.currentTarget).get("name")) }); }}>
                         <Input name="name" defaultValue={l.name} autoFocus aria-label="New name" />
                         <Button size="sm" type="submit">Save</Button>
-                        <Button size="sm" tone="ghost" type="button" onClick={() => setRenaming(null)}>Cancel</Button>
+                        <Button size="sm" tone="ghost" type="button" onClick={() => closeRenaming(l.id)}>Cancel</Button>
                       </form>
                     ) : (
                       <Link href={`/builds/${buildId}/linkages/${l.id}`} className="font-medium text-advisory hover:underline">{l.name}</Link>
