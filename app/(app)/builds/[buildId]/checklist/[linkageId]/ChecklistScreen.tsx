@@ -2,7 +2,7 @@
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import Link from "next/link";
 import type { z } from "zod";
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { api, ApiFailure } from "@/components/api-client";
 import { queueTick, resolveConflict, type QueuedTick } from "@/components/offline/queue";
 import { useOfflineQueue } from "@/components/offline/useQueue";
@@ -113,11 +113,20 @@ function ItemRow({ i, hazards, canTick, onChange }: { i: Item & { pending?: Queu
   const id = `ck-${i.jointId}-${i.code}`;
   const [note, setNote] = useState(i.note);
   const [editing, setEditing] = useState(false);
+  // Closing the note (Escape or Save) gives the focus back to the button that opened it ("Add a note" or "edit").
+  const row = useRef<HTMLLIElement>(null);
+  const refocus = useRef(false);
+  const closeNote = () => { refocus.current = true; setEditing(false); };
+  useEffect(() => {
+    if (editing || !refocus.current) return;
+    refocus.current = false;
+    row.current?.querySelector<HTMLElement>("[data-note-opener]")?.focus();
+  }, [editing]);
   // The box follows the click in the same event; the server's answer (via the query) confirms or reverts it.
   const [checked, setChecked] = useState(!!i.tickedAt);
   useEffect(() => setChecked(!!i.tickedAt), [i.tickedAt]);
   return (
-    <li className={`flex gap-3 px-4 py-2 ${i.code === "not-checked" ? "bg-caution/10" : ""}`} data-testid="checklist-item" data-code={i.code}>
+    <li ref={row} className={`flex gap-3 px-4 py-2 ${i.code === "not-checked" ? "bg-caution/10" : ""}`} data-testid="checklist-item" data-code={i.code}>
       <input id={id} type="checkbox" className="mt-1 h-5 w-5 shrink-0" checked={checked} disabled={!canTick} onChange={(e) => { setChecked(e.target.checked); onChange({ ticked: e.target.checked }); }} />
       <div className="flex-1">
         <label htmlFor={id} className="text-sm">{i.text}</label>
@@ -132,14 +141,14 @@ function ItemRow({ i, hazards, canTick, onChange }: { i: Item & { pending?: Queu
         {i.pending && !i.pending.conflict ? <p className="text-xs font-medium text-advisory" data-testid="item-pending">Kept on this device — sent when the network is back.</p> : null}
         {i.pending?.conflict ? <Conflict q={i.pending} /> : null}
         {editing ? (
-          <form className="mt-1 flex gap-2" onSubmit={(e) => { e.preventDefault(); onChange({ ticked: !!i.tickedAt, note }); setEditing(false); }}>
+          <form className="mt-1 flex gap-2" onSubmit={(e) => { e.preventDefault(); onChange({ ticked: !!i.tickedAt, note }); closeNote(); }}>
             <input aria-label={`Note on: ${i.text}`} className="flex-1 rounded border border-ink/20 px-2 py-1 text-xs" value={note} onChange={(e) => setNote(e.target.value)} autoFocus maxLength={2000}
-              onKeyDown={(e) => { if (e.key === "Escape") { setNote(i.note); setEditing(false); } }} />
+              onKeyDown={(e) => { if (e.key === "Escape") { e.preventDefault(); setNote(i.note); closeNote(); } }} />
             <Button size="sm" type="submit">Save note</Button>
           </form>
         ) : i.note ? (
-          <p className="mt-1 text-xs"><span className="font-semibold">Note:</span> {i.note} {canTick ? <button type="button" className="no-print text-advisory hover:underline" onClick={() => setEditing(true)}>edit</button> : null}</p>
-        ) : canTick ? <button type="button" className="no-print touch-target mt-1 inline-flex items-center text-xs text-advisory hover:underline" onClick={() => setEditing(true)}>Add a note</button> : null}
+          <p className="mt-1 text-xs"><span className="font-semibold">Note:</span> {i.note} {canTick ? <button type="button" data-note-opener className="no-print text-advisory hover:underline" onClick={() => setEditing(true)}>edit</button> : null}</p>
+        ) : canTick ? <button type="button" data-note-opener className="no-print touch-target mt-1 inline-flex items-center text-xs text-advisory hover:underline" onClick={() => setEditing(true)}>Add a note</button> : null}
       </div>
     </li>
   );
