@@ -2,7 +2,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useRef, useState } from "react";
 import type { z } from "zod";
 import { Bar, BarChart, CartesianGrid, Legend, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
 import { api, ACCEPT_FILES, uploadFile } from "@/components/api-client";
@@ -33,6 +33,9 @@ export function LogScreen(p: { buildId: string; canEdit: boolean; initial: First
   const log = usePagedList<Entry, FirstPage>({ key: logKeys.list(p.buildId, qs), url: `${base}${qs ? `?${qs}` : ""}`, name: "entries", first: isDefault ? p.initial : undefined });
   const data = { totals: log.first?.totals ?? p.initial.totals, entries: log.items };
   const [adding, setAdding] = useState(false);
+  // The form closes (Cancel, Escape, saved) with the focus back on the button that opened it.
+  const opener = useRef<HTMLButtonElement>(null);
+  const closeForm = () => { setAdding(false); opener.current?.focus(); };
 
   return (
     <div className="space-y-6">
@@ -45,11 +48,11 @@ export function LogScreen(p: { buildId: string; canEdit: boolean; initial: First
           <ExportButton buildId={p.buildId} kind="log-pdf" params={Object.fromEntries(Object.entries(filter).filter(([, v]) => v))} estimateUrl={`${base}/estimate${qs ? `?${qs}` : ""}`} testId="log-pdf">
             PDF of {isDefault ? "the whole log" : "this selection"}
           </ExportButton>
-          {p.canEdit ? <Button onClick={() => setAdding((a) => !a)} aria-expanded={adding}>{adding ? "Close" : "New entry"}</Button> : null}
+          {p.canEdit ? <Button ref={opener} onClick={() => setAdding((a) => !a)} aria-expanded={adding}>{adding ? "Close" : "New entry"}</Button> : null}
         </div>
       </div>
 
-      {adding ? <EntryForm buildId={p.buildId} linkages={p.linkages} onDone={() => setAdding(false)} /> : null}
+      {adding ? <EntryForm buildId={p.buildId} linkages={p.linkages} onDone={closeForm} /> : null}
 
       <form className="grid gap-3 rounded-lg border border-ink/10 bg-white p-3 sm:grid-cols-5" onSubmit={(e) => e.preventDefault()} aria-label="Filter the log">
         <Field label="System" htmlFor="f-system">
@@ -194,9 +197,11 @@ function EntryForm({ buildId, linkages, onDone }: { buildId: string; linkages: {
     } catch (e) { setError(e instanceof Error ? e.message : String(e)); } finally { setUploading(false); }
   };
   const err = form.formState.errors;
+  // Opening the form puts the focus in its first field.
+  useEffect(() => form.setFocus("date"), [form]);
   return (
     <Card title="New log entry">
-      <form className="grid gap-3 sm:grid-cols-4" onSubmit={form.handleSubmit((v) => save.mutate(v))}>
+      <form className="grid gap-3 sm:grid-cols-4" onKeyDown={(e) => { if (e.key === "Escape") { e.preventDefault(); onDone(); } }} onSubmit={form.handleSubmit((v) => save.mutate(v))}>
         <Field label="Date" htmlFor="e-date" error={err.date?.message}><Input id="e-date" type="date" {...form.register("date")} aria-invalid={!!err.date} /></Field>
         <Field label="Hours" htmlFor="e-hours" error={err.hours?.message}><Input id="e-hours" type="number" step="0.25" min="0" max="24" {...form.register("hours", { valueAsNumber: true })} aria-invalid={!!err.hours} /></Field>
         <div className="sm:col-span-2"><Field label="Title" htmlFor="e-title" error={err.title?.message}><Input id="e-title" placeholder="e.g. Fitted the aft pushrod" {...form.register("title")} aria-invalid={!!err.title} /></Field></div>
