@@ -101,9 +101,10 @@ export async function updateLinkage(buildId: string, linkageId: string, userId: 
 
 export async function deleteLinkage(buildId: string, linkageId: string, userId: string) {
   return db.transaction(async (trx) => {
-    const n = await trx("linkages").where({ id: linkageId, build_id: buildId }).del();
-    if (n) await audit({ buildId, userId, action: "linkage.delete", detail: { linkageId } }, trx);
-    return n > 0;
+    // The name goes into the event, so the activity can say which linkage was deleted.
+    const gone = await trx("linkages").where({ id: linkageId, build_id: buildId }).del().returning("name");
+    if (gone.length) await audit({ buildId, userId, action: "linkage.delete", detail: { linkageId, name: gone[0].name } }, trx);
+    return gone.length > 0;
   });
 }
 

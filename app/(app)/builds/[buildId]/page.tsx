@@ -11,7 +11,7 @@ import { recentEntries } from "@/db/log";
 import Link from "next/link";
 import { reviewSummaryForBuild } from "@/db/signoffs";
 import { OverviewReview } from "@/components/review/OverviewReview";
-import { ACTION_TEXT } from "@/shared/activity";
+import { activityText } from "@/shared/activity";
 import { openFindingTotals, uncheckedText } from "@/shared/check-state";
 
 export const metadata: Metadata = { title: "Build overview" };
@@ -92,7 +92,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
             {activity.length === 0 ? <p className="text-ink-soft">Nothing yet.</p> : (
               <ul className="space-y-2 text-xs">
                 {activity.map((a) => (
-                  <li key={a.id}><span className="font-medium">{a.who}</span> {ACTION_TEXT[a.action] ?? a.action}<br /><span className="text-ink-soft">{new Date(a.at).toLocaleString("en-CA")}</span></li>
+                  <li key={a.id}><span className="font-medium">{a.who}</span> {activityText(a.action, a.detail)}<br /><span className="text-ink-soft">{new Date(a.at).toLocaleString("en-CA")}</span></li>
                 ))}
               </ul>
             )}

@@ -1,8 +1,8 @@
 "use client";
 import { LoadMore, usePagedList } from "@/components/paged";
-import { ACTION_TEXT } from "@/shared/activity";
+import { activityText } from "@/shared/activity";
 
-type Activity = { id: string; action: string; at: string; who: string };
+type Activity = { id: string; action: string; detail?: Record<string, unknown>; at: string; who: string };
 
 export function ActivityList(p: { buildId: string; first: { activity: Activity[]; total: number; nextCursor: string | null } }) {
   const list = usePagedList<Activity>({ key: ["activity", p.buildId], url: `/api/builds/${p.buildId}/activity`, name: "activity", first: p.first });
@@ -12,7 +12,7 @@ export function ActivityList(p: { buildId: string; first: { activity: Activity[]
       <ol className="divide-y divide-ink/10 rounded-lg border border-ink/10 bg-white text-sm" aria-label="Activity">
         {list.items.map((a) => (
           <li key={a.id} className="flex flex-wrap justify-between gap-2 px-4 py-2" data-testid="activity-row">
-            <span><span className="font-medium">{a.who}</span> {ACTION_TEXT[a.action] ?? a.action}</span>
+            <span><span className="font-medium">{a.who}</span> {activityText(a.action, a.detail)}</span>
             <time className="text-xs tabular-nums text-ink-soft" dateTime={a.at}>{new Date(a.at).toLocaleString("en-CA")}</time>
           </li>
         ))}
