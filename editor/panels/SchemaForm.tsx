@@ -13,7 +13,8 @@ import { fromDisplay, inputText, parseTyped, unitLabel, type Quantity, type Unit
 
 export type FieldSpec =
   | { type: "number"; path: string; label: string; q: Quantity; required?: boolean; hint?: string; placeholder?: string }
-  | { type: "enum"; path: string; label: string; options: readonly (readonly [string, string])[]; required?: boolean; hint?: string; default?: string }
+  /** `unsetHint`: what leaving it unset means — shown only while it is unset (under a set field it would be untrue). */
+  | { type: "enum"; path: string; label: string; options: readonly (readonly [string, string])[]; required?: boolean; hint?: string; unsetHint?: string; default?: string }
   | { type: "bool"; path: string; label: string; default?: boolean; hint?: string }
   | { type: "text"; path: string; label: string; multiline?: boolean; hint?: string; placeholder?: string };
 
@@ -180,6 +181,7 @@ export function SchemaForm<S extends z.ZodType>({
 
   const vErr = (formState.errors.v ?? {}) as Record<string, { message?: string } | undefined>;
   const on = watch("on");
+  const vals = watch("v");
   const errCount = Object.keys(vErr).length + (formState.errors.root ? 1 : 0);
 
   return (
@@ -267,6 +269,9 @@ export function SchemaForm<S extends z.ZodType>({
                           </p>
                         )}
                         {!err && f.hint && <p className="mt-0.5 text-[10px] leading-3 text-ink-soft/80">{f.hint}</p>}
+                        {!err && f.type === "enum" && f.unsetHint && !vals?.[k] && (
+                          <p data-testid={`${id}-unset`} className="mt-0.5 text-[10px] leading-3 text-ink-soft/80">{f.unsetHint}</p>
+                        )}
                       </div>
                     );
                   })}

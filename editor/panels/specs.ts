@@ -35,7 +35,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     fields: [
       { type: "enum", path: "rodEnd.shank", label: "Shank", options: opts(["male", "female"] as const), required: true, default: "male" },
       { type: "enum", path: "rodEnd.thread", label: "Thread (UNF)", options: opts(THREADS), required: true },
-      { type: "enum", path: "rodEnd.hand", label: "Thread hand", options: [["RH", "right-hand"], ["LH", "left-hand"]], hint: "unset, the hardware list and checklist ask for it (the jam nut has the same hand)" },
+      { type: "enum", path: "rodEnd.hand", label: "Thread hand", options: [["RH", "right-hand"], ["LH", "left-hand"]], unsetHint: "unset, the hardware list and checklist ask for it (the jam nut has the same hand)" },
       { type: "number", path: "rodEnd.ballBore", label: "Ball bore", q: "length", required: true },
       { type: "number", path: "rodEnd.ballDiameter", label: "Ball diameter", q: "length" },
       { type: "number", path: "rodEnd.housingBore", label: "Housing bore", q: "length", hint: "the retaining washer must be larger" },
@@ -62,7 +62,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     fields: [
       { type: "enum", path: "bolt.size", label: "Size", options: [...opts(AN_BOLTS), ["custom", "other"]], required: true },
       { type: "number", path: "bolt.diameter", label: "Shank diameter", q: "length", hint: "filled from the AN size" },
-      { type: "enum", path: "bolt.material", label: "Material", options: [["steel", "steel"], ["aluminium", "aluminium"]], hint: "unset, an AN bolt counts as steel; another bolt's strength is not checked" },
+      { type: "enum", path: "bolt.material", label: "Material", options: [["steel", "steel"], ["aluminium", "aluminium"]], unsetHint: "unset, an AN bolt counts as steel; another bolt's strength is not checked" },
       { type: "number", path: "bolt.grip", label: "Grip length", q: "length" },
       { type: "number", path: "bolt.stack", label: "Clamped stack", q: "length" },
       { type: "number", path: "bolt.threadsProtruding", label: "Threads past the nut", q: "count" },
@@ -73,7 +73,7 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
     optional: "nut",
     fields: [
       { type: "enum", path: "nut.type", label: "Type and locking", options: opts(NUT_TYPES, NUT_NAMES), required: true },
-      { type: "enum", path: "nut.pattern", label: "Pattern", options: [["tension", "tension (full)"], ["shear", "shear (thin)"]], hint: "unset, the torque is not judged against a range" },
+      { type: "enum", path: "nut.pattern", label: "Pattern", options: [["tension", "tension (full)"], ["shear", "shear (thin)"]], unsetHint: "unset, the torque is not judged against a range" },
       { type: "bool", path: "nut.cotterPinNew", label: "New cotter pin" },
       ...NUT_EXTRA_FIELDS,
     ],
@@ -100,8 +100,8 @@ export const HARDWARE_SECTIONS: SectionSpec[] = [
   {
     title: "Fit, torque & marks",
     fields: [
-      { type: "enum", path: "fit", label: "Bolt fit", options: [["clamped", "clamped on the race"], ["freeToRotate", "free to rotate"]], hint: "unset at a rod end, whether the bolt turns in the ball is not checked" },
-      { type: "enum", path: "shear", label: "Shear", options: [["single", "single"], ["double", "double"]], hint: "unset, the fastener's shear is not checked" },
+      { type: "enum", path: "fit", label: "Bolt fit", options: [["clamped", "clamped on the race"], ["freeToRotate", "free to rotate"]], unsetHint: "unset at a rod end, whether the bolt turns in the ball is not checked" },
+      { type: "enum", path: "shear", label: "Shear", options: [["single", "single"], ["double", "double"]], unsetHint: "unset, the fastener's shear is not checked" },
       { type: "enum", path: "bearing", label: "Turns on", options: [["rodEnd", "rod end"], ["ballBearing", "ball bearing"], ["plainBushing", "plain bushing"], ["clevisPin", "clevis pin"], ["none", "nothing (fixed)"]] },
       { type: "number", path: "torque", label: "Applied torque", q: "torque", hint: "including the nut's drag" },
       { type: "bool", path: "torqueStripe", label: "Torque stripe applied" },
