@@ -32,7 +32,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
   const unchecked = uncheckedText(open);
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="" extra={<Badge>{ROLE_LABEL[role]}</Badge>} />
+      <BuildNav buildId={build.id} buildName={build.name} page="" extra={<Badge>{ROLE_LABEL[role]}</Badge>} />
       <Main className="mx-auto grid max-w-6xl gap-6 p-6 lg:grid-cols-3">
         <div className="min-w-0 space-y-6 lg:col-span-2">
           <div>

@@ -14,7 +14,7 @@ export default async function ActivityPage({ params }: { params: Promise<{ build
   const first = await pageActivity(build.id, { limit: PAGE_DEFAULT, after: null });
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="" />
+      <BuildNav buildId={build.id} buildName={build.name} page="/activity" />
       <Main className="mx-auto max-w-3xl space-y-4 p-6">
         <h1 className="text-xl font-semibold">Activity</h1>
         <p className="text-ink-soft">Everything done in this build, newest first: who did it and when.</p>

@@ -21,7 +21,7 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
   const n = new Map(ticked.map((t: { linkage_id: string; n: number }) => [t.linkage_id, t.n]));
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="/checklist" />
+      <BuildNav buildId={build.id} buildName={build.name} page="/checklist" />
       <Main className="mx-auto max-w-4xl space-y-4 p-6">
         <div>
           <h1 className="text-xl font-semibold">Inspection checklist</h1>

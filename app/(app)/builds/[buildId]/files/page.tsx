@@ -15,7 +15,7 @@ export default async function FilesPage({ params }: { params: Promise<{ buildId:
   const [first, linkages] = await Promise.all([pageFiles(build.id, undefined, { limit: PAGE_DEFAULT, after: null }), linkageNames(build.id)]);
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="/files" />
+      <BuildNav buildId={build.id} buildName={build.name} page="/files" />
       <Main className="mx-auto max-w-6xl p-6">
         <FilesScreen buildId={build.id} linkages={linkages} first={{ files: first.items, total: first.total, nextCursor: encodeCursor(first.next) }} />
       </Main>

@@ -15,7 +15,7 @@ export default async function HardwarePage({ params }: { params: Promise<{ build
   const lines = listedHardware(await buildHardware(build.id), USED_IN_SHOWN);
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="/hardware" />
+      <BuildNav buildId={build.id} buildName={build.name} page="/hardware" />
       <Main className="mx-auto max-w-6xl p-6">
         <HardwareTable buildId={build.id} canEdit={can(role, "edit")} initial={lines} />
       </Main>

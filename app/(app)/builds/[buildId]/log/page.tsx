@@ -16,7 +16,7 @@ export default async function LogPage({ params }: { params: Promise<{ buildId: s
   const [first, totals, linkages] = await Promise.all([pageEntries(build.id, {}, { limit: LOG_FIRST_SCREEN, after: null }), hourTotals(build.id), listLinkages(build.id)]);
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="/log" />
+      <BuildNav buildId={build.id} buildName={build.name} page="/log" />
       <Main className="mx-auto max-w-6xl p-6">
         <LogScreen buildId={build.id} canEdit={can(role, "edit")} initial={{ entries: first.items, total: first.total, nextCursor: encodeCursor(first.next), totals }} linkages={linkages.map((l) => ({ id: l.id, name: l.name, revision: l.revision }))} />
       </Main>

@@ -15,7 +15,7 @@ export default async function MembersPage({ params }: { params: Promise<{ buildI
   const [members, invitations] = await Promise.all([listMembers(build.id), manage ? listInvitations(build.id) : Promise.resolve([])]);
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="/members" />
+      <BuildNav buildId={build.id} buildName={build.name} page="/members" />
       <Main className="mx-auto max-w-4xl space-y-4 p-6">
         <div>
           <h1 className="text-xl font-semibold">Members</h1>

@@ -13,7 +13,7 @@ export default async function BuildPartsPage({ params }: { params: Promise<{ bui
   const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}/parts`);
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="/parts" extra={<Link href="/parts" className="text-sm text-ink-soft hover:underline">My parts →</Link>} />
+      <BuildNav buildId={build.id} buildName={build.name} page="/parts" extra={<Link href="/parts" className="text-sm text-ink-soft hover:underline">My parts →</Link>} />
       <Main className="mx-auto max-w-6xl p-6">
         <PartsLibrary apiBase={`/api/builds/${build.id}/parts`} canEdit={can(role, "edit")} title="Parts library" intro="The parts bought for this aircraft, shared by its members. Suggestions on a joint draw from this library and from each member's own." />
       </Main>

@@ -14,7 +14,7 @@ export default async function SettingsPage({ params }: { params: Promise<{ build
   const { build, role } = await requirePageBuild(buildId, `/builds/${buildId}/settings`);
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="/settings" />
+      <BuildNav buildId={build.id} buildName={build.name} page="/settings" />
       <Main className="mx-auto max-w-4xl space-y-6 p-6">
         <div>
           <h1 className="text-xl font-semibold">Build settings</h1>

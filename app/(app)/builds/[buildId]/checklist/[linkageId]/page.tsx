@@ -24,7 +24,7 @@ export default async function LinkageChecklist({ params, searchParams }: { param
   const findings = checklistFindings(current.revision, current.graph.nodes.length, report ? findingStates(report, current.graph, acks) : null);
   return (
     <>
-      <BuildNav buildId={build.id} buildName={build.name} current="/checklist" />
+      <BuildNav buildId={build.id} buildName={build.name} page="/checklist/[linkageId]" />
       <Main className="mx-auto max-w-5xl p-6">
         <ChecklistScreen buildId={build.id} linkageId={linkage.id} linkageName={linkage.name} revision={rev} canTick={can(role, "comment")} canEdit={can(role, "edit")} findings={findings} />
       </Main>
