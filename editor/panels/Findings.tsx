@@ -8,7 +8,7 @@ import { useEditorConfig, useEditorStore } from "../context";
 import { useFocusSubject } from "../canvas/viewport";
 import { subjectName } from "@/shared/linkage/names";
 import { fmt, fmtUnit } from "../units";
-import { SEVERITY_BG, SEVERITY_NAMES, SEVERITY_TEXT, SOURCE_NAMES, severityCount } from "../presentation";
+import { marginText, SEVERITY_BG, SEVERITY_NAMES, SEVERITY_TEXT, SOURCE_NAMES, severityCount } from "../presentation";
 
 export const CAUTION =
   "Linkwright's numbers aid your own engineering and the designer's data — they do not replace them. Follow the kit or plans designer's instructions, the airworthiness regulations and a qualified inspector; defer to local rules and licensed practice.";
@@ -138,7 +138,7 @@ export function SummaryStrip({ system, settings }: { system: ControlSystem; sett
         Lowest margin:{" "}
         {lm ? (
           <button type="button" className={`touch-target font-semibold underline-offset-2 hover:underline ${lm.value < 0 ? "text-hazard" : "text-ink"}`} onClick={() => focus(lm.subject)}>
-            {lm.value >= 10 ? lm.value.toFixed(0) : lm.value.toFixed(2)} at {where} ({lm.what})
+            {marginText(lm.value)} at {where} ({lm.what})
           </button>
         ) : (
           <span className="text-ink">—</span>

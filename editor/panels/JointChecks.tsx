@@ -6,10 +6,11 @@
 import type { JointCheck } from "@/shared/analysis/types";
 import { useEditorStore } from "../context";
 import type { Coverage } from "../joints/coverage";
+import { marginText as signedMargin } from "../presentation";
 
 function marginText(c: JointCheck) {
   if (c.margin === null) return "—";
-  return c.margin >= 999 ? "no load" : `${c.margin >= 0 ? "+" : ""}${c.margin.toFixed(2)}`;
+  return c.margin >= 999 ? "no load" : signedMargin(c.margin);
 }
 
 /**

@@ -9,7 +9,7 @@ import { runOrder } from "@/shared/linkage/order";
 import { KIND_NAMES } from "@/shared/linkage/kinds";
 import { jointName, partName } from "@/shared/linkage/names";
 import { useEditorStore, useEditorValue } from "../context";
-import { SEVERITY_BG } from "../presentation";
+import { findingsBadgeText, SEVERITY_BG } from "../presentation";
 import type { SubjectRef } from "../store";
 import type { Badge } from "../store/types";
 import { jointCoverage, jointHardwareLine, jointResult, type CoverageState } from "../joints/coverage";
@@ -24,11 +24,17 @@ const PAGE = 300;
 type RowCoverage = { state: CoverageState | PartCoverageState; short: string };
 const COVERAGE_TONE: Partial<Record<RowCoverage["state"], string>> = { partly: "text-caution", toEnter: "text-caution", notChecked: "font-semibold text-caution", pending: "text-ink-soft" };
 
-function Count({ badge, coverage }: { badge: Badge | undefined; coverage: RowCoverage }) {
+function Count({ badge, coverage, itemKey }: { badge: Badge | undefined; coverage: RowCoverage; itemKey: string }) {
   if (!badge) return <span className={`shrink-0 text-right text-[11px] ${COVERAGE_TONE[coverage.state] ?? "text-ink-soft"}`} data-coverage={coverage.state}>{coverage.short}</span>;
+  return <BadgeText worst={badge.worst} itemKey={itemKey} />;
+}
+
+/** "2 hazards, 1 caution", in the colour of the worst. */
+function BadgeText({ worst, itemKey }: { worst: Badge["worst"]; itemKey: string }) {
+  const text = useEditorValue((s) => findingsBadgeText(s.findingsBySubject[itemKey] ?? []));
   return (
-    <span className={`rounded px-1.5 text-[11px] font-bold text-white ${SEVERITY_BG[badge.worst]}`}>
-      {badge.count} {badge.count === 1 ? badge.worst : `· worst ${badge.worst}`}
+    <span className={`shrink-0 rounded px-1.5 text-right text-[11px] font-bold text-white ${SEVERITY_BG[worst]}`} data-findings-badge>
+      {text}
     </span>
   );
 }
@@ -46,7 +52,7 @@ function RunRow(p: { itemKey: string; selected: boolean; badge: Badge | undefine
       >
         {p.joint ? <span aria-hidden="true" className="text-ink-soft">↳</span> : null}
         <span className="min-w-0 flex-1">{p.children}</span>
-        <Count badge={p.badge} coverage={p.coverage} />
+        <Count badge={p.badge} coverage={p.coverage} itemKey={p.itemKey} />
       </button>
     </li>
   );
