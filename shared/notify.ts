@@ -6,3 +6,9 @@ export const NOTIFY_LABEL: Record<NotifyPref, string> = {
   mentions_signoffs: "Only when someone @mentions me, and sign-offs",
   none: "No review e-mail",
 };
+/** The choice as a select's option: short enough to show whole in the editor's side panel (360 px at 12 px text). */
+export const NOTIFY_SHORT: Record<NotifyPref, string> = {
+  all: "Every comment, reply and sign-off",
+  mentions_signoffs: "Only @mentions and sign-offs",
+  none: "No review e-mail",
+};

@@ -3,7 +3,7 @@
 import { findingTitle } from "@/shared/analysis/finding-title";
 import { useState } from "react";
 import { ApiFailure } from "@/components/api-client";
-import { NOTIFY_LABEL, NOTIFY_PREFS, type NotifyPref } from "@/shared/notify";
+import { NOTIFY_LABEL, NOTIFY_PREFS, NOTIFY_SHORT, type NotifyPref } from "@/shared/notify";
 import dynamic from "next/dynamic";
 import { useAcknowledgements, useDiff, useNotify, useReviewActions, useSignoffs } from "./api";
 import type { ReviewMe } from "./ReviewThread";
@@ -145,9 +145,11 @@ function NotifySetting() {
   return (
     <div className="space-y-0.5">
       <label htmlFor="notify-pref" className={heading}>Review e-mail to me</label>
-      <select id="notify-pref" data-testid="notify-select" className={box} value={q.data.notify} onChange={(e) => setNotify.mutate(e.target.value as NotifyPref)}>
-        {NOTIFY_PREFS.map((p) => <option key={p} value={p}>{NOTIFY_LABEL[p]}</option>)}
+      {/* Short options, so the chosen one shows whole; the full sentence of the choice is the line under it. */}
+      <select id="notify-pref" data-testid="notify-select" className={box} value={q.data.notify} aria-describedby="notify-pref-help" onChange={(e) => setNotify.mutate(e.target.value as NotifyPref)}>
+        {NOTIFY_PREFS.map((p) => <option key={p} value={p}>{NOTIFY_SHORT[p]}</option>)}
       </select>
+      <p id="notify-pref-help" className="text-[11px] text-ink-soft">{NOTIFY_LABEL[q.data.notify]}.</p>
     </div>
   );
 }
