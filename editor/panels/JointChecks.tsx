@@ -3,7 +3,7 @@
  * The joint's checks from the live load-path check: each computed check with its margin (the governing one
  * marked), the special factor used, and the to-do of checks not made — shown apart, never as a pass.
  */
-import type { JointCheck } from "@/shared/analysis/types";
+import type { JointCheck, SpecialFactor } from "@/shared/analysis/types";
 import { useEditorStore } from "../context";
 import type { Coverage } from "../joints/coverage";
 import { marginText as signedMargin } from "../presentation";
@@ -14,20 +14,32 @@ function marginText(c: JointCheck) {
 }
 
 /**
+ * The Checks header's words for the factors the checks used (shared/analysis/joints/factors.ts): the fitting
+ * factor goes on every check; where a higher special factor applies (a plain bearing with angular motion, a
+ * cable-system joint, a hinge) it goes on bearing at the holes instead. Never "bearing factor 1.15": where the
+ * fitting factor is the highest, no bearing factor applies here.
+ */
+export function jointFactorText(factor: Pick<SpecialFactor, "value" | "name">, fittingFactor: number): string {
+  if (factor.name === "fitting factor") return `fitting factor ×${factor.value} on every check (no bearing factor above it applies here)`;
+  return `${factor.name} ×${factor.value} on bearing; fitting factor ×${fittingFactor} on the other checks`;
+}
+
+/**
  * `coverage`: what the check covers at this joint (joints/coverage.ts). A joint with nothing of its own to
  * check (a cable over a pulley, a terminal in a turnbuckle's barrel) has no Checks box: its card says why.
  */
 export function JointChecks({ jointId, coverage }: { jointId: string; coverage?: Coverage }) {
   const r = useEditorStore((s) => s.report?.joints.find((j) => j.jointId === jointId));
+  const fitting = useEditorStore((s) => s.report?.settings.fittingFactor ?? 1.15);
   if (!r || !r.checks) return null;
   if (r.checks.length === 0 && coverage?.state === "nothingHere") return null;
   const done = r.checks.filter((c) => c.status === "computed");
   return (
     <section className="rounded border border-ink/10 bg-white" data-testid="joint-checks" aria-label="Checks at this joint">
-      <header className="flex items-center justify-between border-b border-ink/5 px-2 py-1">
+      <header className="flex items-center justify-between gap-2 border-b border-ink/5 px-2 py-1">
         <h4 className="text-[11px] font-semibold uppercase tracking-wide text-ink-soft">Checks</h4>
-        <span className="text-[10px] text-ink-soft" data-testid="joint-factor" title={r.factor.source.text}>
-          bearing factor {r.factor.value} ({r.factor.name})
+        <span className="text-right text-[10px] text-ink-soft" data-testid="joint-factor" title={r.factor.source.text}>
+          {jointFactorText(r.factor, fitting)}
         </span>
       </header>
       {r.todo.length > 0 && (
