@@ -217,7 +217,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
     <div ref={rootRef} className={`flex ${props.fill ? "md:h-full" : "md:h-[calc(100vh-3.5rem)]"} flex-col bg-paper text-ink md:min-h-0 md:overflow-hidden`} data-testid="linkage-editor" data-view={listOpen ? "list" : "diagram"}>
       <Toolbar
         ctx={ctx}
-        title={{ linkageName, system, buildName, revision }}
+        title={{ linkageName, system, buildName, buildId: props.buildId, revision }}
         save={{ status: autosave.status, error: autosave.error }}
         picture={{ state: picture.picture, dismiss: picture.dismiss }}
         importInput={file.input}

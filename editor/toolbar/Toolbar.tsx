@@ -25,7 +25,8 @@ const Divider = () => <span className="mx-1 h-5 w-px bg-ink/10" aria-hidden="tru
 
 type Props = {
   ctx: CommandCtx;
-  title: { linkageName: string; system: string; buildName: string; revision: number };
+  /** `buildId`: the build's name links back to its overview (the editor's only way back to the build's pages). */
+  title: { linkageName: string; system: string; buildName: string; buildId?: string; revision: number };
   save: { status: SaveStatus; error: { message: string } | null };
   picture: { state: PicturePhase; dismiss: () => void };
   importInput: { ref: React.RefObject<HTMLInputElement | null>; onChange: (e: React.ChangeEvent<HTMLInputElement>) => void };
@@ -51,7 +52,19 @@ export function Toolbar({ ctx, title, save, picture, importInput }: Props) {
           {title.linkageName} <span className="font-normal text-ink-soft">· {title.system}</span>
         </div>
         <div className="text-[10px] leading-3 text-ink-soft">
-          {title.buildName} · revision <span data-testid="editor-revision">{title.revision}</span>
+          {title.buildId ? (
+            <a
+              href={`/builds/${encodeURIComponent(title.buildId)}`}
+              data-testid="editor-build-link"
+              title={`Back to ${title.buildName}: overview, checklist and log`}
+              className="touch-target inline-flex items-center rounded-sm text-ink underline underline-offset-2 hover:text-advisory focus-visible:outline focus-visible:outline-2 focus-visible:outline-offset-1 focus-visible:outline-ink"
+            >
+              {title.buildName}
+            </a>
+          ) : (
+            title.buildName
+          )}{" "}
+          · revision <span data-testid="editor-revision">{title.revision}</span>
         </div>
       </div>
       <span

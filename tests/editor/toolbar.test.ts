@@ -14,7 +14,7 @@ import { emptyGraph } from "@/shared/linkage/schema";
 
 beforeAll(() => loadSchema());
 
-function toolbar(canEdit: boolean) {
+function toolbar(canEdit: boolean, buildId?: string) {
   const noop = () => {};
   const ctx: CommandCtx = {
     store: createEditorStore(emptyGraph("Pitch", "pitch"), { now: () => 0 }), canEdit,
@@ -23,7 +23,7 @@ function toolbar(canEdit: boolean) {
     openCard: noop, returnFocus: () => false, openJoin: noop, toggleList: noop, listOpen: false,
   };
   return renderToStaticMarkup(createElement(Toolbar, {
-    ctx, title: { linkageName: "Pitch", system: "pitch", buildName: "Build", revision: 1 },
+    ctx, title: { linkageName: "Pitch", system: "pitch", buildName: "Build", buildId, revision: 1 },
     save: { status: canEdit ? "saved" : "readonly", error: null }, picture: { state: "idle" as never, dismiss: noop },
     importInput: { ref: { current: null }, onChange: noop },
   }));
@@ -38,5 +38,12 @@ describe("the toolbar", () => {
     const html = toolbar(false);
     for (const id of ["btn-undo", "btn-redo", "btn-join", "btn-keep-picture"]) expect(html).not.toContain(`data-testid="${id}"`);
     expect(html).toContain(`data-testid="btn-export-png"`);
+  });
+  it("links the build's name back to the build, for everyone who may open it", () => {
+    for (const canEdit of [true, false]) {
+      const html = toolbar(canEdit, "e60bc583-c849-4a18-ac27-8b551fea47bb");
+      expect(html).toMatch(/<a href="\/builds\/e60bc583-c849-4a18-ac27-8b551fea47bb" data-testid="editor-build-link"[^>]*focus-visible:outline[^>]*>Build<\/a>/);
+    }
+    expect(toolbar(true)).not.toContain("editor-build-link"); // no build to go back to: plain text
   });
 });
