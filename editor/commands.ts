@@ -162,7 +162,8 @@ export const COMMANDS: readonly Command[] = [
     id: "fit", label: "Fit the whole linkage in view", keys: "F",
     match: (e) => !mod(e) && key(e) === "f",
     perform: (c) => c.fitAll({ duration: 200 }),
-    button: { group: "edit", text: "Fit" },
+    // The list view has no diagram to fit: no button there (the key does nothing either).
+    button: { group: "edit", text: "Fit", testId: "btn-fit", hidden: (c) => c.listOpen },
   },
   {
     id: "returnCable", label: "Add the return cable of the selected cable (or of the joint just drawn to it)", keys: "R", edit: true,

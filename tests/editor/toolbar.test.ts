@@ -14,13 +14,13 @@ import { emptyGraph } from "@/shared/linkage/schema";
 
 beforeAll(() => loadSchema());
 
-function toolbar(canEdit: boolean, buildId?: string) {
+function toolbar(canEdit: boolean, buildId?: string, listOpen = false) {
   const noop = () => {};
   const ctx: CommandCtx = {
     store: createEditorStore(emptyGraph("Pitch", "pitch"), { now: () => 0 }), canEdit,
     fitAll: noop, saveNow: noop, toggleSheet: noop, sheetOpen: () => false, closeSheet: noop, openImport: noop, exportFile: noop,
     exportPicture: noop, keepPicture: noop, toggleGeometry: noop, geometryOpen: false, pictureBusy: { exporting: false, keeping: false },
-    openCard: noop, returnFocus: () => false, openJoin: noop, toggleList: noop, listOpen: false,
+    openCard: noop, returnFocus: () => false, openJoin: noop, toggleList: noop, listOpen,
   };
   return renderToStaticMarkup(createElement(Toolbar, {
     ctx, title: { linkageName: "Pitch", system: "pitch", buildName: "Build", buildId, revision: 1 },
@@ -38,6 +38,10 @@ describe("the toolbar", () => {
     const html = toolbar(false);
     for (const id of ["btn-undo", "btn-redo", "btn-join", "btn-keep-picture"]) expect(html).not.toContain(`data-testid="${id}"`);
     expect(html).toContain(`data-testid="btn-export-png"`);
+  });
+  it("offers Fit with the diagram, not in the list view where there is nothing to fit", () => {
+    expect(toolbar(true)).toContain(`data-testid="btn-fit"`);
+    expect(toolbar(true, undefined, true)).not.toContain(`data-testid="btn-fit"`);
   });
   it("links the build's name back to the build, for everyone who may open it", () => {
     for (const canEdit of [true, false]) {
