@@ -67,3 +67,6 @@ export function checklistStatus(ticked: number, items: number, f: ChecklistFindi
   if (ticked < items || items === 0) return { complete: false, why: "unticked", hazards };
   return { complete: true };
 }
+
+/** How far a checklist is ticked, said the same on the index and on the linkage's own list: "3 of 46 ticked". */
+export const tickedWords = (done: number, total: number) => `${done} of ${total} ticked`;

@@ -48,6 +48,12 @@ describe("build records in the browser", () => {
     await shot(page, "records-01-checklist-photo");
   });
 
+  it("the checklist index gives each linkage's ticks out of its total, as the linkage's own list does", async () => {
+    const items = checklistFor(demoPitchLinkage()).length;
+    await page.goto(`${APP_URL}/builds/${buildId}/checklist`);
+    expect(await page.getByTestId("checklist-linkage-progress").textContent()).toBe(`1 of ${items} ticked`);
+  });
+
   it("shows the log with a new entry, its hours chart, the parts library and the hardware list", async () => {
     await page.goto(`${APP_URL}/builds/${buildId}/log`);
     await page.getByText("The log is empty").waitFor();

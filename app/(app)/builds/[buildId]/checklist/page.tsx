@@ -1,10 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { requirePageBuild } from "@/lib/page-access";
-import { listLinkages } from "@/db/linkages";
+import { getRevision, listLinkages } from "@/db/linkages";
+import { listTicks } from "@/db/checklist";
+import { checklistFor } from "@/shared/records/checklist";
+import { tickedWords } from "@/shared/records/checklist-findings";
+import { analyze } from "@/shared/analysis";
 import { BuildNav } from "@/components/BuildNav";
 import { Card, EmptyState, Main } from "@/components/ui";
-import { db } from "@/db/index";
 import { notCheckedWords } from "@/shared/check-state";
 import { severityCount } from "@/shared/analysis/finding-title";
 
@@ -14,11 +17,15 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
   const { buildId } = await params;
   const { build } = await requirePageBuild(buildId, `/builds/${buildId}/checklist`);
   const linkages = await listLinkages(build.id);
-  const ticked = linkages.length
-    ? await db("checklist_items as c").join("linkages as l", function () { this.on("l.id", "c.linkage_id").andOn("l.current_revision", "c.revision"); })
-      .where("l.build_id", build.id).whereNotNull("c.ticked_at").groupBy("c.linkage_id").select("c.linkage_id", db.raw("count(*)::int as n"))
-    : [];
-  const n = new Map(ticked.map((t: { linkage_id: string; n: number }) => [t.linkage_id, t.n]));
+  // Each linkage's list as its own page makes it (the current revision's items, checked with the build's settings),
+  // so the index says "N of M ticked" with the same M.
+  const progress = new Map(await Promise.all(linkages.map(async (l) => {
+    const rev = await getRevision(l.id);
+    if (!rev) return [l.id, null] as const;
+    const items = checklistFor(rev.graph, analyze(rev.graph, build.analysisSettings));
+    const ticked = new Set((await listTicks(l.id, rev.revision)).filter((t) => t.tickedAt).map((t) => `${t.jointId}|${t.code}`));
+    return [l.id, { done: items.filter((i) => ticked.has(`${i.jointId}|${i.code}`)).length, total: items.length }] as const;
+  })));
   return (
     <>
       <BuildNav buildId={build.id} buildName={build.name} page="/checklist" />
@@ -36,7 +43,7 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
                 <li key={l.id} className="flex flex-wrap items-center justify-between gap-x-3 py-2" data-testid="checklist-linkage">
                   <Link className="touch-target inline-flex items-center font-medium hover:underline" href={`/builds/${build.id}/checklist/${l.id}`}>{l.name}</Link>
                   <span className="text-xs text-ink-soft">
-                    revision {l.revision} · {n.get(l.id) ?? 0} ticked
+                    revision {l.revision}{progress.get(l.id) ? <> · <span data-testid="checklist-linkage-progress">{tickedWords(progress.get(l.id)!.done, progress.get(l.id)!.total)}</span></> : null}
                     {notCheckedWords(l) ? <> · {notCheckedWords(l)}</>
                       : l.summary?.hazard ? <> · <span className="font-semibold text-hazard" data-testid="checklist-linkage-hazards">{severityCount(l.summary.hazard, "hazard")} in its check</span></> : null}
                   </span>

@@ -12,7 +12,7 @@ import { ExportButton } from "@/components/records/ExportButton";
 
 import { checklistKeys } from "@/components/query-keys";
 import type { checklistResponse, ChecklistItemView as Item } from "@/shared/schemas/checklist";
-import { checklistStatus, hazardsByItem, itemKeyOf, type ChecklistFindings } from "@/shared/records/checklist-findings";
+import { checklistStatus, hazardsByItem, itemKeyOf, tickedWords, type ChecklistFindings } from "@/shared/records/checklist-findings";
 
 type Data = z.infer<typeof checklistResponse>;
 
@@ -78,7 +78,7 @@ export function ChecklistScreen(p: { buildId: string; linkageId: string; linkage
         <div>
           <Link href={`/builds/${p.buildId}/checklist`} className="no-print text-xs text-ink-soft hover:underline">All checklists</Link>
           <h1 className="text-xl font-semibold">Checklist — {p.linkageName}</h1>
-          <p className="text-ink-soft">Revision {d.revision}{d.revision !== d.currentRevision ? ` (the linkage is now at revision ${d.currentRevision})` : ""} · <span data-testid="checklist-progress">{done} of {d.items.length} ticked</span>
+          <p className="text-ink-soft">Revision {d.revision}{d.revision !== d.currentRevision ? ` (the linkage is now at revision ${d.currentRevision})` : ""} · <span data-testid="checklist-progress">{tickedWords(done, d.items.length)}</span>
             {status ? <StatusText s={status} /> : null}</p>
         </div>
         <div className="no-print flex gap-2">
