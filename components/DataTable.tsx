@@ -53,7 +53,7 @@ export function DataTable<T>({ table, testId, rowTestId }: { table: Table<T>; te
                         aria-sort={sorted === "asc" ? "ascending" : sorted === "desc" ? "descending" : undefined}
                       >
                         {h.column.getCanSort() ? (
-                          <button type="button" className="touch-target inline-flex items-center rounded hover:text-ink max-sm:min-h-8 max-sm:border max-sm:border-ink/15 max-sm:bg-white max-sm:px-2" onClick={h.column.getToggleSortingHandler()}>
+                          <button type="button" className="touch-target inline-flex min-h-6 items-center rounded hover:text-ink max-sm:min-h-8 max-sm:border max-sm:border-ink/15 max-sm:bg-white max-sm:px-2" onClick={h.column.getToggleSortingHandler()}>
                             {label}{sorted === "asc" ? " ▲" : sorted === "desc" ? " ▼" : ""}
                           </button>
                         ) : label}

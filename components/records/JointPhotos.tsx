@@ -53,7 +53,10 @@ export function JointPhotos({ buildId, linkageId, jointId, jointName, canEdit, c
           </a>
           {canEdit && canRemove ? (
             <button type="button" onClick={() => remove.mutate(p.id)} disabled={remove.isPending} aria-label={`Remove ${p.name} from the joint ${jointName}`} title="Remove from this joint (the file stays in the build's uploads)"
-              className="absolute -right-1.5 -top-1.5 flex h-4 w-4 items-center justify-center rounded-full bg-ink text-[10px] leading-none text-white hover:bg-hazard" data-testid="joint-photo-remove">×</button>
+              className="group touch-target absolute -right-3 -top-3 flex h-6 w-6 items-center justify-center rounded-full" data-testid="joint-photo-remove">
+              {/* The dot is drawn small; the button round it is 24 px (44 px on a touch screen). */}
+              <span aria-hidden className="flex h-4 w-4 items-center justify-center rounded-full bg-ink text-[10px] leading-none text-white group-hover:bg-hazard">×</span>
+            </button>
           ) : null}
         </span>
       ))}

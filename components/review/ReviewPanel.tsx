@@ -113,7 +113,7 @@ function HistorySection({ buildId, linkageId }: { buildId: string; linkageId: st
   const [open, setOpen] = useState(false);
   return (
     <div className="space-y-1" data-testid="history-section">
-      <button type="button" data-testid="history-toggle" className={`touch-target ${heading} hover:text-ink`} onClick={() => setOpen((v) => !v)} aria-expanded={open}>
+      <button type="button" data-testid="history-toggle" className={`touch-target inline-flex min-h-6 items-center ${heading} hover:text-ink`} onClick={() => setOpen((v) => !v)} aria-expanded={open}>
         {open ? "▾" : "▸"} Revision history
       </button>
       {open && <RevisionHistory buildId={buildId} linkageId={linkageId} />}

@@ -40,7 +40,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
             <p className="text-ink-soft">{build.model || "Model not set"}{build.registration ? ` · ${build.registration}` : ""}</p>
           </div>
           <LinkagesPanel buildId={build.id} initial={linkages} canEdit={can(role, "edit")} />
-          <Card title="Recent log entries" actions={<Link href={`/builds/${build.id}/log`} className="touch-target inline-flex items-center text-xs text-advisory hover:underline">Open the build log</Link>}>
+          <Card title="Recent log entries" actions={<Link href={`/builds/${build.id}/log`} className="touch-target inline-flex min-h-6 items-center text-xs text-advisory hover:underline">Open the build log</Link>}>
             {log.length === 0 ? (
               <p className="text-ink-soft">No entries yet. Each shop session gets one: date, hours, what was done, photos.</p>
             ) : (
@@ -88,7 +88,7 @@ export default async function BuildOverview({ params }: { params: Promise<{ buil
               ))}
             </ul>
           </Card>
-          <Card title="Recent activity" actions={<Link href={`/builds/${build.id}/activity`} className="touch-target inline-flex items-center text-xs text-advisory hover:underline">All activity</Link>}>
+          <Card title="Recent activity" actions={<Link href={`/builds/${build.id}/activity`} className="touch-target inline-flex min-h-6 items-center text-xs text-advisory hover:underline">All activity</Link>}>
             {activity.length === 0 ? <p className="text-ink-soft">Nothing yet.</p> : (
               <ul className="space-y-2 text-xs">
                 {activity.map((a) => (

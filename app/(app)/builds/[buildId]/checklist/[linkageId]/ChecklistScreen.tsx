@@ -147,8 +147,8 @@ function ItemRow({ i, hazards, canTick, onChange }: { i: Item & { pending?: Queu
             <Button size="sm" type="submit">Save note</Button>
           </form>
         ) : i.note ? (
-          <p className="mt-1 text-xs"><span className="font-semibold">Note:</span> {i.note} {canTick ? <button type="button" data-note-opener className="no-print text-advisory hover:underline" onClick={() => setEditing(true)}>edit</button> : null}</p>
-        ) : canTick ? <button type="button" data-note-opener className="no-print touch-target mt-1 inline-flex items-center text-xs text-advisory hover:underline" onClick={() => setEditing(true)}>Add a note</button> : null}
+          <p className="mt-1 text-xs"><span className="font-semibold">Note:</span> {i.note} {canTick ? <button type="button" data-note-opener className="no-print touch-target inline-flex min-h-6 items-center px-1 align-middle text-advisory hover:underline" onClick={() => setEditing(true)}>edit</button> : null}</p>
+        ) : canTick ? <button type="button" data-note-opener className="no-print touch-target mt-1 inline-flex min-h-6 items-center text-xs text-advisory hover:underline" onClick={() => setEditing(true)}>Add a note</button> : null}
       </div>
     </li>
   );
