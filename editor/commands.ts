@@ -53,8 +53,12 @@ export type Command = {
   /** When the toolbar button is enabled (the key still reaches `perform`, which does nothing then). */
   enabled?: (s: EditorState, c: CommandCtx) => boolean;
   perform: (c: CommandCtx, e?: KeyboardEvent) => void;
-  /** A toolbar button: its group, text and test id; `hidden` leaves it out. */
-  button?: { group: "edit" | "file" | "view" | "help"; text: string | ((c: CommandCtx) => string); testId?: string; hidden?: (c: CommandCtx) => boolean; pressed?: (c: CommandCtx) => boolean };
+  /**
+   * A toolbar button: its group, text and test id; `hidden` leaves it out. `keepsFocus`: while it is off it is
+   * marked aria-disabled rather than disabled, so a button that turns itself off while it works (the picture
+   * buttons) keeps the keyboard focus instead of dropping it to the page.
+   */
+  button?: { group: "edit" | "file" | "view" | "help"; text: string | ((c: CommandCtx) => string); testId?: string; hidden?: (c: CommandCtx) => boolean; pressed?: (c: CommandCtx) => boolean; keepsFocus?: boolean };
 };
 
 const mod = (e: KeyboardEvent) => e.ctrlKey || e.metaKey;
@@ -214,15 +218,19 @@ export const COMMANDS: readonly Command[] = [
     id: "exportPicture", label: "Download a picture of the whole linkage with its title block", keys: "P",
     match: (e) => plain(e, "p"),
     enabled: (_s, c) => !c.pictureBusy.exporting,
-    perform: (c) => c.exportPicture(),
-    button: { group: "file", text: (c) => (c.pictureBusy.exporting ? "Drawing…" : "Picture (PNG)"), testId: "btn-export-png" },
+    perform: (c) => {
+      if (!c.pictureBusy.exporting) c.exportPicture();
+    },
+    button: { group: "file", text: (c) => (c.pictureBusy.exporting ? "Drawing…" : "Picture (PNG)"), testId: "btn-export-png", keepsFocus: true },
   },
   {
     id: "keepPicture", label: "Keep the picture on the server as this revision's picture for the build log (unsaved changes are saved first)", keys: "K", edit: true,
     match: (e) => plain(e, "k"),
     enabled: (_s, c) => !c.pictureBusy.keeping,
-    perform: (c) => c.keepPicture(),
-    button: { group: "file", text: "Keep for the log", testId: "btn-keep-picture", hidden: (c) => !c.canEdit },
+    perform: (c) => {
+      if (!c.pictureBusy.keeping) c.keepPicture();
+    },
+    button: { group: "file", text: "Keep for the log", testId: "btn-keep-picture", hidden: (c) => !c.canEdit, keepsFocus: true },
   },
   {
     id: "geometry", label: "The run to scale: pivots, arm angles and its motion through the travel", keys: "G",

@@ -14,7 +14,7 @@ function ToolButton(props: React.ButtonHTMLAttributes<HTMLButtonElement> & { kbd
       type="button"
       {...rest}
       title={rest.title ? `${rest.title}${kbd ? ` (${kbd})` : ""}` : undefined}
-      className={`rounded px-2 py-1 text-[12px] font-medium text-ink hover:bg-ink/5 disabled:cursor-not-allowed disabled:opacity-40 ${className ?? ""}`}
+      className={`rounded px-2 py-1 text-[12px] font-medium text-ink hover:bg-ink/5 disabled:cursor-not-allowed disabled:opacity-40 aria-disabled:cursor-not-allowed aria-disabled:opacity-40 ${className ?? ""}`}
     >
       {children}
     </button>
@@ -40,7 +40,18 @@ export function Toolbar({ ctx, title, save, picture, importInput }: Props) {
   const group = (g: NonNullable<Command["button"]>["group"], className?: string) =>
     buttons.map((c, i) =>
       c.button!.group !== g ? null : (
-        <ToolButton key={c.id} onClick={() => c.perform(ctx)} disabled={!enabled[i]} title={c.label} kbd={c.keys} data-testid={c.button!.testId} className={className} aria-pressed={c.button!.pressed?.(ctx)}>
+        <ToolButton
+          key={c.id}
+          onClick={() => enabled[i] && c.perform(ctx)}
+          // A button that turns itself off while it works keeps the focus (aria-disabled); the others are disabled.
+          disabled={!enabled[i] && !c.button!.keepsFocus}
+          aria-disabled={!enabled[i] && c.button!.keepsFocus ? true : undefined}
+          title={c.label}
+          kbd={c.keys}
+          data-testid={c.button!.testId}
+          className={className}
+          aria-pressed={c.button!.pressed?.(ctx)}
+        >
           {typeof c.button!.text === "function" ? c.button!.text(ctx) : c.button!.text}
         </ToolButton>
       ),

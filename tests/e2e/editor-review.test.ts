@@ -343,9 +343,18 @@ describe("the builder's records from the editor", () => {
   });
 
   it("keeps the picture with the revision for the build log, saving the unsaved change first", async () => {
-    await danaPage.getByTestId("btn-keep-picture").click();
+    // By keyboard: the button stays focused while it works (aria-disabled, not disabled) and after.
+    const focused = () => danaPage.evaluate(() => document.activeElement?.getAttribute("data-testid") ?? document.activeElement?.tagName);
+    await danaPage.getByTestId("btn-keep-picture").focus();
+    await danaPage.keyboard.press("Enter");
     const status = danaPage.getByTestId("picture-status");
+    await expect.poll(() => status.getAttribute("data-phase"), { timeout: 30_000 }).not.toBe(null);
+    expect(await focused()).toBe("btn-keep-picture");
     await expect.poll(() => status.getAttribute("data-phase"), { timeout: 30_000 }).toBe("kept");
+    expect(await focused()).toBe("btn-keep-picture");
+    // The chip fits the toolbar's row at 1440 px: "Keys ?" stays on the row of the picture buttons.
+    const top = async (id: string) => (await danaPage.getByTestId(id).boundingBox())!.y;
+    expect(Math.abs((await top("btn-shortcuts")) - (await top("btn-keep-picture")))).toBeLessThan(4);
     const revision = Number(await danaPage.getByTestId("editor-revision").textContent());
     expect(revision).toBe(3);
     expect(await status.textContent()).toContain(`Kept with revision ${revision}`);
