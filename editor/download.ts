@@ -13,3 +13,14 @@ export function downloadBlob(blob: Blob, filename: string) {
 export function fileSafe(name: string): string {
   return name.replace(/[^A-Za-z0-9._-]+/g, "-").replace(/^-+|-+$/g, "").slice(0, 60) || "linkage";
 }
+
+/**
+ * A picture's file name: the build, the linkage and the revision — the build's name once, when the linkage's
+ * name already starts with it ("Larkspur LX-2 pitch" of "Larkspur LX-2": Larkspur-LX-2-pitch-r1.png).
+ */
+export function pictureFileName(buildName: string, linkageName: string, revision: number): string {
+  const build = fileSafe(buildName), linkage = fileSafe(linkageName);
+  const lower = linkage.toLowerCase(), b = build.toLowerCase();
+  const named = lower === b || lower.startsWith(`${b}-`) ? linkage : `${build}-${linkage}`;
+  return `${named}-r${revision}.png`;
+}

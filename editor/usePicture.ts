@@ -9,7 +9,7 @@ import { subjectName } from "@/shared/linkage/names";
 import type { ControlSystem } from "@/shared/linkage/schema";
 import { uploadFile } from "@/components/api-client";
 import type { EditorStore } from "./store";
-import { downloadBlob, fileSafe } from "./download";
+import { downloadBlob, pictureFileName } from "./download";
 import { nodeLines } from "./nodes";
 import { CAUTION } from "./panels/Findings";
 import type { UnitSystem } from "./units";
@@ -85,7 +85,7 @@ export function usePicture(o: Opts) {
     setExporting(true);
     try {
       const { blob, revision } = await renderPng();
-      downloadBlob(blob, `${fileSafe(buildName)}-${fileSafe(linkageName)}-r${revision}.png`);
+      downloadBlob(blob, pictureFileName(buildName, linkageName, revision));
     } catch (e) {
       store.getState().setNotice(`The picture could not be made: ${e instanceof Error ? e.message : String(e)}`);
     } finally {
@@ -112,7 +112,7 @@ export function usePicture(o: Opts) {
       if (store.getState().revision !== revision) throw new Error("the linkage was saved again while the picture was drawn; keep it again");
       setPicture({ phase: "uploading", revision });
       const url = pictureUrl(o.buildId, o.linkageId, revision);
-      await uploadFile(url, blob, `${fileSafe(buildName)}-${fileSafe(linkageName)}-r${revision}.png`);
+      await uploadFile(url, blob, pictureFileName(buildName, linkageName, revision));
       setPicture({ phase: "kept", revision, url });
     } catch (e) {
       setPicture({ phase: "error", message: e instanceof Error ? e.message : String(e) });
