@@ -6,7 +6,7 @@ import { useEffect, useMemo, useState } from "react";
 import { LoadMore, usePagedList } from "@/components/paged";
 import { api, ApiFailure } from "@/components/api-client";
 import { partKeys } from "@/components/query-keys";
-import { Button, Card, EmptyState, Field, Input, Select } from "@/components/ui";
+import { Button, Card, Caution, EmptyState, Field, Input, Select } from "@/components/ui";
 import { CSV_UNITS, PART_KINDS, PART_KIND_LABEL, SPEC_COLUMNS, describeSpec, partInput, type Part, type PartKind, type RowError } from "@/shared/records/parts";
 import { THREADS } from "@/shared/linkage/schema";
 import { DataTable } from "@/components/DataTable";
@@ -70,6 +70,8 @@ export function PartsLibrary({ apiBase, canEdit, title, intro }: { apiBase: stri
           <LoadMore shown={parts.items.length} total={parts.total} noun="parts" hasMore={!!parts.hasNextPage} loading={parts.isFetchingNextPage} error={parts.isFetchNextPageError ? parts.error : null} onMore={() => void parts.fetchNextPage()} />
         </Card>
       )}
+      {/* The library shows makers' ratings, which the suggestions turn into margins: the standing caution applies. */}
+      <Caution />
     </div>
   );
 }

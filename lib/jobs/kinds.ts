@@ -82,14 +82,10 @@ export const KINDS: { [K in ExportKind]: Kind<K> } = {
       return { label: "Hardware list CSV", estimatedBytes: null };
     },
     async run({ build, progress }) {
-      const [{ default: Papa }, { buildHardware }, { HARDWARE_STATE_LABEL }] = await Promise.all([import("papaparse"), import("@/db/hardware"), import("@/shared/records/hardware")]);
+      const [{ buildHardware }, { hardwareToCsv }] = await Promise.all([import("@/db/hardware"), import("@/shared/records/hardware-csv")]);
       await progress(0.2, "Collecting the hardware of every linkage");
-      const lines = await buildHardware(build.id);
-      const csv = Papa.unparse({
-        fields: ["kind", "description", "partNumber", "quantity", "state", "usedIn"],
-        data: lines.map((l) => [l.kind, l.description, l.partNumber ?? "", l.quantity, HARDWARE_STATE_LABEL[l.state], l.usedIn.map((u) => `${u.linkageName}: ${u.where}`).join(" | ")]),
-      }, { newline: "\r\n", escapeFormulae: true }); // no cell runs as a spreadsheet formula
-      return { body: Buffer.from(csv + "\r\n", "utf8"), contentType: "text/csv; charset=utf-8", filename: `${slug(build.name)}-hardware.csv` };
+      const csv = hardwareToCsv(await buildHardware(build.id));
+      return { body: Buffer.from(csv, "utf8"), contentType: "text/csv; charset=utf-8", filename: `${slug(build.name)}-hardware.csv` };
     },
   },
   "build-archive": {

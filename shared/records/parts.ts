@@ -6,6 +6,7 @@ import Papa from "papaparse";
 import { z } from "zod";
 import { AN_BOLTS, NUT_TYPES, THREADS, TUBE_MATERIALS } from "../linkage/schema";
 import { boltMaterialOf } from "../hardware/bolts";
+import { CAUTION_CSV_ROWS, isCautionRow } from "../caution";
 
 export const PART_KINDS = ["rodEnd", "bolt", "nut", "washer", "tube", "bushing"] as const;
 export type PartKind = (typeof PART_KINDS)[number];
@@ -167,6 +168,7 @@ export function parsePartsCsv(text: string, existing: Iterable<string> = []): Cs
   for (let i = 1; i < data.length; i++) {
     const cells = data[i];
     if (cells.every((c) => !c.trim())) continue;
+    if (isCautionRow(cells)) continue; // the caution our export ends with (shared/caution.ts)
     rows++;
     const rowNo = i + 1;
     const errs: RowError["errors"] = [];
@@ -217,7 +219,7 @@ export function parsePartsCsv(text: string, existing: Iterable<string> = []): Cs
   return { parts, errors, delimiter, rows };
 }
 
-/** A library as CSV (comma-delimited, quoted where needed, with the caution as a trailing comment-free note in the README). */
+/** A library as CSV (comma-delimited, quoted where needed), ending with the caution line, which the import skips. */
 export function partsToCsv(parts: PartInput[]): string {
   const rows = parts.map((p) => {
     const spec = p.spec as Record<string, unknown>;
@@ -233,7 +235,7 @@ export function partsToCsv(parts: PartInput[]): string {
   // escapeFormulae: a description like "=HYPERLINK(…)" must not run when the file is opened in a spreadsheet, so a
   // leading apostrophe is added; a cell a builder began with an apostrophe before such a character ("'=5 turns")
   // gets one too, so the import (which takes one off) gives back exactly what was typed.
-  return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows }, { newline: "\r\n", escapeFormulae: FORMULA_OR_GUARDED }) + "\r\n";
+  return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows }, { newline: "\r\n", escapeFormulae: FORMULA_OR_GUARDED }) + "\r\n" + CAUTION_CSV_ROWS;
 }
 
 /** One line a part, for tables and pickers. */

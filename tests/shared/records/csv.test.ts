@@ -1,6 +1,8 @@
 /** Parts CSV import: the row-by-row report on awkward files. Pure (shared/records/parts.ts). */
 import { describe, expect, it } from "vitest";
 import { parsePartsCsv, partsToCsv } from "@/shared/records/parts";
+import { hardwareToCsv } from "@/shared/records/hardware-csv";
+import { CAUTION_CSV_CELL, CAUTION_TEXT, isCautionRow } from "@/shared/caution";
 
 // Ratings and sizes below are invented test values, not data of any real part. // common practice, no source
 const HEADER = "kind,partNumber,description,thread,hand,ballBore,ratedUltimate";
@@ -104,5 +106,38 @@ describe("a library nut's pattern", () => {
     expect(r.success).toBe(false);
     expect(r.error!.issues.map((i) => i.message)).toContain("pattern must be tension or shear (a thin nut)");
     expect(nut({ pattern: "shear" }).success).toBe(true);
+  });
+});
+
+describe("the caution in the CSV exports (shared/caution.ts: every PDF and CSV export carries it)", () => {
+  // Invented test values, not data of any real part.
+  const library = () => parsePartsCsv([HEADER, 'rodEnd,R-1,"a, b",3/8-24,LH,0.375,8800', "rodEnd,R-2,plain,1/4-28,RH,0.25,4200"].join("\n")).parts.map(({ row, ...p }) => p);
+
+  it("the parts library CSV ends with the caution, after an empty row", () => {
+    const out = partsToCsv(library());
+    expect(out.endsWith(`\r\n\r\n"${CAUTION_CSV_CELL}"\r\n`)).toBe(true);
+  });
+
+  it("an exported library imports back unchanged: the caution line is skipped, not reported", () => {
+    const a = library();
+    const back = parsePartsCsv(partsToCsv(a));
+    expect(back.errors).toEqual([]);
+    expect(back.rows).toBe(a.length);
+    expect(back.parts.map(({ row, ...p }) => p)).toEqual(a);
+    // and again, through a spreadsheet that saved it with semicolons
+    const semi = partsToCsv(a).replace(/,(?=(?:[^"]*"[^"]*")*[^"]*$)/gm, ";");
+    expect(parsePartsCsv(semi).errors).toEqual([]);
+  });
+
+  it("a line that only starts like the caution, or has other cells, is still read as a part row", () => {
+    expect(isCautionRow(["Caution. keep clear", "", ""])).toBe(true);
+    expect(isCautionRow(["Caution. keep clear", "x"])).toBe(false);
+    expect(isCautionRow(["rodEnd", "Caution. x"])).toBe(false);
+  });
+
+  it("the hardware list CSV ends with the caution, after an empty row", () => {
+    const out = hardwareToCsv([{ kind: "bolt", description: "Bolt AN3-5A", partNumber: "AN3-5A", quantity: 2, state: "to_order", usedIn: [{ linkageId: "l", linkageName: "Pitch run", jointId: "j", where: "Stick ↔ Pushrod" }] }]);
+    expect(out).toBe(`kind,description,partNumber,quantity,state,usedIn\r\nbolt,Bolt AN3-5A,AN3-5A,2,To order,Pitch run: Stick ↔ Pushrod\r\n\r\n"${CAUTION_CSV_CELL}"\r\n`);
+    expect(CAUTION_CSV_CELL).toBe(`Caution. ${CAUTION_TEXT}`);
   });
 });
