@@ -22,7 +22,7 @@ import { RunList } from "./panels/RunList";
 import { FindingsAnnouncer } from "./panels/FindingsAnnouncer";
 import type { SubjectRef } from "./store";
 import { CAUTION, FindingsList, SummaryStrip } from "./panels/Findings";
-import { useAutosave } from "./useAutosave";
+import { useAutosave, type RemoteRevision } from "./useAutosave";
 // The shortcuts sheet, the join dialog and the conflict dialog load when they are first opened.
 const ShortcutsSheet = dynamic(() => import("./panels/ShortcutsSheet").then((m) => m.ShortcutsSheet), { ssr: false });
 const JoinDialog = dynamic(() => import("./panels/JoinDialog").then((m) => m.JoinDialog), { ssr: false });
@@ -113,6 +113,9 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
     if (deepLink && "missing" in deepLink) store.getState().setNotice(`The link points at ${deepLink.missing}, which is not in revision ${props.initial.revision} of this linkage.`);
   }, [deepLink, store, props.initial.revision]);
   const autosave = useAutosave({ store, buildId: props.buildId, linkageId: props.linkageId, enabled: canEdit });
+  // The conflict the builder put off ("Decide later", Escape): its dialog stays closed until the save chip opens it
+  // again; a newer conflict opens it at once.
+  const [conflictLater, setConflictLater] = useState<RemoteRevision | null>(null);
   const notice = useStore(store, (s) => s.notice);
   const revision = useStore(store, (s) => s.revision);
   const file = useLinkageFile(store, linkageName, fitAll);
@@ -218,7 +221,7 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
       <Toolbar
         ctx={ctx}
         title={{ linkageName, system, buildName, buildId: props.buildId, revision }}
-        save={{ status: autosave.status, error: autosave.error }}
+        save={{ status: autosave.status, error: autosave.error, showConflict: () => setConflictLater(null) }}
         picture={{ state: picture.picture, dismiss: picture.dismiss }}
         importInput={file.input}
       />
@@ -267,8 +270,8 @@ function EditorInner(props: LinkageEditorProps & { store: EditorStore }) {
           }}
         />
       )}
-      {autosave.conflict && (
-        <ConflictDialog current={autosave.conflict} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} />
+      {autosave.conflict && conflictLater !== autosave.conflict && (
+        <ConflictDialog current={autosave.conflict} onLoadTheirs={autosave.loadTheirs} onKeepMine={autosave.keepMine} onLater={() => setConflictLater(autosave.conflict)} />
       )}
     </div>
   );

@@ -19,10 +19,51 @@ function Line({ label, items }: { label: string; items: ItemRef[] }) {
   );
 }
 
-/** The difference is from your work (as the conflict found it) to their revision: added = only in theirs, removed = only in yours. */
-export function ConflictDialog({ current, onLoadTheirs, onKeepMine }: { current: RemoteRevision; onLoadTheirs: () => void; onKeepMine: () => void }) {
+/** The controls of a dialog that Tab goes round, in order. */
+function tabStops(root: HTMLElement): HTMLElement[] {
+  return Array.from(root.querySelectorAll<HTMLElement>("button, [href], input, select, textarea, [tabindex]:not([tabindex='-1'])")).filter((el) => !el.hasAttribute("disabled"));
+}
+
+/**
+ * The difference is from your work (as the conflict found it) to their revision: added = only in theirs, removed =
+ * only in yours. A modal dialog like the Keys sheet: Tab and Shift+Tab go round its buttons; Escape (or "Decide
+ * later") closes it with nothing chosen — saving waits, the toolbar's "Someone else saved" opens it again — and the
+ * focus goes back where it was.
+ */
+export function ConflictDialog({ current, onLoadTheirs, onKeepMine, onLater }: { current: RemoteRevision; onLoadTheirs: () => void; onKeepMine: () => void; onLater: () => void }) {
   const ref = useRef<HTMLDivElement>(null);
-  useEffect(() => ref.current?.querySelector<HTMLButtonElement>("button")?.focus(), []);
+  // The element that had the focus when the dialog opened, read before the dialog takes it.
+  const opener = useRef<HTMLElement | null | undefined>(undefined);
+  if (opener.current === undefined && typeof document !== "undefined") opener.current = document.activeElement as HTMLElement | null;
+  useEffect(() => {
+    const dialog = ref.current;
+    dialog?.querySelector<HTMLButtonElement>("button")?.focus();
+    return () => {
+      const was = opener.current;
+      requestAnimationFrame(() => {
+        if (dialog?.isConnected) return; // React's development re-run of effects: still open
+        const back = was && was !== document.body && was.isConnected ? was : document.querySelector<HTMLElement>("[data-testid=save-status]");
+        back?.focus();
+      });
+    };
+  }, []);
+  const onKeyDown = (e: React.KeyboardEvent) => {
+    if (e.key === "Escape") {
+      e.preventDefault();
+      e.stopPropagation();
+      onLater();
+      return;
+    }
+    if (e.key !== "Tab" || !ref.current) return;
+    const stops = tabStops(ref.current);
+    if (stops.length === 0) return;
+    const first = stops[0], last = stops[stops.length - 1];
+    const at = document.activeElement;
+    if (e.shiftKey ? at === first || !ref.current.contains(at) : at === last || !ref.current.contains(at)) {
+      e.preventDefault();
+      (e.shiftKey ? last : first).focus();
+    }
+  };
   const store = useEditorStoreApi();
   const d = useMemo(() => {
     const s = store.getState();
@@ -32,7 +73,7 @@ export function ConflictDialog({ current, onLoadTheirs, onKeepMine }: { current:
   const when = new Date(current.createdAt);
   return (
     <div className="fixed inset-0 z-50 flex items-center justify-center bg-ink/40 p-4" role="presentation">
-      <div ref={ref} role="alertdialog" aria-modal="true" aria-labelledby="conflict-title" data-testid="conflict-dialog" className="w-full max-w-lg rounded-lg bg-white p-4 text-ink shadow-xl">
+      <div ref={ref} onKeyDown={onKeyDown} role="alertdialog" aria-modal="true" aria-labelledby="conflict-title" data-testid="conflict-dialog" className="w-full max-w-lg rounded-lg bg-white p-4 text-ink shadow-xl">
         <h2 id="conflict-title" className="text-base font-semibold">
           A newer revision was saved while you were editing
         </h2>
@@ -63,7 +104,10 @@ export function ConflictDialog({ current, onLoadTheirs, onKeepMine }: { current:
         <p className="mt-3 text-[12px] text-ink-soft">
           Loading theirs drops your unsaved edits. Keeping yours saves your linkage as a new revision on top of theirs (their revision stays in the history).
         </p>
-        <div className="mt-3 flex justify-end gap-2">
+        <div className="mt-3 flex flex-wrap justify-end gap-2">
+          <button type="button" onClick={onLater} data-testid="conflict-later" title="Close this and choose later (Escape); nothing is saved until you choose" className="mr-auto rounded px-3 py-1.5 text-[13px] text-ink-soft hover:bg-paper">
+            Decide later
+          </button>
           <button type="button" onClick={onLoadTheirs} data-testid="conflict-load-theirs" className="rounded border border-ink/20 px-3 py-1.5 text-[13px] font-medium hover:bg-paper">
             Load their revision
           </button>

@@ -27,7 +27,8 @@ type Props = {
   ctx: CommandCtx;
   /** `buildId`: the build's name links back to its overview (the editor's only way back to the build's pages). */
   title: { linkageName: string; system: string; buildName: string; buildId?: string; revision: number };
-  save: { status: SaveStatus; error: { message: string } | null };
+  /** `showConflict`: opens the conflict dialog again after it was put off ("Decide later", Escape). */
+  save: { status: SaveStatus; error: { message: string } | null; showConflict?: () => void };
   picture: { state: PicturePhase; dismiss: () => void };
   importInput: { ref: React.RefObject<HTMLInputElement | null>; onChange: (e: React.ChangeEvent<HTMLInputElement>) => void };
 };
@@ -78,15 +79,29 @@ export function Toolbar({ ctx, title, save, picture, importInput }: Props) {
           · revision <span data-testid="editor-revision">{title.revision}</span>
         </div>
       </div>
-      <span
-        data-testid="save-status"
-        data-status={save.status}
-        title={save.status === "readonly" ? "You can select and inspect this linkage and comment on it; editing is for the build's owner and builders." : undefined}
-        className={`rounded-full px-2 py-0.5 text-[11px] font-medium ${SAVE_STATUS_TONE[save.status]}`}
-        aria-live="polite"
-      >
-        {SAVE_STATUS_TEXT[save.status]}
-      </span>
+      {save.status === "conflict" && save.showConflict ? (
+        // A conflict put off: the chip is the way back to the choice (saving waits for it).
+        <button
+          type="button"
+          data-testid="save-status"
+          data-status={save.status}
+          onClick={save.showConflict}
+          title="Choose whether to load their revision or keep yours"
+          className={`rounded-full px-2 py-0.5 text-[11px] font-medium underline underline-offset-2 focus-visible:outline focus-visible:outline-2 focus-visible:outline-ink ${SAVE_STATUS_TONE[save.status]}`}
+        >
+          {SAVE_STATUS_TEXT[save.status]} — choose…
+        </button>
+      ) : (
+        <span
+          data-testid="save-status"
+          data-status={save.status}
+          title={save.status === "readonly" ? "You can select and inspect this linkage and comment on it; editing is for the build's owner and builders." : undefined}
+          className={`rounded-full px-2 py-0.5 text-[11px] font-medium ${SAVE_STATUS_TONE[save.status]}`}
+          aria-live="polite"
+        >
+          {SAVE_STATUS_TEXT[save.status]}
+        </span>
+      )}
       {save.error && save.status === "error" && (
         <span className="max-w-[28rem] truncate text-[11px] text-hazard" title={save.error.message} data-testid="save-error">
           {save.error.message}

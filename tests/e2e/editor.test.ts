@@ -175,6 +175,23 @@ describe("linkage editor in a real browser", () => {
     await expect(dialog.getByTestId("conflict-diff").textContent()).resolves.toMatch(/only in theirs.*Travel stop/s);
     await expect(status(page).getAttribute("data-status")).resolves.toBe("conflict");
     await shot(page, "editor-08-conflict");
+    // A modal dialog by keyboard: Tab and Shift+Tab go round its three buttons and never reach the page behind.
+    const focused = () => page.evaluate(() => document.activeElement?.closest("[data-testid=conflict-dialog]") ? document.activeElement.getAttribute("data-testid") : `outside:${document.activeElement?.tagName}`);
+    expect(await focused()).toBe("conflict-later");
+    const seen: (string | null)[] = [];
+    for (let i = 0; i < 4; i++) { await page.keyboard.press("Tab"); seen.push(await focused()); }
+    expect(seen).toEqual(["conflict-load-theirs", "conflict-keep-mine", "conflict-later", "conflict-load-theirs"]);
+    await page.keyboard.press("Shift+Tab");
+    await page.keyboard.press("Shift+Tab");
+    expect(await focused()).toBe("conflict-keep-mine");
+    // Escape puts the choice off: the dialog closes, nothing is saved, the focus is not dropped to the page, and the
+    // save chip opens it again.
+    await page.keyboard.press("Escape");
+    await dialog.waitFor({ state: "detached" });
+    await expect(status(page).getAttribute("data-status")).resolves.toBe("conflict");
+    await expect.poll(() => page.evaluate(() => document.activeElement?.tagName)).not.toBe("BODY");
+    await status(page).click();
+    await dialog.waitFor();
     await dialog.getByTestId("conflict-keep-mine").click();
     await waitSaved(page);
     await shot(page, "editor-09-kept-mine");
