@@ -93,11 +93,13 @@ function PartFrame({ id, kind, label, lines, selected, toEnter, coverage }: { id
               className={[
                 "pointer-events-none absolute hidden whitespace-nowrap rounded bg-white/90 px-0.5 text-[9px] font-medium uppercase tracking-wide text-ink-soft group-hover:block",
                 selected ? "!block" : "",
-                // Outside the card, beyond its port: inside, a selected card's labels covered its key numbers.
-                side === "left" ? "right-3.5 top-1/2 -translate-y-1/2" : "",
-                side === "right" ? "left-3.5 top-1/2 -translate-y-1/2" : "",
-                side === "top" ? "bottom-3 left-1/2 -translate-x-1/2" : "",
-                side === "bottom" ? "left-1/2 top-3 -translate-x-1/2" : "",
+                // Outside the card, beyond its port (inside, a selected card's labels covered its key numbers), and off
+                // the joint's line: above it beside a side port, beside it at a top or bottom port — on the line, a
+                // label covered the joint's badge and its findings count.
+                side === "left" ? "bottom-3.5 right-1" : "",
+                side === "right" ? "bottom-3.5 left-1" : "",
+                side === "top" ? "bottom-2 left-3.5" : "",
+                side === "bottom" ? "left-3.5 top-2" : "",
               ].join(" ")}
             >
               {port}
