@@ -121,13 +121,14 @@ describe("build records in the browser", () => {
     expect(await unreadable()).toEqual([]);
     await page.setViewportSize({ width: 1280, height: 900 });
 
-    // A state changed by keyboard is saved and the focus stays on its select through the save and the refetch.
+    // A state changed by keyboard (arrow, then Enter) is saved and the focus stays on its select through the save and the refetch.
     const state = page.locator("select[data-state-key]").first();
     const lineKey = (await state.getAttribute("data-state-key"))!;
     await state.focus();
     const hardwareCall = (method: string) => page.waitForResponse((r) => r.url().endsWith(`/api/builds/${buildId}/hardware`) && r.request().method() === method);
     const [saved, refetched] = [hardwareCall("PUT"), hardwareCall("GET")];
     await page.keyboard.press("ArrowDown");
+    await page.keyboard.press("Enter");
     expect((await saved).status()).toBe(200);
     await (await refetched).finished();
     await page.waitForTimeout(300); // the refetch's render

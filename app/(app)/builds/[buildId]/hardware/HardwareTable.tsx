@@ -16,6 +16,32 @@ const KIND_LABEL: Record<string, string> = HARDWARE_KIND_LABEL;
 const STATE_TONE: Record<HardwareState, string> = { to_order: "text-caution", ordered: "text-advisory", received: "text-ink", installed: "text-ink", inspected: "text-ok" };
 const col = createColumnHelper<Line>();
 
+/**
+ * A line's state. A pick with the mouse or a finger (a list that opened and closed) saves at once; with the keyboard,
+ * the arrow keys only move through the states (Chrome on Windows and Linux fires a change for each one on a closed
+ * select) and Enter, or leaving the select, saves the one shown; Escape puts the saved one back.
+ */
+function StateSelect({ line, onSave }: { line: Line; onSave: (state: HardwareState) => void }) {
+  const [draft, setDraft] = useState<HardwareState>(line.state);
+  useEffect(() => setDraft(line.state), [line.state]);
+  const byKeys = useRef(false);
+  const commit = (v: HardwareState) => { byKeys.current = false; if (v !== line.state) onSave(v); };
+  return (
+    <Select aria-label={`State of ${line.description}`} data-state-key={line.key} data-unsaved={draft !== line.state || undefined}
+      value={draft} className={`min-w-36 ${STATE_TONE[draft]} data-[unsaved=true]:border-dashed data-[unsaved=true]:border-advisory`}
+      onPointerDown={() => { byKeys.current = false; }}
+      onKeyDown={(e) => {
+        if (e.key === "Enter") { e.preventDefault(); commit(draft); }
+        else if (e.key === "Escape" && draft !== line.state) { e.preventDefault(); setDraft(line.state); byKeys.current = false; }
+        else if (e.key !== "Tab" && e.key !== "Shift") byKeys.current = true;
+      }}
+      onChange={(e) => { const v = e.target.value as HardwareState; setDraft(v); if (!byKeys.current) commit(v); }}
+      onBlur={() => commit(draft)}>
+      {HARDWARE_STATES.map((s) => <option key={s} value={s}>{HARDWARE_STATE_LABEL[s]}</option>)}
+    </Select>
+  );
+}
+
 export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; canEdit: boolean; initial: Line[] }) {
   const qc = useQueryClient();
   const key = hardwareKeys.list(buildId);
@@ -83,10 +109,7 @@ export function HardwareTable({ buildId, canEdit, initial }: { buildId: string; 
       header: "State", filterFn: "equals",
       sortingFn: (a, b) => HARDWARE_STATES.indexOf(a.original.state) - HARDWARE_STATES.indexOf(b.original.state),
       cell: (c) => canEdit ? (
-        <Select aria-label={`State of ${c.row.original.description}`} data-state-key={c.row.original.key} value={c.getValue()} className={`min-w-36 ${STATE_TONE[c.getValue()]}`}
-          onChange={(e) => { lastSaved.current = c.row.original.key; live.current.setState.mutate({ key: c.row.original.key, state: e.target.value as HardwareState }); }}>
-          {HARDWARE_STATES.map((s) => <option key={s} value={s}>{HARDWARE_STATE_LABEL[s]}</option>)}
-        </Select>
+        <StateSelect line={c.row.original} onSave={(state) => { lastSaved.current = c.row.original.key; live.current.setState.mutate({ key: c.row.original.key, state }); }} />
       ) : <span className={STATE_TONE[c.getValue()]}>{HARDWARE_STATE_LABEL[c.getValue()]}</span>,
     }),
   ], [buildId, canEdit]);

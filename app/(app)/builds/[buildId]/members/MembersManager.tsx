@@ -2,7 +2,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
 import { useForm } from "react-hook-form";
-import { useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import type { z } from "zod";
 import { api, ApiFailure } from "@/components/api-client";
 import { Button, Card, Field, Input, Select } from "@/components/ui";
@@ -58,9 +58,7 @@ export function MembersManager(p: { buildId: string; me: string; canManage: bool
               </div>
               <div className="min-w-0">
                 {p.canManage ? (
-                  <Select aria-label={`Role of ${m.name}`} value={m.role} onChange={(e) => setRole.mutate({ userId: m.userId, role: e.target.value as Role })} className="max-w-[12rem] sm:max-w-none">
-                    {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
-                  </Select>
+                  <RoleChange m={m} mine={m.userId === p.me} saving={setRole.isPending} onSave={(role) => setRole.mutate({ userId: m.userId, role })} />
                 ) : <span className="text-sm"><span className="sr-only">Role: </span>{ROLE_LABEL[m.role]}</span>}
               </div>
               <div className="text-right">
@@ -108,6 +106,40 @@ export function MembersManager(p: { buildId: string; me: string; canManage: bool
             ))}
           </ul>
         </Card>
+      ) : null}
+    </div>
+  );
+}
+
+/**
+ * A member's role as the owner sees it. Choosing a role in the select changes nothing yet: Save beside it makes the
+ * change (Cancel, or Escape, puts the select back), so arrowing through a closed select never saves each role in turn.
+ * The owner's own select is disabled, with the reason under it.
+ */
+function RoleChange({ m, mine, saving, onSave }: { m: Member; mine: boolean; saving: boolean; onSave: (role: Role) => void }) {
+  const [draft, setDraft] = useState<Role>(m.role);
+  // Save and Cancel go away once the select shows the saved role again: the focus goes back to the select.
+  const select = useRef<HTMLSelectElement>(null);
+  const sent = useRef(false);
+  useEffect(() => {
+    setDraft(m.role);
+    if (sent.current) { sent.current = false; select.current?.focus(); }
+  }, [m.role]);
+  const cancel = () => { setDraft(m.role); select.current?.focus(); };
+  const changed = draft !== m.role;
+  const reasonId = `own-role-${m.userId}`;
+  return (
+    <div className="space-y-1" onKeyDown={(e) => { if (e.key === "Escape" && changed) { e.preventDefault(); cancel(); } }}>
+      <Select ref={select} aria-label={`Role of ${m.name}`} value={draft} disabled={mine} aria-describedby={mine ? reasonId : undefined}
+        onChange={(e) => setDraft(e.target.value as Role)} className="max-w-[12rem] disabled:bg-paper disabled:text-ink-soft sm:max-w-none">
+        {ROLES.map((r) => <option key={r} value={r}>{ROLE_LABEL[r]}</option>)}
+      </Select>
+      {mine ? <p id={reasonId} className="text-xs text-ink-soft">Your own role: another owner can change it.</p> : null}
+      {changed ? (
+        <div className="flex flex-wrap gap-1" data-testid="role-change">
+          <Button size="sm" className="touch-target min-h-6" aria-disabled={saving} onClick={() => { if (!saving) { sent.current = true; onSave(draft); } }}>Save: {ROLE_LABEL[draft]}</Button>
+          <Button size="sm" tone="ghost" className="touch-target min-h-6" onClick={cancel}>Cancel</Button>
+        </div>
       ) : null}
     </div>
   );
