@@ -44,7 +44,7 @@ type Index = {
   surfaces: Map<string, Report["surfaces"][number]>;
   /** Per part: how many checks were computed at the joints that touch it. */
   jointChecks: Map<string, number>;
-  /** Parts joined to a cable (a pulley's rules need one). */
+  /** Parts joined to a cable whose size is entered (a pulley's rules are judged against it). */
   onCable: Set<string>;
 };
 const indexes = new WeakMap<Report, WeakMap<readonly JointEnds[], Index>>();
@@ -55,14 +55,15 @@ function indexOf(report: Report, joints: readonly JointEnds[], parts: readonly P
   let ix = byJoints.get(joints);
   if (ix) return ix;
   const made = new Map(report.joints.map((j) => [j.jointId, (j.checks ?? []).filter((c) => c.status === "computed").length]));
-  const kindOf = new Map(parts.map((p) => [p.id, p.kind]));
+  // A cable whose size is still a starting value: the pulley's groove and size are not judged against it.
+  const sizedCable = new Set(parts.filter((p) => p.kind === "cable" && !p.unentered?.includes("size")).map((p) => p.id));
   const jointChecks = new Map<string, number>();
   const onCable = new Set<string>();
   for (const j of joints) {
     const n = made.get(j.id) ?? 0;
     for (const id of [j.from.node, j.to.node]) if (n) jointChecks.set(id, (jointChecks.get(id) ?? 0) + n);
-    if (kindOf.get(j.from.node) === "cable") onCable.add(j.to.node);
-    if (kindOf.get(j.to.node) === "cable") onCable.add(j.from.node);
+    if (sizedCable.has(j.from.node)) onCable.add(j.to.node);
+    if (sizedCable.has(j.to.node)) onCable.add(j.from.node);
   }
   ix = {
     pushrods: new Map(report.pushrods.map((r) => [r.nodeId, r])),

@@ -44,6 +44,12 @@ describe("partCoverage", () => {
     expect(coverageOf(yaw, "rd-pulley").c.state).toBe("checked");
   });
 
+  it("a pulley whose cable's size is still a starting value is not called checked (its groove is not judged)", () => {
+    const yaw = demoRudderLinkage();
+    for (const n of yaw.nodes) if (n.kind === "cable") n.unentered = ["size"] as never;
+    expect(coverageOf(yaw, "rd-pulley").c.state).not.toBe("checked");
+  });
+
   it("a bellcrank, a structure mount, a stop, a stick: checked at their joints only — never 'no findings'", () => {
     const pitch = demoPitchLinkage();
     for (const id of ["bellcrank", "mount-tail", "stop-stick", "stick", "horn"]) {
