@@ -8,6 +8,7 @@ import { useEditorConfig, useEditorStore } from "../context";
 import { useFocusSubject } from "../canvas/viewport";
 import { subjectName } from "@/shared/linkage/names";
 import { fmt, fmtUnit } from "../units";
+import { measuresInText } from "@/shared/units";
 import { marginText, SEVERITY_BG, SEVERITY_NAMES, SEVERITY_TEXT, SOURCE_NAMES, severityCount } from "../presentation";
 
 export const CAUTION =
@@ -24,7 +25,7 @@ export const FindingItem = memo(function FindingItem({ f, compact, onPick }: { f
         <span className={`mt-1 h-2 w-2 shrink-0 rounded-sm ${SEVERITY_BG[f.severity]}`} aria-hidden="true" />
         <span className="min-w-0">
           {!compact && <span className="block text-[10px] font-medium uppercase tracking-wide text-ink-soft">{where}</span>}
-          <span className="block text-[12px] leading-4 text-ink">{f.message}</span>
+          <span className="block text-[12px] leading-4 text-ink">{measuresInText(f.message, unitSystem)}</span>
           {f.numbers.length > 0 && (
             <span className="mt-0.5 flex flex-wrap gap-x-2 text-[11px] tabular-nums text-ink-soft">
               {f.numbers.map((n, i) => (

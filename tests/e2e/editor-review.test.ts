@@ -248,6 +248,11 @@ describe("the reviewer in the editor", () => {
     await expect(card.getByTestId("joint-form-rodEnd__ballBore").inputValue()).resolves.toBe("6.35"); // 0.25 in
     expect(Number(await card.getByTestId("joint-form-rodEnd__ratedUltimate").inputValue())).toBeCloseTo(4200 * 4.4482216, 0); // 4200 lbf
     await shot(samPage, "editor-review-04-si-units");
+    // A finding's own sentence is in SI too (shared/units.ts measuresInText), not inches beside millimetres.
+    await open(samPage, editorUrl(demoLinkageId, `?select=${DEMO_WRONG_JOINT}`));
+    await samPage.getByTestId("joint-card").waitFor();
+    await expect.poll(() => samPage.getByTestId("joint-card").innerText()).toContain("is 11.1 mm across, no larger than the 12.7 mm housing bore");
+    expect(await samPage.locator("main").innerText()).not.toContain("0.438 in across");
     expect((await samApi.request("PATCH", "/api/me", { unitSystem: "US" })).status).toBe(200);
   });
 });
