@@ -63,17 +63,18 @@ export const KINDS: { [K in ExportKind]: Kind<K> } = {
       return { label: `Checklist PDF — ${linkage.name}, revision ${p.revision ?? linkage.revision}`, estimatedBytes: null };
     },
     async run({ build, params: p, progress }) {
-      const [{ listTicks }, { checklistFor }, { checklistPdf }, { analyze }] = await Promise.all([import("@/db/checklist"), import("@/shared/records/checklist"), import("@/lib/records-pdf"), import("@/shared/analysis")]);
+      const [{ listTicks }, { checklistFor }, { checklistReport }, { checklistPdf }] = await Promise.all([import("@/db/checklist"), import("@/shared/records/checklist"), import("@/shared/records/checklist-report"), import("@/lib/records-pdf")]);
       const linkage = await getLinkage(build.id, p.linkageId);
       if (!linkage) throw new ExportFailure("The linkage was deleted before its checklist could be printed.");
       const rev = await getRevision(linkage.id, p.revision);
       if (!rev) throw new ExportFailure(`Revision ${p.revision} of ${linkage.name} no longer exists.`);
       await progress(0.2, "Reading the ticks");
-      // The revision's open findings from the report stored with it (as the checklist page shows them), not computed again.
+      // The revision's open findings from the report stored with it (as the checklist page shows them), not computed again;
+      // its items from the same report as the page's (checklistReport).
       const [{ listAcknowledgements }, { findingStates }, { checklistFindings }] = await Promise.all([import("@/db/acknowledgements"), import("@/shared/review/hazards"), import("@/shared/records/checklist-findings")]);
       const stored = rev.analysis;
       const check = checklistFindings(rev.revision, rev.graph.nodes.length, stored ? findingStates(stored, rev.graph, await listAcknowledgements(linkage.id)) : null);
-      const bytes = await checklistPdf(build, linkage, rev.revision, checklistFor(rev.graph, stored ?? analyze(rev.graph, build.analysisSettings)), await listTicks(linkage.id, rev.revision), check);
+      const bytes = await checklistPdf(build, linkage, rev.revision, checklistFor(rev.graph, checklistReport(rev, rev.revision === linkage.revision, build.analysisSettings)), await listTicks(linkage.id, rev.revision), check);
       return { body: Buffer.from(bytes), contentType: "application/pdf", filename: `${slug(build.name)}-${slug(linkage.name)}-rev${rev.revision}-checklist.pdf` };
     },
   },

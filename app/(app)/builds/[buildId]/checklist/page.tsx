@@ -4,8 +4,8 @@ import { requirePageBuild } from "@/lib/page-access";
 import { getRevision, listLinkages } from "@/db/linkages";
 import { listTicks } from "@/db/checklist";
 import { checklistFor } from "@/shared/records/checklist";
+import { checklistReport } from "@/shared/records/checklist-report";
 import { tickedWords } from "@/shared/records/checklist-findings";
-import { analyze } from "@/shared/analysis";
 import { BuildNav } from "@/components/BuildNav";
 import { Card, EmptyState, Main } from "@/components/ui";
 import { notCheckedWords } from "@/shared/check-state";
@@ -17,12 +17,12 @@ export default async function ChecklistIndex({ params }: { params: Promise<{ bui
   const { buildId } = await params;
   const { build } = await requirePageBuild(buildId, `/builds/${buildId}/checklist`);
   const linkages = await listLinkages(build.id);
-  // Each linkage's list as its own page makes it (the current revision's items, checked with the build's settings),
+  // Each linkage's list as its own page makes it (the current revision's items, from its stored report: checklistReport),
   // so the index says "N of M ticked" with the same M.
   const progress = new Map(await Promise.all(linkages.map(async (l) => {
     const rev = await getRevision(l.id);
     if (!rev) return [l.id, null] as const;
-    const items = checklistFor(rev.graph, analyze(rev.graph, build.analysisSettings));
+    const items = checklistFor(rev.graph, checklistReport(rev, true, build.analysisSettings));
     const ticked = new Set((await listTicks(l.id, rev.revision)).filter((t) => t.tickedAt).map((t) => `${t.jointId}|${t.code}`));
     return [l.id, { done: items.filter((i) => ticked.has(`${i.jointId}|${i.code}`)).length, total: items.length }] as const;
   })));
