@@ -9,14 +9,15 @@ import { runEngineJob, type AnalyzeOutcome, type CreateOutcome, type EngineAnswe
 
 /**
  * Where the engine's share of a request that carries a graph runs (lib/engine/work.ts: parse, schema check,
- * analysis, JSON of the graph and report). A body under LW_ENGINE_INLINE_MAX bytes (default 256 K; the demo
- * pitch run's save is 35 K) is done in the request's own thread: a few tenths of a millisecond. A larger one, up
- * to the 5 MB body cap (about 400 ms of engine work for the largest), goes to an engine thread, a worker thread
- * kept for the life of the process: so one person posting the largest linkages again and again keeps an engine
- * thread busy, not the thread every other request of the process is answered on.
- * Why not every body: on this 2-core machine, handing the demo save to a thread cost the process about 1 ms of CPU
- * more a save (copying its text both ways, waking the thread) and saves ran slower under load (npm run
- * bench:load, 2026-12-05: 29–31 % of the bare route with a thread, 30–35 % without).
+ * analysis, JSON of the graph and report). Every body goes to an engine thread, a worker thread kept for the life
+ * of the process, so the thread that answers every other request of the process only reads the body and writes to
+ * the database: one person posting the largest linkages (up to the 5 MB body cap, about 400 ms of engine work)
+ * again and again keeps an engine thread busy, not that one, and on a save under load the two run side by side.
+ * Measured (npm run bench:load, 2026-12-05 22:55, four pairs of runs alternating): the editor's save at 32–35 % of
+ * the bare route with every body in a thread, 26–29 % with bodies under 256 K done inline; the answering thread
+ * 72 % busy instead of 89–90 %, the cores 83 % instead of 74–76 %. (An earlier run the same day, when a save cost
+ * the machine about 5 ms, had found no gain; the save's own cost has since come down.) LW_ENGINE_INLINE_MAX=N
+ * does bodies under N bytes in the request's thread instead.
  *
  * LW_ENGINE_THREADS sets how many threads (default: one per core but one, at least one, at most four; 0 does
  * every body in the request's thread). A thread that dies is replaced at the next job; the jobs it held fail
@@ -49,8 +50,8 @@ export function engineThreadCount(): number {
   return asked !== null ? Math.min(asked, 16) : Math.max(1, Math.min(4, os.availableParallelism() - 1));
 }
 
-/** Bodies shorter than this (bytes) are done in the request's own thread. */
-export const engineInlineMax = (): number => wholeSetting("LW_ENGINE_INLINE_MAX") ?? 256 * 1024;
+/** Bodies shorter than this (bytes) are done in the request's own thread: none by default. */
+export const engineInlineMax = (): number => wholeSetting("LW_ENGINE_INLINE_MAX") ?? 0;
 
 function pool(): Pool {
   return (g.__lwEngineThreads ??= { threads: Array.from({ length: engineThreadCount() }, () => null), nextId: 1, inlineMax: engineInlineMax() });
