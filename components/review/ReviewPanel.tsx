@@ -8,11 +8,12 @@ import dynamic from "next/dynamic";
 import { useAcknowledgements, useDiff, useNotify, useReviewActions, useSignoffs } from "./api";
 import type { ReviewMe } from "./ReviewThread";
 import { SignoffBadge } from "./SignoffBadge";
-import { ExportButton } from "@/components/records/ExportButton";
 import { heading, when } from "./format";
 
 // The history and the field-by-field comparison are read when asked for (or when a sign-off is out of date), so they
 // are loaded then, not with every page that shows the review panel.
+/** The record PDF's button loads with the first signed revision shown (a linkage not signed off yet has none). */
+const ExportButton = dynamic(() => import("@/components/records/ExportButton").then((m) => m.ExportButton), { ssr: false, loading: () => <span className="text-[11px] text-ink-soft">Record PDF…</span> });
 const RevisionHistory = dynamic(() => import("./RevisionHistory").then((m) => m.RevisionHistory), { ssr: false, loading: () => <p className="text-[11px] text-ink-soft">Loading the history…</p> });
 const DiffView = dynamic(() => import("./DiffView").then((m) => m.DiffView), { ssr: false, loading: () => <p className="text-[11px] text-ink-soft">Comparing the revisions…</p> });
 
