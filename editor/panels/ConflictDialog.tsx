@@ -3,6 +3,7 @@
  * Shown when a save finds that someone else saved a newer revision first, with what differs (shared/review/diff.ts).
  * Loaded when a conflict first happens (LinkageEditor.tsx), with the difference it shows.
  */
+import { trapTab } from "./focus-trap";
 import { useEffect, useMemo, useRef } from "react";
 import { diffGraphs, type ItemRef } from "@/shared/review/diff";
 import { useEditorStoreApi } from "../context";
@@ -20,10 +21,6 @@ function Line({ label, items }: { label: string; items: ItemRef[] }) {
 }
 
 /** The controls of a dialog that Tab goes round, in order. */
-function tabStops(root: HTMLElement): HTMLElement[] {
-  return Array.from(root.querySelectorAll<HTMLElement>("button, [href], input, select, textarea, [tabindex]:not([tabindex='-1'])")).filter((el) => !el.hasAttribute("disabled"));
-}
-
 /**
  * The difference is from your work (as the conflict found it) to their revision: added = only in theirs, removed =
  * only in yours. A modal dialog like the Keys sheet: Tab and Shift+Tab go round its buttons; Escape (or "Decide
@@ -54,15 +51,7 @@ export function ConflictDialog({ current, onLoadTheirs, onKeepMine, onLater }: {
       onLater();
       return;
     }
-    if (e.key !== "Tab" || !ref.current) return;
-    const stops = tabStops(ref.current);
-    if (stops.length === 0) return;
-    const first = stops[0], last = stops[stops.length - 1];
-    const at = document.activeElement;
-    if (e.shiftKey ? at === first || !ref.current.contains(at) : at === last || !ref.current.contains(at)) {
-      e.preventDefault();
-      (e.shiftKey ? last : first).focus();
-    }
+    trapTab(e, ref.current);
   };
   const store = useEditorStoreApi();
   const d = useMemo(() => {

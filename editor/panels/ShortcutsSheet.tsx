@@ -4,6 +4,7 @@
  * It fits the screen at any size: its title and Close stay at the top, the list scrolls inside the sheet, and
  * the page behind does not scroll while it is open.
  */
+import { trapTab } from "./focus-trap";
 import { useEffect, useRef } from "react";
 import { COMMANDS, GESTURES } from "../commands";
 
@@ -39,17 +40,7 @@ export function ShortcutsSheet({ onClose, readOnly }: { onClose: () => void; rea
     };
   }, []);
   /** A modal dialog: Tab and Shift+Tab go round its own controls. */
-  const trap = (e: React.KeyboardEvent) => {
-    if (e.key !== "Tab" || !dialog.current) return;
-    const stops = Array.from(dialog.current.querySelectorAll<HTMLElement>("button, [href], input, select, textarea, [tabindex]:not([tabindex='-1'])")).filter((el) => !el.hasAttribute("disabled"));
-    if (stops.length === 0) return;
-    const first = stops[0], last = stops[stops.length - 1];
-    const at = document.activeElement;
-    if (e.shiftKey ? at === first || !dialog.current.contains(at) : at === last || !dialog.current.contains(at)) {
-      e.preventDefault();
-      (e.shiftKey ? last : first).focus();
-    }
-  };
+  const trap = (e: React.KeyboardEvent) => trapTab(e, dialog.current);
   const rows = [...GESTURES, ...COMMANDS.filter((c) => c.keys)].filter((r) => !readOnly || !r.edit);
   return (
     <div className="fixed inset-0 z-40 flex items-center justify-center overscroll-contain bg-ink/30 p-3 sm:p-4" onClick={onClose} role="presentation">
