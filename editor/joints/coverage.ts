@@ -10,6 +10,7 @@
  *   pending      the live check has not run yet.
  * Pure (no React), so it is unit-tested without a browser.
  */
+import { counted } from "@/shared/analysis/finding-title";
 import type { JointResult, Report } from "@/shared/analysis/types";
 import { ROLES } from "@/shared/linkage/kinds";
 import { boltlessContact, guideEnd } from "@/shared/linkage/contacts";
@@ -66,7 +67,6 @@ export type Coverage = {
 
 const BOLT_FOR_TERMINAL = "add the bolt or clevis pin and nut holding the terminal to have this joint checked";
 const BOLT_OR_BEARING = "add a bolt, rod end or bearing to this joint to have it checked";
-const s = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 function nothingHereText(k: Extract<JointSort, { sort: "passThrough" | "screwedEnds" }>): string {
   if (k.sort === "passThrough") {
@@ -88,9 +88,9 @@ export function jointCoverage(joint: Pick<Joint, "from" | "to" | "hardware">, pa
   const made = checks.filter((c) => c.status === "computed").length;
   const open = checks.length - made;
   if (made > 0 && open === 0)
-    return { state: "checked", text: `No findings here from the live check: ${s(made, "check", "checks")} made at this joint, listed under Checks.`, short: "no findings", todo: null };
+    return { state: "checked", text: `No findings here from the live check: ${counted(made, "check", "checks")} made at this joint, listed under Checks.`, short: "no findings", todo: null };
   if (made > 0)
-    return { state: "partly", text: `Partly checked: no findings from the ${s(made, "check", "checks")} made; ${s(open, "check is", "checks are")} not made yet — what to enter is under Checks.`, short: "partly checked", todo: null };
+    return { state: "partly", text: `Partly checked: no findings from the ${counted(made, "check", "checks")} made; ${counted(open, "check is", "checks are")} not made yet — what to enter is under Checks.`, short: "partly checked", todo: null };
   if (open > 0)
     return { state: "notChecked", text: "Not checked yet: no check at this joint could be made. What to enter is under Checks.", short: "not checked", todo: null };
   // No check at all: either the joint has nothing of its own to check, or it lacks what holds it.

@@ -12,6 +12,7 @@
  *   pending      the live check has not run yet.
  * Pure (no React), so it is unit-tested without a browser.
  */
+import { counted } from "@/shared/analysis/finding-title";
 import type { Report } from "@/shared/analysis/types";
 import type { Joint, LinkageNode } from "@/shared/linkage/schema";
 
@@ -34,7 +35,6 @@ const SHORT: Record<PartCoverageState, string> = {
   notChecked: "not checked",
   pending: "not checked yet",
 };
-const s = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 const cov = (state: PartCoverageState, text: string): PartCoverage => ({ state, text, short: SHORT[state] });
 
 /** What the check found for each part in one report, indexed once per report and joints list. */
@@ -120,11 +120,11 @@ export function partCoverage(part: Part, joints: readonly JointEnds[], parts: re
   if (typeof own === "string") return cov("checked", `No findings here from the live check: ${own}.`);
   const enter = part.unentered?.length ?? 0;
   if (enter > 0)
-    return cov("toEnter", `Not checked yet: ${s(enter, "value is", "values are")} still the starting ${enter === 1 ? "value" : "values"} (below).`);
+    return cov("toEnter", `Not checked yet: ${counted(enter, "value is", "values are")} still the starting ${enter === 1 ? "value" : "values"} (below).`);
   const atJoints = ix.jointChecks.get(part.id) ?? 0;
   if (atJoints > 0) {
     const rest = own ? `${own.notChecked.charAt(0).toUpperCase()}${own.notChecked.slice(1)}` : "The live check makes no check of this part itself.";
-    return cov("atJoints", `Checked at its joints only: ${s(atJoints, "check was", "checks were")} made there (see the joint cards). ${rest}`);
+    return cov("atJoints", `Checked at its joints only: ${counted(atJoints, "check was", "checks were")} made there (see the joint cards). ${rest}`);
   }
   if (own) return cov("notChecked", `Not checked: ${own.notChecked}`);
   return cov("notChecked", "Not checked: the live check makes no check of this part itself, and none could be made at its joints yet.");

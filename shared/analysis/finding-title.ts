@@ -13,6 +13,11 @@ export function findingTitle(code: string): string {
 /** The lower-case word for one finding of a severity and for several. */
 export const SEVERITY_WORDS: Record<Severity, readonly [one: string, many: string]> = { hazard: ["hazard", "hazards"], caution: ["caution", "cautions"], advisory: ["advisory", "advisories"] };
 /** "1 hazard", "2 hazards", "0 advisories". */
+/** "1 check", "3 checks": a count with its noun in the right number. */
+export function counted(n: number, one: string, many: string): string {
+  return `${n} ${n === 1 ? one : many}`;
+}
+
 export function severityCount(n: number, s: Severity): string {
   return `${n} ${SEVERITY_WORDS[s][n === 1 ? 0 : 1]}`;
 }
